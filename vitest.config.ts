@@ -1,0 +1,58 @@
+import { defineConfig, mergeConfig } from 'vitest/config'
+import viteConfig from './vite.config.ts'
+
+export default mergeConfig(
+  viteConfig,
+  defineConfig({
+    test: {
+      projects: [
+        {
+          extends: true,
+          test: {
+            name: 'unit',
+            include: [
+              'tests/dynamics/**/*.test.ts',
+              'tests/measurements/**/*.test.ts',
+              'tests/unit/**/*.test.ts',
+              'tests/fakes/**/*.test.ts',
+            ],
+            environment: 'node',
+          },
+        },
+        {
+          extends: true,
+          test: {
+            name: 'client',
+            include: ['tests/client/**/*.test.ts'],
+            environment: 'jsdom',
+            server: { deps: { inline: ['primevue'] } },
+          },
+        },
+        {
+          extends: true,
+          test: {
+            name: 'api',
+            include: ['tests/api/**/*.test.ts'],
+            environment: 'node',
+            globalSetup: ['tests/helpers/global-setup.ts'],
+            fileParallelism: false,
+            testTimeout: 20000,
+            hookTimeout: 60000,
+          },
+        },
+        {
+          extends: true,
+          test: {
+            name: 'e2e',
+            include: ['tests/e2e/**/*.test.ts'],
+            environment: 'node',
+            globalSetup: ['tests/helpers/global-setup.ts'],
+            fileParallelism: false,
+            testTimeout: 60000,
+            hookTimeout: 120000,
+          },
+        },
+      ],
+    },
+  }),
+)
