@@ -1,0 +1,73 @@
+import { z } from 'zod'
+
+const bool = z
+  .enum(['true', 'false', '1', '0'])
+  .transform((v) => v === 'true' || v === '1')
+  .optional()
+
+const port = z.coerce.number().int().min(0).max(65535)
+
+const EnvSchema = z.object({
+  NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+  HOST: z.string().default('127.0.0.1'),
+  PORT: port.default(4300),
+  PUBLIC_URL: z.url().optional(),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  DB_HOST: z.string().default('127.0.0.1'),
+  DB_PORT: port.default(3307),
+  DB_USER: z.string().default('app'),
+  DB_PASSWORD: z.string().default(''),
+  DB_NAME: z
+    .string()
+    .regex(/^[A-Za-z0-9_]+$/, 'letters, digits and _ only')
+    .default('quellnode'),
+  JWT_SECRET: z.string().min(32, 'at least 32 characters'),
+  TOKEN_TTL_HOURS: z.coerce.number().positive().default(12),
+  SMTP_HOST: z.string().default('127.0.0.1'),
+  SMTP_PORT: port.default(4325),
+  SMTP_SECURE: bool,
+  SMTP_USER: z.string().optional(),
+  SMTP_PASS: z.string().optional(),
+  MAIL_FROM: z.string().default('Quellnode <no-reply@quellnode.test>'),
+  MAILBOX_URL: z.url().default('http://127.0.0.1:4380'),
+  STRIPE_SECRET_KEY: z.string().default('sk_test_quellnode'),
+  STRIPE_WEBHOOK_SECRET: z.string().default('whsec_quellnode'),
+  STRIPE_API_HOST: z.string().optional(),
+  STRIPE_API_PORT: port.optional(),
+  STRIPE_API_PROTOCOL: z.enum(['http', 'https']).optional(),
+  UPLOAD_DIR: z.string().default('.local/uploads'),
+  CHROMIUM_PATH: z.string().default('/usr/bin/chromium'),
+  WORKER_THREADS: z.coerce.number().int().min(1).max(16).default(2),
+  SIGN_IN_LIMIT: z.coerce.number().int().min(1).default(5),
+  CLIENT_DIR: z.string().default('dist/client'),
+})
+
+export type Config = z.infer<typeof EnvSchema> & { publicUrl: string }
+
+const DbEnvSchema = EnvSchema.pick({
+  DB_HOST: true,
+  DB_PORT: true,
+  DB_USER: true,
+  DB_PASSWORD: true,
+  DB_NAME: true,
+})
+export type DbConfig = z.infer<typeof DbEnvSchema>
+
+/** The database part alone, for the migration command line, which needs no other setting. */
+export function loadDbConfig(env: NodeJS.ProcessEnv = process.env): DbConfig {
+  return DbEnvSchema.parse(env)
+}
+
+/**
+ * Parses the environment once. A wrong value stops the process with one line per field,
+ * before anything listens or connects.
+ */
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
+  const parsed = EnvSchema.safeParse(env)
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`)
+    throw new Error(`Invalid configuration:\n${lines.join('\n')}`)
+  }
+  const c = parsed.data
+  return { ...c, publicUrl: c.PUBLIC_URL ?? `http://${c.HOST}:${c.PORT}` }
+}

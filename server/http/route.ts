@@ -1,0 +1,86 @@
+import type { Request, Response, Router } from 'express'
+import type { ZodType } from 'zod'
+import { z } from 'zod'
+import type { Role } from '../../shared/schemas/auth'
+import { AppError } from './app-error'
+import type { AuthUser } from '../middleware/authenticate'
+import type { ApiRegistry } from './api-registry'
+
+type Method = 'get' | 'post' | 'put' | 'patch' | 'delete'
+
+/** Who may call a route: a list of roles, any signed-in user, or anyone. */
+export type Access = readonly Role[] | 'signed-in' | 'public'
+
+export interface RouteSpec<B, Q, P> {
+  method: Method
+  path: string
+  summary: string
+  tag: string
+  access: Access
+  body?: ZodType<B>
+  query?: ZodType<Q>
+  params?: ZodType<P>
+  status?: number
+  /** Content type of a non-JSON answer (a PDF, say), for the API document. */
+  produces?: string
+}
+
+export interface RouteInput<B, Q, P> {
+  body: B
+  query: Q
+  params: P
+  user: AuthUser
+  req: Request
+  res: Response
+}
+
+/** Field paths and messages of a failed parse, as the 400 answer lists them. */
+export function issuesOf(error: z.ZodError, where: string) {
+  return error.issues.map((i) => ({
+    path: [where, ...i.path.map(String)].join('.'),
+    message: i.message,
+  }))
+}
+
+function parsePart<T>(schema: ZodType<T> | undefined, value: unknown, where: string): T {
+  if (!schema) return undefined as T
+  const result = schema.safeParse(value ?? {})
+  if (result.success) return result.data
+  const details = issuesOf(result.error, where)
+  const first = details[0]
+  const message = first ? `${first.path}: ${first.message}` : `Invalid ${where}`
+  throw new AppError('invalid-input', message, 400, details)
+}
+
+function checkAccess(access: Access, user: AuthUser | undefined): AuthUser {
+  if (access === 'public') return user as AuthUser
+  if (!user) throw new AppError('not-signed-in', 'Sign in to continue.', 401)
+  if (access !== 'signed-in' && !access.includes(user.role)) {
+    throw new AppError('forbidden', 'Your role may not do this.', 403)
+  }
+  return user
+}
+
+/**
+ * Declares one route: access check, validation of params, query and body against the shared
+ * schemas, and an entry in the API document. The handler returns the JSON answer, or undefined
+ * when it wrote the response itself.
+ */
+export function route<B = undefined, Q = undefined, P = undefined>(
+  router: Router,
+  registry: ApiRegistry,
+  spec: RouteSpec<B, Q, P>,
+  handler: (input: RouteInput<B, Q, P>) => unknown,
+): void {
+  registry.add(spec)
+  router[spec.method](spec.path, async (req: Request, res: Response) => {
+    const user = checkAccess(spec.access, req.user as AuthUser | undefined)
+    const params = parsePart(spec.params, req.params, 'params')
+    const query = parsePart(spec.query, req.query, 'query')
+    const body = parsePart(spec.body, req.body, 'body')
+    const result = await handler({ body, query, params, user, req, res })
+    if (res.headersSent) return
+    if (result === undefined) res.status(spec.status ?? 204).end()
+    else res.status(spec.status ?? 200).json(result)
+  })
+}

@@ -1,0 +1,30 @@
+import 'reflect-metadata'
+import { pino } from 'pino'
+import { createApp } from './app'
+import { loadConfig } from './config'
+import { createDataSource } from './data-source'
+import { smtpMailer } from './integrations/mail'
+
+async function main() {
+  let config
+  try {
+    config = loadConfig()
+  } catch (e) {
+    console.error((e as Error).message)
+    process.exit(2)
+  }
+  const logger = pino({ level: config.LOG_LEVEL })
+  const dataSource = await createDataSource(config).initialize()
+  const app = createApp({ config, dataSource, mailer: smtpMailer(config), logger })
+  const server = app.listen(config.PORT, config.HOST, () => {
+    logger.info({ url: config.publicUrl }, 'Quellnode is listening')
+  })
+  const stop = () => {
+    server.close(() => void dataSource.destroy().then(() => process.exit(0)))
+    setTimeout(() => process.exit(0), 5000).unref()
+  }
+  process.on('SIGTERM', stop)
+  process.on('SIGINT', stop)
+}
+
+void main()

@@ -1,0 +1,105 @@
+import bcrypt from 'bcryptjs'
+import jwt from 'jsonwebtoken'
+import type { AuthUser } from '../../middleware/authenticate'
+import { AppError } from '../../http/app-error'
+import type { UsersRepository, UserRecord } from '../users/users.repository'
+import type { TokensRepository } from './tokens.repository'
+import { hashLinkToken, newLinkToken } from './link-tokens'
+import type { Mailer } from '../../integrations/mail'
+
+export interface AuthDeps {
+  users: UsersRepository
+  tokens: TokensRepository
+  mailer: Mailer
+  jwtSecret: string
+  tokenTtlHours: number
+  publicUrl: string
+  now: () => Date
+}
+
+const BAD_CREDENTIALS = 'The e-mail address or the password is wrong.'
+// Compared against when the user is unknown, so both failures take the same time.
+const DUMMY_HASH = bcrypt.hashSync('not-a-real-password', 10)
+export const RESET_TTL_HOURS = 1
+
+export function toAuthUser(u: UserRecord): AuthUser {
+  return {
+    id: u.id,
+    email: u.email,
+    name: u.name,
+    role: u.role,
+    companyId: u.companyId,
+    companyName: u.companyName,
+  }
+}
+
+export function hashPassword(password: string) {
+  return bcrypt.hash(password, 10)
+}
+
+export function authService(deps: AuthDeps) {
+  async function sendLink(user: UserRecord, purpose: 'invite' | 'reset', hours: number) {
+    const { token, hash } = newLinkToken()
+    const expiresAt = new Date(deps.now().getTime() + hours * 3600_000)
+    await deps.tokens.create(user.id, purpose, hash, expiresAt)
+    const link = `${deps.publicUrl}/set-password?token=${token}`
+    const subject =
+      purpose === 'invite' ? 'You are invited to Quellnode' : 'Reset your Quellnode password'
+    const intro =
+      purpose === 'invite'
+        ? `Hello ${user.name},\n\nan account has been made for you on Quellnode.`
+        : `Hello ${user.name},\n\nsomeone asked to reset the password of this account.`
+    await deps.mailer.send({
+      to: user.email,
+      subject,
+      text: `${intro}\nSet your password here (the link works once and expires in ${hours} h):\n\n${link}\n\nIf you did not expect this mail, ignore it.`,
+    })
+  }
+
+  return {
+    sendLink,
+
+    /** Checks the credentials and returns the user and a signed session token. */
+    async signIn(email: string, password: string) {
+      const user = await deps.users.findByEmail(email)
+      const ok = await bcrypt.compare(password, user?.passwordHash ?? DUMMY_HASH)
+      if (!user || !user.passwordHash || !ok || !user.active) {
+        throw new AppError('invalid-credentials', BAD_CREDENTIALS, 401)
+      }
+      const token = jwt.sign({ role: user.role }, deps.jwtSecret, {
+        algorithm: 'HS256',
+        subject: String(user.id),
+        issuer: 'quellnode',
+        expiresIn: `${deps.tokenTtlHours}h`,
+      })
+      return { user: toAuthUser(user), token }
+    },
+
+    /** The user a valid session belongs to, or null when the account is gone or inactive. */
+    async loadActiveUser(id: number): Promise<AuthUser | null> {
+      const user = await deps.users.findById(id)
+      return user && user.active ? toAuthUser(user) : null
+    },
+
+    /** Spends a single-use link token and sets the password it was sent for. */
+    async setPassword(token: string, password: string) {
+      const used = await deps.tokens.consume(hashLinkToken(token), deps.now())
+      if (!used)
+        throw new AppError('link-invalid', 'This link is not valid or was already used.', 400)
+      if (used.expiresAt.getTime() < deps.now().getTime()) {
+        throw new AppError('link-expired', 'This link has expired; ask for a new one.', 410)
+      }
+      const user = await deps.users.findById(used.userId)
+      if (!user || !user.active)
+        throw new AppError('link-invalid', 'This account is not active.', 400)
+      await deps.users.update(user.id, { passwordHash: await hashPassword(password) })
+    },
+
+    /** Always answers the same, so the form cannot be used to find out who has an account. */
+    async requestReset(email: string) {
+      const user = await deps.users.findByEmail(email)
+      if (user && user.active) await sendLink(user, 'reset', RESET_TTL_HOURS)
+    },
+  }
+}
+export type AuthService = ReturnType<typeof authService>

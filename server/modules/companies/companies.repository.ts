@@ -1,0 +1,32 @@
+import type { DataSource } from 'typeorm'
+import type { Company } from '../../../shared/schemas/auth'
+import { CompanyEntity } from './company.entity'
+
+const toCompany = (c: CompanyEntity): Company & { address: string } => ({
+  id: c.id,
+  name: c.name,
+  kind: c.kind,
+  address: c.address,
+})
+
+export function companiesRepository(ds: DataSource) {
+  const repo = ds.getRepository(CompanyEntity)
+  return {
+    async findById(id: number) {
+      const c = await repo.findOneBy({ id })
+      return c ? toCompany(c) : null
+    },
+    async findByName(name: string) {
+      const c = await repo.findOneBy({ name })
+      return c ? toCompany(c) : null
+    },
+    async list(kind?: 'supplier' | 'customer') {
+      const rows = await repo.find({ where: kind ? { kind } : {}, order: { name: 'ASC' } })
+      return rows.map(toCompany)
+    },
+    async create(data: { name: string; kind: 'supplier' | 'customer'; address?: string }) {
+      return toCompany(await repo.save(repo.create({ address: '', ...data })))
+    },
+  }
+}
+export type CompaniesRepository = ReturnType<typeof companiesRepository>

@@ -1,0 +1,43 @@
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm'
+import type { Role } from '../../../shared/schemas/auth'
+import { CompanyEntity } from '../companies/company.entity'
+
+@Entity('users')
+export class UserEntity {
+  @PrimaryGeneratedColumn('increment', { type: 'int' })
+  id: number
+
+  @Column('varchar', { length: 254, unique: true })
+  email: string
+
+  @Column('varchar', { length: 120 })
+  name: string
+
+  @Column('varchar', { length: 16 })
+  role: Role
+
+  /** Null until the invited person sets a password. */
+  @Column('varchar', { length: 100, nullable: true })
+  passwordHash: string | null
+
+  @Column('boolean', { default: true })
+  active: boolean
+
+  @Column('int', { nullable: true })
+  companyId: number | null
+
+  @ManyToOne(() => CompanyEntity, { nullable: true, onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'companyId' })
+  company: Relation<CompanyEntity> | null
+
+  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  createdAt: Date
+}

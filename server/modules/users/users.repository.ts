@@ -1,0 +1,65 @@
+import type { DataSource } from 'typeorm'
+import type { Role } from '../../../shared/schemas/auth'
+import { UserEntity } from './user.entity'
+
+export interface UserRecord {
+  id: number
+  email: string
+  name: string
+  role: Role
+  passwordHash: string | null
+  active: boolean
+  companyId: number | null
+  companyName: string | null
+  createdAt: Date
+}
+
+function toRecord(u: UserEntity): UserRecord {
+  return {
+    id: u.id,
+    email: u.email,
+    name: u.name,
+    role: u.role,
+    passwordHash: u.passwordHash,
+    active: u.active,
+    companyId: u.companyId,
+    companyName: u.company?.name ?? null,
+    createdAt: u.createdAt,
+  }
+}
+
+export function usersRepository(ds: DataSource) {
+  const repo = ds.getRepository(UserEntity)
+  const withCompany = { company: true } as const
+  return {
+    async findById(id: number) {
+      const u = await repo.findOne({ where: { id }, relations: withCompany })
+      return u ? toRecord(u) : null
+    },
+    async findByEmail(email: string) {
+      const u = await repo.findOne({ where: { email }, relations: withCompany })
+      return u ? toRecord(u) : null
+    },
+    async list() {
+      const rows = await repo.find({ relations: withCompany, order: { role: 'ASC', name: 'ASC' } })
+      return rows.map(toRecord)
+    },
+    async create(
+      data: Pick<UserRecord, 'email' | 'name' | 'role' | 'companyId'> & {
+        passwordHash?: string | null
+      },
+    ) {
+      const saved = await repo.save(
+        repo.create({ ...data, passwordHash: data.passwordHash ?? null }),
+      )
+      return (await this.findById(saved.id)) as UserRecord
+    },
+    async update(
+      id: number,
+      patch: Partial<Pick<UserRecord, 'role' | 'active' | 'passwordHash' | 'name' | 'companyId'>>,
+    ) {
+      await repo.update({ id }, patch)
+    },
+  }
+}
+export type UsersRepository = ReturnType<typeof usersRepository>

@@ -1,0 +1,45 @@
+import { Router } from 'express'
+import { IdParamSchema, InviteSchema, UserPatchSchema } from '../../../shared/schemas/auth'
+import type { ApiRegistry } from '../../http/api-registry'
+import { route } from '../../http/route'
+import type { usersService } from './users.service'
+
+export function usersRouter(api: ApiRegistry, users: ReturnType<typeof usersService>) {
+  const router = Router()
+  const tag = 'Users'
+  route(
+    router,
+    api,
+    { method: 'get', path: '/api/users', tag, summary: 'All users', access: ['admin'] },
+    () => users.list(),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'post',
+      path: '/api/users',
+      tag,
+      summary: 'Invite a user by e-mail',
+      access: ['admin'],
+      body: InviteSchema,
+      status: 201,
+    },
+    ({ body }) => users.invite(body),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'patch',
+      path: '/api/users/:id',
+      tag,
+      summary: 'Change role or deactivate',
+      access: ['admin'],
+      params: IdParamSchema,
+      body: UserPatchSchema,
+    },
+    ({ user, params, body }) => users.update(user.id, params.id, body),
+  )
+  return router
+}

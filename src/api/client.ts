@@ -1,0 +1,67 @@
+/** The error every API call rejects with; `details` names the fields at fault. */
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly details?: unknown,
+  ) {
+    super(message)
+    this.name = 'ApiError'
+  }
+}
+
+export function isApiError(e: unknown): e is ApiError {
+  return e instanceof ApiError
+}
+
+/** Field path → message, from a 400 answer, for showing beside form inputs. */
+export function fieldErrors(e: unknown): Record<string, string> {
+  if (!isApiError(e) || !Array.isArray(e.details)) return {}
+  const out: Record<string, string> = {}
+  for (const d of e.details as { path?: string; message?: string }[]) {
+    if (d.path && d.message) out[d.path.replace(/^body\./, '')] = d.message
+  }
+  return out
+}
+
+type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE'
+
+/** One typed fetch: JSON in, JSON out, the session rides in its HttpOnly cookie. */
+export async function request<T>(method: Method, path: string, body?: unknown): Promise<T> {
+  let res: Response
+  try {
+    res = await fetch(path, {
+      method,
+      credentials: 'same-origin',
+      headers:
+        body === undefined || body instanceof FormData
+          ? {}
+          : { 'content-type': 'application/json' },
+      body: body === undefined ? undefined : body instanceof FormData ? body : JSON.stringify(body),
+    })
+  } catch {
+    throw new ApiError(0, 'offline', 'No connection to the server.')
+  }
+  if (res.status === 204) return undefined as T
+  const data: unknown = await res.json().catch(() => null)
+  if (!res.ok) {
+    const err = (data as { error?: { code?: string; message?: string; details?: unknown } } | null)
+      ?.error
+    throw new ApiError(
+      res.status,
+      err?.code ?? 'http-error',
+      err?.message ?? `HTTP ${res.status}`,
+      err?.details,
+    )
+  }
+  return data as T
+}
+
+export const api = {
+  get: <T>(path: string) => request<T>('GET', path),
+  post: <T>(path: string, body?: unknown) => request<T>('POST', path, body ?? {}),
+  put: <T>(path: string, body: unknown) => request<T>('PUT', path, body),
+  patch: <T>(path: string, body: unknown) => request<T>('PATCH', path, body),
+  delete: <T>(path: string) => request<T>('DELETE', path),
+}

@@ -1,0 +1,20 @@
+import '@fontsource/lato/400.css'
+import '@fontsource/lato/700.css'
+import 'primeicons/primeicons.css'
+import './theme/base.css'
+import { createApp } from 'vue'
+import { createPinia } from 'pinia'
+import PrimeVue from 'primevue/config'
+import ToastService from 'primevue/toastservice'
+import ConfirmationService from 'primevue/confirmationservice'
+import App from './App.vue'
+import { router } from './router'
+import { QuellPreset } from './theme/preset'
+
+createApp(App)
+  .use(createPinia())
+  .use(router)
+  .use(PrimeVue, { theme: { preset: QuellPreset, options: { darkModeSelector: false } } })
+  .use(ToastService)
+  .use(ConfirmationService)
+  .mount('#app')

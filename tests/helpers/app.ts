@@ -1,0 +1,53 @@
+import 'reflect-metadata'
+import { pino } from 'pino'
+import { inject } from 'vitest'
+import type { DataSource } from 'typeorm'
+import { buildServices, createApp } from '../../server/app'
+import { loadConfig, type Config } from '../../server/config'
+import { createDataSource } from '../../server/data-source'
+import { smtpMailer } from '../../server/integrations/mail'
+import { startMailCatcher, type RunningMailCatcher } from '../../fakes/mail'
+import { testEnv } from './test-env'
+
+export interface TestApp {
+  app: ReturnType<typeof createApp>
+  config: Config
+  ds: DataSource
+  mail: RunningMailCatcher
+  services: ReturnType<typeof buildServices>
+  clock: { offsetMs: number }
+  close: () => Promise<void>
+}
+
+/**
+ * The real app on the throwaway database, mailing into an in-process SMTP catcher, with a clock
+ * the test can move forward.
+ */
+export async function makeTestApp(extraEnv: Record<string, string> = {}): Promise<TestApp> {
+  const mail = await startMailCatcher({ smtpPort: 0, httpPort: 0, host: '127.0.0.1' })
+  const config = loadConfig(
+    testEnv(inject('dbName'), { SMTP_PORT: String(mail.smtpPort), ...extraEnv }),
+  )
+  const ds = await createDataSource(config).initialize()
+  const clock = { offsetMs: 0 }
+  const now = () => new Date(Date.now() + clock.offsetMs)
+  const deps = {
+    config,
+    dataSource: ds,
+    mailer: smtpMailer(config),
+    logger: pino({ level: 'silent' }),
+    now,
+  }
+  return {
+    app: createApp(deps),
+    config,
+    ds,
+    mail,
+    services: buildServices(deps),
+    clock,
+    close: async () => {
+      await ds.destroy()
+      await mail.close()
+    },
+  }
+}

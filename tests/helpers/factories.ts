@@ -1,0 +1,44 @@
+import { randomBytes } from 'node:crypto'
+import request from 'supertest'
+import type { Role } from '../../shared/schemas/auth'
+import type { TestApp } from './app'
+
+export const PASSWORD = 'correct-horse-42'
+
+/** A fresh user of the given role (and a fresh customer company for a customer). */
+export async function makeUser(t: TestApp, role: Role, opts: { companyId?: number } = {}) {
+  const tag = randomBytes(4).toString('hex')
+  let companyId = opts.companyId ?? null
+  if (role === 'customer' && companyId === null) {
+    companyId = (await t.services.companies.create({ name: `Client ${tag}`, kind: 'customer' })).id
+  }
+  const user = await t.services.usersAdmin.provision({
+    email: `${role}-${tag}@example.test`,
+    name: `${role} ${tag}`,
+    role,
+    companyId,
+    password: PASSWORD,
+  })
+  return user
+}
+
+/** A supertest agent that carries the session cookie of a freshly signed-in user. */
+export async function signedIn(t: TestApp, role: Role, opts: { companyId?: number } = {}) {
+  const user = await makeUser(t, role, opts)
+  const agent = request.agent(t.app)
+  const res = await agent.post('/api/auth/sign-in').send({ email: user.email, password: PASSWORD })
+  if (res.status !== 200)
+    throw new Error(`sign-in failed: ${res.status} ${JSON.stringify(res.body)}`)
+  return { agent, user }
+}
+
+/** Waits for the catcher to hold a message to the address (SMTP delivery is asynchronous). */
+export async function mailTo(t: TestApp, to: string, timeoutMs = 5000) {
+  const end = Date.now() + timeoutMs
+  for (;;) {
+    const found = t.mail.messages().filter((m) => JSON.stringify(m.to).includes(to))
+    if (found.length) return found[found.length - 1]!
+    if (Date.now() > end) throw new Error(`no mail to ${to}`)
+    await new Promise((r) => setTimeout(r, 50))
+  }
+}
