@@ -1,0 +1,59 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { seedPeople } from '../../seed/seed-people'
+import { DEMO_USERS } from '../../seed/demo-people'
+import { NAV_ITEMS } from '../../src/navigation'
+import {
+  navLabels,
+  newPage,
+  shot,
+  signInAs,
+  startBrowserRig,
+  type BrowserRig,
+} from '../helpers/browser'
+
+let rig: BrowserRig
+beforeAll(async () => {
+  rig = await startBrowserRig()
+  await seedPeople(rig.t.services)
+})
+afterAll(() => rig?.close())
+
+describe('navigation by role, in Chromium on a portrait tablet', () => {
+  for (const demo of DEMO_USERS) {
+    it(`shows the ${demo.role} their own navigation and nothing else`, async () => {
+      const page = await newPage(rig)
+      await signInAs(page, rig.url, demo.email, demo.password)
+      const expected = NAV_ITEMS.filter((i) => i.roles.includes(demo.role)).map((i) => i.label)
+      expect(await navLabels(page)).toEqual(expected)
+      const others = NAV_ITEMS.filter((i) => !i.roles.includes(demo.role)).map((i) => i.label)
+      for (const label of others) expect(await navLabels(page)).not.toContain(label)
+      await shot(page, `roles-${demo.role}`)
+      await page.browserContext().close()
+    })
+  }
+
+  it('sends a signed-out visitor to the sign-in page and a wrong role to the not-found page', async () => {
+    const page = await newPage(rig)
+    await page.goto(`${rig.url}/admin/users`)
+    await page.waitForSelector('#email')
+    expect(page.url()).toContain('/sign-in?next=')
+    const engineer = DEMO_USERS.find((u) => u.role === 'engineer')!
+    await signInAs(page, rig.url, engineer.email, engineer.password)
+    await page.goto(`${rig.url}/admin/users`)
+    await page.waitForSelector('h1')
+    expect(await page.$eval('h1', (h) => h.textContent)).toBe('Nothing here')
+    await page.browserContext().close()
+  })
+
+  it('shows the wrong-password message on the sign-in page', async () => {
+    const page = await newPage(rig)
+    await page.goto(`${rig.url}/sign-in`)
+    await page.locator('#email').fill('admin@quellnode.test')
+    await page.locator('#password').fill('not-the-password')
+    await page.locator('button[type="submit"]').click()
+    const alert = await page.waitForSelector('[role="alert"]')
+    expect(await alert!.evaluate((e) => e.textContent)).toContain('wrong')
+    await shot(page, 'sign-in-error')
+    await page.browserContext().close()
+  })
+})

@@ -1,0 +1,82 @@
+import { mkdirSync } from 'node:fs'
+import type { AddressInfo } from 'node:net'
+import type { Server } from 'node:http'
+import path from 'node:path'
+import puppeteer, { type Browser, type Page } from 'puppeteer-core'
+import { makeTestApp, type TestApp } from './app'
+
+export const SHOTS_DIR = path.resolve('.local/screenshots')
+export const PORTRAIT = { width: 820, height: 1180 }
+export const LANDSCAPE = { width: 1180, height: 820 }
+
+export interface BrowserRig {
+  t: TestApp
+  url: string
+  browser: Browser
+  close: () => Promise<void>
+}
+
+/** The built client and the API on one port, driven by Debian's Chromium. */
+export async function startBrowserRig(extraEnv: Record<string, string> = {}): Promise<BrowserRig> {
+  const t = await makeTestApp({ CLIENT_DIR: 'dist/client', ...extraEnv })
+  const server: Server = await new Promise((resolve) => {
+    const s = t.app.listen(0, '127.0.0.1', () => resolve(s))
+  })
+  const url = `http://127.0.0.1:${(server.address() as AddressInfo).port}`
+  t.config.publicUrl = url
+  const browser = await puppeteer.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    headless: true,
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-dev-shm-usage',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+      '--mute-audio',
+    ],
+  })
+  mkdirSync(SHOTS_DIR, { recursive: true })
+  return {
+    t,
+    url,
+    browser,
+    close: async () => {
+      await browser.close()
+      await new Promise((r) => server.close(r))
+      await t.close()
+    },
+  }
+}
+
+export async function newPage(rig: BrowserRig, viewport = PORTRAIT): Promise<Page> {
+  const context = await rig.browser.createBrowserContext()
+  const page = await context.newPage()
+  await page.setViewport({ ...viewport, hasTouch: true, isMobile: false })
+  page.setDefaultTimeout(15000)
+  return page
+}
+
+export async function shot(page: Page, name: string) {
+  await page.screenshot({
+    path: path.join(SHOTS_DIR, `${name}.png`) as `${string}.png`,
+    fullPage: true,
+  })
+}
+
+export async function signInAs(page: Page, url: string, email: string, password: string) {
+  await page.goto(`${url}/sign-in`)
+  await page.locator('#email').fill(email)
+  await page.locator('#password').fill(password)
+  await page.locator('button[type="submit"]').click()
+  await page.waitForSelector('nav[aria-label="Main"]')
+}
+
+/** The visible labels of the main navigation, in order. */
+export async function navLabels(page: Page) {
+  return page.$$eval('nav[aria-label="Main"] a', (links) =>
+    links.map((a) => a.textContent?.trim() ?? ''),
+  )
+}
