@@ -21,6 +21,10 @@ import { healthRouter } from './modules/health/health.router'
 import { usersRepository } from './modules/users/users.repository'
 import { usersRouter } from './modules/users/users.router'
 import { usersService } from './modules/users/users.service'
+import { fileStore } from './integrations/file-store'
+import { sitesRepository } from './modules/sites/sites.repository'
+import { sitesRouter } from './modules/sites/sites.router'
+import { sitesService } from './modules/sites/sites.service'
 
 export const VERSION = '0.1.0'
 
@@ -47,7 +51,16 @@ export function buildServices(deps: AppDeps) {
     publicUrl: deps.config.publicUrl,
     now,
   })
-  return { now, users, companies, auth, usersAdmin: usersService({ users, companies, auth }) }
+  const files = fileStore(deps.config.UPLOAD_DIR)
+  return {
+    now,
+    users,
+    companies,
+    auth,
+    files,
+    usersAdmin: usersService({ users, companies, auth }),
+    sites: sitesService({ sites: sitesRepository(deps.dataSource), companies, files }),
+  }
 }
 export type Services = ReturnType<typeof buildServices>
 
@@ -100,6 +113,7 @@ export function createApp(deps: AppDeps): Express {
   )
   app.use(usersRouter(api, services.usersAdmin))
   app.use(companiesRouter(api, services.companies))
+  app.use(sitesRouter(api, services.sites))
 
   app.use('/api', notFoundHandler)
   serveClient(app, config.CLIENT_DIR)

@@ -66,6 +66,19 @@ export class ApiRegistry {
         summary: spec.summary,
         description: access,
         parameters: parameters(spec),
+        ...(spec.upload && {
+          requestBody: {
+            required: true,
+            content: {
+              'multipart/form-data': {
+                schema: {
+                  type: 'object',
+                  properties: { [spec.upload]: { type: 'string', format: 'binary' } },
+                },
+              },
+            },
+          },
+        }),
         ...(spec.body && {
           requestBody: {
             required: true,

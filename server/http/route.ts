@@ -1,4 +1,4 @@
-import type { Request, Response, Router } from 'express'
+import type { Request, RequestHandler, Response, Router } from 'express'
 import type { ZodType } from 'zod'
 import { z } from 'zod'
 import type { Role } from '../../shared/schemas/auth'
@@ -23,6 +23,10 @@ export interface RouteSpec<B, Q, P> {
   status?: number
   /** Content type of a non-JSON answer (a PDF, say), for the API document. */
   produces?: string
+  /** A multipart upload: the file field's name, for the API document; `before` parses it. */
+  upload?: string
+  /** Middleware run after the access check and before validation (an upload parser, say). */
+  before?: RequestHandler[]
 }
 
 export interface RouteInput<B, Q, P> {
@@ -73,14 +77,23 @@ export function route<B = undefined, Q = undefined, P = undefined>(
   handler: (input: RouteInput<B, Q, P>) => unknown,
 ): void {
   registry.add(spec)
-  router[spec.method](spec.path, async (req: Request, res: Response) => {
-    const user = checkAccess(spec.access, req.user as AuthUser | undefined)
-    const params = parsePart(spec.params, req.params, 'params')
-    const query = parsePart(spec.query, req.query, 'query')
-    const body = parsePart(spec.body, req.body, 'body')
-    const result = await handler({ body, query, params, user, req, res })
-    if (res.headersSent) return
-    if (result === undefined) res.status(spec.status ?? 204).end()
-    else res.status(spec.status ?? 200).json(result)
-  })
+  const guard: RequestHandler = (req, _res, next) => {
+    checkAccess(spec.access, req.user as AuthUser | undefined)
+    next()
+  }
+  router[spec.method](
+    spec.path,
+    guard,
+    ...(spec.before ?? []),
+    async (req: Request, res: Response) => {
+      const user = req.user as AuthUser
+      const params = parsePart(spec.params, req.params, 'params')
+      const query = parsePart(spec.query, req.query, 'query')
+      const body = parsePart(spec.body, req.body, 'body')
+      const result = await handler({ body, query, params, user, req, res })
+      if (res.headersSent) return
+      if (result === undefined) res.status(spec.status ?? 204).end()
+      else res.status(spec.status ?? 200).json(result)
+    },
+  )
 }

@@ -1,10 +1,28 @@
 import type { NextFunction, Request, Response } from 'express'
+import { MulterError } from 'multer'
 import { AppError } from '../http/app-error'
 
 interface BodyParserError {
   type?: string
   status?: number
   message?: string
+}
+
+const UPLOAD_MESSAGES: Record<string, [string, number]> = {
+  LIMIT_FILE_SIZE: ['The file is larger than the limit.', 413],
+  LIMIT_FILE_COUNT: ['Too many files in one upload.', 400],
+  LIMIT_UNEXPECTED_FILE: ['Unexpected file field.', 400],
+}
+
+function fromUpload(err: unknown): AppError | null {
+  if (!(err instanceof MulterError)) return null
+  const [message, status] = UPLOAD_MESSAGES[err.code] ?? [err.message, 400]
+  return new AppError(
+    'invalid-upload',
+    message,
+    status,
+    err.field ? [{ path: `file.${err.field}`, message }] : undefined,
+  )
 }
 
 function fromBodyParser(err: BodyParserError): AppError | null {

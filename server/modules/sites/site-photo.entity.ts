@@ -1,0 +1,39 @@
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm'
+import { SiteEntity } from './site.entity'
+
+/** A photo taken at the site; the bytes live on disk under the upload directory. */
+@Entity('site_photos')
+export class SitePhotoEntity {
+  @PrimaryGeneratedColumn('increment', { type: 'int' })
+  id: number
+
+  @Column('int')
+  siteId: number
+
+  @ManyToOne(() => SiteEntity, (s) => s.photos, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'siteId' })
+  site: Relation<SiteEntity>
+
+  @Column('varchar', { length: 200 })
+  filename: string
+
+  @Column('varchar', { length: 80 })
+  storedName: string
+
+  @Column('varchar', { length: 60 })
+  contentType: string
+
+  @Column('int')
+  size: number
+
+  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  createdAt: Date
+}

@@ -1,0 +1,106 @@
+import { Router } from 'express'
+import { z } from 'zod'
+import { IdParamSchema } from '../../../shared/schemas/auth'
+import { SiteInputSchema, SiteListQuerySchema } from '../../../shared/schemas/site'
+import type { ApiRegistry } from '../../http/api-registry'
+import { route } from '../../http/route'
+import { singleUpload } from '../../http/upload'
+import { MAX_PHOTO_BYTES, type SitesService } from './sites.service'
+
+const PhotoParams = IdParamSchema.extend({ photoId: z.coerce.number().int().positive() })
+const READERS = ['engineer', 'sales', 'admin'] as const
+const WRITERS = ['engineer', 'admin'] as const
+
+export function sitesRouter(api: ApiRegistry, sites: SitesService) {
+  const router = Router()
+  const tag = 'Sites'
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/sites',
+      tag,
+      summary: 'Sites, with search and filters',
+      access: READERS,
+      query: SiteListQuerySchema,
+    },
+    ({ query }) => sites.list(query),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'post',
+      path: '/api/sites',
+      tag,
+      summary: 'Create a site',
+      access: WRITERS,
+      body: SiteInputSchema,
+      status: 201,
+    },
+    ({ user, body }) => sites.create(user, body),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/sites/:id',
+      tag,
+      summary: 'One site',
+      access: READERS,
+      params: IdParamSchema,
+    },
+    ({ params }) => sites.get(params.id),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'put',
+      path: '/api/sites/:id',
+      tag,
+      summary: 'Change a site',
+      access: WRITERS,
+      params: IdParamSchema,
+      body: SiteInputSchema,
+    },
+    ({ user, params, body }) => sites.update(user, params.id, body),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'post',
+      path: '/api/sites/:id/photos',
+      tag,
+      summary: 'Add a photo (multipart field "photo")',
+      access: WRITERS,
+      params: IdParamSchema,
+      upload: 'photo',
+      before: [singleUpload('photo', MAX_PHOTO_BYTES)],
+      status: 201,
+    },
+    ({ user, params, req }) => sites.addPhoto(user, params.id, req.file),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/sites/:id/photos/:photoId',
+      tag,
+      summary: 'A photo',
+      access: READERS,
+      params: PhotoParams,
+      produces: 'image/*',
+    },
+    async ({ params, res }) => {
+      const p = await sites.photo(params.id, params.photoId)
+      res.type(p.contentType).set('cache-control', 'private, max-age=3600').send(p.bytes)
+      return undefined
+    },
+  )
+  return router
+}

@@ -1,0 +1,49 @@
+import { z } from 'zod'
+
+export const STRUCTURE_KINDS = [
+  'floor',
+  'footbridge',
+  'building',
+  'machine-platform',
+  'pipework',
+  'other',
+] as const
+export const StructureKindSchema = z.enum(STRUCTURE_KINDS)
+export type StructureKind = z.infer<typeof StructureKindSchema>
+
+export const SiteInputSchema = z.object({
+  name: z.string().trim().min(1, 'required').max(160),
+  companyId: z.number().int().positive(),
+  address: z.string().trim().max(300).default(''),
+  structureKind: StructureKindSchema,
+  contactName: z.string().trim().max(120).default(''),
+  contactPhone: z.string().trim().max(40).default(''),
+  notes: z.string().max(4000).default(''),
+})
+export type SiteInput = z.infer<typeof SiteInputSchema>
+
+export const SiteListQuerySchema = z.object({
+  search: z.string().trim().max(100).optional(),
+  structureKind: StructureKindSchema.optional(),
+  companyId: z.coerce.number().int().positive().optional(),
+})
+export type SiteListQuery = z.infer<typeof SiteListQuerySchema>
+
+export const SitePhotoSchema = z.object({
+  id: z.number().int(),
+  filename: z.string(),
+  contentType: z.string(),
+  size: z.number().int(),
+  url: z.string(),
+})
+export type SitePhoto = z.infer<typeof SitePhotoSchema>
+
+export const SiteSchema = SiteInputSchema.extend({
+  id: z.number().int(),
+  companyName: z.string(),
+  ownerId: z.number().int(),
+  ownerName: z.string(),
+  createdAt: z.string(),
+  photos: z.array(SitePhotoSchema),
+})
+export type Site = z.infer<typeof SiteSchema>
