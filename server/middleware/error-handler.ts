@@ -40,7 +40,10 @@ function fromBodyParser(err: BodyParserError): AppError | null {
 
 /** The one error path: known errors answer with their code, anything else is logged as a 500. */
 export function errorHandler(err: unknown, req: Request, res: Response, _next: NextFunction) {
-  const known = err instanceof AppError ? err : fromBodyParser((err ?? {}) as BodyParserError)
+  const known =
+    err instanceof AppError
+      ? err
+      : (fromUpload(err) ?? fromBodyParser((err ?? {}) as BodyParserError))
   if (known) {
     res.status(known.status).json({
       error: { code: known.code, message: known.message, details: known.details },

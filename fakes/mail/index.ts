@@ -1,0 +1,3 @@
+export { startMailCatcher } from './catcher'
+export type { MailCatcherOptions, RunningMailCatcher } from './catcher'
+export type { CaughtAttachment, CaughtMessage, MessageSummary } from './types'

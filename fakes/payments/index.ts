@@ -1,0 +1,5 @@
+export { createPaymentsFake } from './app'
+export { startPaymentsFake } from './server'
+export type { RunningPaymentsFake, StartPaymentsFakeOptions } from './server'
+export { TEST_CARDS } from './actions'
+export type { CheckoutSession, PaymentsFakeOptions, WebhookEvent } from './types'
