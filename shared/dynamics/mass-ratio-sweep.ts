@@ -1,0 +1,60 @@
+import type { ModelInput } from '../schemas/model'
+import { ModelError } from './errors'
+import { evaluateAbsorber, hostPeak } from './evaluate-absorber'
+import { resolveTuning } from './resolve-tuning'
+import { sizingContext } from './sizing-context'
+import { absorberValues } from './tuning-objective'
+
+/** One mass ratio of a sweep. */
+export interface SweepPoint {
+  massRatio: number
+  /** kg */
+  mass: number
+  frequencyRatio: number
+  dampingRatio: number
+  /** largest receptance over the band with the absorber, m/N */
+  peak: number
+  /** 1 − peak/peakWithout, null on an undamped host */
+  reduction: number | null
+  /** largest stroke per unit force over the band, m/N */
+  maxStrokePerForce: number
+}
+
+/**
+ * Achievable peak reduction against absorber mass: for each μ the absorber on the model's node is
+ * tuned by the model's method ('optimize' when none or explicit ratios are given), reusing one set
+ * of host receptances. So the engineer can pick the smallest mass meeting the acceptance and stroke
+ * limits (design.md "Mass ratio").
+ * @param model a model with an absorber node
+ * @param massRatios μ values (m_a/m_eff), each positive
+ * @throws ModelError for an invalid model, a missing absorber or a bad mass ratio
+ */
+export function massRatioSweep(
+  model: ModelInput,
+  massRatios: number[],
+): { peakWithout: number | null; points: SweepPoint[] } {
+  if (!model.absorber) throw new ModelError('absorber', 'a mass-ratio sweep needs an absorber node')
+  const ctx = sizingContext({
+    ...model,
+    absorber: { ...model.absorber, massRatio: massRatios[0] ?? 0.01, mass: undefined },
+  })
+  const m = ctx.effectiveMass ?? 0
+  const method = typeof model.absorber.tuning === 'string' ? model.absorber.tuning : 'optimize'
+  const without = hostPeak(ctx).value
+  const points = massRatios.map((mu, i) => {
+    if (!Number.isFinite(mu) || mu <= 0)
+      throw new ModelError(`massRatios[${i}]`, `must be positive, got ${mu}`)
+    const t = resolveTuning(ctx, mu * m, mu, method)
+    const ev = evaluateAbsorber(ctx, absorberValues(mu * m, ctx.omegaTarget, t))
+    return {
+      massRatio: mu,
+      mass: mu * m,
+      frequencyRatio: t.frequencyRatio,
+      dampingRatio: t.dampingRatio,
+      peak: ev.peak.value,
+      reduction: Number.isFinite(without) ? 1 - ev.peak.value / without : null,
+      maxStrokePerForce: ev.maxStroke.value,
+    }
+  })
+  return { peakWithout: Number.isFinite(without) ? without : null, points }
+}

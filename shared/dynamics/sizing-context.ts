@@ -1,0 +1,81 @@
+import type { ModelInput } from '../schemas/model'
+import { ModelError } from './errors'
+import { frequencyGrid, targetBand, type Band } from './grid'
+import { prepareHost, scaleHost, type PreparedHost } from './host'
+import { hostReceptance, type HostReceptance, type NodeTriple } from './host-receptance'
+import { effectiveMass } from './modes'
+import { validateHost } from './validate-host'
+import { validateRequest, type ValidRequest } from './validate-request'
+
+/** Everything a sizing computes once per model before trying absorbers. */
+export interface SizingContext {
+  model: ModelInput
+  prep: PreparedHost
+  req: ValidRequest
+  /** 0-based target mode */
+  r: number
+  /** rad/s */
+  omegaTarget: number
+  band: Band
+  /** true when the band was set by the user (it then stays put under detuning) */
+  userBand: boolean
+  nodes: NodeTriple
+  /** host receptances over the band grid */
+  rec: HostReceptance
+  /** kg, of the target mode at the absorber node (null without an absorber) */
+  effectiveMass: number | null
+}
+
+function absorberEffectiveMass(
+  prep: PreparedHost,
+  model: ModelInput,
+  j: number,
+  r: number,
+): number {
+  const m = effectiveMass(prep.modes, j, r)
+  const total = prep.mass.reduce((s, x) => s + x, 0)
+  if (!(m < total * 1e9)) {
+    throw new ModelError(
+      'absorber.node',
+      `node '${model.absorber?.node}' does not move in mode ${r + 1} (it lies on a node line of ` +
+        'the mode shape), so an absorber there cannot act on that mode; choose another node',
+    )
+  }
+  return m
+}
+
+/**
+ * Validates a model and precomputes the host: matrices, modes, band, grid and host receptances.
+ * @param model the model (SI units, band in Hz)
+ * @param prepared an already prepared host of this model, to reuse
+ * @param stiffnessFactor scales every spring rate (detuning studies)
+ * @throws ModelError naming the field when the model is invalid
+ */
+export function sizingContext(
+  model: ModelInput,
+  prepared?: PreparedHost,
+  stiffnessFactor = 1,
+): SizingContext {
+  const { host, index } = validateHost(model)
+  const req = validateRequest(model, index, host.ids.length)
+  const prep = scaleHost(prepared ?? prepareHost(host, req.dampingRatios), stiffnessFactor)
+  const r = req.targetMode - 1
+  const omegaTarget = prep.modes.omega[r] ?? 0
+  const band = req.band ?? targetBand(prep.modes.omega, r)
+  const j = req.absorber?.node ?? req.excitation
+  const nodes: NodeTriple = { j, r: req.response, f: req.excitation }
+  const rec = hostReceptance(prep, nodes, frequencyGrid(band, omegaTarget))
+  const effective = req.absorber ? absorberEffectiveMass(prep, model, j, r) : null
+  return {
+    model,
+    prep,
+    req,
+    r,
+    omegaTarget,
+    band,
+    userBand: req.band !== null,
+    nodes,
+    rec,
+    effectiveMass: effective,
+  }
+}

@@ -1,0 +1,92 @@
+import type { TuningName } from '../schemas/model'
+import type { ClosedFormName } from './closed-forms'
+
+/** One host mode as reported. */
+export interface ModeReport {
+  /** 1-based, ascending frequency */
+  number: number
+  frequencyHz: number
+  /** host modal damping ratio used for this mode */
+  dampingRatio: number
+  /** mass-normalised shape (1/√kg), one value per entry of `nodeIds` */
+  shape: number[]
+}
+
+/** The absorber to build. */
+export interface AbsorberReport {
+  node: string
+  /** kg */
+  mass: number
+  /** m_a / m_eff */
+  massRatio: number
+  /** spring rate, N/m */
+  stiffness: number
+  /** damper coefficient, N·s/m */
+  damping: number
+  frequencyHz: number
+  /** ω_a / ω_target */
+  frequencyRatio: number
+  /** c_a / (2 m_a ω_a) */
+  dampingRatio: number
+  tuning: TuningName | 'given'
+  /** where the tuning method holds */
+  scope: string
+  startedFrom?: ClosedFormName
+}
+
+/** Largest receptance |X_response/F_excitation| over the band (m/N); null when unbounded. */
+export interface PeakReport {
+  without: number | null
+  with: number | null
+  withoutFrequencyHz: number | null
+  withFrequencyHz: number | null
+  /** 1 − with/without */
+  reduction: number | null
+  /** without/with */
+  reductionFactor: number | null
+  /** static receptance of the host at these nodes (m/N) */
+  staticReceptance: number
+  /** static receptance of the target mode alone, φ_r φ_f/ω² (m/N): the scale of the published
+   * single-mode peaks (peak / this = the dynamic amplification of the tables) */
+  modalStaticReceptance: number
+}
+
+/** Values to build and check the unit against. */
+export interface DesignReport {
+  /** absorber mass, kg */
+  mass: number
+  /** N/m */
+  springRate: number
+  /** N·s/m */
+  damperCoefficient: number
+  frequencyHz: number
+  /** sag of a vertical unit under its own weight, g/ω_a², m */
+  staticDeflection: number
+  /** stroke per unit force at the response peak, m/N */
+  strokePerForceAtPeak: number | null
+  /** largest stroke per unit force over the band, m/N */
+  maxStrokePerForce: number | null
+  maxStrokeFrequencyHz: number | null
+  /** 1 − with/without, as in peak.reduction */
+  peakReduction: number | null
+}
+
+/** Result of `solveSizing`: the contract of the command line and the sizing API. */
+export interface SizingResult {
+  /** free node ids, the order of mode shapes */
+  nodeIds: string[]
+  modes: ModeReport[]
+  targetMode: number
+  excitationNode: string
+  responseNode: string
+  /** kg, of the target mode at the absorber node; null without an absorber */
+  effectiveMass: number | null
+  band: { minHz: number; maxHz: number }
+  absorber: AbsorberReport | null
+  peak: PeakReport
+  /** natural frequencies (Hz) of host + absorber, undamped, ascending */
+  modesWithAbsorber: { frequencyHz: number }[] | null
+  design: DesignReport | null
+  notes: string[]
+  cautions: string[]
+}

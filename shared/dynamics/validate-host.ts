@@ -1,0 +1,122 @@
+import type { ModelInput, NodeInput, SpringInput } from '../schemas/model'
+import { ModelError } from './errors'
+import type { ValidHost, ValidSpring } from './types'
+
+/** Node ids mapped to their free-node index, or −1 for a grounded node. */
+export type NodeIndex = Map<string, number>
+
+function checkNodeMass(node: NodeInput, i: number): number {
+  const field = `nodes[${i}].mass`
+  const m = node.mass
+  // Static condensation would hide a modelling slip and breaks with dashpots; refuse instead.
+  if (m === undefined || m === 0) {
+    throw new ModelError(
+      field,
+      `free node '${node.id}' has no mass; massless free nodes are refused, not condensed: ` +
+        'give it a mass (kg) or mark it fixed',
+    )
+  }
+  if (!Number.isFinite(m)) throw new ModelError(field, `must be a finite number of kg, got ${m}`)
+  if (m < 0) throw new ModelError(field, `must be positive (kg), got ${m}`)
+  return m
+}
+
+function indexNodes(nodes: NodeInput[]): { index: NodeIndex; ids: string[]; mass: number[] } {
+  const index: NodeIndex = new Map()
+  const firstAt = new Map<string, number>()
+  const ids: string[] = []
+  const mass: number[] = []
+  nodes.forEach((node, i) => {
+    if (typeof node.id !== 'string' || node.id === '') {
+      throw new ModelError(`nodes[${i}].id`, 'must be a non-empty text')
+    }
+    const first = firstAt.get(node.id)
+    if (first !== undefined) {
+      throw new ModelError(
+        `nodes[${i}].id`,
+        `duplicate node id '${node.id}' (first at nodes[${first}])`,
+      )
+    }
+    firstAt.set(node.id, i)
+    if (node.fixed === true) {
+      index.set(node.id, -1)
+      return
+    }
+    mass.push(checkNodeMass(node, i))
+    index.set(node.id, ids.length)
+    ids.push(node.id)
+  })
+  return { index, ids, mass }
+}
+
+function endIndex(index: NodeIndex, id: string, field: string): number {
+  const k = index.get(id)
+  if (k === undefined) throw new ModelError(field, `unknown node id '${id}'`)
+  return k
+}
+
+function checkSpring(s: SpringInput, i: number, index: NodeIndex): ValidSpring {
+  const f = `springs[${i}]`
+  const a = endIndex(index, s.from, `${f}.from`)
+  const b = endIndex(index, s.to, `${f}.to`)
+  if (s.from === s.to) throw new ModelError(`${f}.to`, `spring from node '${s.from}' to itself`)
+  const k = s.stiffness
+  if (!Number.isFinite(k))
+    throw new ModelError(`${f}.stiffness`, `must be a finite number of N/m, got ${k}`)
+  if (k <= 0) throw new ModelError(`${f}.stiffness`, `must be positive (N/m), got ${k}`)
+  const c = s.damping ?? 0
+  if (!Number.isFinite(c))
+    throw new ModelError(`${f}.damping`, `must be a finite number of N·s/m, got ${c}`)
+  if (c < 0) throw new ModelError(`${f}.damping`, `must not be negative (N·s/m), got ${c}`)
+  return { a, b, stiffness: k, damping: c }
+}
+
+/** Free nodes that no chain of springs ties to a support (K̂ would be singular). */
+function floatingNodes(n: number, springs: ValidSpring[]): number[] {
+  const adjacent: number[][] = Array.from({ length: n }, () => [])
+  const grounded = new Uint8Array(n)
+  const queue: number[] = []
+  const reach = (k: number): void => {
+    if (k >= 0 && grounded[k] === 0) {
+      grounded[k] = 1
+      queue.push(k)
+    }
+  }
+  for (const s of springs) {
+    if (s.a < 0) reach(s.b)
+    else if (s.b < 0) reach(s.a)
+    else {
+      adjacent[s.a]?.push(s.b)
+      adjacent[s.b]?.push(s.a)
+    }
+  }
+  for (let q = 0; q < queue.length; q++) for (const k of adjacent[queue[q] ?? 0] ?? []) reach(k)
+  const floating: number[] = []
+  grounded.forEach((g, k) => g === 0 && floating.push(k))
+  return floating
+}
+
+/**
+ * Checks the host network (nodes and springs) and indexes its free nodes.
+ * @param model the model; masses in kg, stiffness in N/m, damping in N·s/m
+ * @throws ModelError naming the first offending field
+ */
+export function validateHost(model: ModelInput): { host: ValidHost; index: NodeIndex } {
+  const { index, ids, mass } = indexNodes(model.nodes)
+  if (ids.length === 0) throw new ModelError('nodes', 'the model has no free node (all are fixed)')
+  const springs = model.springs.map((s, i) => checkSpring(s, i, index))
+  const floating = floatingNodes(ids.length, springs)
+  const first = floating[0]
+  if (first !== undefined) {
+    const id = ids[first] ?? ''
+    const at = model.nodes.findIndex((n) => n.id === id)
+    const others = floating.length > 1 ? ` (and ${floating.length - 1} other free node(s))` : ''
+    throw new ModelError(
+      `nodes[${at}]`,
+      `node '${id}'${others} has no path through springs to a fixed node: ` +
+        'the group would move as a rigid body; connect it to a support',
+    )
+  }
+  const hasDashpots = springs.some((s) => s.damping > 0)
+  return { host: { ids, mass: Float64Array.from(mass), springs, hasDashpots }, index }
+}

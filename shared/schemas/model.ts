@@ -1,0 +1,94 @@
+/**
+ * Shape of a host model and its sizing request (the API and command-line contract).
+ * The schema checks types and required fields only; the physics (positive masses, a path to a
+ * support, existing mode numbers…) is checked by `validateHost` and `validateRequest` in
+ * shared/dynamics (run by `solveSizing`), which throw a `ModelError` naming the field.
+ * SI units throughout.
+ */
+import { z } from 'zod'
+
+const finite = () => z.number({ error: 'expected a finite number' })
+const text = () => z.string({ error: 'expected a text' }).min(1, { error: 'must not be empty' })
+
+export const tuningNameSchema = z.enum([
+  'optimize',
+  'optimize-h2',
+  'den-hartog',
+  'asami-nishihara',
+  'warburton-force',
+  'warburton-base',
+  'warburton-base-harmonic',
+  'ioi-ikeda',
+])
+
+export const nodeSchema = z.object({
+  id: text(),
+  label: z.string().optional(),
+  /** kg; ignored on a fixed node */
+  mass: finite().optional(),
+  /** grounded to a support (wall, column, abutment, foundation) */
+  fixed: z.boolean().optional(),
+})
+
+export const springSchema = z.object({
+  from: text(),
+  to: text(),
+  /** N/m */
+  stiffness: finite(),
+  /** N·s/m, a physical dashpot in parallel */
+  damping: finite().optional(),
+})
+
+export const explicitTuningSchema = z.object({
+  /** ω_a / ω_target */
+  frequencyRatio: finite(),
+  /** c_a / (2 m_a ω_a), referred to the absorber's own frequency */
+  dampingRatio: finite(),
+})
+
+export const absorberSchema = z.object({
+  node: text(),
+  /** m_a / m_eff of the target mode at the absorber node; or give `mass` */
+  massRatio: finite().optional(),
+  /** kg, instead of massRatio */
+  mass: finite().optional(),
+  tuning: z.union([tuningNameSchema, explicitTuningSchema]).optional(),
+})
+
+export const bandSchema = z.object({ minHz: finite(), maxHz: finite() })
+
+export const modelSchema = z.object({
+  name: z.string().optional(),
+  nodes: z.array(nodeSchema).min(1),
+  springs: z.array(springSchema),
+  /** modal damping ratio of every host mode, or one per mode (ascending frequency) */
+  hostDampingRatio: z.union([finite(), z.array(finite())]).optional(),
+  absorber: absorberSchema.optional(),
+  excitation: z.object({ node: text() }).optional(),
+  response: z.object({ node: text() }).optional(),
+  /** 1-based, in ascending frequency */
+  targetMode: z
+    .number({ error: 'expected a mode number' })
+    .int({ error: 'expected a whole mode number (1 = lowest)' })
+    .min(1, { error: 'modes are numbered from 1 (the lowest)' })
+    .optional(),
+  band: bandSchema.optional(),
+})
+
+export type NodeInput = z.infer<typeof nodeSchema>
+export type SpringInput = z.infer<typeof springSchema>
+export type TuningName = z.infer<typeof tuningNameSchema>
+export type ExplicitTuning = z.infer<typeof explicitTuningSchema>
+export type AbsorberInput = z.infer<typeof absorberSchema>
+export type BandInput = z.infer<typeof bandSchema>
+export type ModelInput = z.infer<typeof modelSchema>
+
+/**
+ * Field path of a zod issue in the engine's notation ("springs[2].stiffness").
+ * @param path issue path as reported by zod
+ */
+export function issuePath(path: readonly PropertyKey[]): string {
+  return path
+    .map((p, i) => (typeof p === 'number' ? `[${p}]` : `${i === 0 ? '' : '.'}${String(p)}`))
+    .join('')
+}

@@ -1,0 +1,67 @@
+import { execFile } from 'node:child_process'
+import { mkdtempSync, writeFileSync } from 'node:fs'
+import { tmpdir } from 'node:os'
+import { join } from 'node:path'
+import { promisify } from 'node:util'
+import { describe, expect, it } from 'vitest'
+import { invalidCases, validModel } from './invalid-models'
+
+const run = promisify(execFile)
+const dir = mkdtempSync(join(tmpdir(), 'quellnode-solve-'))
+
+async function solve(file: string): Promise<{ code: number; stdout: string; stderr: string }> {
+  try {
+    const r = await run('npx', ['tsx', 'server/scripts/solve.ts', file], { cwd: process.cwd() })
+    return { code: 0, stdout: r.stdout, stderr: r.stderr }
+  } catch (e) {
+    const x = e as { code: number; stdout: string; stderr: string }
+    return { code: x.code, stdout: x.stdout, stderr: x.stderr }
+  }
+}
+
+function write(name: string, text: string): string {
+  const file = join(dir, name)
+  writeFileSync(file, text)
+  return file
+}
+
+describe('the solve command line', () => {
+  it('prints the sizing contract as JSON for a valid model', async () => {
+    const r = await solve(write('valid.json', JSON.stringify(validModel())))
+    expect(r.code).toBe(0)
+    const out = JSON.parse(r.stdout)
+    expect(out.modes[0].frequencyHz).toBeGreaterThan(0)
+    expect(out.absorber.mass).toBeCloseTo(0.02 * out.effectiveMass, 9)
+    expect(out.peak.with).toBeLessThan(out.peak.without)
+    expect(out.cautions.join(' ')).toMatch(/licensed engineer/)
+  }, 60000)
+
+  it('exits 2 with one line naming the field for every invalid model, never a stack trace', async () => {
+    const files = invalidCases.map((c, i) =>
+      write(`bad-${i}.json`, c.json ?? JSON.stringify(c.model)),
+    )
+    const results = await Promise.all(files.map(solve))
+    results.forEach((r, i) => {
+      const c = invalidCases[i]
+      expect(r.code, c?.name).toBe(2)
+      expect(r.stdout).toBe('')
+      const lines = r.stderr.trim().split('\n')
+      expect(lines, c?.name).toHaveLength(1)
+      expect(lines[0]).toContain(c?.field ?? '?')
+      if (c?.cli) expect(lines[0]).toMatch(c.cli)
+      else expect(lines[0]?.replace(/^solve: invalid model: /, '')).toMatch(c?.message ?? /$^/)
+      expect(r.stderr).not.toMatch(/\n\s+at /)
+    })
+  }, 120000)
+
+  it('exits 2 with one line for an unreadable file and for invalid JSON', async () => {
+    const [missing, broken] = await Promise.all([
+      solve(join(dir, 'no-such-file.json')),
+      solve(write('broken.json', '{"nodes": [')),
+    ])
+    expect(missing.code).toBe(2)
+    expect(missing.stderr.trim()).toMatch(/^solve: cannot read .*no-such-file\.json: ENOENT$/)
+    expect(broken.code).toBe(2)
+    expect(broken.stderr.trim()).toMatch(/^solve: .*broken\.json is not valid JSON: /)
+  }, 60000)
+})

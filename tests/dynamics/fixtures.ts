@@ -1,0 +1,69 @@
+import type { ModelInput } from '../../shared/schemas/model'
+
+/** n equal masses m on equal springs k; both ends fixed (n+1 springs) or the far end free. */
+export function chainModel(n: number, m: number, k: number, bothEnds: boolean): ModelInput {
+  const ids = ['ground', ...Array.from({ length: n }, (_, i) => `m${i + 1}`)]
+  const nodes = ids.map((id, i) => (i === 0 ? { id, fixed: true } : { id, mass: m }))
+  const springs = ids.slice(1).map((to, i) => ({ from: ids[i] ?? '', to, stiffness: k }))
+  if (bothEnds) {
+    nodes.push({ id: 'end', fixed: true })
+    springs.push({ from: `m${n}`, to: 'end', stiffness: k })
+  }
+  return { nodes, springs }
+}
+
+/** Deterministic generator in [0, 1) (mulberry32) for reproducible random networks. */
+export function seeded(seed: number): () => number {
+  let a = seed >>> 0
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0
+    let t = a
+    t = Math.imul(t ^ (t >>> 15), t | 1)
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61)
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
+  }
+}
+
+/** A random connected network: a spanning chain from the support plus random extra springs. */
+export function randomNetwork(rnd: () => number, n: number, dashpots: boolean): ModelInput {
+  const nodes = [
+    { id: 'g', fixed: true },
+    ...Array.from({ length: n }, (_, i) => ({ id: `n${i}`, mass: 50 + 950 * rnd() })),
+  ]
+  const springs = Array.from({ length: n }, (_, i) => ({
+    from: i === 0 ? 'g' : `n${Math.floor(rnd() * i)}`,
+    to: `n${i}`,
+    stiffness: 1e5 + 1e6 * rnd(),
+    damping: dashpots ? 200 * rnd() : 0,
+  }))
+  for (let e = 0; e < n; e++) {
+    const a = Math.floor(rnd() * n)
+    const b = Math.floor(rnd() * n)
+    if (a !== b)
+      springs.push({
+        from: `n${a}`,
+        to: `n${b}`,
+        stiffness: 1e5 * rnd() + 1,
+        damping: dashpots ? 50 * rnd() : 0,
+      })
+  }
+  springs.push({ from: `n${n - 1}`, to: 'g', stiffness: 3e5 * rnd() + 1, damping: 0 })
+  return { nodes, springs }
+}
+
+/** The undamped-host single-mode model used by the tuning checks: M = 1 kg, ω_n = 1 rad/s. */
+export function unitOscillator(
+  zetaHost: number,
+  mu: number,
+  tuning: NonNullable<ModelInput['absorber']>['tuning'],
+): ModelInput {
+  return {
+    nodes: [
+      { id: 'ground', fixed: true },
+      { id: 'host', mass: 1 },
+    ],
+    springs: [{ from: 'ground', to: 'host', stiffness: 1 }],
+    hostDampingRatio: zetaHost,
+    absorber: { node: 'host', massRatio: mu, tuning },
+  }
+}
