@@ -1,0 +1,15 @@
+/**
+ * Site measurements: read an acceleration record, compute its spectrum and identify natural
+ * frequencies and damping ratios. Pure: no I/O; runs in the browser and on the server.
+ */
+export { identifyRecord } from './identify'
+export { identifyPeakAt, type PeakAtOptions } from './identify-peak-at'
+export { parseRecordBytes, parseRecordCsv, type ParsedRecord } from './parse-csv'
+export type { ParseRecordOptions } from './parse-options'
+export { decodeRecordBytes } from './decode'
+export { RecordError, isRecordError, type RecordErrorCode } from './record-error'
+export { dampingFromLogDecrement, logDecrementFromDamping } from './log-decrement'
+export { halfPowerBand, type HalfPowerBand } from './half-power'
+export { detectRecordKind, type RecordKind } from './record-kind'
+export type { IdentificationResult, IdentifiedPeak, IdentifyOptions, RecordSamples } from './types'
+export type { LogDecrementFit } from './log-decrement'
