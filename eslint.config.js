@@ -10,6 +10,8 @@ export default defineConfigWithVueTs(
   {
     languageOptions: { globals: { ...globals.node, ...globals.browser } },
     rules: {
+      // Prettier lays out attributes; this layout rule disagrees with it.
+      'vue/first-attribute-linebreak': 'off',
       '@typescript-eslint/no-unused-vars': [
         'error',
         { argsIgnorePattern: '^_', varsIgnorePattern: '^_' },

@@ -4,23 +4,30 @@ import { buildServices } from '../server/app'
 import { loadConfig } from '../server/config'
 import { createDataSource } from '../server/data-source'
 import { smtpMailer } from '../server/integrations/mail'
+import { createSizingPool } from '../server/workers/pool'
 import { seedPeople } from './seed-people'
+import { seedCatalogue } from './seed-catalogue'
+import { seedSizings } from './seed-sizings'
 
 /** Loads the demo scenario through the services. Idempotent: safe to run on every start. */
 async function main() {
   const config = loadConfig()
   const dataSource = await createDataSource(config).initialize()
+  const pool = createSizingPool(1)
   try {
     const services = buildServices({
       config,
       dataSource,
       mailer: smtpMailer(config),
       logger: pino({ level: 'warn' }),
+      pool,
     })
-    await seedPeople(services)
+    const { companyIds } = await seedPeople(services)
+    await seedSizings(services, { companyIds })
+    await seedCatalogue(services)
     console.log('demo data loaded')
   } finally {
-    await dataSource.destroy()
+    await Promise.all([dataSource.destroy(), pool.close()])
   }
 }
 

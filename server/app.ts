@@ -25,6 +25,25 @@ import { fileStore } from './integrations/file-store'
 import { sitesRepository } from './modules/sites/sites.repository'
 import { sitesRouter } from './modules/sites/sites.router'
 import { sitesService } from './modules/sites/sites.service'
+import { modelsRepository } from './modules/models/models.repository'
+import { modelsRouter } from './modules/models/models.router'
+import { modelsService } from './modules/models/models.service'
+import { sizingsRepository } from './modules/sizings/sizings.repository'
+import { sizingsRouter } from './modules/sizings/sizings.router'
+import { sizingsService } from './modules/sizings/sizings.service'
+import { buildMeasurements } from './modules/measurements/build-measurements'
+import { measurementsRouter } from './modules/measurements/measurements.router'
+import type { SizingPool } from './workers/pool'
+import { buildCommerce, commerceRouters } from './modules/quotes/commerce'
+import { stripeGateway, type PaymentGateway } from './integrations/payments'
+import { paymentsRepository } from './modules/payments/payments.repository'
+import { paymentsRouter, paymentsWebhookRouter } from './modules/payments/payments.router'
+import { paymentsService } from './modules/payments/payments.service'
+import { productionRepository } from './modules/production/production.repository'
+import { productionRouter } from './modules/production/production.router'
+import { productionService } from './modules/production/production.service'
+import type { SizingSource } from './modules/quotes/sizing-source'
+import type { PdfRenderer } from './integrations/pdf'
 
 export const VERSION = '0.1.0'
 
@@ -35,6 +54,14 @@ export interface AppDeps {
   logger: Logger
   /** The clock services read; tests move it to check expiry. */
   now?: () => Date
+  /** Worker threads for the engine, so a long optimisation never blocks a request. */
+  pool: SizingPool
+  /** The payment API; else the official SDK pointed by config at the fake or the real service. */
+  gateway?: PaymentGateway
+  /** Sizings for quotes, when given (tests); else the sizings service once it is wired. */
+  sizingSource?: SizingSource
+  /** HTML→PDF; else the shared Chromium renderer of config.CHROMIUM_PATH. */
+  pdf?: PdfRenderer
 }
 
 /** Builds the services the routers call; one place to see how the app is wired. */
@@ -52,6 +79,38 @@ export function buildServices(deps: AppDeps) {
     now,
   })
   const files = fileStore(deps.config.UPLOAD_DIR)
+  const sites = sitesService({ sites: sitesRepository(deps.dataSource), companies, files })
+  const models = modelsService({ models: modelsRepository(deps.dataSource), sites })
+  const sizings = sizingsService({
+    sizings: sizingsRepository(deps.dataSource),
+    models,
+    sites,
+    pool: deps.pool,
+    now,
+  })
+  const measurements = buildMeasurements({ dataSource: deps.dataSource, sites, models, files })
+  const commerce = buildCommerce(
+    { ...deps, sizingSource: deps.sizingSource ?? sizings },
+    { users, companies, auth, now },
+  )
+  const production = productionService({
+    repo: productionRepository(deps.dataSource),
+    quotes: commerce.quotes,
+    users,
+    mailer: deps.mailer,
+    now,
+  })
+  const payments = paymentsService({
+    onOrderPaid: (o) => production.createFor(o),
+    workOrderState: (quoteId) => production.stateForQuote(quoteId),
+    payments: paymentsRepository(deps.dataSource),
+    gateway: deps.gateway ?? stripeGateway(deps.config),
+    quotes: commerce.quotes,
+    users,
+    mailer: deps.mailer,
+    publicUrl: deps.config.publicUrl,
+    now,
+  })
   return {
     now,
     users,
@@ -59,7 +118,13 @@ export function buildServices(deps: AppDeps) {
     auth,
     files,
     usersAdmin: usersService({ users, companies, auth }),
-    sites: sitesService({ sites: sitesRepository(deps.dataSource), companies, files }),
+    sites,
+    models,
+    sizings,
+    measurements,
+    ...commerce,
+    payments,
+    production,
   }
 }
 export type Services = ReturnType<typeof buildServices>
@@ -101,6 +166,7 @@ export function createApp(deps: AppDeps): Express {
   )
   app.use(cookieParser())
   app.use(authenticate(config.JWT_SECRET, (id) => services.auth.loadActiveUser(id)))
+  app.use(paymentsWebhookRouter(api, services.payments))
   app.use('/api', express.json({ limit: '2mb' }))
 
   app.use(healthRouter(api, deps.dataSource, VERSION))
@@ -114,6 +180,12 @@ export function createApp(deps: AppDeps): Express {
   app.use(usersRouter(api, services.usersAdmin))
   app.use(companiesRouter(api, services.companies))
   app.use(sitesRouter(api, services.sites))
+  app.use(modelsRouter(api, services.models))
+  app.use(sizingsRouter(api, services.sizings))
+  app.use(measurementsRouter(api, services.measurements))
+  app.use(commerceRouters(api, services))
+  app.use(paymentsRouter(api, services.payments))
+  app.use(productionRouter(api, services.production))
 
   app.use('/api', notFoundHandler)
   serveClient(app, config.CLIENT_DIR)

@@ -4,6 +4,8 @@ import { createApp } from './app'
 import { loadConfig } from './config'
 import { createDataSource } from './data-source'
 import { smtpMailer } from './integrations/mail'
+import { createSizingPool } from './workers/pool'
+import { closePdfRenderers } from './integrations/pdf'
 
 async function main() {
   let config
@@ -15,12 +17,18 @@ async function main() {
   }
   const logger = pino({ level: config.LOG_LEVEL })
   const dataSource = await createDataSource(config).initialize()
-  const app = createApp({ config, dataSource, mailer: smtpMailer(config), logger })
+  const pool = createSizingPool(config.WORKER_THREADS)
+  const app = createApp({ config, dataSource, mailer: smtpMailer(config), logger, pool })
   const server = app.listen(config.PORT, config.HOST, () => {
     logger.info({ url: config.publicUrl }, 'Quellnode is listening')
   })
   const stop = () => {
-    server.close(() => void dataSource.destroy().then(() => process.exit(0)))
+    server.close(
+      () =>
+        void Promise.all([dataSource.destroy(), pool.close(), closePdfRenderers()]).then(() =>
+          process.exit(0),
+        ),
+    )
     setTimeout(() => process.exit(0), 5000).unref()
   }
   process.on('SIGTERM', stop)

@@ -1,5 +1,18 @@
 import { Foundation1796194970085 } from './1796194970085-Foundation'
 import { Sites1796195382472 } from './1796195382472-Sites'
+import { Commerce1796197028777 } from './1796197028777-Commerce'
+import { ModelsSizings1796198622102 } from './1796198622102-ModelsSizings'
+import { Payments1796201603698 } from './1796201603698-Payments'
+import { Production1796202027823 } from './1796202027823-Production'
+import { Measurements1796202424685 } from './1796202424685-Measurements'
 
 /** Every migration class in order; a new migration is added here too. */
-export const migrations = [Foundation1796194970085, Sites1796195382472]
+export const migrations = [
+  Foundation1796194970085,
+  Sites1796195382472,
+  Commerce1796197028777,
+  ModelsSizings1796198622102,
+  Payments1796201603698,
+  Production1796202027823,
+  Measurements1796202424685,
+]

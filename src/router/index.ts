@@ -3,7 +3,30 @@ import type { Role } from '@shared/schemas/auth'
 import { useAuthStore } from '@/stores/auth'
 
 export type RouteName =
-  'home' | 'sign-in' | 'set-password' | 'forgot-password' | 'admin-users' | 'not-found'
+  | 'home'
+  | 'sign-in'
+  | 'set-password'
+  | 'forgot-password'
+  | 'admin-users'
+  | 'not-found'
+  | 'sites'
+  | 'site'
+  | 'site-records'
+  | 'sizings'
+  | 'sizing-new'
+  | 'sizing'
+  | 'portal'
+  | 'portal-quote'
+  | 'portal-payment-done'
+  | 'work-orders'
+  | 'work-order'
+  | 'quotes'
+  | 'quote-new'
+  | 'quote'
+  | 'quote-edit'
+  | 'catalogue'
+  | 'customers'
+  | 'customer'
 
 declare module 'vue-router' {
   interface RouteMeta {
@@ -45,6 +68,117 @@ const routes: (RouteRecordRaw & { name: RouteName })[] = [
     name: 'admin-users',
     component: () => import('@/views/AdminUsersView.vue'),
     meta: { roles: ['admin'], title: 'Users' },
+  },
+  {
+    path: '/portal',
+    name: 'portal',
+    component: () => import('@/views/PortalView.vue'),
+    meta: { roles: ['customer'], title: 'Your quotes' },
+  },
+  {
+    path: '/portal/quotes/:id',
+    name: 'portal-quote',
+    component: () => import('@/views/PortalQuoteView.vue'),
+    meta: { roles: ['customer'], title: 'Quote' },
+  },
+  {
+    path: '/portal/payment/done',
+    name: 'portal-payment-done',
+    component: () => import('@/views/PaymentDoneView.vue'),
+    meta: { roles: ['customer'], title: 'Payment' },
+  },
+  {
+    path: '/sites',
+    name: 'sites',
+    component: () => import('@/views/SitesView.vue'),
+    meta: { roles: ['engineer', 'sales', 'admin'], title: 'Sites' },
+  },
+  {
+    path: '/sites/:id(\\d+)',
+    name: 'site',
+    component: () => import('@/views/SiteView.vue'),
+    props: true,
+    meta: { roles: ['engineer', 'sales', 'admin'], title: 'Site' },
+  },
+  {
+    path: '/sites/:id(\\d+)/records',
+    name: 'site-records',
+    component: () => import('@/views/SiteRecordsView.vue'),
+    props: true,
+    meta: { roles: ['engineer', 'sales', 'admin'], title: 'Measurements' },
+  },
+  {
+    path: '/sizings',
+    name: 'sizings',
+    component: () => import('@/views/SizingsView.vue'),
+    meta: { roles: ['engineer', 'sales', 'admin'], title: 'Sizings' },
+  },
+  {
+    path: '/sizings/new',
+    name: 'sizing-new',
+    component: () => import('@/views/SizingWorkspaceView.vue'),
+    meta: { roles: ['engineer', 'admin'], title: 'New sizing' },
+  },
+  {
+    path: '/sizings/:id(\\d+)',
+    name: 'sizing',
+    component: () => import('@/views/SizingWorkspaceView.vue'),
+    props: true,
+    meta: { roles: ['engineer', 'sales', 'admin'], title: 'Sizing' },
+  },
+  {
+    path: '/work-orders',
+    name: 'work-orders',
+    component: () => import('@/views/WorkOrdersView.vue'),
+    meta: { roles: ['production', 'admin'], title: 'Work orders' },
+  },
+  {
+    path: '/work-orders/:id',
+    name: 'work-order',
+    component: () => import('@/views/WorkOrderView.vue'),
+    meta: { roles: ['production', 'admin'], title: 'Work order' },
+  },
+  {
+    path: '/quotes',
+    name: 'quotes',
+    component: () => import('@/views/QuoteListView.vue'),
+    meta: { roles: ['sales', 'admin'], title: 'Quotes' },
+  },
+  {
+    path: '/quotes/new',
+    name: 'quote-new',
+    component: () => import('@/views/QuoteBuilderView.vue'),
+    meta: { roles: ['sales', 'admin'], title: 'New quote' },
+  },
+  {
+    path: '/quotes/:id(\\d+)',
+    name: 'quote',
+    component: () => import('@/views/QuoteDetailView.vue'),
+    meta: { roles: ['sales', 'admin'], title: 'Quote' },
+  },
+  {
+    path: '/quotes/:id(\\d+)/edit',
+    name: 'quote-edit',
+    component: () => import('@/views/QuoteBuilderView.vue'),
+    meta: { roles: ['sales', 'admin'], title: 'Change quote' },
+  },
+  {
+    path: '/admin/catalogue',
+    name: 'catalogue',
+    component: () => import('@/views/CatalogueListView.vue'),
+    meta: { roles: ['admin'], title: 'Catalogue' },
+  },
+  {
+    path: '/customers',
+    name: 'customers',
+    component: () => import('@/views/CustomerListView.vue'),
+    meta: { roles: ['sales', 'admin'], title: 'Customers' },
+  },
+  {
+    path: '/customers/:id(\\d+)',
+    name: 'customer',
+    component: () => import('@/views/CustomerDetailView.vue'),
+    meta: { roles: ['sales', 'admin'], title: 'Customer' },
   },
   {
     path: '/:rest(.*)*',

@@ -8,6 +8,7 @@ import { createDataSource } from '../../server/data-source'
 import { smtpMailer } from '../../server/integrations/mail'
 import { startMailCatcher, type RunningMailCatcher } from '../../fakes/mail'
 import { testEnv } from './test-env'
+import { createSizingPool } from '../../server/workers/pool'
 
 export interface TestApp {
   app: ReturnType<typeof createApp>
@@ -30,6 +31,7 @@ export async function makeTestApp(extraEnv: Record<string, string> = {}): Promis
   )
   const ds = await createDataSource(config).initialize()
   const clock = { offsetMs: 0 }
+  const pool = createSizingPool(2)
   const now = () => new Date(Date.now() + clock.offsetMs)
   const deps = {
     config,
@@ -37,6 +39,7 @@ export async function makeTestApp(extraEnv: Record<string, string> = {}): Promis
     mailer: smtpMailer(config),
     logger: pino({ level: 'silent' }),
     now,
+    pool,
   }
   return {
     app: createApp(deps),
@@ -48,6 +51,7 @@ export async function makeTestApp(extraEnv: Record<string, string> = {}): Promis
     close: async () => {
       await ds.destroy()
       await mail.close()
+      await pool.close()
     },
   }
 }

@@ -51,7 +51,10 @@ export async function startBrowserRig(extraEnv: Record<string, string> = {}): Pr
   }
 }
 
-export async function newPage(rig: BrowserRig, viewport = PORTRAIT): Promise<Page> {
+export async function newPage(
+  rig: Pick<BrowserRig, 'browser'>,
+  viewport = PORTRAIT,
+): Promise<Page> {
   const context = await rig.browser.createBrowserContext()
   const page = await context.newPage()
   await page.setViewport({ ...viewport, hasTouch: true, isMobile: false })

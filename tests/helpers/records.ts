@@ -22,3 +22,42 @@ export const TINY_PNG = Buffer.from(
   'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==',
   'base64',
 )
+
+/** A 5-storey shear building (invented figures): 200 t storeys, 250 MN/m inter-storey. */
+export function buildingDefinition() {
+  const nodes: { id: string; fixed?: boolean; mass?: number }[] = [{ id: 'ground', fixed: true }]
+  const springs: { from: string; to: string; stiffness: number }[] = []
+  for (let i = 1; i <= 5; i++) {
+    nodes.push({ id: `storey-${i}`, mass: 200_000 })
+    springs.push({
+      from: i === 1 ? 'ground' : `storey-${i - 1}`,
+      to: `storey-${i}`,
+      stiffness: 250e6,
+    })
+  }
+  return { nodes, springs, hostDampingRatio: 0.01 }
+}
+
+export function sizingInput(
+  siteId: number,
+  modelId: number,
+  overrides: Record<string, unknown> = {},
+) {
+  return {
+    title: 'Roof sway absorber',
+    siteId,
+    modelId,
+    modelRevision: 1,
+    targetMode: 1,
+    absorberNode: 'storey-5',
+    excitationNode: 'storey-5',
+    responseNode: 'storey-5',
+    forceAmplitude: 5000,
+    massRatio: 0.02,
+    tuning: 'optimize',
+    orientation: 'horizontal',
+    acceptance: { label: 'custom', quantity: 'acceleration', limit: 0.15 },
+    detuningTolerance: 0.05,
+    ...overrides,
+  }
+}

@@ -1,0 +1,136 @@
+import { Router } from 'express'
+import { z } from 'zod'
+import { IdParamSchema } from '../../../shared/schemas/auth'
+import {
+  CatalogueOptionInputSchema,
+  MatchQuerySchema,
+  ProductLineInputSchema,
+} from '../../../shared/schemas/catalogue'
+import type { ApiRegistry } from '../../http/api-registry'
+import { route } from '../../http/route'
+import type { SizingSource } from '../quotes/sizing-source'
+import type { CatalogueService } from './catalogue.service'
+
+const LINE_READERS = ['engineer', 'sales', 'production', 'admin'] as const
+const SELLERS = ['sales', 'admin'] as const
+const ADMIN = ['admin'] as const
+const ListQuery = z.object({ includeInactive: z.enum(['true', 'false']).optional() })
+
+export function catalogueRouter(
+  api: ApiRegistry,
+  catalogue: CatalogueService,
+  sizings: SizingSource,
+) {
+  const router = Router()
+  const tag = 'Catalogue'
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/catalogue/lines',
+      tag,
+      summary: 'Absorber product lines (prices for sales and admin only)',
+      access: LINE_READERS,
+      query: ListQuery,
+    },
+    ({ user, query }) => catalogue.listLines(user.role, query.includeInactive === 'true'),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/catalogue/lines/:id',
+      tag,
+      summary: 'One product line',
+      access: LINE_READERS,
+      params: IdParamSchema,
+    },
+    ({ user, params }) => catalogue.getLine(user.role, params.id),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'post',
+      path: '/api/catalogue/lines',
+      tag,
+      summary: 'Add a product line',
+      access: ADMIN,
+      body: ProductLineInputSchema,
+      status: 201,
+    },
+    ({ body }) => catalogue.createLine(body),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'put',
+      path: '/api/catalogue/lines/:id',
+      tag,
+      summary: 'Change a product line (quotes already made keep their prices)',
+      access: ADMIN,
+      params: IdParamSchema,
+      body: ProductLineInputSchema,
+    },
+    ({ params, body }) => catalogue.updateLine(params.id, body),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/catalogue/options',
+      tag,
+      summary: 'Options and services with their prices',
+      access: SELLERS,
+      query: ListQuery,
+    },
+    ({ user, query }) =>
+      catalogue.listOptions(user.role === 'admin' && query.includeInactive === 'true'),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'post',
+      path: '/api/catalogue/options',
+      tag,
+      summary: 'Add an option or service',
+      access: ADMIN,
+      body: CatalogueOptionInputSchema,
+      status: 201,
+    },
+    ({ body }) => catalogue.createOption(body),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'put',
+      path: '/api/catalogue/options/:id',
+      tag,
+      summary: 'Change an option or service',
+      access: ADMIN,
+      params: IdParamSchema,
+      body: CatalogueOptionInputSchema,
+    },
+    ({ params, body }) => catalogue.updateOption(params.id, body),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/catalogue/matches',
+      tag,
+      summary: 'Which product lines can carry a sizing, and why the others cannot',
+      access: ['engineer', ...SELLERS],
+      query: MatchQuerySchema,
+    },
+    async ({ query }) => catalogue.match(await sizings.summary(query.sizingId)),
+  )
+  return router
+}

@@ -1,0 +1,86 @@
+import { matchUnits } from '../../../shared/catalogue'
+import type {
+  CatalogueOptionInput,
+  ProductLine,
+  ProductLineInput,
+  UnitMatch,
+} from '../../../shared/schemas/catalogue'
+import type { Role } from '../../../shared/schemas/auth'
+import type { SizingSummary } from '../../../shared/schemas/sizing'
+import { AppError, notFound } from '../../http/app-error'
+import type { CatalogueRepository, ProductLineRecord } from './catalogue.repository'
+
+/** Who sees catalogue prices: the people who quote and the admin who sets them. */
+const PRICE_READERS: readonly Role[] = ['sales', 'admin']
+
+function forRole(line: ProductLineRecord, role: Role): ProductLine {
+  return PRICE_READERS.includes(role) ? line : { ...line, prices: null }
+}
+
+function codeTaken(code: string) {
+  return new AppError('code-taken', `The code ${code} is in use already.`, 409, [
+    { path: 'body.code', message: 'already in use' },
+  ])
+}
+
+/** The absorber values of a sizing as the matcher reads them. */
+export function demandOf(s: SizingSummary) {
+  return {
+    mass: s.absorber.mass,
+    frequencyHz: s.absorber.frequencyHz,
+    stroke: s.stroke,
+    dampingRatio: s.absorber.dampingRatio,
+    orientation: s.orientation,
+  }
+}
+
+export function catalogueService(deps: { catalogue: CatalogueRepository }) {
+  const repo = deps.catalogue
+  async function line(id: number) {
+    const found = await repo.findLine(id)
+    if (!found) throw notFound('product-line')
+    return found
+  }
+  async function option(id: number) {
+    const found = await repo.findOption(id)
+    if (!found) throw notFound('catalogue-option')
+    return found
+  }
+  return {
+    line,
+    option,
+    async listLines(role: Role, includeInactive = false) {
+      const all = await repo.listLines(!(includeInactive && role === 'admin'))
+      return all.map((l) => forRole(l, role))
+    },
+    async getLine(role: Role, id: number) {
+      return forRole(await line(id), role)
+    },
+    async createLine(input: ProductLineInput) {
+      if (await repo.findLineByCode(input.code)) throw codeTaken(input.code)
+      return repo.createLine(input)
+    },
+    async updateLine(id: number, input: ProductLineInput) {
+      await line(id)
+      const other = await repo.findLineByCode(input.code)
+      if (other && other.id !== id) throw codeTaken(input.code)
+      return repo.updateLine(id, input)
+    },
+    listOptions: (includeInactive = false) => repo.listOptions(!includeInactive),
+    async createOption(input: CatalogueOptionInput) {
+      if (await repo.findOptionByCode(input.code)) throw codeTaken(input.code)
+      return repo.createOption(input)
+    },
+    async updateOption(id: number, input: CatalogueOptionInput) {
+      await option(id)
+      const other = await repo.findOptionByCode(input.code)
+      if (other && other.id !== id) throw codeTaken(input.code)
+      return repo.updateOption(id, input)
+    },
+    /** Every active product line judged against a sizing, fitting ones first. */
+    async match(sizing: SizingSummary): Promise<UnitMatch[]> {
+      return matchUnits(demandOf(sizing), await repo.listLines(true))
+    },
+  }
+}
+export type CatalogueService = ReturnType<typeof catalogueService>

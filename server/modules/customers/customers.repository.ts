@@ -1,0 +1,41 @@
+import type { DataSource } from 'typeorm'
+import type { Contact, ContactInput } from '../../../shared/schemas/customer'
+import { CompanyEntity } from '../companies/company.entity'
+import { ContactEntity } from './contact.entity'
+
+const toContact = (c: ContactEntity): Contact => ({
+  id: c.id,
+  companyId: c.companyId,
+  name: c.name,
+  email: c.email,
+  phone: c.phone,
+  position: c.position,
+  userId: c.userId,
+})
+
+export function customersRepository(ds: DataSource) {
+  const contacts = ds.getRepository(ContactEntity)
+  const companies = ds.getRepository(CompanyEntity)
+  return {
+    async contactsOf(companyId: number) {
+      const rows = await contacts.find({ where: { companyId }, order: { name: 'ASC' } })
+      return rows.map(toContact)
+    },
+    async findContact(id: number) {
+      const c = await contacts.findOneBy({ id })
+      return c ? toContact(c) : null
+    },
+    async createContact(companyId: number, input: ContactInput) {
+      return toContact(await contacts.save(contacts.create({ ...input, companyId })))
+    },
+    async updateContact(id: number, patch: Partial<ContactInput> & { userId?: number | null }) {
+      await contacts.update({ id }, patch)
+      return (await this.findContact(id)) as Contact
+    },
+    /** Name and address only; the kind of a company never changes. */
+    async updateCompany(id: number, patch: { name: string; address: string }) {
+      await companies.update({ id }, patch)
+    },
+  }
+}
+export type CustomersRepository = ReturnType<typeof customersRepository>

@@ -1,0 +1,103 @@
+import { Router } from 'express'
+import { IdParamSchema } from '../../../shared/schemas/auth'
+import {
+  ContactInputSchema,
+  ContactParamsSchema,
+  CustomerInputSchema,
+} from '../../../shared/schemas/customer'
+import type { ApiRegistry } from '../../http/api-registry'
+import { route } from '../../http/route'
+import type { CustomersService } from './customers.service'
+
+const SELLERS = ['sales', 'admin'] as const
+
+export function customersRouter(api: ApiRegistry, customers: CustomersService) {
+  const router = Router()
+  const tag = 'Customers'
+  const base = { tag, access: SELLERS }
+  route(
+    router,
+    api,
+    { ...base, method: 'get', path: '/api/customers', summary: 'Customer companies and contacts' },
+    () => customers.list(),
+  )
+  route(
+    router,
+    api,
+    {
+      ...base,
+      method: 'post',
+      path: '/api/customers',
+      summary: 'Add a customer company',
+      body: CustomerInputSchema,
+      status: 201,
+    },
+    ({ body }) => customers.create(body),
+  )
+  route(
+    router,
+    api,
+    {
+      ...base,
+      method: 'get',
+      path: '/api/customers/:id',
+      summary: 'One customer with contacts',
+      params: IdParamSchema,
+    },
+    ({ params }) => customers.get(params.id),
+  )
+  route(
+    router,
+    api,
+    {
+      ...base,
+      method: 'put',
+      path: '/api/customers/:id',
+      summary: 'Rename a customer or change its address',
+      params: IdParamSchema,
+      body: CustomerInputSchema,
+    },
+    ({ params, body }) => customers.update(params.id, body),
+  )
+  route(
+    router,
+    api,
+    {
+      ...base,
+      method: 'post',
+      path: '/api/customers/:id/contacts',
+      summary: 'Add a contact',
+      params: IdParamSchema,
+      body: ContactInputSchema,
+      status: 201,
+    },
+    ({ params, body }) => customers.addContact(params.id, body),
+  )
+  route(
+    router,
+    api,
+    {
+      ...base,
+      method: 'put',
+      path: '/api/customers/:id/contacts/:contactId',
+      summary: 'Change a contact',
+      params: ContactParamsSchema,
+      body: ContactInputSchema,
+    },
+    ({ params, body }) => customers.updateContact(params.id, params.contactId, body),
+  )
+  route(
+    router,
+    api,
+    {
+      ...base,
+      method: 'post',
+      path: '/api/customers/:id/contacts/:contactId/invite',
+      summary: 'Invite a contact as a customer user (mails a set-password link)',
+      params: ContactParamsSchema,
+      status: 201,
+    },
+    ({ params }) => customers.invite(params.id, params.contactId),
+  )
+  return router
+}

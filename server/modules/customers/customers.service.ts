@@ -1,0 +1,81 @@
+import type { ContactInput, Customer, CustomerInput } from '../../../shared/schemas/customer'
+import type { UserSummary } from '../../../shared/schemas/auth'
+import { AppError, notFound } from '../../http/app-error'
+import type { CompaniesRepository } from '../companies/companies.repository'
+import type { usersService } from '../users/users.service'
+import type { CustomersRepository } from './customers.repository'
+
+export function customersService(deps: {
+  customers: CustomersRepository
+  companies: CompaniesRepository
+  usersAdmin: Pick<ReturnType<typeof usersService>, 'invite'>
+}) {
+  async function company(id: number) {
+    const c = await deps.companies.findById(id)
+    if (!c || c.kind !== 'customer') throw notFound('customer')
+    return c
+  }
+  async function contactOf(companyId: number, contactId: number) {
+    const c = await deps.customers.findContact(contactId)
+    if (!c || c.companyId !== companyId) throw notFound('contact')
+    return c
+  }
+  async function get(id: number): Promise<Customer> {
+    const c = await company(id)
+    return {
+      id: c.id,
+      name: c.name,
+      address: c.address,
+      contacts: await deps.customers.contactsOf(id),
+    }
+  }
+  async function nameFree(name: string, exceptId?: number) {
+    const other = await deps.companies.findByName(name)
+    if (other && other.id !== exceptId)
+      throw new AppError('name-taken', 'A company of this name exists already.', 409, [
+        { path: 'body.name', message: 'already in use' },
+      ])
+  }
+
+  return {
+    get,
+    contactOf,
+    async list(): Promise<Customer[]> {
+      const all = await deps.companies.list('customer')
+      return Promise.all(all.map((c) => get(c.id)))
+    },
+    async create(input: CustomerInput) {
+      await nameFree(input.name)
+      return get((await deps.companies.create({ ...input, kind: 'customer' })).id)
+    },
+    async update(id: number, input: CustomerInput) {
+      await company(id)
+      await nameFree(input.name, id)
+      await deps.customers.updateCompany(id, input)
+      return get(id)
+    },
+    async addContact(companyId: number, input: ContactInput) {
+      await company(companyId)
+      return deps.customers.createContact(companyId, input)
+    },
+    async updateContact(companyId: number, contactId: number, input: ContactInput) {
+      await contactOf(companyId, contactId)
+      return deps.customers.updateContact(contactId, input)
+    },
+    /** Makes the contact a customer user of their company and mails the set-password link. */
+    async invite(companyId: number, contactId: number): Promise<UserSummary> {
+      const contact = await contactOf(companyId, contactId)
+      if (contact.userId !== null)
+        throw new AppError('already-invited', 'This contact has a user account already.', 409)
+      const user = await deps.usersAdmin.invite({
+        email: contact.email,
+        name: contact.name,
+        role: 'customer',
+        companyId,
+      })
+      await deps.customers.updateContact(contactId, { userId: user.id })
+      return user
+    },
+  }
+}
+export type CustomersService = ReturnType<typeof customersService>

@@ -1,0 +1,70 @@
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm'
+import type { IdentificationResult } from '../../../shared/measurements'
+import { jsonColumn } from '../../http/json-column'
+import { SiteEntity } from '../sites/site.entity'
+import { UserEntity } from '../users/user.entity'
+
+/** An acceleration record measured at a site; the file lives on disk, its identification here. */
+@Entity('measurement_records')
+export class MeasurementRecordEntity {
+  @PrimaryGeneratedColumn('increment', { type: 'int' })
+  id: number
+
+  @Column('int')
+  siteId: number
+
+  @ManyToOne(() => SiteEntity, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'siteId' })
+  site: Relation<SiteEntity>
+
+  /** the host model the record was taken on, when known */
+  @Column('int', { nullable: true })
+  modelId: number | null
+
+  /** the model node the sensor stood on, when known */
+  @Column('varchar', { length: 60, nullable: true })
+  nodeId: string | null
+
+  @Column('int')
+  ownerId: number
+
+  @ManyToOne(() => UserEntity, { onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'ownerId' })
+  owner: Relation<UserEntity>
+
+  @Column('varchar', { length: 200 })
+  filename: string
+
+  @Column('varchar', { length: 80 })
+  storedName: string
+
+  @Column('int')
+  size: number
+
+  @Column('double')
+  sampleRateHz: number
+
+  @Column('int')
+  samples: number
+
+  /** the file has no time column: the rate came with the upload and is needed to re-read it */
+  @Column('boolean', { default: false })
+  rateFromForm: boolean
+
+  @Column('varchar', { length: 20 })
+  kind: string
+
+  @Column('longtext', { transformer: jsonColumn })
+  result: IdentificationResult
+
+  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  createdAt: Date
+}

@@ -1,0 +1,123 @@
+import type { RecordUpload } from '../../../shared/schemas/measurement'
+import { AppError, forbidden, notFound } from '../../http/app-error'
+import type { FileStore } from '../../integrations/file-store'
+import type { AuthUser } from '../../middleware/authenticate'
+import type { ModelsService } from '../models/models.service'
+import type { SitesService } from '../sites/sites.service'
+import type { MeasurementsRepository, StoredRecord } from './measurements.repository'
+import { checkRecordFile, identify, peakAt, readRecord } from './record-file'
+
+type UploadedFile = { originalname: string; buffer: Buffer } | undefined
+
+export function measurementsService(deps: {
+  records: MeasurementsRepository
+  sites: SitesService
+  models: ModelsService
+  files: FileStore
+}) {
+  async function stored(id: number): Promise<StoredRecord> {
+    const r = await deps.records.findById(id)
+    if (!r) throw notFound('record')
+    return r
+  }
+
+  async function get(id: number) {
+    const { storedName: _s, rateFromForm: _r, ...record } = await stored(id)
+    return record
+  }
+
+  function assertCanEdit(user: AuthUser, r: StoredRecord) {
+    if (user.role !== 'admin' && r.ownerId !== user.id)
+      throw forbidden('Only the engineer who uploaded this record may change it.')
+  }
+
+  async function assertModelOfSite(modelId: number | undefined, siteId: number) {
+    if (modelId === undefined) return
+    const m = await deps.models.get(modelId).catch(() => null)
+    if (!m || m.siteId !== siteId) {
+      throw new AppError('invalid-input', 'The model is not one of this site.', 400, [
+        { path: 'body.modelId', message: 'not a model of this site' },
+      ])
+    }
+  }
+
+  return {
+    get,
+    stored,
+    async list(siteId: number) {
+      await deps.sites.get(siteId)
+      return deps.records.listBySite(siteId)
+    },
+
+    /** Reads and identifies the whole file first, so a refused upload leaves nothing behind. */
+    async upload(user: AuthUser, siteId: number, input: RecordUpload, upload: UploadedFile) {
+      await deps.sites.get(siteId)
+      await assertModelOfSite(input.modelId, siteId)
+      const file = checkRecordFile(upload)
+      const record = readRecord(file.buffer, input.sampleRateHz)
+      const result = identify(record, input.kind)
+      const storedName = await deps.files.save(file.buffer, '.csv')
+      try {
+        const id = await deps.records.create({
+          siteId,
+          modelId: input.modelId ?? null,
+          nodeId: input.nodeId ?? null,
+          ownerId: user.id,
+          filename: file.originalname.slice(0, 200),
+          storedName,
+          size: file.buffer.length,
+          sampleRateHz: record.sampleRateHz,
+          samples: record.acceleration.length,
+          rateFromForm: input.sampleRateHz !== undefined,
+          kind: result.kind,
+          result,
+        })
+        return get(id)
+      } catch (e) {
+        await deps.files.remove(storedName)
+        throw e
+      }
+    },
+
+    async remove(user: AuthUser, id: number) {
+      const r = await stored(id)
+      assertCanEdit(user, r)
+      await deps.records.remove(id)
+      await deps.files.remove(r.storedName)
+    },
+
+    /** A mode the automatic search missed, identified from the stored file around a frequency. */
+    async addPeak(user: AuthUser, id: number, frequencyHz: number) {
+      const r = await stored(id)
+      assertCanEdit(user, r)
+      const near = r.result.peaks.find(
+        (p) => Math.abs(p.frequencyHz - frequencyHz) < 2 * r.result.resolutionHz,
+      )
+      if (near) {
+        throw new AppError(
+          'peak-exists',
+          `A peak at ${near.frequencyHz.toFixed(3)} Hz is already listed.`,
+          409,
+        )
+      }
+      const bytes = await deps.files.read(r.storedName)
+      const record = readRecord(bytes, r.rateFromForm ? r.sampleRateHz : undefined)
+      const others = r.result.peaks.map((p) => p.frequencyHz)
+      const peak = peakAt(record, frequencyHz, r.result.kind, others)
+      const result = { ...r.result, peaks: [...r.result.peaks, peak] }
+      await deps.records.saveResult(id, result)
+      return { peak, record: await get(id) }
+    },
+
+    /** Drops a false peak (noise, a machine harmonic) from the record's list. */
+    async dropPeak(user: AuthUser, id: number, index: number) {
+      const r = await stored(id)
+      assertCanEdit(user, r)
+      if (index >= r.result.peaks.length) throw notFound('peak')
+      const peaks = r.result.peaks.filter((_, i) => i !== index)
+      await deps.records.saveResult(id, { ...r.result, peaks })
+      return get(id)
+    },
+  }
+}
+export type MeasurementsService = ReturnType<typeof measurementsService>

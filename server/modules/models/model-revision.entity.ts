@@ -1,0 +1,43 @@
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm'
+import type { ModelDefinition } from '../../../shared/schemas/sizing'
+import { jsonColumn } from '../../http/json-column'
+import { HostModelEntity } from './host-model.entity'
+
+/** One immutable state of a model, with why it was made (edit, calibration…). */
+@Entity('model_revisions')
+@Index(['modelId', 'revision'], { unique: true })
+export class ModelRevisionEntity {
+  @PrimaryGeneratedColumn('increment', { type: 'int' })
+  id: number
+
+  @Column('int')
+  modelId: number
+
+  @ManyToOne(() => HostModelEntity, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'modelId' })
+  model: Relation<HostModelEntity>
+
+  @Column('int')
+  revision: number
+
+  @Column('longtext', { transformer: jsonColumn })
+  definition: ModelDefinition
+
+  @Column('varchar', { length: 300, default: '' })
+  reason: string
+
+  @Column('int')
+  createdById: number
+
+  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  createdAt: Date
+}

@@ -1,0 +1,117 @@
+import type { DataSource } from 'typeorm'
+import type { HostModel } from '../../../shared/schemas/host-model'
+import type { ModelDefinition } from '../../../shared/schemas/sizing'
+import { UserEntity } from '../users/user.entity'
+import { HostModelEntity } from './host-model.entity'
+import { ModelRevisionEntity } from './model-revision.entity'
+
+export function modelsRepository(ds: DataSource) {
+  const models = ds.getRepository(HostModelEntity)
+  const revisions = ds.getRepository(ModelRevisionEntity)
+
+  async function hydrate(m: HostModelEntity): Promise<HostModel> {
+    const revs = await revisions
+      .createQueryBuilder('r')
+      .leftJoin(UserEntity, 'u', 'u.id = r.createdById')
+      .addSelect('u.name', 'createdByName')
+      .where('r.modelId = :id', { id: m.id })
+      .orderBy('r.revision', 'ASC')
+      .getRawAndEntities()
+    const current = revs.entities.find((r) => r.revision === m.currentRevision)
+    return {
+      id: m.id,
+      siteId: m.siteId,
+      siteName: m.site?.name ?? '',
+      name: m.name,
+      ownerId: m.ownerId,
+      ownerName: m.owner?.name ?? '',
+      currentRevision: m.currentRevision,
+      definition: current?.definition as ModelDefinition,
+      revisions: revs.entities.map((r, i) => ({
+        revision: r.revision,
+        reason: r.reason,
+        createdAt: r.createdAt.toISOString(),
+        createdByName: String((revs.raw[i] as { createdByName?: string }).createdByName ?? ''),
+      })),
+      updatedAt: m.updatedAt.toISOString(),
+    }
+  }
+
+  return {
+    async findById(id: number) {
+      const m = await models.findOne({ where: { id }, relations: { site: true, owner: true } })
+      return m ? hydrate(m) : null
+    },
+    async list(siteId?: number) {
+      const rows = await models.find({
+        where: siteId ? { siteId } : {},
+        relations: { site: true, owner: true },
+        order: { updatedAt: 'DESC' },
+      })
+      return Promise.all(rows.map(hydrate))
+    },
+    async definitionAt(modelId: number, revision: number) {
+      const r = await revisions.findOneBy({ modelId, revision })
+      return r?.definition ?? null
+    },
+    async create(data: {
+      siteId: number
+      ownerId: number
+      name: string
+      definition: ModelDefinition
+      reason: string
+    }) {
+      return ds.transaction(async (em) => {
+        const m = await em.save(
+          em.create(HostModelEntity, {
+            siteId: data.siteId,
+            ownerId: data.ownerId,
+            name: data.name,
+            currentRevision: 1,
+          }),
+        )
+        await em.save(
+          em.create(ModelRevisionEntity, {
+            modelId: m.id,
+            revision: 1,
+            definition: data.definition,
+            reason: data.reason,
+            createdById: data.ownerId,
+          }),
+        )
+        return m.id
+      })
+    },
+    /**
+     * Adds revision base+1 only while base is still the current one; the conditional update
+     * makes two concurrent saves of the same base produce one revision.
+     */
+    async addRevision(
+      modelId: number,
+      base: number,
+      definition: ModelDefinition,
+      reason: string,
+      userId: number,
+    ) {
+      return ds.transaction(async (em) => {
+        const moved = await em.update(
+          HostModelEntity,
+          { id: modelId, currentRevision: base },
+          { currentRevision: base + 1 },
+        )
+        if (!moved.affected) return false
+        await em.save(
+          em.create(ModelRevisionEntity, {
+            modelId,
+            revision: base + 1,
+            definition,
+            reason,
+            createdById: userId,
+          }),
+        )
+        return true
+      })
+    },
+  }
+}
+export type ModelsRepository = ReturnType<typeof modelsRepository>

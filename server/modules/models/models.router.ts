@@ -1,0 +1,74 @@
+import { Router } from 'express'
+import { IdParamSchema } from '../../../shared/schemas/auth'
+import {
+  ModelCreateSchema,
+  ModelListQuerySchema,
+  ModelReviseSchema,
+} from '../../../shared/schemas/host-model'
+import type { ApiRegistry } from '../../http/api-registry'
+import { route } from '../../http/route'
+import type { ModelsService } from './models.service'
+
+const READERS = ['engineer', 'sales', 'admin'] as const
+const WRITERS = ['engineer', 'admin'] as const
+
+export function modelsRouter(api: ApiRegistry, models: ModelsService) {
+  const router = Router()
+  const tag = 'Models'
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/models',
+      tag,
+      summary: 'Host models, optionally of one site',
+      access: READERS,
+      query: ModelListQuerySchema,
+    },
+    ({ query }) => models.list(query.siteId),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'post',
+      path: '/api/models',
+      tag,
+      summary: 'Create a host model (revision 1)',
+      access: WRITERS,
+      body: ModelCreateSchema,
+      status: 201,
+    },
+    ({ user, body }) => models.create(user, body),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/models/:id',
+      tag,
+      summary: 'A model at its current revision, with the revision list',
+      access: READERS,
+      params: IdParamSchema,
+    },
+    ({ params }) => models.get(params.id),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'post',
+      path: '/api/models/:id/revisions',
+      tag,
+      summary: 'Save a new revision',
+      access: WRITERS,
+      params: IdParamSchema,
+      body: ModelReviseSchema,
+      status: 201,
+    },
+    ({ user, params, body }) => models.revise(user, params.id, body),
+  )
+  return router
+}

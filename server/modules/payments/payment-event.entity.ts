@@ -1,0 +1,17 @@
+import { Column, CreateDateColumn, Entity, PrimaryColumn } from 'typeorm'
+
+/** A webhook event applied; the primary key makes a replay or a second delivery a no-op. */
+@Entity('payment_events')
+export class PaymentEventEntity {
+  @PrimaryColumn('varchar', { length: 255 })
+  eventId: string
+
+  @Column('varchar', { length: 80 })
+  type: string
+
+  @Column('varchar', { length: 255, default: '' })
+  sessionId: string
+
+  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  receivedAt: Date
+}

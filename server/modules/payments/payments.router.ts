@@ -1,0 +1,73 @@
+import express, { Router } from 'express'
+import { IdParamSchema } from '../../../shared/schemas/auth'
+import type { ApiRegistry } from '../../http/api-registry'
+import { route } from '../../http/route'
+import type { PaymentsService } from './payments.service'
+
+/** Mounted before the JSON parser: the signature is over the raw bytes. */
+export function paymentsWebhookRouter(api: ApiRegistry, payments: PaymentsService) {
+  const router = Router()
+  route(
+    router,
+    api,
+    {
+      method: 'post',
+      path: '/api/payments/webhook',
+      tag: 'Payments',
+      summary: 'Signed payment events (checkout completed, expired, payment failed)',
+      access: 'public',
+      before: [express.raw({ type: 'application/json', limit: '1mb' })],
+    },
+    ({ req }) =>
+      payments.webhook(
+        Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0),
+        req.get('stripe-signature'),
+      ),
+  )
+  return router
+}
+
+export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
+  const router = Router()
+  const tag = 'Payments'
+  route(
+    router,
+    api,
+    {
+      method: 'post',
+      path: '/api/quotes/:id/checkout',
+      tag,
+      summary: 'Start paying an accepted quote; answers the hosted payment page URL',
+      access: ['customer'],
+      params: IdParamSchema,
+      status: 201,
+    },
+    ({ user, params }) => payments.checkout(user, params.id),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/quotes/:id/order',
+      tag,
+      summary: 'The order of a paid quote, or null',
+      access: ['customer', 'sales', 'production', 'admin'],
+      params: IdParamSchema,
+    },
+    ({ user, params }) => payments.orderFor(user, params.id),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/orders',
+      tag,
+      summary: 'Orders (a customer sees their company’s)',
+      access: ['customer', 'sales', 'production', 'admin'],
+    },
+    ({ user }) => payments.orders(user),
+  )
+  return router
+}

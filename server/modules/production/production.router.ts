@@ -1,0 +1,80 @@
+import { Router } from 'express'
+import { IdParamSchema } from '../../../shared/schemas/auth'
+import { StatusChangeSchema, TuningRecordInputSchema } from '../../../shared/schemas/work-order'
+import type { ApiRegistry } from '../../http/api-registry'
+import { route } from '../../http/route'
+import type { ProductionService } from './production.service'
+
+const BUILDERS = ['production', 'admin'] as const
+
+export function productionRouter(api: ApiRegistry, production: ProductionService) {
+  const router = Router()
+  const tag = 'Production'
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/work-orders',
+      tag,
+      summary: 'The production queue',
+      access: BUILDERS,
+    },
+    () => production.list(),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/work-orders/:id',
+      tag,
+      summary: 'A work order with its frozen specification and history',
+      access: BUILDERS,
+      params: IdParamSchema,
+    },
+    ({ params }) => production.get(params.id),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'post',
+      path: '/api/work-orders/:id/state',
+      tag,
+      summary: 'Move a work order one step',
+      access: BUILDERS,
+      params: IdParamSchema,
+      body: StatusChangeSchema,
+    },
+    ({ user, params, body }) => production.move(user, params.id, body),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'post',
+      path: '/api/work-orders/:id/tuning',
+      tag,
+      summary: 'Record the measured frequency of the built unit',
+      access: BUILDERS,
+      params: IdParamSchema,
+      body: TuningRecordInputSchema,
+      status: 201,
+    },
+    ({ user, params, body }) => production.recordTuning(user, params.id, body),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/audit',
+      tag: 'Audit',
+      summary: 'Every work-order change and measurement',
+      access: ['admin'],
+    },
+    () => production.audit(),
+  )
+  return router
+}

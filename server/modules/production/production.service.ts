@@ -1,0 +1,130 @@
+import type { StatusChange, TuningRecordInput } from '../../../shared/schemas/work-order'
+import { checkStep, withinTolerance } from '../../../shared/production/flow'
+import { AppError, notFound } from '../../http/app-error'
+import type { Mailer } from '../../integrations/mail'
+import type { AuthUser } from '../../middleware/authenticate'
+import type { QuotesService } from '../quotes/quotes.service'
+import type { UsersRepository } from '../users/users.repository'
+import type { ProductionRepository } from './production.repository'
+import { buildSpecification, specificationHash } from './specification'
+
+const SYSTEM: AuthUser = {
+  id: 0,
+  email: '',
+  name: 'system',
+  role: 'admin',
+  companyId: null,
+  companyName: null,
+}
+
+export function productionService(deps: {
+  repo: ProductionRepository
+  quotes: QuotesService
+  users: UsersRepository
+  mailer: Mailer
+  now: () => Date
+}) {
+  async function get(id: number) {
+    const w = await deps.repo.findById(id)
+    if (!w) throw notFound('work-order')
+    const latest = await deps.repo.latestTuning(id)
+    return {
+      ...w,
+      number: `WO-${String(w.id).padStart(5, '0')}`,
+      latestTuning: latest,
+      events: await deps.repo.events(id),
+    }
+  }
+
+  return {
+    get,
+    list: () => deps.repo.list(),
+
+    /** Freezes the paid quote's build values; called once the order exists. */
+    async createFor(
+      order: { id: number; quoteId: number; companyId: number; paidAt: Date },
+      leadDays = 28,
+    ) {
+      const quote = await deps.quotes.get(SYSTEM, order.quoteId)
+      const specification = buildSpecification(quote)
+      const due = new Date(order.paidAt.getTime() + leadDays * 86_400_000)
+        .toISOString()
+        .slice(0, 10)
+      return deps.repo.createOnce({
+        orderId: order.id,
+        quoteId: order.quoteId,
+        companyId: order.companyId,
+        specification,
+        specHash: specificationHash(specification),
+        dueDate: due,
+      })
+    },
+
+    async move(user: AuthUser, id: number, change: StatusChange) {
+      const w = await get(id)
+      const check = checkStep(w.state, change.to, {
+        note: change.note,
+        tuningPasses: w.latestTuning?.passes ?? null,
+      })
+      if (!check.ok) throw new AppError(check.code, check.message, 409)
+      if (
+        !(await deps.repo.move(id, w.state, change.to, {
+          actorId: user.id,
+          at: deps.now(),
+          note: change.note,
+        }))
+      ) {
+        throw new AppError('state-changed', 'Someone else moved this work order; reload it.', 409)
+      }
+      if (change.to === 'shipped')
+        await notifyShipped(w.companyId, w.specification.quoteReference, w.number)
+      return get(id)
+    },
+
+    /** Measured frequency of the built unit; the record is kept whether it passes or not. */
+    async recordTuning(user: AuthUser, id: number, t: TuningRecordInput) {
+      const w = await get(id)
+      if (w.state !== 'tuning')
+        throw new AppError(
+          'not-in-tuning',
+          'Move the work order to tuning before recording a measurement.',
+          409,
+        )
+      const passes = withinTolerance(
+        t.measuredHz,
+        w.specification.targetFrequencyHz,
+        w.specification.frequencyTolerance,
+      )
+      await deps.repo.addTuning(id, {
+        measuredHz: t.measuredHz,
+        dampingRatio: t.dampingRatio ?? null,
+        passes,
+        actorId: user.id,
+        at: deps.now(),
+        note: t.note,
+      })
+      return get(id)
+    },
+
+    /** What the customer sees of their order's progress. */
+    async stateForQuote(quoteId: number) {
+      return (await deps.repo.findByQuote(quoteId))?.state ?? null
+    },
+
+    audit: () => deps.repo.audit(),
+  }
+
+  async function notifyShipped(companyId: number, reference: string, number: string) {
+    const users = (await deps.users.list()).filter(
+      (u) => u.active && u.role === 'customer' && u.companyId === companyId,
+    )
+    for (const u of users) {
+      await deps.mailer.send({
+        to: u.email,
+        subject: `Your absorber has shipped (${reference})`,
+        text: `Hello ${u.name},\n\nthe unit of work order ${number} for quote ${reference} has left our works, tuned and tested.\n\nInstallation, anchorage and the fall restraint of the moving mass are for a licensed engineer under the local codes.\n\nTessera Damping Works Ltd`,
+      })
+    }
+  }
+}
+export type ProductionService = ReturnType<typeof productionService>

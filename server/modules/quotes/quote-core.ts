@@ -1,0 +1,108 @@
+import { CUSTOMER_VISIBLE_STATES, type Quote, type QuoteDraft } from '../../../shared/schemas/quote'
+import type { SizingSummary } from '../../../shared/schemas/sizing'
+import { AppError, notFound } from '../../http/app-error'
+import type { AuthUser } from '../../middleware/authenticate'
+import type { CatalogueService } from '../catalogue/catalogue.service'
+import type { CustomersService } from '../customers/customers.service'
+import { priceLines, totalsOf } from './price-lines'
+import type { QuoteRow } from './quote-rows'
+import { dayOf, hasLapsed } from './quote-states'
+import { quoteOf } from './quote-view'
+import type { QuotesRepository } from './quotes.repository'
+import type { SizingSource } from './sizing-source'
+
+export interface QuotesDeps {
+  quotes: QuotesRepository
+  catalogue: CatalogueService
+  customers: CustomersService
+  sizings: SizingSource
+  now: () => Date
+}
+
+export const isCustomer = (u: AuthUser) => u.role === 'customer'
+
+/** Reading, pricing and the lazy expiry of quotes, shared by the service's operations. */
+export function quotesCore(deps: QuotesDeps) {
+  const repo = deps.quotes
+
+  /** Expires a sent quote whose validity has passed, so every read sees the true state. */
+  async function fresh(row: QuoteRow): Promise<QuoteRow> {
+    if (row.state !== 'sent' || !hasLapsed(row.validUntil, deps.now())) return row
+    await repo.transition(row.id, {
+      from: ['sent'],
+      to: 'expired',
+      actorId: null,
+      at: deps.now(),
+      note: `valid until ${row.validUntil}`,
+    })
+    return (await repo.findById(row.id)) as QuoteRow
+  }
+
+  async function row(id: number): Promise<QuoteRow> {
+    const r = await repo.findById(id)
+    if (!r) throw notFound('quote')
+    return fresh(r)
+  }
+
+  /** A row the user may see: customers only their own company's sent or later quotes. */
+  async function visibleRow(user: AuthUser, id: number) {
+    const r = await row(id)
+    if (
+      isCustomer(user) &&
+      (r.companyId !== user.companyId || !CUSTOMER_VISIBLE_STATES.includes(r.state))
+    )
+      throw notFound('quote')
+    return r
+  }
+
+  async function view(user: AuthUser, r: QuoteRow): Promise<Quote> {
+    const latest = (await repo.latestRevision(r.number)) === r.revision
+    return quoteOf(r, latest, isCustomer(user) ? [] : await repo.events(r.id))
+  }
+
+  async function submittedSizing(id: number): Promise<SizingSummary> {
+    const s = await deps.sizings.summary(id)
+    if (s.state !== 'submitted')
+      throw new AppError('sizing-not-submitted', 'Only a submitted sizing can be quoted.', 409, [
+        { path: 'body.sizingId', message: 'still a draft' },
+      ])
+    return s
+  }
+
+  /** Checks the draft fields against the sizing and prices it; the result is ready to store. */
+  async function priced(draft: QuoteDraft, sizing: SizingSummary) {
+    if (draft.validUntil < dayOf(deps.now()))
+      throw new AppError('invalid-input', 'body.validUntil: in the past', 400, [
+        { path: 'body.validUntil', message: 'in the past' },
+      ])
+    if (draft.contactId !== null) {
+      await deps.customers.contactOf(sizing.companyId, draft.contactId).catch(() => {
+        throw new AppError('invalid-input', 'body.contactId: not a contact of this customer', 400, [
+          { path: 'body.contactId', message: 'not a contact of this customer' },
+        ])
+      })
+    }
+    const lines = await priceLines(deps.catalogue, draft.lines, sizing, draft.currency)
+    const { lines: _l, ...head } = draft
+    return { ...head, ...totalsOf(lines, draft.discountBp, draft.taxBp), lines }
+  }
+
+  return { row, visibleRow, view, submittedSizing, priced, fresh }
+}
+export type QuotesCore = ReturnType<typeof quotesCore>
+
+/** Expires every sent quote whose validity date has passed; returns how many. */
+export async function expireDue(quotes: QuotesRepository, now: Date) {
+  let n = 0
+  for (const id of await quotes.dueForExpiry(dayOf(now))) {
+    const done = await quotes.transition(id, {
+      from: ['sent'],
+      to: 'expired',
+      actorId: null,
+      at: now,
+      note: 'validity ended',
+    })
+    if (done) n++
+  }
+  return n
+}

@@ -1,0 +1,38 @@
+import { formatMoney } from '../../../shared/money'
+import type { Quote } from '../../../shared/schemas/quote'
+import type { MailMessage } from '../../integrations/mail'
+
+/** The portal page of a quote; the customer signs in to read, accept and pay it. */
+export const portalLink = (publicUrl: string, id: number) => `${publicUrl}/portal/quotes/${id}`
+
+/** The "quote sent" message: the PDF attached and the portal link. */
+export function quoteMail(q: Quote, pdf: Buffer, link: string, supplierName: string): MailMessage {
+  const total = formatMoney(q.total, q.currency)
+  const greeting = q.contactName ? `Dear ${q.contactName},` : 'Hello,'
+  const text = [
+    greeting,
+    '',
+    `please find attached our quotation ${q.reference} for ${q.siteName}: ${total} including tax, valid until ${q.validUntil}.`,
+    '',
+    `You can read and accept it in the customer portal:`,
+    link,
+    '',
+    'The sizing it rests on is a design aid: the final design, the anchorage of the absorber mass and its fall restraint are for a licensed engineer under the local codes.',
+    '',
+    `Kind regards,`,
+    `${q.createdByName}`,
+    supplierName,
+  ].join('\n')
+  return {
+    to: q.contactEmail ?? '',
+    subject: `Quotation ${q.reference} from ${supplierName}`,
+    text,
+    attachments: [
+      {
+        filename: `${q.reference.replace(/\s+/g, '-')}.pdf`,
+        content: pdf,
+        contentType: 'application/pdf',
+      },
+    ],
+  }
+}

@@ -1,0 +1,53 @@
+import type { Quote, QuoteEvent, QuoteSummary } from '../../../shared/schemas/quote'
+import type { QuoteRow } from './quote-rows'
+
+/** The printed reference: "TDW-2026-0001", or "TDW-2026-0001 rev 2" from the 2nd revision. */
+export const referenceOf = (number: string, revision: number) =>
+  revision > 1 ? `${number} rev ${revision}` : number
+
+const iso = (d: Date | null) => (d ? d.toISOString() : null)
+
+export function summaryOf(r: QuoteRow, latest: boolean): QuoteSummary {
+  return {
+    id: r.id,
+    number: r.number,
+    revision: r.revision,
+    reference: referenceOf(r.number, r.revision),
+    state: r.state,
+    sizingId: r.sizingId,
+    sizingTitle: r.sizing.title,
+    companyId: r.companyId,
+    companyName: r.companyName,
+    siteName: r.sizing.siteName,
+    currency: r.currency,
+    total: r.total,
+    validUntil: r.validUntil,
+    createdAt: r.createdAt.toISOString(),
+    sentAt: iso(r.sentAt),
+    latest,
+  }
+}
+
+export function quoteOf(r: QuoteRow, latest: boolean, events: QuoteEvent[]): Quote {
+  return {
+    ...summaryOf(r, latest),
+    contactId: r.contactId,
+    contactName: r.contactName,
+    contactEmail: r.contactEmail,
+    discountBp: r.discountBp,
+    taxBp: r.taxBp,
+    terms: r.terms,
+    lines: r.lines,
+    subtotal: r.subtotal,
+    discount: r.discount,
+    discountedSubtotal: r.discountedSubtotal,
+    tax: r.tax,
+    sizing: r.sizing,
+    createdByName: r.createdByName,
+    acceptedAt: iso(r.acceptedAt),
+    acceptedName: r.acceptedName,
+    purchaseOrder: r.purchaseOrder,
+    paidAt: iso(r.paidAt),
+    events,
+  }
+}

@@ -1,0 +1,148 @@
+import { Brackets, In, type DataSource, type EntityManager } from 'typeorm'
+import type { QuoteListQuery, QuoteState } from '../../../shared/schemas/quote'
+import { QuoteEventEntity } from './quote-event.entity'
+import { QuoteLineEntity } from './quote-line.entity'
+import { QuoteEntity } from './quote.entity'
+import { toEvent, toRow, type LineWrite, type QuoteRow, type QuoteWrite } from './quote-rows'
+
+export interface Transition {
+  from: readonly QuoteState[]
+  to: QuoteState
+  actorId: number | null
+  at: Date
+  note?: string
+  /** Columns set together with the state (sentAt, acceptedAt, …). */
+  patch?: Partial<
+    Pick<QuoteEntity, 'sentAt' | 'acceptedAt' | 'acceptedName' | 'purchaseOrder' | 'paidAt'>
+  >
+}
+
+const relations = { company: true, contact: true, createdBy: true, lines: true } as const
+
+function linesOf(quoteId: number, lines: LineWrite[]) {
+  return lines.map((l, i) => ({ ...l, quoteId, position: i + 1 }))
+}
+
+export function quotesRepository(ds: DataSource) {
+  const quotes = ds.getRepository(QuoteEntity)
+  const events = ds.getRepository(QuoteEventEntity)
+
+  async function transitionIn(m: EntityManager, id: number, t: Transition) {
+    const current = await m.findOneBy(QuoteEntity, { id, state: In([...t.from]) })
+    if (!current) return false
+    const res = await m.update(
+      QuoteEntity,
+      { id, state: current.state },
+      { state: t.to, ...t.patch },
+    )
+    if (res.affected !== 1) return false
+    await m.insert(QuoteEventEntity, {
+      quoteId: id,
+      fromState: current.state,
+      toState: t.to,
+      actorId: t.actorId,
+      at: t.at,
+      note: t.note ?? '',
+    })
+    return true
+  }
+
+  return {
+    async findById(id: number): Promise<QuoteRow | null> {
+      const q = await quotes.findOne({
+        where: { id },
+        relations,
+        order: { lines: { position: 'ASC' } },
+      })
+      return q ? toRow(q) : null
+    },
+    async list(q: QuoteListQuery & { states?: readonly QuoteState[] }) {
+      const qb = quotes
+        .createQueryBuilder('q')
+        .leftJoinAndSelect('q.company', 'company')
+        .orderBy('q.createdAt', 'DESC')
+        .addOrderBy('q.id', 'DESC')
+      if (q.states) qb.andWhere('q.state IN (:...states)', { states: q.states })
+      if (q.state) qb.andWhere('q.state = :state', { state: q.state })
+      if (q.companyId) qb.andWhere('q.companyId = :c', { c: q.companyId })
+      if (q.from) qb.andWhere('q.createdAt >= :from', { from: `${q.from} 00:00:00` })
+      if (q.to) qb.andWhere('q.createdAt < DATE_ADD(:to, INTERVAL 1 DAY)', { to: q.to })
+      if (q.search) {
+        const like = `%${q.search.replace(/[%_\\]/g, '\\$&')}%`
+        qb.andWhere(
+          new Brackets((w) =>
+            w.where('q.number LIKE :like', { like }).orWhere('company.name LIKE :like', { like }),
+          ),
+        )
+      }
+      return (await qb.getMany()).map((e) => toRow({ ...e, lines: [] } as QuoteEntity))
+    },
+    async maxSeq(year: number) {
+      const r = await quotes
+        .createQueryBuilder('q')
+        .select('MAX(q.seq)', 'max')
+        .where('q.year = :year', { year })
+        .getRawOne<{ max: number | null }>()
+      return Number(r?.max ?? 0)
+    },
+    async latestRevision(number: string) {
+      const r = await quotes
+        .createQueryBuilder('q')
+        .select('MAX(q.revision)', 'max')
+        .where('q.number = :number', { number })
+        .getRawOne<{ max: number | null }>()
+      return Number(r?.max ?? 0)
+    },
+    async revisionsOf(number: string) {
+      return quotes.find({ where: { number }, select: { id: true, revision: true, state: true } })
+    },
+    /** Inserts a new revision with its lines and its creation event, in one transaction. */
+    async insert(q: QuoteWrite, actorId: number, at: Date) {
+      return ds.transaction(async (m) => {
+        const { lines, ...head } = q
+        const saved = await m.save(QuoteEntity, m.create(QuoteEntity, { ...head, state: 'draft' }))
+        await m.insert(QuoteLineEntity, linesOf(saved.id, lines))
+        await m.insert(QuoteEventEntity, {
+          quoteId: saved.id,
+          fromState: null,
+          toState: 'draft',
+          actorId,
+          at,
+          note: q.revision > 1 ? `revision ${q.revision} made` : 'quote made',
+        })
+        return saved.id
+      })
+    },
+    /** Replaces the priced content of a draft; false when it is no longer a draft. */
+    async replaceDraft(id: number, q: Omit<QuoteWrite, 'number' | 'year' | 'seq' | 'revision'>) {
+      return ds.transaction(async (m) => {
+        const { lines, ...head } = q
+        const res = await m.update(QuoteEntity, { id, state: 'draft' }, head)
+        if (res.affected !== 1) return false
+        await m.delete(QuoteLineEntity, { quoteId: id })
+        await m.insert(QuoteLineEntity, linesOf(id, lines))
+        return true
+      })
+    },
+    /** Moves a quote between states and records who and when; false when it was not in `from`. */
+    transition: (id: number, t: Transition) => ds.transaction((m) => transitionIn(m, id, t)),
+    async events(quoteId: number) {
+      const rows = await events.find({
+        where: { quoteId },
+        relations: { actor: true },
+        order: { at: 'ASC', id: 'ASC' },
+      })
+      return rows.map(toEvent)
+    },
+    /** Ids of sent quotes whose last valid day is before `today` (YYYY-MM-DD). */
+    async dueForExpiry(today: string) {
+      const rows = await quotes
+        .createQueryBuilder('q')
+        .select('q.id', 'id')
+        .where('q.state = :s AND q.validUntil < :today', { s: 'sent', today })
+        .getRawMany<{ id: number }>()
+      return rows.map((r) => Number(r.id))
+    },
+  }
+}
+export type QuotesRepository = ReturnType<typeof quotesRepository>

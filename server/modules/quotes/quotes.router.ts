@@ -1,0 +1,153 @@
+import { Router } from 'express'
+import { IdParamSchema } from '../../../shared/schemas/auth'
+import {
+  QuoteAcceptSchema,
+  QuoteCreateSchema,
+  QuoteDraftSchema,
+  QuoteListQuerySchema,
+  QuoteNoteSchema,
+} from '../../../shared/schemas/quote'
+import type { ApiRegistry } from '../../http/api-registry'
+import { route } from '../../http/route'
+import type { QuotesService } from './quotes.service'
+
+const SELLERS = ['sales', 'admin'] as const
+const READERS = ['sales', 'admin', 'customer'] as const
+
+/** Engineers and production may not read quotes at all (403); customers only their own. */
+export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
+  const router = Router()
+  const tag = 'Quotes'
+  const one = { tag, params: IdParamSchema }
+  route(
+    router,
+    api,
+    {
+      tag,
+      method: 'get',
+      path: '/api/quotes',
+      summary: 'Quotes, filtered by state, customer, date and text',
+      access: READERS,
+      query: QuoteListQuerySchema,
+    },
+    ({ user, query }) => quotes.list(user, query),
+  )
+  route(
+    router,
+    api,
+    {
+      tag,
+      method: 'post',
+      path: '/api/quotes',
+      summary: 'Make a draft quote from a submitted sizing (priced on the server)',
+      access: SELLERS,
+      body: QuoteCreateSchema,
+      status: 201,
+    },
+    ({ user, body }) => quotes.create(user, body),
+  )
+  route(
+    router,
+    api,
+    {
+      ...one,
+      method: 'get',
+      path: '/api/quotes/from-sizing/:id',
+      summary: 'The summary of a sizing to quote from, as the quote will freeze it',
+      access: SELLERS,
+    },
+    ({ params }) => quotes.sizing(params.id),
+  )
+  route(
+    router,
+    api,
+    { ...one, method: 'get', path: '/api/quotes/:id', summary: 'One quote', access: READERS },
+    ({ user, params }) => quotes.get(user, params.id),
+  )
+  route(
+    router,
+    api,
+    {
+      ...one,
+      method: 'put',
+      path: '/api/quotes/:id',
+      summary: 'Change a draft (re-priced); a sent quote answers 409',
+      access: SELLERS,
+      body: QuoteDraftSchema,
+    },
+    ({ user, params, body }) => quotes.update(user, params.id, body),
+  )
+  route(
+    router,
+    api,
+    {
+      ...one,
+      method: 'post',
+      path: '/api/quotes/:id/send',
+      summary: 'Mail the PDF and the portal link to the contact; the quote becomes sent',
+      access: SELLERS,
+    },
+    ({ user, params }) => quotes.send(user, params.id),
+  )
+  route(
+    router,
+    api,
+    {
+      ...one,
+      method: 'post',
+      path: '/api/quotes/:id/revise',
+      summary: 'Make the next revision as a draft; the old one is kept',
+      access: SELLERS,
+      status: 201,
+    },
+    ({ user, params }) => quotes.revise(user, params.id),
+  )
+  route(
+    router,
+    api,
+    {
+      ...one,
+      method: 'post',
+      path: '/api/quotes/:id/withdraw',
+      summary: 'Withdraw a draft or sent quote',
+      access: SELLERS,
+      body: QuoteNoteSchema,
+    },
+    ({ user, params, body }) => quotes.withdraw(user, params.id, body.note),
+  )
+  route(
+    router,
+    api,
+    {
+      ...one,
+      method: 'post',
+      path: '/api/quotes/:id/accept',
+      summary: 'The customer accepts a sent quote with a name and a purchase order',
+      access: ['customer'],
+      body: QuoteAcceptSchema,
+    },
+    ({ user, params, body }) => quotes.accept(user, params.id, body),
+  )
+  route(
+    router,
+    api,
+    {
+      ...one,
+      method: 'get',
+      path: '/api/quotes/:id/pdf',
+      summary: 'The quote as a PDF',
+      access: READERS,
+      produces: 'application/pdf',
+    },
+    async ({ user, params, res }) => {
+      const pdf = await quotes.pdf(user, params.id)
+      res
+        .type('application/pdf')
+        .set('content-disposition', `inline; filename="${pdf.filename}"`)
+        .set('cache-control', 'private, no-store')
+        .send(pdf.bytes)
+      return undefined
+    },
+  )
+  return router
+}

@@ -1,0 +1,246 @@
+import type {
+  QuoteAccept,
+  QuoteCreate,
+  QuoteDraft,
+  QuoteListQuery,
+} from '../../../shared/schemas/quote'
+import { CUSTOMER_VISIBLE_STATES } from '../../../shared/schemas/quote'
+import { AppError } from '../../http/app-error'
+import type { Mailer } from '../../integrations/mail'
+import type { PdfRenderer } from '../../integrations/pdf'
+import { inlineFontCss } from '../../integrations/pdf'
+import type { AuthUser } from '../../middleware/authenticate'
+import type { CompaniesRepository } from '../companies/companies.repository'
+import { quoteFooter, quoteHtml, type Supplier } from './pdf/quote-html'
+import { expireDue, isCustomer, quotesCore, type QuotesDeps } from './quote-core'
+import { portalLink, quoteMail } from './quote-mail'
+import { insertNumbered } from './quote-numbers'
+import type { QuoteRow } from './quote-rows'
+import { REVISABLE, dayOf, sourcesOf } from './quote-states'
+import { referenceOf, summaryOf } from './quote-view'
+
+export interface QuotesServiceDeps extends QuotesDeps {
+  companies: CompaniesRepository
+  mailer: Mailer
+  pdf: PdfRenderer
+  publicUrl: () => string
+}
+
+const conflict = (code: string, message: string) => new AppError(code, message, 409)
+
+export function quotesService(deps: QuotesServiceDeps) {
+  const repo = deps.quotes
+  const core = quotesCore(deps)
+
+  async function supplier(): Promise<Supplier> {
+    // The first supplier made (the seed's) is us; later ones are test or archive records.
+    const [s] = (await deps.companies.list('supplier')).sort((a, b) => a.id - b.id)
+    return s ? { name: s.name, address: s.address } : { name: 'Quellnode', address: '' }
+  }
+
+  async function move(r: QuoteRow, to: QuoteRow['state'], actorId: number | null, extra = {}) {
+    const ok = await repo.transition(r.id, {
+      from: sourcesOf(to),
+      to,
+      actorId,
+      at: deps.now(),
+      ...extra,
+    })
+    if (!ok) throw conflict('quote-state', `A ${r.state} quote cannot become ${to}.`)
+  }
+
+  async function renderPdf(user: AuthUser, r: QuoteRow) {
+    const q = await core.view(user, r)
+    const bytes = await deps.pdf.render(quoteHtml(q, await supplier(), inlineFontCss()), {
+      footer: quoteFooter(q.reference),
+    })
+    return { quote: q, bytes, filename: `${q.reference.replace(/\s+/g, '-')}.pdf` }
+  }
+
+  /** Earlier revisions give way when a later one is sent; an accepted one blocks it. */
+  async function supersedeEarlier(r: QuoteRow, actorId: number) {
+    const earlier = (await repo.revisionsOf(r.number)).filter((x) => x.revision < r.revision)
+    if (earlier.some((x) => x.state === 'accepted' || x.state === 'paid'))
+      throw conflict('already-accepted', 'An earlier revision is accepted already.')
+    for (const x of earlier.filter((x) => x.state === 'sent')) {
+      await repo.transition(x.id, {
+        from: ['sent'],
+        to: 'withdrawn',
+        actorId,
+        at: deps.now(),
+        note: `superseded by rev ${r.revision}`,
+      })
+    }
+  }
+
+  return {
+    list: async (user: AuthUser, q: QuoteListQuery) => {
+      await expireDue(repo, deps.now())
+      const rows = await repo.list(
+        isCustomer(user)
+          ? { ...q, companyId: user.companyId ?? -1, states: CUSTOMER_VISIBLE_STATES }
+          : q,
+      )
+      const latest = new Map<string, number>()
+      for (const n of new Set(rows.map((r) => r.number)))
+        latest.set(n, await repo.latestRevision(n))
+      return rows.map((r) => summaryOf(r, latest.get(r.number) === r.revision))
+    },
+
+    /** A sizing as a new quote would freeze it (any state; create refuses drafts). */
+    sizing: (id: number) => deps.sizings.summary(id),
+
+    get: async (user: AuthUser, id: number) => core.view(user, await core.visibleRow(user, id)),
+
+    /** A draft quote from a submitted sizing; the sizing is frozen into it. */
+    async create(user: AuthUser, input: QuoteCreate) {
+      const { sizingId, ...draft } = input
+      const sizing = await core.submittedSizing(sizingId)
+      const p = await core.priced(draft, sizing)
+      const at = deps.now()
+      const id = await insertNumbered(
+        repo,
+        { ...p, sizingId, sizing, companyId: sizing.companyId, createdById: user.id },
+        user.id,
+        at,
+      )
+      return core.view(user, await core.row(id))
+    },
+
+    /** Re-prices a draft from the catalogue; a sent quote is never edited (409). */
+    async update(user: AuthUser, id: number, draft: QuoteDraft) {
+      const r = await core.row(id)
+      if (r.state !== 'draft')
+        throw conflict('quote-not-draft', 'Only a draft can be changed; make a revision.')
+      const p = await core.priced(draft, r.sizing)
+      if (
+        !(await repo.replaceDraft(id, {
+          ...p,
+          sizingId: r.sizingId,
+          sizing: r.sizing,
+          companyId: r.companyId,
+          createdById: r.createdById,
+        }))
+      )
+        throw conflict('quote-not-draft', 'Only a draft can be changed; make a revision.')
+      return core.view(user, await core.row(id))
+    },
+
+    /** Renders the PDF, mails it with the portal link, then marks the quote sent. */
+    async send(user: AuthUser, id: number) {
+      const r = await core.row(id)
+      if (r.state !== 'draft') throw conflict('quote-not-draft', 'This quote was sent already.')
+      if (!r.contactEmail)
+        throw conflict('no-contact', 'Choose the customer contact to send it to.')
+      if (r.validUntil < dayOf(deps.now()))
+        throw conflict('quote-lapsed', 'The validity date has passed; change it first.')
+      await supersedeEarlier(r, user.id)
+      const pdf = await renderPdf(user, r)
+      const s = await supplier()
+      await deps.mailer.send(
+        quoteMail(pdf.quote, pdf.bytes, portalLink(deps.publicUrl(), id), s.name),
+      )
+      await move(r, 'sent', user.id, {
+        patch: { sentAt: deps.now() },
+        note: `mailed to ${r.contactEmail}`,
+      })
+      return core.view(user, await core.row(id))
+    },
+
+    /** A new draft revision copying the lines of the latest one, with the sizing frozen anew. */
+    async revise(user: AuthUser, id: number) {
+      const r = await core.row(id)
+      const latest = await repo.latestRevision(r.number)
+      if (latest !== r.revision)
+        throw conflict('not-latest', `Revise the latest revision (rev ${latest}).`)
+      if (!REVISABLE.includes(r.state))
+        throw conflict('quote-state', `A ${r.state} quote cannot be revised.`)
+      const sizing = await core.submittedSizing(r.sizingId)
+      const {
+        id: _id,
+        state: _s,
+        createdAt: _c,
+        updatedAt: _u,
+        sentAt: _se,
+        acceptedAt: _a,
+        acceptedName: _an,
+        purchaseOrder: _po,
+        paidAt: _p,
+        companyName: _cn,
+        contactName: _ct,
+        contactEmail: _ce,
+        createdByName: _cb,
+        ...copy
+      } = r
+      const newId = await repo.insert(
+        {
+          ...copy,
+          sizing,
+          revision: latest + 1,
+          createdById: user.id,
+          lines: r.lines.map(({ position: _pos, ...l }) => l),
+        },
+        user.id,
+        deps.now(),
+      )
+      return core.view(user, await core.row(newId))
+    },
+
+    async withdraw(user: AuthUser, id: number, note: string) {
+      const r = await core.row(id)
+      await move(r, 'withdrawn', user.id, { note })
+      return core.view(user, await core.row(id))
+    },
+
+    /** The customer's yes: their name and purchase order; only on the latest sent revision. */
+    async accept(user: AuthUser, id: number, body: QuoteAccept) {
+      const r = await core.visibleRow(user, id)
+      if (r.state !== 'sent')
+        throw conflict('quote-state', `A ${r.state} quote cannot be accepted.`)
+      if ((await repo.latestRevision(r.number)) !== r.revision)
+        throw conflict('not-latest', 'A newer revision of this quote exists.')
+      const at = deps.now()
+      await move(r, 'accepted', user.id, {
+        patch: { acceptedAt: at, acceptedName: body.name, purchaseOrder: body.purchaseOrder },
+        note: `accepted by ${body.name}, PO ${body.purchaseOrder}`,
+      })
+      return core.view(user, await core.row(id))
+    },
+
+    async pdf(user: AuthUser, id: number) {
+      const { bytes, filename } = await renderPdf(user, await core.visibleRow(user, id))
+      return { bytes, filename }
+    },
+
+    /** For the payment issue: what to charge. Never trust an amount from the browser. */
+    async forPayment(id: number) {
+      const r = await core.row(id)
+      return {
+        id: r.id,
+        reference: referenceOf(r.number, r.revision),
+        state: r.state,
+        companyId: r.companyId,
+        currency: r.currency,
+        total: r.total,
+      }
+    },
+
+    /** For the payment webhook: accepted → paid, once. Throws 409 from any other state. */
+    async markPaid(quoteId: number, at: Date, note = 'payment confirmed') {
+      const r = await core.row(quoteId)
+      const ok = await repo.transition(quoteId, {
+        from: ['accepted'],
+        to: 'paid',
+        actorId: null,
+        at,
+        note,
+        patch: { paidAt: at },
+      })
+      if (!ok) throw conflict('quote-state', `A ${r.state} quote cannot be marked paid.`)
+      return summaryOf((await repo.findById(quoteId)) as QuoteRow, true)
+    },
+
+    expireDue: (now: Date) => expireDue(repo, now),
+  }
+}
+export type QuotesService = ReturnType<typeof quotesService>

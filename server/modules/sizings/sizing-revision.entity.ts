@@ -1,0 +1,50 @@
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm'
+import type { SizingInput, SizingSummary } from '../../../shared/schemas/sizing'
+import type { SizingEvaluation } from '../../../shared/sizing/evaluate-sizing'
+import { jsonColumn } from '../../http/json-column'
+import { SizingEntity } from './sizing.entity'
+
+/** One saved state of a sizing: the choices and the server's authoritative result. */
+@Entity('sizing_revisions')
+@Index(['sizingId', 'revision'], { unique: true })
+export class SizingRevisionEntity {
+  @PrimaryGeneratedColumn('increment', { type: 'int' })
+  id: number
+
+  @Column('int')
+  sizingId: number
+
+  @ManyToOne(() => SizingEntity, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'sizingId' })
+  sizing: Relation<SizingEntity>
+
+  @Column('int')
+  revision: number
+
+  @Column('longtext', { transformer: jsonColumn })
+  input: SizingInput
+
+  @Column('longtext', { transformer: jsonColumn })
+  evaluation: SizingEvaluation
+
+  @Column('longtext', { transformer: jsonColumn })
+  summary: Omit<
+    SizingSummary,
+    'id' | 'revision' | 'state' | 'submittedAt' | 'handoverNote' | 'ownerName'
+  >
+
+  @Column('int')
+  createdById: number
+
+  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  createdAt: Date
+}

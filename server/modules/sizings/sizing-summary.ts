@@ -1,0 +1,50 @@
+import type { Site } from '../../../shared/schemas/site'
+import type { SizingInput, SizingSummary } from '../../../shared/schemas/sizing'
+import type { SizingEvaluation } from '../../../shared/sizing/evaluate-sizing'
+
+export type StoredSummary = Omit<
+  SizingSummary,
+  'id' | 'revision' | 'state' | 'submittedAt' | 'handoverNote' | 'ownerName'
+>
+
+/** Thins a chart to about n points, keeping both ends, for quotes and lists. */
+function thin(values: number[], n: number) {
+  const step = Math.max(1, Math.ceil(values.length / n))
+  return values.filter((_, i) => i % step === 0 || i === values.length - 1)
+}
+
+/** What sales, quotes and production read of a saved revision. */
+export function summarise(site: Site, input: SizingInput, ev: SizingEvaluation): StoredSummary {
+  const { result, checks, response } = ev
+  const a = result.absorber
+  const target = result.modes[result.targetMode - 1]
+  if (!a || !result.design || !target) throw new Error('a sizing result without an absorber')
+  return {
+    title: input.title,
+    siteId: site.id,
+    siteName: site.name,
+    companyId: site.companyId,
+    companyName: site.companyName,
+    targetMode: result.targetMode,
+    hostFrequencyHz: target.frequencyHz,
+    effectiveMass: result.effectiveMass ?? 0,
+    orientation: input.orientation,
+    absorber: {
+      mass: a.mass,
+      stiffness: a.stiffness,
+      damping: a.damping,
+      frequencyHz: a.frequencyHz,
+      frequencyRatio: a.frequencyRatio,
+      dampingRatio: a.dampingRatio,
+    },
+    stroke: checks.stroke,
+    staticDeflection: result.design.staticDeflection,
+    reduction: result.peak.reductionFactor,
+    acceptance: { ...input.acceptance, responseWith: checks.responseWith, passes: checks.passes },
+    chart: {
+      frequencyHz: thin(response.frequencyHz, 120),
+      without: thin(response.without.receptance, 120),
+      with: thin(response.with?.receptance ?? [], 120),
+    },
+  }
+}

@@ -1,0 +1,67 @@
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  UpdateDateColumn,
+  type Relation,
+} from 'typeorm'
+import type { SizingState } from '../../../shared/schemas/sizing'
+import { HostModelEntity } from '../models/host-model.entity'
+import { SiteEntity } from '../sites/site.entity'
+import { UserEntity } from '../users/user.entity'
+
+@Entity('sizings')
+export class SizingEntity {
+  @PrimaryGeneratedColumn('increment', { type: 'int' })
+  id: number
+
+  @Column('int')
+  siteId: number
+
+  @ManyToOne(() => SiteEntity, { onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'siteId' })
+  site: Relation<SiteEntity>
+
+  @Column('int')
+  modelId: number
+
+  @ManyToOne(() => HostModelEntity, { onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'modelId' })
+  model: Relation<HostModelEntity>
+
+  @Column('int')
+  ownerId: number
+
+  @ManyToOne(() => UserEntity, { onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'ownerId' })
+  owner: Relation<UserEntity>
+
+  @Column('varchar', { length: 160 })
+  title: string
+
+  @Column('varchar', { length: 16, default: 'draft' })
+  state: SizingState
+
+  @Column('int', { default: 1 })
+  currentRevision: number
+
+  @Column('datetime', { precision: 3, nullable: true })
+  submittedAt: Date | null
+
+  @Column('varchar', { length: 2000, default: '' })
+  handoverNote: string
+
+  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  createdAt: Date
+
+  @UpdateDateColumn({
+    type: 'datetime',
+    precision: 3,
+    default: () => 'CURRENT_TIMESTAMP(3)',
+    onUpdate: 'CURRENT_TIMESTAMP(3)',
+  })
+  updatedAt: Date
+}

@@ -1,0 +1,182 @@
+import type { DataSource } from 'typeorm'
+import type {
+  SizingInput,
+  SizingListItem,
+  SizingListQuery,
+  SizingState,
+} from '../../../shared/schemas/sizing'
+import type { SizingEvaluation } from '../../../shared/sizing/evaluate-sizing'
+import { SiteEntity } from '../sites/site.entity'
+import { CompanyEntity } from '../companies/company.entity'
+import { SizingRevisionEntity } from './sizing-revision.entity'
+import { SizingEntity } from './sizing.entity'
+import type { StoredSummary } from './sizing-summary'
+
+export interface SizingRecord {
+  id: number
+  siteId: number
+  modelId: number
+  ownerId: number
+  ownerName: string
+  title: string
+  state: SizingState
+  currentRevision: number
+  submittedAt: Date | null
+  handoverNote: string
+  updatedAt: Date
+}
+
+export interface RevisionData {
+  input: SizingInput
+  evaluation: SizingEvaluation
+  summary: StoredSummary
+}
+
+const toRecord = (s: SizingEntity): SizingRecord => ({
+  id: s.id,
+  siteId: s.siteId,
+  modelId: s.modelId,
+  ownerId: s.ownerId,
+  ownerName: s.owner?.name ?? '',
+  title: s.title,
+  state: s.state,
+  currentRevision: s.currentRevision,
+  submittedAt: s.submittedAt,
+  handoverNote: s.handoverNote,
+  updatedAt: s.updatedAt,
+})
+
+export function sizingsRepository(ds: DataSource) {
+  const sizings = ds.getRepository(SizingEntity)
+  const revisions = ds.getRepository(SizingRevisionEntity)
+  return {
+    async findById(id: number) {
+      const s = await sizings.findOne({ where: { id }, relations: { owner: true } })
+      return s ? toRecord(s) : null
+    },
+    async revision(sizingId: number, revision: number): Promise<RevisionData | null> {
+      const r = await revisions.findOneBy({ sizingId, revision })
+      return r ? { input: r.input, evaluation: r.evaluation, summary: r.summary } : null
+    },
+    /** Lists with a few summary figures read from the current revision. */
+    async list(
+      q: SizingListQuery & {
+        visibleTo?: { ownerId: number; orState?: SizingState }
+        onlyState?: SizingState
+      },
+    ): Promise<SizingListItem[]> {
+      const qb = sizings
+        .createQueryBuilder('s')
+        .leftJoinAndSelect('s.owner', 'owner')
+        .innerJoin(SiteEntity, 'site', 'site.id = s.siteId')
+        .innerJoin(CompanyEntity, 'company', 'company.id = site.companyId')
+        .innerJoin(
+          SizingRevisionEntity,
+          'r',
+          'r.sizingId = s.id AND r.revision = s.currentRevision',
+        )
+        .addSelect(['site.name AS siteName', 'company.name AS companyName', 'r.summary AS summary'])
+        .orderBy('s.updatedAt', 'DESC')
+      if (q.siteId) qb.andWhere('s.siteId = :siteId', { siteId: q.siteId })
+      if (q.state) qb.andWhere('s.state = :state', { state: q.state })
+      if (q.onlyState) qb.andWhere('s.state = :only', { only: q.onlyState })
+      if (q.visibleTo)
+        qb.andWhere('(s.ownerId = :me OR s.state = :shared)', {
+          me: q.visibleTo.ownerId,
+          shared: q.visibleTo.orState ?? 'submitted',
+        })
+      if (q.search)
+        qb.andWhere('(s.title LIKE :q OR site.name LIKE :q OR company.name LIKE :q)', {
+          q: `%${q.search.replace(/[%_\\]/g, '\\$&')}%`,
+        })
+      const { entities, raw } = await qb.getRawAndEntities()
+      return entities.map((s, i) => {
+        const row = raw[i] as { siteName: string; companyName: string; summary: string }
+        const sum = JSON.parse(row.summary) as StoredSummary
+        return {
+          id: s.id,
+          title: s.title,
+          state: s.state,
+          revision: s.currentRevision,
+          siteId: s.siteId,
+          siteName: row.siteName,
+          companyName: row.companyName,
+          ownerId: s.ownerId,
+          ownerName: s.owner?.name ?? '',
+          absorberMass: sum.absorber.mass,
+          hostFrequencyHz: sum.hostFrequencyHz,
+          reduction: sum.reduction,
+          passes: sum.acceptance.passes,
+          updatedAt: s.updatedAt.toISOString(),
+        }
+      })
+    },
+    async create(
+      data: { siteId: number; modelId: number; ownerId: number; title: string } & RevisionData,
+    ) {
+      return ds.transaction(async (em) => {
+        const s = await em.save(
+          em.create(SizingEntity, {
+            siteId: data.siteId,
+            modelId: data.modelId,
+            ownerId: data.ownerId,
+            title: data.title,
+            state: 'draft',
+            currentRevision: 1,
+            handoverNote: '',
+          }),
+        )
+        await em.save(
+          em.create(SizingRevisionEntity, {
+            sizingId: s.id,
+            revision: 1,
+            input: data.input,
+            evaluation: data.evaluation,
+            summary: data.summary,
+            createdById: data.ownerId,
+          }),
+        )
+        return s.id
+      })
+    },
+    /** Revision base+1, only while base is current and the sizing a draft (one statement decides). */
+    async addRevision(
+      id: number,
+      base: number,
+      userId: number,
+      data: RevisionData & { modelId: number; title: string },
+    ) {
+      return ds.transaction(async (em) => {
+        const moved = await em.update(
+          SizingEntity,
+          { id, currentRevision: base, state: 'draft' },
+          { currentRevision: base + 1, modelId: data.modelId, title: data.title },
+        )
+        if (!moved.affected) return false
+        await em.save(
+          em.create(SizingRevisionEntity, {
+            sizingId: id,
+            revision: base + 1,
+            input: data.input,
+            evaluation: data.evaluation,
+            summary: data.summary,
+            createdById: userId,
+          }),
+        )
+        return true
+      })
+    },
+    async setState(
+      id: number,
+      from: SizingState,
+      to: SizingState,
+      patch: { submittedAt?: Date | null; handoverNote?: string; revision?: number },
+    ) {
+      const { revision, ...rest } = patch
+      const where = revision ? { id, state: from, currentRevision: revision } : { id, state: from }
+      const r = await sizings.update(where, { state: to, ...rest })
+      return (r.affected ?? 0) > 0
+    },
+  }
+}
+export type SizingsRepository = ReturnType<typeof sizingsRepository>

@@ -1,0 +1,104 @@
+import { Router } from 'express'
+import { z } from 'zod'
+import { IdParamSchema } from '../../../shared/schemas/auth'
+import {
+  SizingCreateSchema,
+  SizingListQuerySchema,
+  SizingSaveSchema,
+  SizingSubmitSchema,
+} from '../../../shared/schemas/sizing'
+import type { ApiRegistry } from '../../http/api-registry'
+import { route } from '../../http/route'
+import type { SizingsService } from './sizings.service'
+
+const READERS = ['engineer', 'sales', 'admin'] as const
+const WRITERS = ['engineer', 'admin'] as const
+const RevisionQuery = z.object({ revision: z.coerce.number().int().positive().optional() })
+
+export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
+  const router = Router()
+  const tag = 'Sizings'
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/sizings',
+      tag,
+      summary: 'Sizings visible to the caller',
+      access: READERS,
+      query: SizingListQuerySchema,
+    },
+    ({ user, query }) => sizings.list(user, query),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'post',
+      path: '/api/sizings',
+      tag,
+      summary: 'Create a sizing; the server solves it in the worker pool',
+      access: WRITERS,
+      body: SizingCreateSchema,
+      status: 201,
+    },
+    ({ user, body }) => sizings.create(user, body.input),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/sizings/:id',
+      tag,
+      summary: 'A sizing with its stored result (current or a given revision)',
+      access: READERS,
+      params: IdParamSchema,
+      query: RevisionQuery,
+    },
+    ({ user, params, query }) => sizings.view(user, params.id, query.revision),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'put',
+      path: '/api/sizings/:id',
+      tag,
+      summary: 'Save a new revision from a base revision',
+      access: WRITERS,
+      params: IdParamSchema,
+      body: SizingSaveSchema,
+    },
+    ({ user, params, body }) => sizings.save(user, params.id, body),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'post',
+      path: '/api/sizings/:id/submit',
+      tag,
+      summary: 'Hand the sizing over to sales',
+      access: WRITERS,
+      params: IdParamSchema,
+      body: SizingSubmitSchema,
+    },
+    ({ user, params, body }) => sizings.submit(user, params.id, body.revision, body.note),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'post',
+      path: '/api/sizings/:id/reopen',
+      tag,
+      summary: 'Reopen a handed-over sizing to revise it',
+      access: WRITERS,
+      params: IdParamSchema,
+    },
+    ({ user, params }) => sizings.reopen(user, params.id),
+  )
+  return router
+}

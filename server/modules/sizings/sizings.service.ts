@@ -1,0 +1,185 @@
+import { isDeepStrictEqual } from 'node:util'
+import type {
+  SizingInput,
+  SizingListQuery,
+  SizingSave,
+  SizingSummary,
+} from '../../../shared/schemas/sizing'
+import { AppError, forbidden, notFound } from '../../http/app-error'
+import type { AuthUser } from '../../middleware/authenticate'
+import type { SizingPool } from '../../workers/pool'
+import { dotted } from '../models/check-model'
+import type { ModelsService } from '../models/models.service'
+import type { SitesService } from '../sites/sites.service'
+import { summarise } from './sizing-summary'
+import type { SizingRecord, SizingsRepository } from './sizings.repository'
+
+export interface SizingsDeps {
+  sizings: SizingsRepository
+  models: ModelsService
+  sites: SitesService
+  pool: SizingPool
+  now: () => Date
+}
+
+/** Engineers see their own sizings and every submitted one; sales the submitted; admin all. */
+function canSee(user: AuthUser, s: SizingRecord) {
+  if (user.role === 'admin') return true
+  if (user.role === 'engineer') return s.ownerId === user.id || s.state === 'submitted'
+  return user.role === 'sales' && s.state === 'submitted'
+}
+
+export function sizingsService(deps: SizingsDeps) {
+  async function record(user: AuthUser | null, id: number) {
+    const s = await deps.sizings.findById(id)
+    if (!s || (user && !canSee(user, s))) throw notFound('sizing')
+    return s
+  }
+
+  function assertOwner(user: AuthUser, s: SizingRecord) {
+    if (user.role !== 'admin' && s.ownerId !== user.id)
+      throw forbidden('Only the engineer who made this sizing may change it.')
+  }
+
+  /** The authoritative solve, in the worker pool; a model error becomes a 400 naming the field. */
+  async function evaluate(input: SizingInput) {
+    const site = await deps.sites.get(input.siteId)
+    const model = await deps.models.get(input.modelId)
+    if (model.siteId !== site.id)
+      throw new AppError('model-not-of-site', 'The model belongs to another site.', 400, [
+        { path: 'body.input.modelId', message: 'not a model of this site' },
+      ])
+    const definition = await deps.models.definitionAt(input.modelId, input.modelRevision)
+    const out = await deps.pool.run({ model: definition, input })
+    if (!out.ok) {
+      const path = `body.input.${dotted(out.field)
+        .replace(/^absorber\.node$/, 'absorberNode')
+        .replace(/^excitation\.node$/, 'excitationNode')
+        .replace(/^response\.node$/, 'responseNode')}`
+      throw new AppError('invalid-model', out.message, 400, [{ path, message: out.message }])
+    }
+    return { input, evaluation: out.evaluation, summary: summarise(site, input, out.evaluation) }
+  }
+
+  async function view(user: AuthUser | null, id: number, revision?: number) {
+    const s = await record(user, id)
+    const rev = await deps.sizings.revision(id, revision ?? s.currentRevision)
+    if (!rev) throw notFound('sizing-revision')
+    return {
+      ...s,
+      submittedAt: s.submittedAt?.toISOString() ?? null,
+      updatedAt: s.updatedAt.toISOString(),
+      revision: revision ?? s.currentRevision,
+      ...rev,
+    }
+  }
+
+  return {
+    view,
+    list(user: AuthUser, q: SizingListQuery) {
+      if (user.role === 'admin') return deps.sizings.list(q)
+      if (user.role === 'sales') return deps.sizings.list({ ...q, onlyState: 'submitted' })
+      return deps.sizings.list({ ...q, visibleTo: { ownerId: user.id } })
+    },
+
+    async create(user: AuthUser, input: SizingInput) {
+      const data = await evaluate(input)
+      const id = await deps.sizings.create({
+        siteId: input.siteId,
+        modelId: input.modelId,
+        ownerId: user.id,
+        title: input.title,
+        ...data,
+      })
+      return view(user, id)
+    },
+
+    /** Saves revision base+1; the same save repeated returns the revision it already made. */
+    async save(user: AuthUser, id: number, body: SizingSave) {
+      const s = await record(user, id)
+      assertOwner(user, s)
+      if (s.state !== 'draft')
+        throw new AppError(
+          'sizing-submitted',
+          'This sizing was handed over; reopen it to revise.',
+          409,
+        )
+      if (body.input.siteId !== s.siteId)
+        throw new AppError('site-fixed', 'A sizing stays on its site.', 400, [
+          { path: 'body.input.siteId', message: 'cannot change' },
+        ])
+      if (s.currentRevision === body.baseRevision + 1) {
+        const latest = await deps.sizings.revision(id, s.currentRevision)
+        if (latest && isDeepStrictEqual(latest.input, body.input)) return view(user, id)
+      }
+      const data = await evaluate(body.input)
+      if (
+        await deps.sizings.addRevision(id, body.baseRevision, user.id, {
+          ...data,
+          modelId: body.input.modelId,
+          title: body.input.title,
+        })
+      )
+        return view(user, id)
+      const now = await record(user, id)
+      const latest = await deps.sizings.revision(id, now.currentRevision)
+      if (
+        now.currentRevision === body.baseRevision + 1 &&
+        latest &&
+        isDeepStrictEqual(latest.input, body.input)
+      )
+        return view(user, id)
+      throw new AppError(
+        'revision-conflict',
+        `The sizing is at revision ${now.currentRevision}; reload it before saving.`,
+        409,
+        { currentRevision: now.currentRevision },
+      )
+    },
+
+    /** Hands the sizing to sales; it is read-only from then on unless reopened. */
+    async submit(user: AuthUser, id: number, revision: number, note: string) {
+      const s = await record(user, id)
+      assertOwner(user, s)
+      const ok = await deps.sizings.setState(id, 'draft', 'submitted', {
+        submittedAt: deps.now(),
+        handoverNote: note,
+        revision,
+      })
+      if (!ok)
+        throw new AppError(
+          'sizing-not-submittable',
+          'Only the latest revision of a draft can be handed over.',
+          409,
+        )
+      return view(user, id)
+    },
+
+    async reopen(user: AuthUser, id: number) {
+      const s = await record(user, id)
+      assertOwner(user, s)
+      if (!(await deps.sizings.setState(id, 'submitted', 'draft', { submittedAt: null })))
+        throw new AppError(
+          'sizing-not-submitted',
+          'Only a handed-over sizing can be reopened.',
+          409,
+        )
+      return view(user, id)
+    },
+
+    /** The frozen figures a quote is made from (no role check: the quote service checks). */
+    async summary(id: number): Promise<SizingSummary> {
+      const v = await view(null, id)
+      return {
+        ...v.summary,
+        id: v.id,
+        revision: v.revision,
+        state: v.state,
+        submittedAt: v.submittedAt,
+        handoverNote: v.handoverNote,
+        ownerName: v.ownerName,
+      }
+    },
+  }
+}
+export type SizingsService = ReturnType<typeof sizingsService>

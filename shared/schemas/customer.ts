@@ -1,0 +1,37 @@
+import { z } from 'zod'
+import { EmailSchema } from './auth'
+
+export const CustomerInputSchema = z.object({
+  name: z.string().trim().min(1, 'required').max(160),
+  address: z.string().trim().max(300).default(''),
+})
+export type CustomerInput = z.infer<typeof CustomerInputSchema>
+
+export const ContactInputSchema = z.object({
+  name: z.string().trim().min(1, 'required').max(120),
+  email: EmailSchema,
+  phone: z.string().trim().max(40).default(''),
+  position: z.string().trim().max(120).default(''),
+})
+export type ContactInput = z.infer<typeof ContactInputSchema>
+
+export const ContactSchema = ContactInputSchema.extend({
+  id: z.number().int(),
+  companyId: z.number().int(),
+  /** The customer user made from this contact by an invitation, if any. */
+  userId: z.number().int().nullable(),
+})
+export type Contact = z.infer<typeof ContactSchema>
+
+export const CustomerSchema = z.object({
+  id: z.number().int(),
+  name: z.string(),
+  address: z.string(),
+  contacts: z.array(ContactSchema),
+})
+export type Customer = z.infer<typeof CustomerSchema>
+
+export const ContactParamsSchema = z.object({
+  id: z.coerce.number().int().positive(),
+  contactId: z.coerce.number().int().positive(),
+})

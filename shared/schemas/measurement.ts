@@ -1,0 +1,65 @@
+import { z } from 'zod'
+import type { IdentificationResult } from '../measurements'
+
+/** The largest record file accepted, bytes (8 MiB; about 400 000 rows of time and acceleration). */
+export const MAX_RECORD_BYTES = 8 * 1024 * 1024
+
+const optionalText = (max: number) =>
+  z.preprocess((v) => (v === '' ? undefined : v), z.string().trim().max(max).optional())
+
+const optionalNumber = <T extends z.ZodType>(schema: T) =>
+  z.preprocess((v) => (v === '' || v === null ? undefined : v), schema.optional())
+
+/** Form fields beside the uploaded file; multipart sends every value as a string. */
+export const RecordUploadSchema = z.object({
+  /** Hz, for a file without a time column */
+  sampleRateHz: optionalNumber(z.coerce.number().positive('must be above zero').max(1e6)),
+  kind: optionalNumber(z.enum(['decay', 'ambient'])),
+  modelId: optionalNumber(z.coerce.number().int().positive()),
+  nodeId: optionalText(60),
+})
+export type RecordUpload = z.infer<typeof RecordUploadSchema>
+
+export const PeakAddSchema = z.object({
+  /** Hz */
+  frequencyHz: z.number().positive('must be above zero'),
+})
+
+export const PeakIndexParamsSchema = z.object({
+  id: z.coerce.number().int().positive(),
+  index: z.coerce.number().int().min(0),
+})
+
+export const CalibrateSchema = z.object({
+  baseRevision: z.number().int().positive(),
+  /** 1-based, in ascending frequency */
+  mode: z.number().int().min(1, 'modes are numbered from 1 (the lowest)'),
+  /** Hz */
+  measuredHz: z.number().positive('must be above zero'),
+  recordId: z.number().int().positive().optional(),
+  dampingRatio: z.number().min(0).lt(1, 'must be below 1').optional(),
+})
+export type CalibrateInput = z.infer<typeof CalibrateSchema>
+
+/** A stored record as listed. */
+export interface MeasurementRecordSummary {
+  id: number
+  siteId: number
+  modelId: number | null
+  nodeId: string | null
+  ownerId: number
+  ownerName: string
+  filename: string
+  size: number
+  /** Hz */
+  sampleRateHz: number
+  samples: number
+  kind: string
+  peakCount: number
+  createdAt: string
+}
+
+/** One record with its identification. */
+export interface MeasurementRecord extends MeasurementRecordSummary {
+  result: IdentificationResult
+}

@@ -1,0 +1,135 @@
+import { z } from 'zod'
+import { CURRENCIES } from '../money'
+import { SizingSummarySchema } from './sizing'
+
+export const QUOTE_STATES = ['draft', 'sent', 'accepted', 'paid', 'expired', 'withdrawn'] as const
+export const QuoteStateSchema = z.enum(QUOTE_STATES)
+export type QuoteState = z.infer<typeof QuoteStateSchema>
+
+/** States a customer may see; drafts, expired and withdrawn quotes stay with the supplier. */
+export const CUSTOMER_VISIBLE_STATES: readonly QuoteState[] = ['sent', 'accepted', 'paid']
+
+export const CurrencySchema = z.enum(CURRENCIES)
+
+const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'a date as YYYY-MM-DD')
+
+export const QuoteLineInputSchema = z.discriminatedUnion('kind', [
+  z.object({
+    kind: z.literal('unit'),
+    productLineId: z.number().int().positive(),
+    quantity: z.number().int('whole units').min(1, 'at least 1').max(999),
+  }),
+  z.object({
+    kind: z.literal('option'),
+    optionId: z.number().int().positive(),
+    quantity: z.number().int('whole units').min(1, 'at least 1').max(999),
+  }),
+])
+export type QuoteLineInput = z.infer<typeof QuoteLineInputSchema>
+
+/** What sales edit on a draft; prices are never sent by the client. */
+export const QuoteDraftSchema = z.object({
+  contactId: z.number().int().positive().nullable().default(null),
+  currency: CurrencySchema.default('EUR'),
+  /** basis points, 100 = 1 % */
+  discountBp: z.number().int('whole basis points').min(0).max(10_000).default(0),
+  /** basis points, 2000 = 20 % */
+  taxBp: z.number().int('whole basis points').min(0).max(10_000).default(0),
+  validUntil: isoDate,
+  terms: z.string().max(4000).default(''),
+  lines: z.array(QuoteLineInputSchema).min(1, 'add at least one line').max(40),
+})
+export type QuoteDraft = z.infer<typeof QuoteDraftSchema>
+
+export const QuoteCreateSchema = QuoteDraftSchema.extend({
+  sizingId: z.number().int().positive(),
+})
+export type QuoteCreate = z.infer<typeof QuoteCreateSchema>
+
+export const QuoteListQuerySchema = z.object({
+  state: QuoteStateSchema.optional(),
+  companyId: z.coerce.number().int().positive().optional(),
+  /** created on or after, YYYY-MM-DD */
+  from: isoDate.optional(),
+  /** created on or before, YYYY-MM-DD */
+  to: isoDate.optional(),
+  search: z.string().trim().max(100).optional(),
+})
+export type QuoteListQuery = z.infer<typeof QuoteListQuerySchema>
+
+export const QuoteNoteSchema = z.object({ note: z.string().trim().max(500).default('') })
+export const QuoteAcceptSchema = z.object({
+  name: z.string().trim().min(1, 'required').max(120),
+  purchaseOrder: z.string().trim().min(1, 'required').max(60),
+})
+export type QuoteAccept = z.infer<typeof QuoteAcceptSchema>
+
+export const QuoteLineSchema = z.object({
+  position: z.number().int(),
+  kind: z.enum(['unit', 'option', 'service']),
+  productLineId: z.number().int().nullable(),
+  optionId: z.number().int().nullable(),
+  code: z.string(),
+  description: z.string(),
+  /** kg as built, for a unit line */
+  builtMass: z.number().nullable(),
+  quantity: z.number().int(),
+  unitPrice: z.number().int(),
+  lineTotal: z.number().int(),
+})
+export type QuoteLine = z.infer<typeof QuoteLineSchema>
+
+export const QuoteEventSchema = z.object({
+  fromState: QuoteStateSchema.nullable(),
+  toState: QuoteStateSchema,
+  actorId: z.number().int().nullable(),
+  actorName: z.string().nullable(),
+  at: z.string(),
+  note: z.string(),
+})
+export type QuoteEvent = z.infer<typeof QuoteEventSchema>
+
+export const QuoteSummarySchema = z.object({
+  id: z.number().int(),
+  number: z.string(),
+  revision: z.number().int(),
+  /** "TDW-2026-0001 rev 2" */
+  reference: z.string(),
+  state: QuoteStateSchema,
+  sizingId: z.number().int(),
+  sizingTitle: z.string(),
+  companyId: z.number().int(),
+  companyName: z.string(),
+  siteName: z.string(),
+  currency: CurrencySchema,
+  total: z.number().int(),
+  validUntil: z.string(),
+  createdAt: z.string(),
+  sentAt: z.string().nullable(),
+  latest: z.boolean(),
+})
+export type QuoteSummary = z.infer<typeof QuoteSummarySchema>
+
+export const QuoteSchema = QuoteSummarySchema.extend({
+  contactId: z.number().int().nullable(),
+  contactName: z.string().nullable(),
+  contactEmail: z.string().nullable(),
+  discountBp: z.number().int(),
+  taxBp: z.number().int(),
+  terms: z.string(),
+  lines: z.array(QuoteLineSchema),
+  subtotal: z.number().int(),
+  discount: z.number().int(),
+  discountedSubtotal: z.number().int(),
+  tax: z.number().int(),
+  /** The sizing as it was when this revision was made; later edits never reach it. */
+  sizing: SizingSummarySchema,
+  createdByName: z.string(),
+  acceptedAt: z.string().nullable(),
+  acceptedName: z.string().nullable(),
+  purchaseOrder: z.string().nullable(),
+  paidAt: z.string().nullable(),
+  /** Supplier-side history; empty for a customer. */
+  events: z.array(QuoteEventSchema),
+})
+export type Quote = z.infer<typeof QuoteSchema>

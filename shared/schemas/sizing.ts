@@ -1,0 +1,141 @@
+import { z } from 'zod'
+import {
+  bandSchema,
+  explicitTuningSchema,
+  nodeSchema,
+  springSchema,
+  tuningNameSchema,
+} from './model'
+
+/** The host structure as the engineer edits it: a revision of a model stores exactly this. */
+export const ModelDefinitionSchema = z.object({
+  nodes: z.array(nodeSchema).min(1, 'add at least one node'),
+  springs: z.array(springSchema),
+  hostDampingRatio: z.union([z.number(), z.array(z.number())]).default(0.02),
+})
+export type ModelDefinition = z.infer<typeof ModelDefinitionSchema>
+
+export const ORIENTATIONS = ['vertical', 'horizontal'] as const
+export const OrientationSchema = z.enum(ORIENTATIONS)
+export type Orientation = z.infer<typeof OrientationSchema>
+
+export const ResponseQuantitySchema = z.enum(['displacement', 'velocity', 'acceleration'])
+export type ResponseQuantity = z.infer<typeof ResponseQuantitySchema>
+
+/** An acceptance limit on the peak response at the response node, in SI units. */
+export const AcceptanceSchema = z.object({
+  presetId: z.string().max(60).optional(),
+  label: z.string().max(160),
+  quantity: ResponseQuantitySchema,
+  /** m, m/s or m/s², peak (not rms) */
+  limit: z.number().positive('must be above zero'),
+})
+export type Acceptance = z.infer<typeof AcceptanceSchema>
+
+export const SizingInputSchema = z.object({
+  title: z.string().trim().min(1, 'required').max(160),
+  siteId: z.number().int().positive(),
+  modelId: z.number().int().positive(),
+  modelRevision: z.number().int().positive(),
+  targetMode: z.number().int().min(1, 'modes are numbered from 1 (the lowest)'),
+  absorberNode: z.string().min(1, 'required'),
+  excitationNode: z.string().min(1, 'required'),
+  responseNode: z.string().min(1, 'required'),
+  /** N, amplitude of the harmonic design force */
+  forceAmplitude: z.number().positive('must be above zero'),
+  loadPresetId: z.string().max(60).optional(),
+  massRatio: z.number().min(0.001, 'at least 0.1 %').max(0.5, 'at most 50 %'),
+  tuning: z.union([tuningNameSchema, explicitTuningSchema]).default('optimize'),
+  orientation: OrientationSchema.default('vertical'),
+  acceptance: AcceptanceSchema,
+  /** ± fraction of the host frequency for the robustness check */
+  detuningTolerance: z.number().min(0).max(0.2).default(0.1),
+  band: bandSchema.optional(),
+})
+export type SizingInput = z.infer<typeof SizingInputSchema>
+
+export const SIZING_STATES = ['draft', 'submitted'] as const
+export type SizingState = (typeof SIZING_STATES)[number]
+
+/**
+ * What sales, the quote and production read of a sizing: the server's authoritative numbers.
+ * SI units: kg, N/m, N·s/m, Hz, m.
+ */
+export const SizingSummarySchema = z.object({
+  id: z.number().int(),
+  revision: z.number().int(),
+  title: z.string(),
+  state: z.enum(SIZING_STATES),
+  siteId: z.number().int(),
+  siteName: z.string(),
+  companyId: z.number().int(),
+  companyName: z.string(),
+  ownerName: z.string(),
+  targetMode: z.number().int(),
+  hostFrequencyHz: z.number(),
+  effectiveMass: z.number(),
+  orientation: OrientationSchema,
+  absorber: z.object({
+    mass: z.number(),
+    stiffness: z.number(),
+    damping: z.number(),
+    frequencyHz: z.number(),
+    frequencyRatio: z.number(),
+    dampingRatio: z.number(),
+  }),
+  /** m, peak relative displacement of the absorber mass at the design load */
+  stroke: z.number(),
+  /** m, static deflection of a vertical unit, g/ω_a² */
+  staticDeflection: z.number(),
+  /** peak without ÷ peak with; null when the host has no damping (unbounded without) */
+  reduction: z.number().nullable(),
+  acceptance: AcceptanceSchema.extend({ responseWith: z.number(), passes: z.boolean() }),
+  /** Frequency response before and after, for a chart image in the quote. */
+  chart: z.object({
+    frequencyHz: z.array(z.number()),
+    without: z.array(z.number()),
+    with: z.array(z.number()),
+  }),
+  submittedAt: z.string().nullable(),
+  handoverNote: z.string(),
+})
+export type SizingSummary = z.infer<typeof SizingSummarySchema>
+
+export const SizingCreateSchema = z.object({ input: SizingInputSchema })
+
+export const SizingSaveSchema = z.object({
+  /** the revision this edit started from; a stale one is refused, an identical repeat ignored */
+  baseRevision: z.number().int().positive(),
+  input: SizingInputSchema,
+})
+export type SizingSave = z.infer<typeof SizingSaveSchema>
+
+export const SizingSubmitSchema = z.object({
+  revision: z.number().int().positive(),
+  note: z.string().trim().max(2000).default(''),
+})
+
+export const SizingListQuerySchema = z.object({
+  siteId: z.coerce.number().int().positive().optional(),
+  state: z.enum(SIZING_STATES).optional(),
+  search: z.string().trim().max(100).optional(),
+})
+export type SizingListQuery = z.infer<typeof SizingListQuerySchema>
+
+/** A row of the sizings list. */
+export interface SizingListItem {
+  id: number
+  title: string
+  state: SizingState
+  revision: number
+  siteId: number
+  siteName: string
+  companyName: string
+  ownerId: number
+  ownerName: string
+  absorberMass: number | null
+  hostFrequencyHz: number | null
+  reduction: number | null
+  passes: boolean | null
+  updatedAt: string
+}

@@ -1,0 +1,26 @@
+import type {
+  CatalogueOption,
+  CatalogueOptionInput,
+  ProductLine,
+  ProductLineInput,
+  UnitMatch,
+} from '@shared/schemas/catalogue'
+import { api } from './client'
+
+export const catalogueApi = {
+  lines: (includeInactive = false) =>
+    api.get<ProductLine[]>(`/api/catalogue/lines${includeInactive ? '?includeInactive=true' : ''}`),
+  createLine: (body: ProductLineInput) => api.post<ProductLine>('/api/catalogue/lines', body),
+  updateLine: (id: number, body: ProductLineInput) =>
+    api.put<ProductLine>(`/api/catalogue/lines/${id}`, body),
+  options: (includeInactive = false) =>
+    api.get<CatalogueOption[]>(
+      `/api/catalogue/options${includeInactive ? '?includeInactive=true' : ''}`,
+    ),
+  createOption: (body: CatalogueOptionInput) =>
+    api.post<CatalogueOption>('/api/catalogue/options', body),
+  updateOption: (id: number, body: CatalogueOptionInput) =>
+    api.put<CatalogueOption>(`/api/catalogue/options/${id}`, body),
+  matches: (sizingId: number) =>
+    api.get<UnitMatch[]>(`/api/catalogue/matches?sizingId=${sizingId}`),
+}

@@ -1,0 +1,31 @@
+import type {
+  Quote,
+  QuoteAccept,
+  QuoteCreate,
+  QuoteDraft,
+  QuoteListQuery,
+  QuoteSummary,
+} from '@shared/schemas/quote'
+import type { SizingSummary } from '@shared/schemas/sizing'
+import { api } from './client'
+
+function query(q: QuoteListQuery) {
+  const p = new URLSearchParams()
+  for (const [k, v] of Object.entries(q)) if (v !== undefined && v !== '') p.set(k, String(v))
+  const s = p.toString()
+  return s ? `?${s}` : ''
+}
+
+export const quotesApi = {
+  list: (q: QuoteListQuery = {}) => api.get<QuoteSummary[]>(`/api/quotes${query(q)}`),
+  get: (id: number) => api.get<Quote>(`/api/quotes/${id}`),
+  create: (body: QuoteCreate) => api.post<Quote>('/api/quotes', body),
+  update: (id: number, body: QuoteDraft) => api.put<Quote>(`/api/quotes/${id}`, body),
+  send: (id: number) => api.post<Quote>(`/api/quotes/${id}/send`),
+  revise: (id: number) => api.post<Quote>(`/api/quotes/${id}/revise`),
+  withdraw: (id: number, note = '') => api.post<Quote>(`/api/quotes/${id}/withdraw`, { note }),
+  accept: (id: number, body: QuoteAccept) => api.post<Quote>(`/api/quotes/${id}/accept`, body),
+  pdfUrl: (id: number) => `/api/quotes/${id}/pdf`,
+  /** The sizing a new quote is made from, as sales read it. */
+  sizing: (id: number) => api.get<SizingSummary>(`/api/quotes/from-sizing/${id}`),
+}

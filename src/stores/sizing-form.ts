@@ -1,0 +1,123 @@
+import type { TuningName } from '@shared/schemas/model'
+import type { Acceptance, ModelDefinition, Orientation, SizingInput } from '@shared/schemas/sizing'
+import { acceptancePreset } from '@shared/acceptance-presets'
+import { LOAD_PRESETS } from '@shared/load-presets'
+import { singleModeModel } from '@shared/dynamics'
+
+/** The engineer's choices, without the server's ids. SI units. */
+export interface SizingForm {
+  title: string
+  targetMode: number
+  absorberNode: string
+  excitationNode: string
+  responseNode: string
+  forceAmplitude: number
+  loadPresetId?: string
+  massRatio: number
+  tuning: TuningName
+  orientation: Orientation
+  acceptance: Acceptance
+  detuningTolerance: number
+}
+
+/** One sizing being edited, as kept in the browser until the server has it. */
+export interface SizingDraft {
+  /** "sizing-12" once saved, "new-site-3" before */
+  key: string
+  siteId: number
+  sizingId: number | null
+  sizingRevision: number | null
+  modelId: number | null
+  modelRevision: number | null
+  modelName: string
+  definition: ModelDefinition
+  /** the structure differs from the saved model revision */
+  structureChanged: boolean
+  revisionReason: string
+  form: SizingForm
+  /** anything not yet on the server */
+  changed: boolean
+  /** a save was asked for and could not reach the server */
+  pendingSync: boolean
+  updatedAt: string
+}
+
+export function defaultForm(): SizingForm {
+  const office = acceptancePreset('aisc-office')
+  const walker = LOAD_PRESETS[0]
+  return {
+    title: '',
+    targetMode: 1,
+    absorberNode: '',
+    excitationNode: '',
+    responseNode: '',
+    forceAmplitude: walker?.force ?? 280,
+    loadPresetId: walker?.id,
+    massRatio: 0.02,
+    tuning: 'optimize',
+    orientation: 'vertical',
+    acceptance: {
+      presetId: office?.id,
+      label: office ? `${office.label}, ${office.statedAs}` : 'custom',
+      quantity: 'acceleration',
+      limit: office?.limit ?? 0.049,
+    },
+    detuningTolerance: 0.1,
+  }
+}
+
+/** A one-mass start (an office floor near 5.8 Hz, 20 t modal mass), edited from there. */
+export function defaultDefinition(): ModelDefinition {
+  const m = singleModeModel(5.8, 20_000)
+  return { nodes: m.nodes, springs: m.springs, hostDampingRatio: 0.02 }
+}
+
+export function newDraft(siteId: number, now: string): SizingDraft {
+  return {
+    key: `new-site-${siteId}`,
+    siteId,
+    sizingId: null,
+    sizingRevision: null,
+    modelId: null,
+    modelRevision: null,
+    modelName: 'Host structure',
+    definition: defaultDefinition(),
+    structureChanged: true,
+    revisionReason: '',
+    form: defaultForm(),
+    changed: false,
+    pendingSync: false,
+    updatedAt: now,
+  }
+}
+
+/** The API's sizing input; ids not yet given by the server are 1 for the local preview only. */
+export function toSizingInput(d: SizingDraft): SizingInput {
+  const f = d.form
+  return {
+    ...f,
+    title: f.title.trim() || 'Untitled sizing',
+    siteId: d.siteId,
+    modelId: d.modelId ?? 1,
+    modelRevision: d.modelRevision ?? 1,
+  }
+}
+
+/** The form part of a stored sizing input. */
+export function formOf(input: SizingInput): SizingForm {
+  const tuning = typeof input.tuning === 'string' ? input.tuning : 'optimize'
+  return {
+    title: input.title,
+    targetMode: input.targetMode,
+    absorberNode: input.absorberNode,
+    excitationNode: input.excitationNode,
+    responseNode: input.responseNode,
+    forceAmplitude: input.forceAmplitude,
+    loadPresetId: input.loadPresetId,
+    massRatio: input.massRatio,
+    tuning,
+    orientation: input.orientation,
+    acceptance: input.acceptance,
+    detuningTolerance: input.detuningTolerance,
+  }
+}

@@ -1,0 +1,148 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import Stripe from 'stripe'
+import request from 'supertest'
+import { TEST_CARDS } from '../../fakes/payments'
+import { mailTo, signedIn } from '../helpers/factories'
+import { makePaymentRig, type PaymentRig } from './payments-rig'
+
+let rig: PaymentRig
+beforeAll(async () => {
+  rig = await makePaymentRig()
+})
+afterAll(() => rig?.close())
+
+const stripe = new Stripe('sk_test_unused')
+
+async function orders(quoteId: number) {
+  const { agent } = await signedIn(rig.t, 'admin')
+  return ((await agent.get('/api/orders')).body as { quoteId: number }[]).filter(
+    (o) => o.quoteId === quoteId,
+  )
+}
+
+describe('paying an accepted quote through the SDK and the payment stand-in', () => {
+  it('confirms the order once, marks the quote paid and mails the receipt and the production notice', async () => {
+    const { quote, customer } = await rig.acceptedQuote()
+    const { agent: production, user: builder } = await signedIn(rig.t, 'production')
+    const checkout = await customer.agent
+      .post(`/api/quotes/${quote.id}/checkout`)
+      .send({ amount: 1 })
+    expect(checkout.status).toBe(201)
+    const paid = await rig.payOnPage(checkout.body.url)
+    expect(paid.status).toBe(303)
+    expect(paid.location).toContain(`/portal/payment/done?session_id=${checkout.body.sessionId}`)
+    const order = (await customer.agent.get(`/api/quotes/${quote.id}/order`)).body.order
+    expect(order).toMatchObject({ quoteId: quote.id, status: 'confirmed' })
+    // the amount is the quote's stored total, not the 1 the browser sent
+    expect(order.amount).toBe(quote.total)
+    expect((await customer.agent.get(`/api/quotes/${quote.id}`)).body.state).toBe('paid')
+    expect((await mailTo(rig.t, customer.user.email)).subject).toMatch(/^Payment received/)
+    expect((await mailTo(rig.t, builder.email)).subject).toMatch(/^New order ORD-/)
+    expect((await production.get('/api/orders')).status).toBe(200)
+    const again = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)
+    expect(again.status).toBe(409)
+    expect(again.body.error.code).toBe('quote-paid')
+  })
+
+  it('applies a replayed event once and makes one order from two events of the same session', async () => {
+    const { quote, customer } = await rig.acceptedQuote()
+    const { body } = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)
+    await rig.payOnPage(body.url)
+    const completed = (await rig.events()).data.find(
+      (e) => e.type === 'checkout.session.completed' && e.data.object.id === body.sessionId,
+    )!
+    const replays = await Promise.all([
+      fetch(`${rig.fake.url}/_fake/sessions/${body.sessionId}/deliver?eventId=${completed.id}`, {
+        method: 'POST',
+      }),
+      fetch(`${rig.fake.url}/_fake/sessions/${body.sessionId}/deliver?eventId=${completed.id}`, {
+        method: 'POST',
+      }),
+      fetch(
+        `${rig.fake.url}/_fake/sessions/${body.sessionId}/deliver?type=checkout.session.completed`,
+        { method: 'POST' },
+      ),
+      fetch(
+        `${rig.fake.url}/_fake/sessions/${body.sessionId}/deliver?type=checkout.session.completed`,
+        { method: 'POST' },
+      ),
+    ])
+    expect(replays.every((r) => r.ok)).toBe(true)
+    expect(await orders(quote.id)).toHaveLength(1)
+    const statuses = (await rig.events()).data
+      .filter((e) => e.data.object.id === body.sessionId)
+      .flatMap((e) => e.deliveries.map((d) => d.status))
+    expect(statuses.every((s) => s === 200)).toBe(true)
+  })
+
+  it('refuses a forged or missing signature with 400 and changes nothing', async () => {
+    const { quote, customer } = await rig.acceptedQuote()
+    const { body } = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)
+    const payload = JSON.stringify({
+      id: 'evt_forged',
+      object: 'event',
+      type: 'checkout.session.completed',
+      data: { object: { id: body.sessionId, amount_total: quote.total, payment_status: 'paid' } },
+    })
+    const forged = stripe.webhooks.generateTestHeaderString({ payload, secret: 'whsec_wrong' })
+    const bad = await request(rig.t.app)
+      .post('/api/payments/webhook')
+      .set('content-type', 'application/json')
+      .set('stripe-signature', forged)
+      .send(payload)
+    expect(bad.status).toBe(400)
+    expect(bad.body.error.code).toBe('invalid-signature')
+    const none = await request(rig.t.app)
+      .post('/api/payments/webhook')
+      .set('content-type', 'application/json')
+      .send(payload)
+    expect(none.status).toBe(400)
+    expect(await orders(quote.id)).toHaveLength(0)
+    expect((await customer.agent.get(`/api/quotes/${quote.id}`)).body.state).toBe('accepted')
+  })
+
+  it('ignores a correctly signed event whose amount differs from the session the server made', async () => {
+    const { quote, customer } = await rig.acceptedQuote()
+    const { body } = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)
+    const payload = JSON.stringify({
+      id: 'evt_cheap_' + body.sessionId,
+      object: 'event',
+      type: 'checkout.session.completed',
+      data: { object: { id: body.sessionId, amount_total: 100, payment_status: 'paid' } },
+    })
+    const header = stripe.webhooks.generateTestHeaderString({ payload, secret: 'whsec_rig' })
+    const res = await request(rig.t.app)
+      .post('/api/payments/webhook')
+      .set('content-type', 'application/json')
+      .set('stripe-signature', header)
+      .send(payload)
+    expect(res.status).toBe(200)
+    expect(res.body.outcome).toBe('ignored')
+    expect(await orders(quote.id)).toHaveLength(0)
+  })
+
+  it('leaves the quote payable with a new session after a decline or an expiry', async () => {
+    const { quote, customer } = await rig.acceptedQuote()
+    const first = (await customer.agent.post(`/api/quotes/${quote.id}/checkout`)).body
+    const declined = await rig.payOnPage(first.url, TEST_CARDS.declined)
+    expect(declined.status).toBe(402)
+    await fetch(`${rig.fake.url}/_fake/sessions/${first.sessionId}/expire`, { method: 'POST' })
+    expect(
+      (await rig.events()).data.some(
+        (e) => e.type === 'checkout.session.expired' && e.data.object.id === first.sessionId,
+      ),
+    ).toBe(true)
+    expect(await orders(quote.id)).toHaveLength(0)
+    const second = (await customer.agent.post(`/api/quotes/${quote.id}/checkout`)).body
+    expect(second.sessionId).not.toBe(first.sessionId)
+    expect((await rig.payOnPage(second.url)).status).toBe(303)
+    expect(await orders(quote.id)).toHaveLength(1)
+  })
+
+  it('does not make a session for another company’s quote, nor for sales', async () => {
+    const { quote } = await rig.acceptedQuote()
+    const { agent: stranger } = await signedIn(rig.t, 'customer')
+    expect((await stranger.post(`/api/quotes/${quote.id}/checkout`)).status).toBe(404)
+    expect((await rig.sales.post(`/api/quotes/${quote.id}/checkout`)).status).toBe(403)
+  })
+})

@@ -1,0 +1,104 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { mailTo, signedIn } from '../helpers/factories'
+import { makePaymentRig, type PaymentRig } from './payments-rig'
+
+let rig: PaymentRig
+beforeAll(async () => {
+  rig = await makePaymentRig()
+})
+afterAll(() => rig?.close())
+
+/** A paid quote and its work order, through the real checkout and webhook. */
+async function paidWorkOrder() {
+  const { quote, customer } = await rig.acceptedQuote()
+  const { body } = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)
+  await rig.payOnPage(body.url)
+  const { agent } = await signedIn(rig.t, 'production')
+  const list = (await agent.get('/api/work-orders')).body as { id: number; quoteId: number }[]
+  const wo = list.find((w) => w.quoteId === quote.id)!
+  return { agent, customer, quote, wo: (await agent.get(`/api/work-orders/${wo.id}`)).body }
+}
+
+describe('work orders', () => {
+  it('freezes the paid specification with a hash that later sizing edits do not change', async () => {
+    const { agent, wo } = await paidWorkOrder()
+    expect(wo.state).toBe('queued')
+    expect(wo.specHash).toMatch(/^[0-9a-f]{64}$/)
+    // the sizing source now answers different absorber values for the same sizing id
+    const quote = (await rig.sales.get(`/api/quotes/${wo.quoteId}`)).body
+    const changed = { ...quote.sizing, absorber: { ...quote.sizing.absorber, frequencyHz: 9.9 } }
+    rig.sizings.put(changed)
+    const again = (await agent.get(`/api/work-orders/${wo.id}`)).body
+    expect(again.specHash).toBe(wo.specHash)
+    expect(again.specification.targetFrequencyHz).toBeCloseTo(6.75, 9)
+  })
+
+  it('refuses a skipped step and a step back without a reason', async () => {
+    const { agent, wo } = await paidWorkOrder()
+    const skip = await agent.post(`/api/work-orders/${wo.id}/state`).send({ to: 'tuning' })
+    expect(skip.status).toBe(409)
+    expect(skip.body.error.code).toBe('step-not-allowed')
+    await agent.post(`/api/work-orders/${wo.id}/state`).send({ to: 'in-build' }).expect(200)
+    const back = await agent.post(`/api/work-orders/${wo.id}/state`).send({ to: 'queued' })
+    expect(back.body.error.code).toBe('reason-required')
+    const withReason = await agent
+      .post(`/api/work-orders/${wo.id}/state`)
+      .send({ to: 'queued', note: 'spring batch rejected' })
+    expect(withReason.body.state).toBe('queued')
+  })
+
+  it('blocks shipping after an out-of-tolerance tuning until a new measurement passes, then mails the customer', async () => {
+    const { agent, wo, customer } = await paidWorkOrder()
+    for (const to of ['in-build', 'tuning'])
+      await agent.post(`/api/work-orders/${wo.id}/state`).send({ to }).expect(200)
+    const target = wo.specification.targetFrequencyHz as number
+    const fail = await agent
+      .post(`/api/work-orders/${wo.id}/tuning`)
+      .send({ measuredHz: target * 1.05 })
+    expect(fail.body.latestTuning.passes).toBe(false)
+    expect(
+      (await agent.post(`/api/work-orders/${wo.id}/state`).send({ to: 'ready' })).body.error.code,
+    ).toBe('tuning-not-passed')
+    const pass = await agent
+      .post(`/api/work-orders/${wo.id}/tuning`)
+      .send({ measuredHz: target * 1.01 })
+    expect(pass.body.latestTuning.passes).toBe(true)
+    await agent.post(`/api/work-orders/${wo.id}/state`).send({ to: 'ready' }).expect(200)
+    const shipped = await agent.post(`/api/work-orders/${wo.id}/state`).send({ to: 'shipped' })
+    expect(shipped.body.state).toBe('shipped')
+    expect(shipped.body.events.filter((e: { kind: string }) => e.kind === 'tuning')).toHaveLength(2)
+    expect((await mailTo(rig.t, customer.user.email)).subject).toMatch(/shipped/)
+    expect(
+      (await customer.agent.get(`/api/quotes/${wo.quoteId}/order`)).body.order.workOrderState,
+    ).toBe('shipped')
+  })
+
+  it('lets only production and admin change work orders, and puts every change in the audit log', async () => {
+    const { agent, wo } = await paidWorkOrder()
+    for (const role of ['engineer', 'sales', 'customer'] as const) {
+      const { agent: other } = await signedIn(rig.t, role)
+      expect(
+        (await other.post(`/api/work-orders/${wo.id}/state`).send({ to: 'in-build' })).status,
+      ).toBe(403)
+    }
+    await agent.post(`/api/work-orders/${wo.id}/state`).send({ to: 'in-build' }).expect(200)
+    const { agent: admin } = await signedIn(rig.t, 'admin')
+    const audit = (await admin.get('/api/audit')).body as {
+      record: string
+      recordId: number
+      toState: string
+      actorName: string
+    }[]
+    expect(audit.filter((e) => e.record === 'work-order' && e.recordId === wo.id)).toEqual([
+      expect.objectContaining({
+        toState: 'in-build',
+        actorName: expect.stringMatching(/^production /),
+      }),
+    ])
+    const quoteTrail = audit.filter((e) => e.record === 'quote' && e.recordId === wo.quoteId)
+    expect(quoteTrail.map((e) => e.toState)).toEqual(
+      expect.arrayContaining(['sent', 'accepted', 'paid']),
+    )
+    expect((await agent.get('/api/audit')).status).toBe(403)
+  })
+})

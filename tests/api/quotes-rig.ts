@@ -1,0 +1,130 @@
+import { randomBytes } from 'node:crypto'
+import { pino } from 'pino'
+import { buildServices, createApp } from '../../server/app'
+import { smtpMailer } from '../../server/integrations/mail'
+import { closePdfRenderers } from '../../server/integrations/pdf'
+import { memorySizingSource } from '../../server/modules/quotes/sizing-source'
+import type { SizingPool } from '../../server/workers/pool'
+import type { SizingSummary } from '../../shared/schemas/sizing'
+import { seedCatalogue } from '../../seed/seed-catalogue'
+import { makeTestApp, type TestApp } from '../helpers/app'
+
+/** Quotes never solve a sizing; a call here would be a wiring mistake worth a loud failure. */
+const noSolving: SizingPool = {
+  run: () => Promise.reject(new Error('the quotes tests do not solve sizings')),
+  close: async () => undefined,
+}
+
+/**
+ * The test app rebuilt with sizings held in memory, so each test states the exact absorber
+ * values its hand-checked prices rest on, and with the demo catalogue loaded.
+ */
+export async function makeQuoteApp(extraEnv: Record<string, string> = {}) {
+  const t: TestApp = await makeTestApp(extraEnv)
+  const sizings = memorySizingSource()
+  const deps = {
+    config: t.config,
+    dataSource: t.ds,
+    mailer: smtpMailer(t.config),
+    logger: pino({ level: 'silent' }),
+    now: () => new Date(Date.now() + t.clock.offsetMs),
+    pool: noSolving,
+    sizingSource: sizings,
+  }
+  t.app = createApp(deps)
+  t.services = buildServices(deps)
+  await seedCatalogue(t.services)
+  const close = t.close
+  t.close = async () => {
+    await closePdfRenderers()
+    await close()
+  }
+  return { t, sizings }
+}
+
+let nextId = 900_000
+
+/**
+ * An invented submitted sizing of an office floor: mode 1 at 6.9 Hz, 10 t modal mass, a
+ * 212.4 kg vertical absorber at 6.75 Hz with ζ 0.09 (k = m ω², c = 2 ζ m ω).
+ */
+export function sizingSummary(companyId: number, overrides: Partial<SizingSummary> = {}) {
+  const mass = 212.4
+  const omega = 2 * Math.PI * 6.75
+  const f = Array.from({ length: 41 }, (_, i) => 5 + i * 0.1)
+  const s: SizingSummary = {
+    id: nextId++,
+    revision: 1,
+    title: 'Level 3 office floor, walking',
+    state: 'submitted',
+    siteId: 1,
+    siteName: 'Harbour Row offices, level 3',
+    companyId,
+    companyName: 'customer',
+    ownerName: 'Field engineer',
+    targetMode: 1,
+    hostFrequencyHz: 6.9,
+    effectiveMass: 10_000,
+    orientation: 'vertical',
+    absorber: {
+      mass,
+      stiffness: mass * omega * omega,
+      damping: 2 * 0.09 * mass * omega,
+      frequencyHz: 6.75,
+      frequencyRatio: 6.75 / 6.9,
+      dampingRatio: 0.09,
+    },
+    stroke: 0.009,
+    staticDeflection: 9.81 / (omega * omega),
+    reduction: 6.2,
+    acceptance: {
+      label: 'Office floor',
+      quantity: 'acceleration',
+      limit: 0.05,
+      responseWith: 0.03,
+      passes: true,
+    },
+    chart: {
+      frequencyHz: f,
+      without: f.map((x) => 1 / Math.abs(1 - (x / 6.9) ** 2 + 0.02)),
+      with: f.map((x) => 1 / (Math.abs(1 - (x / 6.9) ** 2) + 0.25)),
+    },
+    submittedAt: '2026-01-05T10:00:00.000Z',
+    handoverNote: '',
+    ...overrides,
+  }
+  return s
+}
+
+/** A date n days from the test clock's today, YYYY-MM-DD. */
+export function daysFromNow(t: TestApp, n: number) {
+  return new Date(Date.now() + t.clock.offsetMs + n * 86_400_000).toISOString().slice(0, 10)
+}
+
+type AgentLike = import('supertest').Agent
+
+/** A fresh customer company with one contact, made through the API as sales would. */
+export async function customerWithContact(agent: AgentLike) {
+  const tag = randomBytes(3).toString('hex')
+  const company = await agent
+    .post('/api/customers')
+    .send({ name: `Quay Client ${tag}`, address: '2 Dock Rd' })
+  if (company.status !== 201) throw new Error(`customer: ${JSON.stringify(company.body)}`)
+  const contact = await agent
+    .post(`/api/customers/${company.body.id}/contacts`)
+    .send({ name: 'Dana Whitlock', email: `dana-${tag}@client.test`, position: 'Project manager' })
+  if (contact.status !== 201) throw new Error(`contact: ${JSON.stringify(contact.body)}`)
+  return {
+    company: company.body as { id: number; name: string },
+    contact: contact.body as { id: number; email: string },
+  }
+}
+
+/** Catalogue ids by code, for building lines. */
+export async function catalogueIds(agent: AgentLike) {
+  const lines = (await agent.get('/api/catalogue/lines')).body as { id: number; code: string }[]
+  const options = (await agent.get('/api/catalogue/options')).body as { id: number; code: string }[]
+  const unit = (code: string) => lines.find((l) => l.code === code)!.id
+  const option = (code: string) => options.find((o) => o.code === code)!.id
+  return { unit, option }
+}

@@ -1,0 +1,171 @@
+import { execFile } from 'node:child_process'
+import { mkdtemp, writeFile } from 'node:fs/promises'
+import { tmpdir } from 'node:os'
+import path from 'node:path'
+import { promisify } from 'node:util'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import type { Agent } from 'supertest'
+import { toModelInput } from '../../shared/sizing/model-input'
+import { makeTestApp, type TestApp } from '../helpers/app'
+import { signedIn } from '../helpers/factories'
+import { buildingDefinition, makeCompany, siteBody, sizingInput } from '../helpers/records'
+
+let t: TestApp
+beforeAll(async () => {
+  t = await makeTestApp()
+})
+afterAll(() => t.close())
+
+async function siteAndModel(agent: Agent) {
+  const site = (
+    await agent
+      .post('/api/sites')
+      .send(siteBody((await makeCompany(t)).id, { structureKind: 'building' }))
+  ).body
+  const model = await agent
+    .post('/api/models')
+    .send({ siteId: site.id, name: 'Five storeys', definition: buildingDefinition() })
+  expect(model.status).toBe(201)
+  return { site, model: model.body }
+}
+
+describe('models', () => {
+  it('refuses a model with a floating node, naming the field, and saves nothing', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const site = (await agent.post('/api/sites').send(siteBody((await makeCompany(t)).id))).body
+    const definition = buildingDefinition()
+    definition.nodes.push({ id: 'loose', mass: 10 })
+    const res = await agent
+      .post('/api/models')
+      .send({ siteId: site.id, name: 'Broken', definition })
+    expect(res.status).toBe(400)
+    expect(res.body.error.code).toBe('invalid-model')
+    expect(res.body.error.details[0].path).toMatch(/^body\.definition\.nodes/)
+    expect((await agent.get('/api/models').query({ siteId: site.id })).body).toEqual([])
+  })
+
+  it('makes one revision from two identical saves of the same base', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const { model } = await siteAndModel(agent)
+    const definition = { ...buildingDefinition(), hostDampingRatio: 0.02 }
+    const body = { baseRevision: 1, definition, reason: 'measured damping' }
+    const first = await agent.post(`/api/models/${model.id}/revisions`).send(body)
+    const second = await agent.post(`/api/models/${model.id}/revisions`).send(body)
+    expect(first.body.currentRevision).toBe(2)
+    expect(second.body.currentRevision).toBe(2)
+    expect(second.body.revisions).toHaveLength(2)
+    const stale = await agent
+      .post(`/api/models/${model.id}/revisions`)
+      .send({ ...body, definition: buildingDefinition() })
+    expect(stale.status).toBe(409)
+  })
+})
+
+describe('sizings', () => {
+  it('solves on the server and stores the result with the reduction and the checks', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const { site, model } = await siteAndModel(agent)
+    const res = await agent.post('/api/sizings').send({ input: sizingInput(site.id, model.id) })
+    expect(res.status).toBe(201)
+    expect(res.body.revision).toBe(1)
+    expect(res.body.state).toBe('draft')
+    const r = res.body.evaluation.result
+    expect(r.modes).toHaveLength(5)
+    expect(r.absorber.mass).toBeCloseTo(0.02 * r.effectiveMass, 6)
+    expect(r.peak.reductionFactor).toBeGreaterThan(2)
+    expect(res.body.summary.acceptance).toMatchObject({ quantity: 'acceleration', limit: 0.15 })
+    expect(res.body.evaluation.sweep.length).toBeGreaterThan(3)
+    expect(res.body.evaluation.robustness.curve.length).toBe(21)
+  })
+
+  it('stores the same result as the solve command line for the same model', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const { site, model } = await siteAndModel(agent)
+    const input = sizingInput(site.id, model.id, { tuning: 'den-hartog' })
+    const saved = (await agent.post('/api/sizings').send({ input })).body
+    const dir = await mkdtemp(path.join(tmpdir(), 'qn-'))
+    const file = path.join(dir, 'model.json')
+    await writeFile(file, JSON.stringify(toModelInput(buildingDefinition(), saved.input)))
+    const { stdout } = await promisify(execFile)('npx', ['tsx', 'server/scripts/solve.ts', file], {
+      cwd: process.cwd(),
+    })
+    expect(JSON.parse(stdout)).toEqual(JSON.parse(JSON.stringify(saved.evaluation.result)))
+  })
+
+  it('refuses a sizing whose absorber node does not exist, naming the field, and saves nothing', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const { site, model } = await siteAndModel(agent)
+    const res = await agent
+      .post('/api/sizings')
+      .send({ input: sizingInput(site.id, model.id, { absorberNode: 'attic' }) })
+    expect(res.status).toBe(400)
+    expect(res.body.error.details[0].path).toBe('body.input.absorberNode')
+    expect((await agent.get('/api/sizings').query({ siteId: site.id })).body).toEqual([])
+  })
+
+  it('does not let an engineer change another engineer’s sizing', async () => {
+    const { agent: owner } = await signedIn(t, 'engineer')
+    const { agent: other } = await signedIn(t, 'engineer')
+    const { site, model } = await siteAndModel(owner)
+    const s = (await owner.post('/api/sizings').send({ input: sizingInput(site.id, model.id) }))
+      .body
+    const res = await other
+      .put(`/api/sizings/${s.id}`)
+      .send({ baseRevision: 1, input: sizingInput(site.id, model.id, { massRatio: 0.05 }) })
+    expect([403, 404]).toContain(res.status)
+    expect((await owner.get(`/api/sizings/${s.id}`)).body.revision).toBe(1)
+  })
+
+  it('keeps sizings from customers and production', async () => {
+    for (const role of ['customer', 'production'] as const) {
+      const { agent } = await signedIn(t, role)
+      expect((await agent.get('/api/sizings')).status).toBe(403)
+    }
+  })
+
+  it('makes one revision from two saves of the same base revision', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const { site, model } = await siteAndModel(agent)
+    const s = (await agent.post('/api/sizings').send({ input: sizingInput(site.id, model.id) }))
+      .body
+    const body = { baseRevision: 1, input: sizingInput(site.id, model.id, { massRatio: 0.03 }) }
+    const [a, b] = await Promise.all([
+      agent.put(`/api/sizings/${s.id}`).send(body),
+      agent.put(`/api/sizings/${s.id}`).send(body),
+    ])
+    expect(a.status).toBe(200)
+    expect(b.status).toBe(200)
+    expect(a.body.revision).toBe(2)
+    expect(b.body.revision).toBe(2)
+    const list = (await agent.get('/api/sizings').query({ siteId: site.id })).body
+    expect(list[0].revision).toBe(2)
+  })
+
+  it('hands a sizing to sales, who then sees it, and makes it read-only until reopened', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const { agent: sales } = await signedIn(t, 'sales')
+    const { site, model } = await siteAndModel(agent)
+    const s = (await agent.post('/api/sizings').send({ input: sizingInput(site.id, model.id) }))
+      .body
+    expect((await sales.get(`/api/sizings/${s.id}`)).status).toBe(404)
+    const sub = await agent
+      .post(`/api/sizings/${s.id}/submit`)
+      .send({ revision: 1, note: 'Roof unit, access by the plant room' })
+    expect(sub.body.state).toBe('submitted')
+    const seen = await sales.get(`/api/sizings/${s.id}`)
+    expect(seen.status).toBe(200)
+    expect(seen.body.handoverNote).toBe('Roof unit, access by the plant room')
+    const edit = await agent
+      .put(`/api/sizings/${s.id}`)
+      .send({ baseRevision: 1, input: sizingInput(site.id, model.id, { massRatio: 0.04 }) })
+    expect(edit.status).toBe(409)
+    expect(
+      (
+        await sales
+          .put(`/api/sizings/${s.id}`)
+          .send({ baseRevision: 1, input: sizingInput(site.id, model.id) })
+      ).status,
+    ).toBe(403)
+    expect((await agent.post(`/api/sizings/${s.id}/reopen`)).body.state).toBe('draft')
+  })
+})

@@ -1,0 +1,76 @@
+import { afterAll, beforeAll, expect, it } from 'vitest'
+import puppeteer, { type Browser, type Page } from 'puppeteer-core'
+import { PASSWORD, makeUser } from '../helpers/factories'
+import { newPage, shot, signInAs } from '../helpers/browser'
+import { makePaymentRig, type PaymentRig } from '../api/payments-rig'
+
+let rig: PaymentRig
+let browser: Browser
+beforeAll(async () => {
+  rig = await makePaymentRig({ CLIENT_DIR: 'dist/client' })
+  browser = await puppeteer.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    headless: true,
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-dev-shm-usage',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+    ],
+  })
+})
+afterAll(async () => {
+  await browser?.close()
+  await rig?.close()
+})
+
+async function move(page: Page, to: string) {
+  await page.locator(`button ::-p-text(Move to ${to})`).click()
+  await page.waitForSelector(`::-p-text(→ ${to})`)
+}
+
+it('takes a paid order through build and tuning to shipping, and the customer sees it shipped', async () => {
+  const { quote, customer } = await rig.acceptedQuote()
+  const { body } = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)
+  await rig.payOnPage(body.url)
+  const builder = await makeUser(rig.t, 'production')
+  const page = await newPage({ browser })
+  await signInAs(page, rig.appUrl, builder.email, PASSWORD)
+  await page.goto(`${rig.appUrl}/work-orders`)
+  await page.waitForSelector('a[href^="/work-orders/"]')
+  await shot(page, 'production-1-queue')
+  const links = await page.$$eval('a[href^="/work-orders/"]', (as) =>
+    as.map((a) => a.getAttribute('href')),
+  )
+  const wo = (await rig.t.services.production.list()).find((w) => w.quoteId === quote.id)!
+  expect(links).toContain(`/work-orders/${wo.id}`)
+  await page.goto(`${rig.appUrl}/work-orders/${wo.id}`)
+  await move(page, 'in-build')
+  await move(page, 'tuning')
+  const target = wo.specification.targetFrequencyHz
+  await page.locator('#measured-hz').fill(target.toFixed(3))
+  await page.locator('button ::-p-text(Record measurement)').click()
+  await page.waitForSelector('::-p-text(within tolerance)')
+  await shot(page, 'production-2-tuned')
+  await move(page, 'ready')
+  await move(page, 'shipped')
+  await shot(page, 'production-3-shipped')
+  await page.browserContext().close()
+
+  const portal = await newPage({ browser })
+  await signInAs(portal, rig.appUrl, customer.user.email, PASSWORD)
+  await portal.goto(`${rig.appUrl}/portal/quotes/${quote.id}`)
+  await portal.waitForSelector('::-p-text(production: shipped)')
+  await shot(portal, 'production-4-customer-sees-shipped')
+  const mailbox = (await (await fetch(`${rig.t.mail.httpUrl}/api/messages`)).json()) as {
+    subject: string
+    to: string[]
+  }[]
+  expect(
+    mailbox.some((m) => /shipped/.test(m.subject) && m.to.join().includes(customer.user.email)),
+  ).toBe(true)
+  await portal.browserContext().close()
+})

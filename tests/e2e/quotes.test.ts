@@ -1,0 +1,85 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { toAuthUser } from '../../server/modules/auth/auth.service'
+import { closePdfRenderers } from '../../server/integrations/pdf'
+import { seedPeople } from '../../seed/seed-people'
+import { DEMO_OFFICE_SIZING, seedSizings } from '../../seed/seed-sizings'
+import { seedCatalogue } from '../../seed/seed-catalogue'
+import { DEMO_USERS } from '../../seed/demo-people'
+import {
+  LANDSCAPE,
+  newPage,
+  shot,
+  signInAs,
+  startBrowserRig,
+  type BrowserRig,
+} from '../helpers/browser'
+
+let rig: BrowserRig
+let sizingId: number
+beforeAll(async () => {
+  rig = await startBrowserRig()
+  const s = rig.t.services
+  const { companyIds } = await seedPeople(s)
+  await seedSizings(s, { companyIds })
+  await seedCatalogue(s)
+  const admin = toAuthUser((await s.users.findByEmail('admin@quellnode.test'))!)
+  const [demo] = await s.sizings.list(admin, { search: DEMO_OFFICE_SIZING })
+  sizingId = demo!.id
+})
+afterAll(async () => {
+  await closePdfRenderers()
+  await rig?.close()
+})
+
+const sales = DEMO_USERS.find((u) => u.role === 'sales')!
+
+/** Clicks the first button whose visible text is exactly `label`. */
+async function clickButton(page: Awaited<ReturnType<typeof newPage>>, label: string) {
+  const button = await page.waitForSelector(`::-p-xpath(//button[normalize-space(.)="${label}"])`)
+  await button!.click()
+}
+
+describe('sales quote the demo sizing in Chromium on a tablet', () => {
+  it('builds a quote with one unit and one option, sends it, and the mail reaches the mailbox', async () => {
+    const page = await newPage(rig)
+    await signInAs(page, rig.url, sales.email, sales.password)
+    await page.locator('nav[aria-label="Main"] a ::-p-text(Quotes)').click()
+    await page.waitForSelector('h1 ::-p-text(Quotes)')
+    await clickButton(page, 'New quote')
+    await page.locator('#sizing-no').fill(String(sizingId))
+    await clickButton(page, 'Open sizing')
+    await page.waitForSelector(`::-p-text(${DEMO_OFFICE_SIZING})`)
+    // The first unit offered is one the matcher found able to carry the sizing.
+    const add = await page.waitForSelector(
+      'section[aria-label="Units that can carry the sizing"] button',
+    )
+    const unitLabel = await add!.evaluate((b) => b.textContent?.trim() ?? '')
+    expect(unitLabel).toMatch(/^Add [A-Z0-9-]+$/)
+    await add!.click()
+    await page.locator('#add-option').click()
+    await page.locator('li[role="option"] ::-p-text(Site tuning visit)').click()
+    await clickButton(page, 'Add option')
+    await page.waitForSelector('section[aria-label="Quote lines"] li:nth-child(2)')
+    await shot(page, 'quotes-1-builder')
+    await clickButton(page, 'Save draft')
+    await page.waitForSelector('[data-state="draft"]')
+    const heading = await page.$eval('h1', (h) => h.textContent ?? '')
+    const number = /TDW-\d{4}-\d{4}/.exec(heading)?.[0]
+    expect(number).toBeDefined()
+    expect(await page.$$eval('[aria-label="Quote lines"] tbody tr', (r) => r.length)).toBe(2)
+    await clickButton(page, 'Send to customer')
+    await page.waitForSelector('[data-state="sent"]')
+    await shot(page, 'quotes-2-sent')
+
+    const box = await newPage(rig, LANDSCAPE)
+    await box.goto(rig.t.mail.httpUrl)
+    await box.waitForSelector(`::-p-text(Quotation ${number})`)
+    const caught = rig.t.mail.messages().find((m) => m.subject.includes(number!))
+    expect(caught?.to.join(',')).toContain('customer@marlowquay.test')
+    expect(caught?.attachments[0]?.contentType).toBe('application/pdf')
+    expect(caught?.text).toContain(`${rig.url}/portal/quotes/`)
+    await shot(box, 'quotes-3-mailbox')
+    await page.browserContext().close()
+    await box.browserContext().close()
+  })
+})

@@ -1,0 +1,121 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import type { Page } from 'puppeteer-core'
+import { makeUser, PASSWORD } from '../helpers/factories'
+import { makeCompany } from '../helpers/records'
+import {
+  LANDSCAPE,
+  newPage,
+  PORTRAIT,
+  shot,
+  signInAs,
+  startBrowserRig,
+  type BrowserRig,
+} from '../helpers/browser'
+
+let rig: BrowserRig
+beforeAll(async () => {
+  rig = await startBrowserRig()
+})
+afterAll(() => rig?.close())
+
+/** Opens a PrimeVue Select by its input id and picks the option that starts with the text. */
+async function choose(page: Page, inputId: string, option: string) {
+  await page.locator(`#${inputId}`).click()
+  await page.locator(`li[role="option"][aria-label^="${option}"]`).click()
+}
+
+/** Clicks the stepper's step button (role tab) whose text names the step. */
+async function openStep(page: Page, name: string) {
+  const tabs = await page.$$('button[role="tab"]')
+  for (const t of tabs) {
+    if ((await t.evaluate((e) => e.textContent ?? '')).includes(name)) return t.click()
+  }
+  throw new Error(`no step ${name}`)
+}
+
+async function text(page: Page) {
+  return page.$eval('main', (m) => m.textContent ?? '')
+}
+
+async function waitForText(page: Page, needle: string) {
+  await page.waitForFunction(
+    (n) => document.querySelector('main')?.textContent?.includes(n),
+    {},
+    needle,
+  )
+}
+
+describe.each([
+  ['portrait', PORTRAIT],
+  ['landscape', LANDSCAPE],
+])('the sizing workspace on a %s tablet, in Chromium', (tag, viewport) => {
+  it('takes an engineer from a new site to a sizing handed over to sales', async () => {
+    const engineer = await makeUser(rig.t, 'engineer')
+    const company = await makeCompany(rig.t)
+    const page = await newPage(rig, viewport)
+    await signInAs(page, rig.url, engineer.email, PASSWORD)
+
+    await page.goto(`${rig.url}/sites`)
+    await page.locator('::-p-aria([name="New site"][role="button"])').click()
+    await page.locator('#site-name').fill(`Five-storey block ${tag}`)
+    await choose(page, 'site-company', company.name)
+    await choose(page, 'site-kind', 'building')
+    await shot(page, `sizing-${tag}-0-site`)
+    await page.locator('::-p-aria([name="Save site"][role="button"])').click()
+    await page.waitForFunction(() => /\/sites\/\d+$/.test(location.pathname))
+    await page.locator('::-p-aria([name="New sizing"][role="button"])').click()
+
+    // Step 1: five storeys from the template, saved as the site's model.
+    await page.locator('#sizing-title').fill('Roof sway absorber')
+    await choose(page, 'tpl-kind', 'Shear building')
+    await page.locator('::-p-aria([name="Build from template"][role="button"])').click()
+    await page.waitForSelector('::-p-aria([name="Node storey-5"])')
+    await page.locator('::-p-aria([name="Save structure"][role="button"])').click()
+    await waitForText(page, 'Saved as model revision 1')
+    await shot(page, `sizing-${tag}-1-structure`)
+
+    // Step 3: mode 1, with the attachment suggested at the roof (largest |φ| of mode 1).
+    await openStep(page, 'Target')
+    await page.waitForSelector('#mode-1:checked')
+    await page.waitForSelector('[aria-label="Mode shape chart"] .apexcharts-series path')
+    await waitForText(page, 'Largest |φ| of mode 1: storey-5')
+    expect(await page.$eval('#absorber-node', (e) => e.textContent)).toContain('storey-5')
+    await shot(page, `sizing-${tag}-3-target`)
+
+    // Step 4: 2 % of the effective mass.
+    await openStep(page, 'Absorber')
+    await page.locator('::-p-aria([name="Mass ratio"][role="textbox"])').fill('2 %')
+    await waitForText(page, 'Mass ratio: 2 %')
+    await page.waitForSelector('[aria-label^="Frequency response"] .apexcharts-series path')
+    await page.waitForSelector('[aria-label^="Achievable reduction"] .apexcharts-series path')
+    await shot(page, `sizing-${tag}-4-absorber`)
+
+    // Step 5: the live preview's reduction.
+    await openStep(page, 'Results')
+    await waitForText(page, 'Reduction')
+    await page.waitForSelector('[aria-label="Detuning robustness"] .apexcharts-series path')
+    const preview = /peak ÷ (\d+\.\d\d)/.exec(await text(page))?.[1]
+    expect(Number(preview)).toBeGreaterThan(1)
+    await shot(page, `sizing-${tag}-5-results`)
+
+    // Step 6: saved on the server, then handed over to sales.
+    await openStep(page, 'Hand over')
+    await page.locator('::-p-aria([name="Save sizing"][role="button"])').click()
+    await waitForText(page, 'Saved as revision 1, computed on the server')
+    await page.waitForFunction(() => /\/sizings\/\d+$/.test(location.pathname))
+    const id = Number(/\/sizings\/(\d+)$/.exec(page.url())?.[1])
+    const stored = await rig.t.services.sizings.summary(id)
+    // The server's solve and the browser's preview are the same function on the same input.
+    expect(stored.reduction?.toFixed(2)).toBe(preview)
+    expect(stored.absorber.mass).toBeCloseTo(0.02 * stored.effectiveMass, 6)
+    await shot(page, `sizing-${tag}-6-saved`)
+    await page.locator('#handover-note').fill('Roof access by the east stair.')
+    await page.locator('::-p-aria([name="Submit to sales"][role="button"])').click()
+    await waitForText(page, 'Handed over to sales')
+    await page.waitForSelector('::-p-aria([name="Reopen to revise"][role="button"])')
+    expect((await rig.t.services.sizings.summary(id)).state).toBe('submitted')
+    expect(await page.$eval('#sizing-title', (e) => (e as HTMLInputElement).disabled)).toBe(true)
+    await shot(page, `sizing-${tag}-7-handed-over`)
+    await page.browserContext().close()
+  })
+})
