@@ -98,6 +98,7 @@ export function buildServices(deps: AppDeps) {
     quotes: commerce.quotes,
     users,
     mailer: deps.mailer,
+    pdf: commerce.pdf,
     now,
   })
   const payments = paymentsService({

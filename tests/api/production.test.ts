@@ -1,3 +1,4 @@
+import { execFileSync } from 'node:child_process'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { mailTo, signedIn } from '../helpers/factories'
 import { makePaymentRig, type PaymentRig } from './payments-rig'
@@ -100,5 +101,25 @@ describe('work orders', () => {
       expect.arrayContaining(['sent', 'accepted', 'paid']),
     )
     expect((await agent.get('/api/audit')).status).toBe(403)
+  })
+
+  it('prints the work order as a PDF with its target frequency and the safety note', async () => {
+    const { agent, wo } = await paidWorkOrder()
+    const res = await agent
+      .get(`/api/work-orders/${wo.id}/pdf`)
+      .buffer(true)
+      .parse((r, cb) => {
+        const chunks: Buffer[] = []
+        r.on('data', (c: Buffer) => chunks.push(c))
+        r.on('end', () => cb(null, Buffer.concat(chunks)))
+      })
+    expect(res.status).toBe(200)
+    const pdf = res.body as Buffer
+    expect(pdf.subarray(0, 5).toString()).toBe('%PDF-')
+    // pdftotext from Debian's poppler-utils
+    const text = execFileSync('pdftotext', ['-', '-'], { input: pdf }).toString()
+    expect(text).toContain(wo.number)
+    expect(text).toContain('6.75 Hz')
+    expect(text).toMatch(/licensed engineer/)
   })
 })

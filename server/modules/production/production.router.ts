@@ -69,6 +69,27 @@ export function productionRouter(api: ApiRegistry, production: ProductionService
     api,
     {
       method: 'get',
+      path: '/api/work-orders/:id/pdf',
+      tag,
+      summary: 'The work order as a PDF for the workshop',
+      access: BUILDERS,
+      params: IdParamSchema,
+      produces: 'application/pdf',
+    },
+    async ({ params, res }) => {
+      const { filename, bytes } = await production.pdf(params.id)
+      res
+        .type('application/pdf')
+        .set('content-disposition', `inline; filename="${filename}"`)
+        .send(bytes)
+      return undefined
+    },
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'get',
       path: '/api/audit',
       tag: 'Audit',
       summary: 'Every work-order change and measurement',

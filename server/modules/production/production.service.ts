@@ -7,6 +7,8 @@ import type { QuotesService } from '../quotes/quotes.service'
 import type { UsersRepository } from '../users/users.repository'
 import type { ProductionRepository } from './production.repository'
 import { buildSpecification, specificationHash } from './specification'
+import { inlineFontCss, type PdfRenderer } from '../../integrations/pdf'
+import { workOrderHtml } from './work-order-html'
 
 const SYSTEM: AuthUser = {
   id: 0,
@@ -22,6 +24,7 @@ export function productionService(deps: {
   quotes: QuotesService
   users: UsersRepository
   mailer: Mailer
+  pdf: PdfRenderer
   now: () => Date
 }) {
   async function get(id: number) {
@@ -112,6 +115,15 @@ export function productionService(deps: {
     },
 
     audit: () => deps.repo.audit(),
+
+    /** The workshop sheet as a PDF. */
+    async pdf(id: number) {
+      const w = await get(id)
+      return {
+        filename: `${w.number}.pdf`,
+        bytes: await deps.pdf.render(workOrderHtml(w, inlineFontCss())),
+      }
+    },
   }
 
   async function notifyShipped(companyId: number, reference: string, number: string) {
