@@ -1,26 +1,14 @@
 import { afterAll, beforeAll, expect, it } from 'vitest'
-import puppeteer, { type Browser, type Page } from 'puppeteer-core'
+import type { Browser, Page } from 'puppeteer-core'
 import { PASSWORD, makeUser } from '../helpers/factories'
-import { newPage, shot, signInAs } from '../helpers/browser'
+import { launchBrowser, newPage, shot, signInAs } from '../helpers/browser'
 import { makePaymentRig, type PaymentRig } from '../api/payments-rig'
 
 let rig: PaymentRig
 let browser: Browser
 beforeAll(async () => {
   rig = await makePaymentRig({ CLIENT_DIR: 'dist/client' })
-  browser = await puppeteer.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    headless: true,
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-dev-shm-usage',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-      '--no-first-run',
-    ],
-  })
+  browser = await launchBrowser()
 })
 afterAll(async () => {
   await browser?.close()

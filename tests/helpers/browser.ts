@@ -9,6 +9,24 @@ export const SHOTS_DIR = path.resolve('.local/screenshots')
 export const PORTRAIT = { width: 820, height: 1180 }
 export const LANDSCAPE = { width: 1180, height: 820 }
 
+/** Debian's Chromium, headless, without the background calls a closed network refuses. */
+export function launchBrowser(): Promise<Browser> {
+  return puppeteer.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    headless: true,
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-dev-shm-usage',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+      '--mute-audio',
+    ],
+  })
+}
+
 export interface BrowserRig {
   t: TestApp
   url: string
@@ -24,20 +42,8 @@ export async function startBrowserRig(extraEnv: Record<string, string> = {}): Pr
   })
   const url = `http://127.0.0.1:${(server.address() as AddressInfo).port}`
   t.config.publicUrl = url
-  const browser = await puppeteer.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    headless: true,
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-dev-shm-usage',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-      '--no-first-run',
-      '--mute-audio',
-    ],
-  })
+  const browser = await launchBrowser()
+
   mkdirSync(SHOTS_DIR, { recursive: true })
   return {
     t,
