@@ -46,13 +46,15 @@ export function paymentsService(deps: PaymentsDeps) {
     if (!session || s.payment_status !== 'paid' || s.amount_total !== session.amount)
       return 'ignored'
     const paidAt = deps.now()
+    // read once: company and reference do not change when the quote is marked paid
+    const q = await deps.quotes.forPayment(session.quoteId)
     const result = await deps.payments.applyOnce(
       { id: event.id, type: event.type, sessionId: s.id },
       async (em) => {
         await deps.payments.markSessionComplete(em, s.id)
         return deps.payments.createOrderOnce(em, {
           quoteId: session.quoteId,
-          companyId: (await deps.quotes.forPayment(session.quoteId)).companyId,
+          companyId: q.companyId,
           sessionId: s.id,
           amount: session.amount,
           currency: session.currency,
@@ -64,7 +66,6 @@ export function paymentsService(deps: PaymentsDeps) {
     if (!result.value) return 'already-ordered'
     const quote = await deps.quotes.markPaid(session.quoteId, paidAt).catch(() => null)
     const order = (await deps.payments.orderForQuote(session.quoteId)) as OrderRecord
-    const q = await deps.quotes.forPayment(session.quoteId)
     await deps.onOrderPaid(order)
     await mailPaidOrder(
       deps.mailer,
