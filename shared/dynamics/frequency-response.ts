@@ -2,8 +2,7 @@ import type { ModelInput } from '../schemas/model'
 import { absorberAt, type AbsorberPoint } from './absorber-response'
 import { ModelError } from './errors'
 import { hostReceptance } from './host-receptance'
-import { sizingContext } from './sizing-context'
-import { sizeAbsorber } from './solve-sizing'
+import { prepareSizing, type PreparedSizing } from './size-absorber'
 
 /** Magnitudes of one response curve: receptance, mobility (×ω), accelerance (×ω²). */
 export interface ResponseCurve {
@@ -59,12 +58,14 @@ function put(c: ResponseCurve, k: number, w: number, re: number, im: number): vo
  * receptance (standard definitions, e.g. Ewins, Modal Testing).
  * @param model the model
  * @param options grid, see ResponseOptions
+ * @param prepared the model's context and sized absorber when already computed
  */
 export function frequencyResponse(
   model: ModelInput,
   options: ResponseOptions = {},
+  prepared: PreparedSizing = prepareSizing(model),
 ): FrequencyResponse {
-  const ctx = sizingContext(model)
+  const { ctx, sized } = prepared
   const { points = 400 } = options
   const lo = 2 * Math.PI * (options.minHz ?? ctx.band.min / (2 * Math.PI))
   const hi = 2 * Math.PI * (options.maxHz ?? ctx.band.max / (2 * Math.PI))
@@ -75,8 +76,7 @@ export function frequencyResponse(
     { length: points },
     (_, i) => lo * (hi / lo) ** (i / (points - 1)),
   )
-  const rec = hostReceptance(ctx.prep, ctx.nodes, omega)
-  const sized = sizeAbsorber(ctx)
+  const rec = hostReceptance(ctx.prep, ctx.vectors, omega)
   const without = curve(points)
   const withAbsorber = sized ? curve(points) : null
   const stroke: number[] | null = sized ? new Array(points) : null

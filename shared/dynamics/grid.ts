@@ -28,21 +28,27 @@ export interface GridOptions {
   focusPoints?: number
   /** half-width of the dense zone as a fraction of ω_target (default 0.4) */
   focus?: number
+  /** frequencies that must be grid points when inside the band (rad/s): the host's natural
+   * frequencies, so that no lightly damped resonance falls between grid points */
+  include?: ArrayLike<number>
 }
 
 /**
  * A sorted grid over a band, log-spaced overall and dense near the target frequency, where the
- * split peaks of a tuned absorber lie (at ω_r(1 ± ~√(μ/2)), Den Hartog 1956).
+ * split peaks of a tuned absorber lie (at ω_r(1 ± ~√(μ/2)), Den Hartog 1956), with the given
+ * natural frequencies added. Both band edges are grid points.
  * @param band rad/s
  * @param target ω of the target mode, rad/s
  * @param options point counts, see GridOptions
  * @returns rad/s, ascending, without duplicates
  */
 export function frequencyGrid(band: Band, target: number, options: GridOptions = {}): Float64Array {
-  const { logPoints = 160, focusPoints = 320, focus = 0.4 } = options
-  const pts: number[] = []
+  const { logPoints = 160, focusPoints = 320, focus = 0.4, include = [] } = options
+  if (band.max <= band.min) return Float64Array.of(band.min)
+  const pts: number[] = [band.min, band.max]
   const ratio = band.max / band.min
-  for (let i = 0; i < logPoints; i++) pts.push(band.min * ratio ** (i / (logPoints - 1)))
+  for (let i = 1; i < logPoints - 1; i++) pts.push(band.min * ratio ** (i / (logPoints - 1)))
+  for (const w of Array.from(include)) if (w > band.min && w < band.max) pts.push(w)
   const lo = Math.max(band.min, target * (1 - focus))
   const hi = Math.min(band.max, target * (1 + focus))
   for (let i = 0; hi > lo && i < focusPoints; i++)

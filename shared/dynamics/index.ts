@@ -4,6 +4,7 @@
  */
 export { ModelError } from './errors'
 export { solveSizing } from './solve-sizing'
+export { prepareSizing, type PreparedSizing, type SizedAbsorber } from './size-absorber'
 export type * from './sizing-result'
 export { massRatioSweep, type SweepPoint } from './mass-ratio-sweep'
 export {

@@ -46,7 +46,7 @@ export function optimizeTuning(
   const { objective = 'hinf', zetaHost = 0, maxEvaluations = 300 } = options
   const cost = (t: Tuning): number => {
     const a = absorberValues(pb.mass, pb.omegaTarget, t)
-    return objective === 'hinf' ? peakWith(pb, a, { search: true }).value : meanSquareWith(pb, a)
+    return objective === 'hinf' ? peakWith(pb, a).value : meanSquareWith(pb, a)
   }
   const candidates = (options.starts ?? DEFAULT_STARTS[objective]).map((name) => {
     const t = closedForms[name].tune(mu, zetaHost)

@@ -29,7 +29,7 @@ export function resolveTuning(
   if (typeof tuning === 'object') {
     return { ...tuning, method: 'given', scope: 'Tuning given by the user.' }
   }
-  if (tuning === 'optimize' || tuning === 'optimize-h2') {
+  if ((tuning === 'optimize' || tuning === 'optimize-h2') && !ctx.residualResonance) {
     const pb = tuningProblem(ctx.rec, ctx.omegaTarget, mass)
     const o = optimizeTuning(pb, mu, { objective: tuning === 'optimize' ? 'hinf' : 'h2', zetaHost })
     return {
@@ -40,6 +40,15 @@ export function resolveTuning(
       startedFrom: o.startedFrom,
     }
   }
-  const form = closedForms[tuning]
+  // With a resonance no absorber can damp, every tuning has an unbounded peak: nothing to optimise,
+  // so the optimisers return the closed form they would have started from.
+  const form =
+    closedForms[
+      tuning === 'optimize'
+        ? 'asami-nishihara'
+        : tuning === 'optimize-h2'
+          ? 'warburton-force'
+          : tuning
+    ]
   return { ...form.tune(mu, zetaHost), method: tuning, scope: form.scope }
 }

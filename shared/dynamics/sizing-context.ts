@@ -2,8 +2,15 @@ import type { ModelInput } from '../schemas/model'
 import { ModelError } from './errors'
 import { frequencyGrid, targetBand, type Band } from './grid'
 import { prepareHost, scaleHost, type PreparedHost } from './host'
-import { hostReceptance, type HostReceptance, type NodeTriple } from './host-receptance'
+import {
+  hostReceptance,
+  nodeVectors,
+  type HostReceptance,
+  type NodeTriple,
+  type ReceptanceVectors,
+} from './host-receptance'
 import { effectiveMass } from './modes'
+import { hostUndampedResonance, type UndampedResonance } from './undamped-modes'
 import { validateHost } from './validate-host'
 import { validateRequest, type ValidRequest } from './validate-request'
 
@@ -20,8 +27,14 @@ export interface SizingContext {
   /** true when the band was set by the user (it then stays put under detuning) */
   userBand: boolean
   nodes: NodeTriple
+  /** response r, load p and absorber attachment u as vectors over the free nodes */
+  vectors: ReceptanceVectors
   /** host receptances over the band grid */
   rec: HostReceptance
+  /** a host mode in the band that resonates without limit when there is no absorber, or null */
+  hostResonance: UndampedResonance | null
+  /** one that does so whatever damped absorber acts on u (the absorber does not move it) */
+  residualResonance: UndampedResonance | null
   /** kg, of the target mode at the absorber node (null without an absorber) */
   effectiveMass: number | null
 }
@@ -64,7 +77,11 @@ export function sizingContext(
   const band = req.band ?? targetBand(prep.modes.omega, r)
   const j = req.absorber?.node ?? req.excitation
   const nodes: NodeTriple = { j, r: req.response, f: req.excitation }
-  const rec = hostReceptance(prep, nodes, frequencyGrid(band, omegaTarget))
+  const vectors = nodeVectors(prep.n, nodes)
+  const grid = frequencyGrid(band, omegaTarget, { include: prep.modes.omega })
+  const rec = hostReceptance(prep, vectors, grid)
+  const resonance = (acts: boolean): UndampedResonance | null =>
+    hostUndampedResonance(prep, vectors, rec.participation, band, acts)
   const effective = req.absorber ? absorberEffectiveMass(prep, model, j, r) : null
   return {
     model,
@@ -75,7 +92,10 @@ export function sizingContext(
     band,
     userBand: req.band !== null,
     nodes,
+    vectors,
     rec,
+    hostResonance: resonance(false),
+    residualResonance: req.absorber ? resonance(true) : null,
     effectiveMass: effective,
   }
 }

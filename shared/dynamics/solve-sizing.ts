@@ -1,15 +1,9 @@
 import type { ModelInput } from '../schemas/model'
-import {
-  evaluateAbsorber,
-  hostPeak,
-  undampedHost,
-  type AbsorberEvaluation,
-} from './evaluate-absorber'
+import { evaluateAbsorber, hostPeak, type AbsorberEvaluation } from './evaluate-absorber'
 import { modesWithAbsorber } from './modes-with-absorber'
-import { resolveTuning } from './resolve-tuning'
-import { sizingContext, type SizingContext } from './sizing-context'
-import type { AbsorberReport, ModeReport, PeakReport, SizingResult } from './sizing-result'
-import { absorberValues, type AbsorberValues } from './tuning-objective'
+import type { SizingContext } from './sizing-context'
+import { prepareSizing, type PreparedSizing } from './size-absorber'
+import type { ModeReport, PeakReport, SizingResult } from './sizing-result'
 import { designReport, SIZING_CAUTIONS } from './design-values'
 
 const HZ = 1 / (2 * Math.PI)
@@ -50,47 +44,18 @@ function peakReport(ctx: SizingContext, ev: AbsorberEvaluation | null): PeakRepo
   }
 }
 
-/**
- * Mass and tuning of the requested absorber (null when the model has none).
- * @param ctx sizing context
- */
-export function sizeAbsorber(
-  ctx: SizingContext,
-): { report: AbsorberReport; values: AbsorberValues } | null {
-  const ab = ctx.req.absorber
-  if (!ab || ctx.effectiveMass === null) return null
-  const mass = ab.mass ?? (ab.massRatio ?? 0) * ctx.effectiveMass
-  const mu = mass / ctx.effectiveMass
-  const t = resolveTuning(ctx, mass, mu, ab.tuning)
-  const values = absorberValues(mass, ctx.omegaTarget, t)
-  const report: AbsorberReport = {
-    node: ctx.prep.host.ids[ab.node] ?? '',
-    mass,
-    massRatio: mu,
-    stiffness: values.stiffness,
-    damping: values.damping,
-    frequencyHz: t.frequencyRatio * ctx.omegaTarget * HZ,
-    frequencyRatio: t.frequencyRatio,
-    dampingRatio: t.dampingRatio,
-    tuning: t.method,
-    scope: t.scope,
-    ...(t.startedFrom ? { startedFrom: t.startedFrom } : {}),
-  }
-  return { report, values }
+function unboundedNote(which: string, label: string): string {
+  return (
+    `${which} is null: ${label} lies in the band with no damping acting on it (no modal damping, ` +
+    'no dashpot or absorber damper that it moves) and both the excitation and the response see ' +
+    'it, so its resonance is unbounded.'
+  )
 }
 
-function notesFor(ctx: SizingContext, peak: PeakReport, sized: boolean): string[] {
+function notesFor(ctx: SizingContext, ev: AbsorberEvaluation | null): string[] {
   const notes: string[] = []
-  if (undampedHost(ctx.prep) && peak.without === null) {
-    notes.push(
-      'peak.without is null: the host has no damping and no dashpots, so its resonance is unbounded.',
-    )
-  }
-  if (sized && peak.with === null) {
-    notes.push(
-      'peak.with is null: an undamped resonance remains in the band (no damping where it moves).',
-    )
-  }
+  if (ctx.hostResonance) notes.push(unboundedNote('peak.without', ctx.hostResonance.label))
+  if (ev?.unbounded) notes.push(unboundedNote('peak.with', ev.unbounded.label))
   if (!ctx.prep.classical) {
     notes.push(
       'Physical dashpots make the damping non-classical: host receptances come from a direct solve.',
@@ -112,16 +77,19 @@ function notesFor(ctx: SizingContext, peak: PeakReport, sized: boolean): string[
  * response with and without it over the band, and the values to build. Pure and deterministic:
  * the command line and the server's worker pool call this same function.
  * @param model host network (kg, N/m, N·s/m), absorber request, excitation/response nodes, band (Hz)
+ * @param prepared the model's context and sized absorber when already computed (a study shares one)
  * @returns see SizingResult; SI units, frequencies in Hz
  * @throws ModelError (a RangeError) naming the offending field when the model is invalid
  */
-export function solveSizing(model: ModelInput): SizingResult {
-  const ctx = sizingContext(model)
-  const sized = sizeAbsorber(ctx)
+export function solveSizing(
+  model: ModelInput,
+  prepared: PreparedSizing = prepareSizing(model),
+): SizingResult {
+  const { ctx, sized } = prepared
   const ev = sized ? evaluateAbsorber(ctx, sized.values) : null
   const peak = peakReport(ctx, ev)
   const withAbsorber = sized
-    ? modesWithAbsorber(ctx.prep, { node: ctx.nodes.j, ...sized.values })
+    ? modesWithAbsorber(ctx.prep, ctx.vectors.u, sized.values.mass, sized.values.stiffness)
     : null
   return {
     nodeIds: ctx.prep.host.ids,
@@ -134,10 +102,10 @@ export function solveSizing(model: ModelInput): SizingResult {
     absorber: sized?.report ?? null,
     peak,
     modesWithAbsorber: withAbsorber
-      ? Array.from(withAbsorber.omega, (w) => ({ frequencyHz: w * HZ }))
+      ? Array.from(withAbsorber, (w) => ({ frequencyHz: w * HZ }))
       : null,
     design: sized && ev ? designReport(sized.values, ev, peak) : null,
-    notes: notesFor(ctx, peak, sized !== null),
+    notes: notesFor(ctx, ev),
     cautions: SIZING_CAUTIONS,
   }
 }

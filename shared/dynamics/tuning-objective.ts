@@ -2,6 +2,7 @@ import { absorberAt, absorberOnGrid, type AbsorberPoint } from './absorber-respo
 import type { Tuning } from './closed-forms'
 import type { HostReceptance } from './host-receptance'
 import { findPeak, type Peak } from './peak'
+import { coupledEigenvalues, secularPoles, type Poles } from './secular'
 
 /** Absorber spring rate and damper of a tuning. */
 export interface AbsorberValues {
@@ -33,6 +34,8 @@ export interface TuningProblem {
   mass: number
   /** scratch, one value per grid point */
   mag: Float64Array
+  /** secular poles of the host at the attachment, for the natural frequencies with the absorber */
+  poles: Poles
 }
 
 /**
@@ -45,7 +48,9 @@ export function tuningProblem(
   omegaTarget: number,
   mass: number,
 ): TuningProblem {
-  return { rec, omegaTarget, mass, mag: new Float64Array(rec.omega.length) }
+  const weight = rec.lambda.map((_, i) => (rec.participation[3 * i + 2] ?? 0) ** 2)
+  const poles = secularPoles(rec.lambda, weight)
+  return { rec, omegaTarget, mass, mag: new Float64Array(rec.omega.length), poles }
 }
 
 /** |H'_rf(ω)| at any frequency (rad/s), exact, for the peak refinement. */
@@ -59,33 +64,38 @@ export function exactMagnitude(rec: HostReceptance, a: AbsorberValues): (w: numb
   }
 }
 
-/** How `peakWith` refines. */
-export interface PeakWithOptions {
-  /** refine exactly even when the host evaluation is a dense solve (non-classical damping) */
-  exact?: boolean
-  /** inside the optimiser: refine the 2 split peaks with 14 golden steps, enough for the broad
-   * peaks of a damped absorber; otherwise 3 peaks and 26 steps */
-  search?: boolean
+/**
+ * Natural frequencies (rad/s) inside the grid's band of the host with the absorber, undamped in
+ * the two limits of its damper, free (c_a = 0) and locked (c_a → ∞): every lightly damped mode of
+ * the damped system lies near one of them, so these points keep a sharp resonance from falling
+ * between grid points.
+ * @param pb the problem
+ * @param a absorber values
+ */
+export function coupledFrequencies(pb: TuningProblem, a: AbsorberValues): number[] {
+  const { omega } = pb.rec
+  const min = (omega[0] ?? 0) ** 2
+  const max = (omega[omega.length - 1] ?? 0) ** 2
+  // A point within 1e-8 of a natural frequency is as good a sample as the frequency itself.
+  const options = { min, max, tolerance: 1e-8, unchanged: false }
+  return [
+    ...coupledEigenvalues(pb.poles, a.mass, a.stiffness, options),
+    ...coupledEigenvalues(pb.poles, a.mass, Infinity, options),
+  ].map(Math.sqrt)
 }
 
 /**
- * Largest receptance |X_r/F_f| (m/N) over the band with the absorber, refined between grid
- * points. On a non-classical host the refinement is parabolic on the grid unless `exact`.
+ * Largest receptance |X_r/F_f| (m/N) over the band with the absorber: every local maximum over
+ * the grid and the natural frequencies refined with the exact rank-one formula. The same number
+ * is the optimiser's objective and the reported peak. The caller checks first that the response
+ * is bounded (undamped-modes.ts).
  * @param pb the problem
  * @param a absorber values
- * @param options see PeakWithOptions
  */
-export function peakWith(
-  pb: TuningProblem,
-  a: AbsorberValues,
-  options: PeakWithOptions = {},
-): Peak {
+export function peakWith(pb: TuningProblem, a: AbsorberValues): Peak {
   absorberOnGrid(pb.rec, a.mass, a.stiffness, a.damping, pb.mag)
-  const refine = pb.rec.cheap || options.exact ? exactMagnitude(pb.rec, a) : null
-  const search = options.search === true
-  return findPeak(pb.rec.omega, pb.mag, refine, {
-    refineTop: search ? 2 : 3,
-    iterations: search ? 14 : 26,
+  return findPeak(pb.rec.omega, pb.mag, exactMagnitude(pb.rec, a), {
+    extra: coupledFrequencies(pb, a),
   })
 }
 

@@ -2,6 +2,7 @@ import {
   detuningRobustness,
   frequencyResponse,
   massRatioSweep,
+  prepareSizing,
   solveSizing,
   type DetuningPoint,
   type FrequencyResponse,
@@ -67,14 +68,16 @@ function curveOf(c: FrequencyResponse['without'], q: ResponseQuantity) {
  */
 export function evaluateSizing(model: ModelDefinition, input: SizingInput): SizingEvaluation {
   const request = toModelInput(model, input)
-  const result = solveSizing(request)
-  const response = frequencyResponse(request, { points: 300 })
-  const sweep = massRatioSweep(request, SWEEP_MASS_RATIOS).points
-  const robustness = detuningRobustness(request, {
-    range: 0.1,
-    points: 21,
-    tolerance: input.detuningTolerance,
-  })
+  // One host preparation and one sizing, shared by every part of the study.
+  const prepared = prepareSizing(request)
+  const result = solveSizing(request, prepared)
+  const response = frequencyResponse(request, { points: 300 }, prepared)
+  const sweep = massRatioSweep(request, SWEEP_MASS_RATIOS, prepared.ctx).points
+  const robustness = detuningRobustness(
+    request,
+    { range: 0.1, points: 21, tolerance: input.detuningTolerance },
+    prepared,
+  )
   const q = input.acceptance.quantity
   const p = POWER[q]
   const F = input.forceAmplitude

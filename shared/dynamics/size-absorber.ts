@@ -1,0 +1,56 @@
+import type { ModelInput } from '../schemas/model'
+import { resolveTuning } from './resolve-tuning'
+import { sizingContext, type SizingContext } from './sizing-context'
+import type { AbsorberReport } from './sizing-result'
+import { absorberValues, type AbsorberValues } from './tuning-objective'
+
+const HZ = 1 / (2 * Math.PI)
+
+/** The absorber a sizing asks for, as reported and as values to compute with. */
+export interface SizedAbsorber {
+  report: AbsorberReport
+  values: AbsorberValues
+}
+
+/** A model's context and its sized absorber: computed once, shared by every part of a study. */
+export interface PreparedSizing {
+  ctx: SizingContext
+  sized: SizedAbsorber | null
+}
+
+/**
+ * Mass and tuning of the requested absorber (null when the model has none).
+ * @param ctx sizing context
+ */
+export function sizeAbsorber(ctx: SizingContext): SizedAbsorber | null {
+  const ab = ctx.req.absorber
+  if (!ab || ctx.effectiveMass === null) return null
+  const mass = ab.mass ?? (ab.massRatio ?? 0) * ctx.effectiveMass
+  const mu = mass / ctx.effectiveMass
+  const t = resolveTuning(ctx, mass, mu, ab.tuning)
+  const values = absorberValues(mass, ctx.omegaTarget, t)
+  const report: AbsorberReport = {
+    node: ctx.prep.host.ids[ab.node] ?? '',
+    mass,
+    massRatio: mu,
+    stiffness: values.stiffness,
+    damping: values.damping,
+    frequencyHz: t.frequencyRatio * ctx.omegaTarget * HZ,
+    frequencyRatio: t.frequencyRatio,
+    dampingRatio: t.dampingRatio,
+    tuning: t.method,
+    scope: t.scope,
+    ...(t.startedFrom ? { startedFrom: t.startedFrom } : {}),
+  }
+  return { report, values }
+}
+
+/**
+ * Validates a model, prepares its host (modes, band, receptances) and sizes its absorber.
+ * @param model the model (SI units, band in Hz)
+ * @throws ModelError naming the field when the model is invalid
+ */
+export function prepareSizing(model: ModelInput): PreparedSizing {
+  const ctx = sizingContext(model)
+  return { ctx, sized: sizeAbsorber(ctx) }
+}
