@@ -14,6 +14,9 @@ import { hostUndampedResonance, type UndampedResonance } from './undamped-modes'
 import { validateHost } from './validate-host'
 import { validateRequest, type ValidRequest } from './validate-request'
 
+/** Where a sizing's band comes from. */
+export type BandSource = 'default' | 'close-modes' | 'user'
+
 /** Everything a sizing computes once per model before trying absorbers. */
 export interface SizingContext {
   model: ModelInput
@@ -26,6 +29,8 @@ export interface SizingContext {
   band: Band
   /** true when the band was set by the user (it then stays put under detuning) */
   userBand: boolean
+  /** where the band comes from: the target mode's default, widened to close modes, or the user */
+  bandSource: BandSource
   nodes: NodeTriple
   /** response r, load p and absorber attachment u as vectors over the free nodes */
   vectors: ReceptanceVectors
@@ -74,7 +79,10 @@ export function sizingContext(
   const prep = scaleHost(prepared ?? prepareHost(host, req.dampingRatios), stiffnessFactor)
   const r = req.targetMode - 1
   const omegaTarget = prep.modes.omega[r] ?? 0
-  const band = req.band ?? targetBand(prep.modes.omega, r)
+  const byDefault = targetBand(prep.modes.omega, r)
+  const band = req.band ?? byDefault
+  const widened = byDefault.first < r || byDefault.last > r
+  const bandSource: BandSource = req.band ? 'user' : widened ? 'close-modes' : 'default'
   const j = req.absorber?.node ?? req.excitation
   const nodes: NodeTriple = { j, r: req.response, f: req.excitation }
   const vectors = nodeVectors(prep.n, nodes)
@@ -91,6 +99,7 @@ export function sizingContext(
     omegaTarget,
     band,
     userBand: req.band !== null,
+    bandSource,
     nodes,
     vectors,
     rec,

@@ -12,6 +12,16 @@ export interface ModeReport {
   shape: number[]
 }
 
+/** The frequency band over which peaks are taken. */
+export interface BandReport {
+  minHz: number
+  maxHz: number
+  /** host modes (1-based) whose natural frequency lies in the band */
+  modes: number[]
+  /** 'default': the target mode's; 'close-modes': widened to a neighbour within 25 %; 'user' */
+  source: 'default' | 'close-modes' | 'user'
+}
+
 /** The absorber to build. */
 export interface AbsorberReport {
   node: string
@@ -81,7 +91,7 @@ export interface SizingResult {
   responseNode: string
   /** kg, of the target mode at the absorber node; null without an absorber */
   effectiveMass: number | null
-  band: { minHz: number; maxHz: number }
+  band: BandReport
   absorber: AbsorberReport | null
   peak: PeakReport
   /** natural frequencies (Hz) of host + absorber, undamped, ascending */

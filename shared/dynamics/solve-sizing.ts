@@ -5,6 +5,7 @@ import type { SizingContext } from './sizing-context'
 import { prepareSizing, type PreparedSizing } from './size-absorber'
 import type { ModeReport, PeakReport, SizingResult } from './sizing-result'
 import { designReport, SIZING_CAUTIONS } from './design-values'
+import { CLOSE_MODE_RATIO } from './grid'
 
 const HZ = 1 / (2 * Math.PI)
 const finiteOrNull = (x: number): number | null => (Number.isFinite(x) ? x : null)
@@ -62,14 +63,33 @@ function notesFor(ctx: SizingContext, ev: AbsorberEvaluation | null): string[] {
     )
   }
   const { omega } = ctx.prep.modes
-  const near = [omega[ctx.r - 1], omega[ctx.r + 1]].some(
-    (w) => w !== undefined && Math.abs(w / ctx.omegaTarget - 1) < 0.2,
-  )
+  const below = omega[ctx.r - 1]
+  const above = omega[ctx.r + 1]
+  const near =
+    (below !== undefined && ctx.omegaTarget < below * CLOSE_MODE_RATIO) ||
+    (above !== undefined && above < ctx.omegaTarget * CLOSE_MODE_RATIO)
+  if (ctx.bandSource === 'close-modes') {
+    notes.push(
+      `The default band covers modes ${bandModes(ctx).join(', ')}: a neighbour lies within ` +
+        `${Math.round((CLOSE_MODE_RATIO - 1) * 100)} % of the target mode, so its resonance is ` +
+        'part of the peak the absorber is tuned against.',
+    )
+  }
   if (near)
     notes.push(
-      'Closely spaced modes (within 20 %): single-mode closed forms are unreliable; prefer the optimiser.',
+      `Closely spaced modes (within ${Math.round((CLOSE_MODE_RATIO - 1) * 100)} %): single-mode ` +
+        'closed forms are unreliable; prefer the optimiser.',
     )
   return notes
+}
+
+/** Host modes (1-based) whose natural frequency lies in the band. */
+function bandModes(ctx: SizingContext): number[] {
+  const out: number[] = []
+  ctx.prep.modes.omega.forEach((w, i) => {
+    if (w >= ctx.band.min * (1 - 1e-12) && w <= ctx.band.max * (1 + 1e-12)) out.push(i + 1)
+  })
+  return out
 }
 
 /**
@@ -98,7 +118,12 @@ export function solveSizing(
     excitationNode: ctx.prep.host.ids[ctx.nodes.f] ?? '',
     responseNode: ctx.prep.host.ids[ctx.nodes.r] ?? '',
     effectiveMass: ctx.effectiveMass,
-    band: { minHz: ctx.band.min * HZ, maxHz: ctx.band.max * HZ },
+    band: {
+      minHz: ctx.band.min * HZ,
+      maxHz: ctx.band.max * HZ,
+      modes: bandModes(ctx),
+      source: ctx.bandSource,
+    },
     absorber: sized?.report ?? null,
     peak,
     modesWithAbsorber: withAbsorber
