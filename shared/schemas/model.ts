@@ -6,6 +6,7 @@
  * SI units throughout.
  */
 import { z } from 'zod'
+import { strictObject } from './strict'
 
 const finite = () => z.number({ error: 'expected a finite number' })
 const text = () => z.string({ error: 'expected a text' }).min(1, { error: 'must not be empty' })
@@ -21,7 +22,7 @@ export const tuningNameSchema = z.enum([
   'ioi-ikeda',
 ])
 
-export const nodeSchema = z.object({
+export const nodeSchema = strictObject({
   id: text(),
   label: z.string().optional(),
   /** kg; ignored on a fixed node */
@@ -30,7 +31,7 @@ export const nodeSchema = z.object({
   fixed: z.boolean().optional(),
 })
 
-export const springSchema = z.object({
+export const springSchema = strictObject({
   from: text(),
   to: text(),
   /** N/m */
@@ -39,14 +40,14 @@ export const springSchema = z.object({
   damping: finite().optional(),
 })
 
-export const explicitTuningSchema = z.object({
+export const explicitTuningSchema = strictObject({
   /** ω_a / ω_target */
   frequencyRatio: finite(),
   /** c_a / (2 m_a ω_a), referred to the absorber's own frequency */
   dampingRatio: finite(),
 })
 
-export const absorberSchema = z.object({
+export const absorberSchema = strictObject({
   node: text(),
   /** m_a / m_eff of the target mode at the absorber node; or give `mass` */
   massRatio: finite().optional(),
@@ -55,17 +56,17 @@ export const absorberSchema = z.object({
   tuning: z.union([tuningNameSchema, explicitTuningSchema]).optional(),
 })
 
-export const bandSchema = z.object({ minHz: finite(), maxHz: finite() })
+export const bandSchema = strictObject({ minHz: finite(), maxHz: finite() })
 
-export const modelSchema = z.object({
+export const modelSchema = strictObject({
   name: z.string().optional(),
   nodes: z.array(nodeSchema).min(1),
   springs: z.array(springSchema),
   /** modal damping ratio of every host mode, or one per mode (ascending frequency) */
   hostDampingRatio: z.union([finite(), z.array(finite())]).optional(),
   absorber: absorberSchema.optional(),
-  excitation: z.object({ node: text() }).optional(),
-  response: z.object({ node: text() }).optional(),
+  excitation: strictObject({ node: text() }).optional(),
+  response: strictObject({ node: text() }).optional(),
   /** 1-based, in ascending frequency */
   targetMode: z
     .number({ error: 'expected a mode number' })

@@ -6,6 +6,7 @@ import {
   springSchema,
   tuningNameSchema,
 } from './model'
+import { strictObject } from './strict'
 
 /** The host structure as the engineer edits it: a revision of a model stores exactly this. */
 export const ModelDefinitionSchema = z.object({
@@ -23,7 +24,7 @@ export const ResponseQuantitySchema = z.enum(['displacement', 'velocity', 'accel
 export type ResponseQuantity = z.infer<typeof ResponseQuantitySchema>
 
 /** An acceptance limit on the peak response at the response node, in SI units. */
-export const AcceptanceSchema = z.object({
+export const AcceptanceSchema = strictObject({
   presetId: z.string().max(60).optional(),
   label: z.string().max(160),
   quantity: ResponseQuantitySchema,
@@ -32,7 +33,7 @@ export const AcceptanceSchema = z.object({
 })
 export type Acceptance = z.infer<typeof AcceptanceSchema>
 
-export const SizingInputSchema = z.object({
+export const SizingInputSchema = strictObject({
   title: z.string().trim().min(1, 'required').max(160),
   siteId: z.number().int().positive(),
   modelId: z.number().int().positive(),

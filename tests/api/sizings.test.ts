@@ -103,6 +103,35 @@ describe('sizings', () => {
     expect((await agent.get('/api/sizings').query({ siteId: site.id })).body).toEqual([])
   })
 
+  // Common practice: a misspelt option is refused instead of silently running with a default.
+  it('refuses a sizing input with a misspelt key, naming it and the likely key, and saves nothing', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const { site, model } = await siteAndModel(agent)
+    const input = { ...sizingInput(site.id, model.id), massRatios: 0.05 }
+    const res = await agent.post('/api/sizings').send({ input })
+    expect(res.status).toBe(400)
+    expect(res.body.error.details[0]).toEqual({
+      path: 'body.input',
+      message: "unknown key 'massRatios' — did you mean 'massRatio'?",
+    })
+    expect((await agent.get('/api/sizings').query({ siteId: site.id })).body).toEqual([])
+  })
+
+  it('refuses a model node with a misspelt key, naming it', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const site = (await agent.post('/api/sites').send(siteBody((await makeCompany(t)).id))).body
+    const definition = buildingDefinition()
+    const nodes = definition.nodes.map((n, i) => (i === 1 ? { ...n, fixd: true } : n))
+    const res = await agent
+      .post('/api/models')
+      .send({ siteId: site.id, name: 'Typo', definition: { ...definition, nodes } })
+    expect(res.status).toBe(400)
+    expect(res.body.error.details[0]).toEqual({
+      path: 'body.definition.nodes.1',
+      message: "unknown key 'fixd' — did you mean 'fixed'?",
+    })
+  })
+
   it('does not let an engineer change another engineer’s sizing', async () => {
     const { agent: owner } = await signedIn(t, 'engineer')
     const { agent: other } = await signedIn(t, 'engineer')

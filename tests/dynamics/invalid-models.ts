@@ -30,6 +30,8 @@ export interface InvalidCase {
   /** the CLI line when it differs (zod reports non-finite numbers before the engine sees them) */
   cli?: RegExp
   json?: string
+  /** refused by the schema, before the engine (the engine itself ignores extra keys) */
+  schemaOnly?: boolean
 }
 
 const edit = (f: (m: ModelInput) => void): ModelInput => {
@@ -132,5 +134,13 @@ export const invalidCases: InvalidCase[] = [
     model: edit((m) => m.absorber && (m.absorber.massRatio = 0)),
     field: 'absorber.massRatio',
     message: /^absorber\.massRatio: must be a positive finite number, got 0$/,
+  },
+  {
+    name: 'a misspelt key',
+    model: edit((m) => Object.assign(m, { hostDampingRatios: 0.02 })),
+    field: '(top level)',
+    message: /^$/,
+    cli: /^solve: invalid model: \(top level\): unknown key 'hostDampingRatios' — did you mean 'hostDampingRatio'\?$/,
+    schemaOnly: true,
   },
 ]
