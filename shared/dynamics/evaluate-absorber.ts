@@ -1,5 +1,6 @@
-import { absorberAt, absorberOnGrid, type AbsorberPoint } from './absorber-response'
+import { absorberOnGrid } from './absorber-response'
 import { coupledUndampedResonance } from './coupled-undamped'
+import { measured } from './measure'
 import { findPeak, type Peak } from './peak'
 import type { SizingContext } from './sizing-context'
 import {
@@ -12,11 +13,12 @@ import type { UndampedResonance } from './undamped-modes'
 
 /** Peak response and stroke of one absorber over the band, refined exactly. */
 export interface AbsorberEvaluation {
-  /** largest |X_r/F_f| (m/N) and where (rad/s); value Infinity when unbounded */
+  /** largest measured response per unit load (m/N for the receptance) and where (rad/s); value
+   * Infinity when unbounded */
   peak: Peak
-  /** |stroke|/F (m/N) at the frequency of the response peak */
+  /** |stroke| per unit load (m/N for a force) at the frequency of the response peak */
   strokeAtPeak: number
-  /** largest |stroke|/F (m/N) over the band and where (rad/s) */
+  /** largest |stroke| per unit load over the band and where (rad/s) */
   maxStroke: Peak
   /** the mode that makes the response unbounded, or null */
   unbounded: UndampedResonance | null
@@ -31,17 +33,8 @@ export interface AbsorberEvaluation {
  */
 export function unboundedWith(ctx: SizingContext, a: AbsorberValues): UndampedResonance | null {
   if (ctx.residualResonance) return ctx.residualResonance
-  return coupledUndampedResonance(ctx.prep, ctx.vectors, ctx.rec.participation, ctx.band, a, 0)
-}
-
-function strokeAt(ctx: SizingContext, a: AbsorberValues): (w: number) => number {
-  const h = new Float64Array(8)
-  const p: AbsorberPoint = { re: 0, im: 0, strokeRe: 0, strokeIm: 0 }
-  return (w) => {
-    ctx.rec.at(w, h)
-    absorberAt(h, 0, w, a.mass, a.stiffness, a.damping, p)
-    return Math.sqrt(p.strokeRe * p.strokeRe + p.strokeIm * p.strokeIm)
-  }
+  const { prep, vectors, rec, band, measure } = ctx
+  return coupledUndampedResonance(prep, vectors, rec.participation, band, a, measure.absorberLoad)
 }
 
 /**
@@ -60,10 +53,10 @@ export function evaluateAbsorber(ctx: SizingContext, a: AbsorberValues): Absorbe
   const { omega } = ctx.rec
   const mag = new Float64Array(omega.length)
   const stroke = new Float64Array(omega.length)
-  absorberOnGrid(ctx.rec, a.mass, a.stiffness, a.damping, mag, stroke)
+  absorberOnGrid(ctx.rec, a, ctx.measure, mag, stroke)
   const extra = coupledFrequencies(tuningProblem(ctx.rec, ctx.omegaTarget, a.mass), a)
-  const s = strokeAt(ctx, a)
-  const peak = findPeak(omega, mag, exactMagnitude(ctx.rec, a), { extra })
+  const s = exactMagnitude(ctx.rec, a, ctx.measure, true)
+  const peak = findPeak(omega, mag, exactMagnitude(ctx.rec, a, ctx.measure), { extra })
   return {
     peak,
     strokeAtPeak: s(peak.omega),
@@ -80,12 +73,13 @@ export function evaluateAbsorber(ctx: SizingContext, a: AbsorberValues): Absorbe
 export function hostPeak(ctx: SizingContext): Peak {
   if (ctx.hostResonance) return { value: Infinity, omega: ctx.hostResonance.omega }
   const { omega, values } = ctx.rec
-  const mag = Float64Array.from(omega, (_, k) =>
-    Math.hypot(values[8 * k] ?? 0, values[8 * k + 1] ?? 0),
+  const m = ctx.measure
+  const mag = Float64Array.from(omega, (w, k) =>
+    measured(m, w, values[8 * k] ?? 0, values[8 * k + 1] ?? 0),
   )
   const h = new Float64Array(8)
   return findPeak(omega, mag, (w) => {
     ctx.rec.at(w, h)
-    return Math.hypot(h[0] ?? 0, h[1] ?? 0)
+    return measured(m, w, h[0] ?? 0, h[1] ?? 0)
   })
 }

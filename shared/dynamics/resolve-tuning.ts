@@ -1,6 +1,7 @@
 import type { ExplicitTuning, TuningName } from '../schemas/model'
-import { closedForms, optimizerScopes, type ClosedFormName, type Tuning } from './closed-forms'
-import { optimizeTuning } from './optimize-tuning'
+import { closedForms, optimizerScopes, type Tuning } from './closed-forms'
+import { ModelError } from './errors'
+import { optimizeTuning, type StartName } from './optimize-tuning'
 import type { SizingContext } from './sizing-context'
 import { tuningProblem } from './tuning-objective'
 
@@ -8,8 +9,23 @@ import { tuningProblem } from './tuning-objective'
 export interface ResolvedTuning extends Tuning {
   method: TuningName | 'given'
   scope: string
-  /** for the optimisers: the closed form they started from */
-  startedFrom?: ClosedFormName
+  /** for the optimisers: the closed form (or running-speed tuning) they started from */
+  startedFrom?: StartName
+}
+
+/**
+ * Starting tunings for a machine's running speed: the absorber tuned to the speed (the middle of a
+ * range), undamped for a single speed — the classical neutraliser that nulls the response there
+ * (Den Hartog, Mechanical Vibrations, 1956) — and with Den Hartog's damping for a range.
+ */
+function speedStarts(ctx: SizingContext, mu: number): { name: 'running-speed'; tuning: Tuning }[] {
+  if (ctx.bandSource !== 'speed') return []
+  const centre = Math.sqrt(ctx.band.min * ctx.band.max)
+  const single = ctx.band.max === ctx.band.min
+  const dampingRatio = single ? 0 : closedForms['den-hartog'].tune(mu, 0).dampingRatio
+  return [
+    { name: 'running-speed', tuning: { frequencyRatio: centre / ctx.omegaTarget, dampingRatio } },
+  ]
 }
 
 /**
@@ -29,9 +45,20 @@ export function resolveTuning(
   if (typeof tuning === 'object') {
     return { ...tuning, method: 'given', scope: 'Tuning given by the user.' }
   }
+  const single = ctx.bandSource === 'speed' && ctx.band.max === ctx.band.min
+  if (tuning === 'optimize-h2' && single) {
+    throw new ModelError(
+      'absorber.tuning',
+      "optimize-h2 needs a band to integrate over, and a single running speed has none: use 'optimize' or give a speed range",
+    )
+  }
   if ((tuning === 'optimize' || tuning === 'optimize-h2') && !ctx.residualResonance) {
-    const pb = tuningProblem(ctx.rec, ctx.omegaTarget, mass)
-    const o = optimizeTuning(pb, mu, { objective: tuning === 'optimize' ? 'hinf' : 'h2', zetaHost })
+    const pb = tuningProblem(ctx.rec, ctx.omegaTarget, mass, ctx.measure)
+    const o = optimizeTuning(pb, mu, {
+      objective: tuning === 'optimize' ? 'hinf' : 'h2',
+      zetaHost,
+      extraStarts: speedStarts(ctx, mu),
+    })
     return {
       frequencyRatio: o.frequencyRatio,
       dampingRatio: o.dampingRatio,

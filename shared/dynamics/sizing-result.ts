@@ -1,4 +1,4 @@
-import type { TuningName } from '../schemas/model'
+import type { LoadKind, ResponseQuantity, TuningName } from '../schemas/model'
 import type { ClosedFormName } from './closed-forms'
 
 /** One host mode as reported. */
@@ -18,8 +18,34 @@ export interface BandReport {
   maxHz: number
   /** host modes (1-based) whose natural frequency lies in the band */
   modes: number[]
-  /** 'default': the target mode's; 'close-modes': widened to a neighbour within 25 %; 'user' */
-  source: 'default' | 'close-modes' | 'user'
+  /** 'default': the target mode's; 'close-modes': widened to a neighbour within 25 %; 'user';
+   * 'speed': a machine's running speed or speed range */
+  source: 'default' | 'close-modes' | 'user' | 'speed'
+}
+
+/** The load as understood. */
+export interface ExcitationReport {
+  kind: LoadKind
+  /** nodes the load acts on ('force', 'forces', 'mode-shaped'); empty under base motion */
+  nodes: string[]
+  /** for 'mode-shaped': the 1-based mode the load follows */
+  mode: number | null
+  /** a rotating unbalance: the force is amplitude × ω² */
+  unbalance: boolean
+  /** the design load, in `unit` */
+  amplitude: number
+  /** 'N', 'm/s²' (base acceleration) or 'kg·m' (unbalance) */
+  unit: string
+}
+
+/** The response as read and minimised. */
+export interface ResponseReport {
+  node: string
+  quantity: ResponseQuantity
+  /** 'm', 'm/s' or 'm/s²' */
+  unit: string
+  /** under base motion displacement and velocity are relative to the supports */
+  frame: 'relative' | 'absolute'
 }
 
 /** The absorber to build. */
@@ -41,10 +67,10 @@ export interface AbsorberReport {
   tuning: TuningName | 'given'
   /** where the tuning method holds */
   scope: string
-  startedFrom?: ClosedFormName
+  startedFrom?: ClosedFormName | 'running-speed'
 }
 
-/** Largest receptance |X_response/F_excitation| over the band (m/N); null when unbounded. */
+/** Largest response per unit load over the band, in `unit`; null when unbounded. */
 export interface PeakReport {
   without: number | null
   with: number | null
@@ -54,7 +80,9 @@ export interface PeakReport {
   reduction: number | null
   /** without/with */
   reductionFactor: number | null
-  /** static receptance of the host at these nodes (m/N) */
+  /** of without/with: the response quantity per unit load, e.g. 'm per N', 'm/s² per m/s²' */
+  unit: string
+  /** static displacement of the host at the response per unit load (m/N for a force) */
   staticReceptance: number
   /** static receptance of the target mode alone, φ_r φ_f/ω² (m/N): the scale of the published
    * single-mode peaks (peak / this = the dynamic amplification of the tables) */
@@ -87,8 +115,13 @@ export interface SizingResult {
   nodeIds: string[]
   modes: ModeReport[]
   targetMode: number
-  excitationNode: string
+  /** the node of a single force, else null */
+  excitationNode: string | null
   responseNode: string
+  excitation: ExcitationReport
+  response: ResponseReport
+  /** a machine's running speed (min = max) or speed range, Hz; null when none was given */
+  speed: { minHz: number; maxHz: number } | null
   /** kg, of the target mode at the absorber node; null without an absorber */
   effectiveMass: number | null
   band: BandReport

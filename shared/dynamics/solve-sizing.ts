@@ -1,49 +1,20 @@
 import type { ModelInput } from '../schemas/model'
-import { evaluateAbsorber, hostPeak, type AbsorberEvaluation } from './evaluate-absorber'
+import { evaluateAbsorber, type AbsorberEvaluation } from './evaluate-absorber'
 import { modesWithAbsorber } from './modes-with-absorber'
 import type { SizingContext } from './sizing-context'
 import { prepareSizing, type PreparedSizing } from './size-absorber'
-import type { ModeReport, PeakReport, SizingResult } from './sizing-result'
+import type { SizingResult } from './sizing-result'
+import {
+  bandReport,
+  excitationReport,
+  modeReports,
+  peakReport,
+  responseReport,
+} from './sizing-report'
 import { designReport, SIZING_CAUTIONS } from './design-values'
 import { CLOSE_MODE_RATIO } from './grid'
 
 const HZ = 1 / (2 * Math.PI)
-const finiteOrNull = (x: number): number | null => (Number.isFinite(x) ? x : null)
-
-function modeReports(ctx: SizingContext): ModeReport[] {
-  const { n, omega, phi } = ctx.prep.modes
-  return Array.from(omega, (w, i) => ({
-    number: i + 1,
-    frequencyHz: w * HZ,
-    dampingRatio: ctx.prep.zeta[i] ?? 0,
-    shape: Array.from({ length: n }, (_, a) => phi[a * n + i] ?? 0),
-  }))
-}
-
-function modalStatic(ctx: SizingContext): number {
-  const { n, phi } = ctx.prep.modes
-  const { r, f } = ctx.nodes
-  return ((phi[r * n + ctx.r] ?? 0) * (phi[f * n + ctx.r] ?? 0)) / ctx.omegaTarget ** 2
-}
-
-function peakReport(ctx: SizingContext, ev: AbsorberEvaluation | null): PeakReport {
-  const without = hostPeak(ctx)
-  const w = finiteOrNull(without.value)
-  const v = ev ? finiteOrNull(ev.peak.value) : null
-  const both = w !== null && v !== null
-  const h = new Float64Array(8)
-  ctx.rec.at(0, h)
-  return {
-    without: w,
-    with: v,
-    withoutFrequencyHz: w === null ? null : without.omega * HZ,
-    withFrequencyHz: v === null || !ev ? null : ev.peak.omega * HZ,
-    reduction: both ? 1 - v / w : null,
-    reductionFactor: both ? w / v : null,
-    staticReceptance: h[0] ?? 0,
-    modalStaticReceptance: modalStatic(ctx),
-  }
-}
 
 function unboundedNote(which: string, label: string): string {
   return (
@@ -70,7 +41,7 @@ function notesFor(ctx: SizingContext, ev: AbsorberEvaluation | null): string[] {
     (above !== undefined && above < ctx.omegaTarget * CLOSE_MODE_RATIO)
   if (ctx.bandSource === 'close-modes') {
     notes.push(
-      `The default band covers modes ${bandModes(ctx).join(', ')}: a neighbour lies within ` +
+      `The default band covers modes ${bandReport(ctx).modes.join(', ')}: a neighbour lies within ` +
         `${Math.round((CLOSE_MODE_RATIO - 1) * 100)} % of the target mode, so its resonance is ` +
         'part of the peak the absorber is tuned against.',
     )
@@ -81,15 +52,6 @@ function notesFor(ctx: SizingContext, ev: AbsorberEvaluation | null): string[] {
         'closed forms are unreliable; prefer the optimiser.',
     )
   return notes
-}
-
-/** Host modes (1-based) whose natural frequency lies in the band. */
-function bandModes(ctx: SizingContext): number[] {
-  const out: number[] = []
-  ctx.prep.modes.omega.forEach((w, i) => {
-    if (w >= ctx.band.min * (1 - 1e-12) && w <= ctx.band.max * (1 + 1e-12)) out.push(i + 1)
-  })
-  return out
 }
 
 /**
@@ -106,6 +68,8 @@ export function solveSizing(
   prepared: PreparedSizing = prepareSizing(model),
 ): SizingResult {
   const { ctx, sized } = prepared
+  const ids = ctx.prep.host.ids
+  const load = ctx.req.excitation
   const ev = sized ? evaluateAbsorber(ctx, sized.values) : null
   const peak = peakReport(ctx, ev)
   const withAbsorber = sized
@@ -115,15 +79,13 @@ export function solveSizing(
     nodeIds: ctx.prep.host.ids,
     modes: modeReports(ctx),
     targetMode: ctx.req.targetMode,
-    excitationNode: ctx.prep.host.ids[ctx.nodes.f] ?? '',
-    responseNode: ctx.prep.host.ids[ctx.nodes.r] ?? '',
+    excitationNode: load.node === null ? null : (ids[load.node] ?? null),
+    responseNode: ids[ctx.req.response.node] ?? '',
+    excitation: excitationReport(ctx),
+    response: responseReport(ctx),
+    speed: ctx.req.speed ? { minHz: ctx.req.speed.min * HZ, maxHz: ctx.req.speed.max * HZ } : null,
     effectiveMass: ctx.effectiveMass,
-    band: {
-      minHz: ctx.band.min * HZ,
-      maxHz: ctx.band.max * HZ,
-      modes: bandModes(ctx),
-      source: ctx.bandSource,
-    },
+    band: bandReport(ctx),
     absorber: sized?.report ?? null,
     peak,
     modesWithAbsorber: withAbsorber

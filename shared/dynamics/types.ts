@@ -41,6 +41,8 @@ export interface Modes {
 export interface AbsorberParams {
   /** index of the host degree of freedom it sits on */
   node: number
+  /** for an absorber acting between two nodes: the second one (its inertance reacts on it) */
+  relativeTo?: number
   /** kg */
   mass: number
   /** N/m */

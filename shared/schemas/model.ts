@@ -49,14 +49,61 @@ export const explicitTuningSchema = strictObject({
 
 export const absorberSchema = strictObject({
   node: text(),
+  /** a second free node: the absorber acts on the relative motion of `node` against it */
+  relativeTo: text().optional(),
   /** m_a / m_eff of the target mode at the absorber node; or give `mass` */
   massRatio: finite().optional(),
   /** kg, instead of massRatio */
   mass: finite().optional(),
   tuning: z.union([tuningNameSchema, explicitTuningSchema]).optional(),
+  /** m: the largest stroke allowed at the design load (excitation.amplitude) */
+  strokeLimit: finite().optional(),
 })
 
 export const bandSchema = strictObject({ minHz: finite(), maxHz: finite() })
+
+/** What loads the structure. */
+export const LOAD_KINDS = ['force', 'forces', 'mode-shaped', 'base'] as const
+export const loadKindSchema = z.enum(LOAD_KINDS)
+
+export const nodeForceSchema = strictObject({
+  node: text(),
+  /** N, in phase with the other forces of the vector */
+  amplitude: finite(),
+})
+
+export const excitationSchema = strictObject({
+  /** 'force' (default) at `node`; 'forces', a force vector; 'mode-shaped', p ∝ M φ_mode;
+   * 'base', support acceleration shared by every fixed node */
+  kind: loadKindSchema.optional(),
+  /** for 'force' */
+  node: text().optional(),
+  /** for 'forces' */
+  forces: z.array(nodeForceSchema).min(1, { error: 'give at least one force' }).optional(),
+  /** for 'mode-shaped': the 1-based mode whose shape the load follows (default the target mode) */
+  mode: z.number().int({ error: 'expected a whole mode number (1 = lowest)' }).optional(),
+  /** a rotating unbalance: the force grows as ω², so the amplitude is m·e in kg·m */
+  unbalance: z.boolean().optional(),
+  /** the design load: N (force kinds), m/s² (base), kg·m (unbalance); default 1 */
+  amplitude: finite().optional(),
+})
+
+export const RESPONSE_QUANTITIES = ['displacement', 'velocity', 'acceleration'] as const
+export const responseQuantitySchema = z.enum(RESPONSE_QUANTITIES)
+
+export const responseSchema = strictObject({
+  node: text(),
+  /** what is read and minimised: displacement (default), velocity or acceleration; under base
+   * motion displacement and velocity are relative to the supports, acceleration is absolute */
+  quantity: responseQuantitySchema.optional(),
+})
+
+/** A machine's running speed (`hz`) or speed range (`minHz`…`maxHz`): the band to tune over. */
+export const speedSchema = strictObject({
+  hz: finite().optional(),
+  minHz: finite().optional(),
+  maxHz: finite().optional(),
+})
 
 export const modelSchema = strictObject({
   name: z.string().optional(),
@@ -65,8 +112,8 @@ export const modelSchema = strictObject({
   /** modal damping ratio of every host mode, or one per mode (ascending frequency) */
   hostDampingRatio: z.union([finite(), z.array(finite())]).optional(),
   absorber: absorberSchema.optional(),
-  excitation: strictObject({ node: text() }).optional(),
-  response: strictObject({ node: text() }).optional(),
+  excitation: excitationSchema.optional(),
+  response: responseSchema.optional(),
   /** 1-based, in ascending frequency */
   targetMode: z
     .number({ error: 'expected a mode number' })
@@ -74,6 +121,7 @@ export const modelSchema = strictObject({
     .min(1, { error: 'modes are numbered from 1 (the lowest)' })
     .optional(),
   band: bandSchema.optional(),
+  speed: speedSchema.optional(),
 })
 
 export type NodeInput = z.infer<typeof nodeSchema>
@@ -82,6 +130,11 @@ export type TuningName = z.infer<typeof tuningNameSchema>
 export type ExplicitTuning = z.infer<typeof explicitTuningSchema>
 export type AbsorberInput = z.infer<typeof absorberSchema>
 export type BandInput = z.infer<typeof bandSchema>
+export type LoadKind = z.infer<typeof loadKindSchema>
+export type ExcitationInput = z.infer<typeof excitationSchema>
+export type ResponseInput = z.infer<typeof responseSchema>
+export type ResponseQuantity = z.infer<typeof responseQuantitySchema>
+export type SpeedInput = z.infer<typeof speedSchema>
 export type ModelInput = z.infer<typeof modelSchema>
 
 /**

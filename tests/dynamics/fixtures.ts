@@ -80,10 +80,10 @@ export function closeModeFloor(nx = 20, ny = 10, m = 500, f1 = 5): ModelInput {
   const kx = (m * (2 * Math.PI * f1) ** 2) / (4 * (s(1, nx) + ratio * s(1, ny)))
   const id = (i: number, j: number): string =>
     i < 1 || i > nx || j < 1 || j > ny ? 'edge' : `p${i}-${j}`
-  const nodes = [{ id: 'edge', fixed: true }]
+  const nodes: ModelInput['nodes'] = [{ id: 'edge', fixed: true }]
   const springs: ModelInput['springs'] = []
   for (let j = 1; j <= ny; j++) {
-    for (let i = 1; i <= nx; i++) nodes.push({ id: id(i, j), mass: m } as (typeof nodes)[number])
+    for (let i = 1; i <= nx; i++) nodes.push({ id: id(i, j), mass: m })
     for (let i = 0; i <= nx; i++) springs.push({ from: id(i, j), to: id(i + 1, j), stiffness: kx })
   }
   for (let i = 1; i <= nx; i++)

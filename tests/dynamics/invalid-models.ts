@@ -136,6 +136,48 @@ export const invalidCases: InvalidCase[] = [
     message: /^absorber\.massRatio: must be a positive finite number, got 0$/,
   },
   {
+    name: 'a force vector without forces',
+    model: edit((m) => (m.excitation = { kind: 'forces' })),
+    field: 'excitation.forces',
+    message: /^excitation\.forces: is required for kind 'forces'$/,
+  },
+  {
+    name: 'a node given with base motion',
+    model: edit((m) => (m.excitation = { kind: 'base', node: 'deck' })),
+    field: 'excitation.node',
+    message: /^excitation\.node: applies to kind 'force', not 'base'$/,
+  },
+  {
+    name: 'an unbalance under base motion',
+    model: edit((m) => (m.excitation = { kind: 'base', unbalance: true })),
+    field: 'excitation.unbalance',
+    message: /^excitation\.unbalance: applies to kind 'force' or 'forces', not 'base'$/,
+  },
+  {
+    name: 'a mode-shaped load on a mode that does not exist',
+    model: edit((m) => (m.excitation = { kind: 'mode-shaped', mode: 3 })),
+    field: 'excitation.mode',
+    message: /^excitation\.mode: mode 3 does not exist: the host has 2 mode\(s\)$/,
+  },
+  {
+    name: 'a zero load amplitude',
+    model: edit((m) => (m.excitation = { node: 'deck', amplitude: 0 })),
+    field: 'excitation.amplitude',
+    message: /^excitation\.amplitude: must be a positive finite number, got 0$/,
+  },
+  {
+    name: 'both a band and a running speed',
+    model: edit((m) => Object.assign(m, { band: { minHz: 1, maxHz: 9 }, speed: { hz: 4 } })),
+    field: 'speed',
+    message: /^speed: give either a band or a running speed, not both$/,
+  },
+  {
+    name: 'a speed range upside down',
+    model: edit((m) => (m.speed = { minHz: 5, maxHz: 4 })),
+    field: 'speed.maxHz',
+    message: /^speed\.maxHz: must be above speed\.minHz$/,
+  },
+  {
     name: 'a misspelt key',
     model: edit((m) => Object.assign(m, { hostDampingRatios: 0.02 })),
     field: '(top level)',

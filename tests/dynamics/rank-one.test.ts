@@ -43,7 +43,7 @@ function compare(dashpots: boolean, seed: number): { receptance: number; stroke:
   const stroke = { re: new Float64Array(omega.length), im: new Float64Array(omega.length) }
   const p = { re: 0, im: 0, strokeRe: 0, strokeIm: 0 }
   omega.forEach((w, k) => {
-    absorberAt(rec.values, 8 * k, w, ab.mass, ab.stiffness, ab.damping, p)
+    absorberAt(rec.values, 8 * k, w, ab.mass, ab.stiffness, ab.damping, 0, p)
     ;[fast.re[k], fast.im[k], stroke.re[k], stroke.im[k]] = [p.re, p.im, p.strokeRe, p.strokeIm]
   })
   return { receptance: relError(fast, ref.receptance), stroke: relError(stroke, ref.stroke) }
