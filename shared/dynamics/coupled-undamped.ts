@@ -19,7 +19,7 @@ function shape(prep: PreparedHost, q: Float64Array): Float64Array {
 
 function dashpotWork(prep: PreparedHost, x: Float64Array): number {
   let s = 0
-  for (const e of prep.host.springs) {
+  for (const e of prep.dampers) {
     if (e.damping === 0) continue
     const d = (e.a < 0 ? 0 : (x[e.a] ?? 0)) - (e.b < 0 ? 0 : (x[e.b] ?? 0))
     s += e.damping * d * d

@@ -127,7 +127,15 @@ export function hostReceptance(
   vectors: ReceptanceVectors | NodeTriple,
   omega: Float64Array,
 ): HostReceptance {
-  const v = 'j' in vectors ? nodeVectors(prep.n, vectors) : vectors
+  const full = 'j' in vectors ? nodeVectors(prep.fullN, vectors) : vectors
+  // Massless nodes: condensed vectors for the dynamics, plus a static term (condense.ts).
+  const v = { r: prep.condense(full.r), p: prep.condense(full.p), u: prep.condense(full.u) }
+  const fixed = [
+    prep.staticTerm(full.r, full.p),
+    prep.staticTerm(full.r, full.u),
+    prep.staticTerm(full.u, full.p),
+    prep.staticTerm(full.u, full.u),
+  ]
   const n = prep.n
   const [cr, cp, cu] = [v.r, v.p, v.u].map((a) => participation(prep.modes, a))
   const prod = new Float64Array(4 * n)
@@ -141,7 +149,10 @@ export function hostReceptance(
     let at = w
     // Step aside from a singular point (an undamped mode's own frequency) until the sum is finite.
     for (let tries = 0; tries < 4; tries++) {
-      if (prep.classical ? modalAt(prep, prod, at, out) : directAt(prep, v, at, out)) return
+      if (prep.classical ? modalAt(prep, prod, at, out) : directAt(prep, v, at, out)) {
+        for (let q = 0; q < 4; q++) out[2 * q] = (out[2 * q] ?? 0) + (fixed[q] ?? 0)
+        return
+      }
       at = w * (1 + 2 * POLE_GAP * 2 ** tries)
     }
   }

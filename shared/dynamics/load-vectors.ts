@@ -22,18 +22,18 @@ function unit(n: number, k: number): Float64Array {
  * @param load the validated load
  */
 export function loadVector(prep: PreparedHost, load: ValidLoad): Float64Array {
-  const { n, phi } = prep.modes
+  const n = prep.fullN
   if (load.kind === 'force') return unit(n, load.node ?? 0)
   const p = new Float64Array(n)
   if (load.kind === 'forces') {
     for (const [k, a] of load.forces) p[k] = (p[k] ?? 0) + a
   } else if (load.kind === 'base') {
-    prep.mass.forEach((m, k) => (p[k] = -m))
+    prep.host.mass.forEach((m, k) => (p[k] = -m))
   } else {
-    const mode = load.mode ?? 0
+    const shape = prep.shape(load.mode ?? 0)
     let total = 0
     for (let k = 0; k < n; k++) {
-      p[k] = (prep.mass[k] ?? 0) * (phi[k * n + mode] ?? 0)
+      p[k] = (prep.host.mass[k] ?? 0) * (shape[k] ?? 0)
       total += Math.abs(p[k] ?? 0)
     }
     for (let k = 0; k < n; k++) p[k] = (p[k] ?? 0) / total
@@ -71,7 +71,7 @@ export function requestVectors(
 ): { vectors: ReceptanceVectors; measure: Measure } {
   const base = load.kind === 'base'
   return {
-    vectors: { r: unit(prep.n, response.node), p: loadVector(prep, load), u },
+    vectors: { r: unit(prep.fullN, response.node), p: loadVector(prep, load), u },
     measure: {
       power: POWER[response.quantity],
       unbalance: load.unbalance,

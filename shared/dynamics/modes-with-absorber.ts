@@ -17,7 +17,7 @@ export function modesWithAbsorber(
   stiffness: number,
 ): Float64Array {
   const lambda = prep.modes.omega.map((w) => w * w)
-  const weight = participation(prep.modes, u).map((c) => c * c)
+  const weight = participation(prep.modes, prep.condense(u)).map((c) => c * c)
   const roots = coupledEigenvalues(secularPoles(lambda, weight), mass, stiffness)
   return Float64Array.from(roots, (x) => Math.sqrt(x))
 }

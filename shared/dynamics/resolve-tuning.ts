@@ -3,6 +3,7 @@ import { closedForms, optimizerScopes, type Tuning } from './closed-forms'
 import { ModelError } from './errors'
 import { optimizeTuning, type StartName } from './optimize-tuning'
 import type { SizingContext } from './sizing-context'
+import { limitStroke } from './stroke-limit'
 import { tuningProblem } from './tuning-objective'
 
 /** A tuning with the method that produced it and that method's scope. */
@@ -11,6 +12,9 @@ export interface ResolvedTuning extends Tuning {
   scope: string
   /** for the optimisers: the closed form (or running-speed tuning) they started from */
   startedFrom?: StartName
+  /** with a stroke limit and an optimiser: whether some tuning respects it, and if none does the
+   * smallest stroke found per unit load */
+  strokeSearch?: { respected: boolean; smallest: number | null }
 }
 
 /**
@@ -59,12 +63,17 @@ export function resolveTuning(
       zetaHost,
       extraStarts: speedStarts(ctx, mu),
     })
+    const limit = ctx.req.absorber?.strokeLimit
+    const best = { frequencyRatio: o.frequencyRatio, dampingRatio: o.dampingRatio }
+    const limited = limit ? limitStroke(pb, best, limit / ctx.req.excitation.amplitude) : null
     return {
-      frequencyRatio: o.frequencyRatio,
-      dampingRatio: o.dampingRatio,
+      ...(limited?.tuning ?? best),
       method: tuning,
       scope: optimizerScopes[tuning],
       startedFrom: o.startedFrom,
+      ...(limited && {
+        strokeSearch: { respected: limited.respected, smallest: limited.smallest },
+      }),
     }
   }
   // With a resonance no absorber can damp, every tuning has an unbounded peak: nothing to optimise,

@@ -10,6 +10,8 @@ const HZ = 1 / (2 * Math.PI)
 export interface SizedAbsorber {
   report: AbsorberReport
   values: AbsorberValues
+  /** the optimiser's search under a stroke limit, when there was one */
+  strokeSearch?: { respected: boolean; smallest: number | null }
 }
 
 /** A model's context and its sized absorber: computed once, shared by every part of a study. */
@@ -31,6 +33,7 @@ export function sizeAbsorber(ctx: SizingContext): SizedAbsorber | null {
   const values = absorberValues(mass, ctx.omegaTarget, t)
   const report: AbsorberReport = {
     node: ctx.prep.host.ids[ab.node] ?? '',
+    relativeTo: ab.relativeTo === null ? null : (ctx.prep.host.ids[ab.relativeTo] ?? null),
     mass,
     massRatio: mu,
     stiffness: values.stiffness,
@@ -41,8 +44,9 @@ export function sizeAbsorber(ctx: SizingContext): SizedAbsorber | null {
     tuning: t.method,
     scope: t.scope,
     ...(t.startedFrom ? { startedFrom: t.startedFrom } : {}),
+    strokeLimit: ab.strokeLimit,
   }
-  return { report, values }
+  return { report, values, ...(t.strokeSearch && { strokeSearch: t.strokeSearch }) }
 }
 
 /**

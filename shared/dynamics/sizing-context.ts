@@ -85,14 +85,14 @@ export function sizingContext(
   stiffnessFactor = 1,
 ): SizingContext {
   const { host, index } = validateHost(model)
-  const req = validateRequest(model, index, host.ids.length)
+  const req = validateRequest(model, index, host.ids.length - host.massless.length)
   const prep = scaleHost(prepared ?? prepareHost(host, req.dampingRatios), stiffnessFactor)
   const r = req.targetMode - 1
   const omegaTarget = prep.modes.omega[r] ?? 0
   const [band, bandSource] = bandOf(prep, req, r)
   const ab = req.absorber
   const absorberNode = ab?.node ?? req.response.node
-  const u = attachmentVector(prep.n, absorberNode, ab?.relativeTo ?? null)
+  const u = attachmentVector(prep.fullN, absorberNode, ab?.relativeTo ?? null)
   const { vectors, measure } = requestVectors(
     prep,
     req.excitation,

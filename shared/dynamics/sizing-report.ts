@@ -16,12 +16,11 @@ const QUANTITY_UNIT = { displacement: 'm', velocity: 'm/s', acceleration: 'm/s²
 
 /** @param ctx sizing context */
 export function modeReports(ctx: SizingContext): ModeReport[] {
-  const { n, omega, phi } = ctx.prep.modes
-  return Array.from(omega, (w, i) => ({
+  return Array.from(ctx.prep.modes.omega, (w, i) => ({
     number: i + 1,
     frequencyHz: w * HZ,
     dampingRatio: ctx.prep.zeta[i] ?? 0,
-    shape: Array.from({ length: n }, (_, a) => phi[a * n + i] ?? 0),
+    shape: Array.from(ctx.prep.shape(i)),
   }))
 }
 

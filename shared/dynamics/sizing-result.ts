@@ -51,6 +51,8 @@ export interface ResponseReport {
 /** The absorber to build. */
 export interface AbsorberReport {
   node: string
+  /** for an absorber acting between two nodes: the second node (its inertia reacts there) */
+  relativeTo: string | null
   /** kg */
   mass: number
   /** m_a / m_eff */
@@ -68,6 +70,8 @@ export interface AbsorberReport {
   /** where the tuning method holds */
   scope: string
   startedFrom?: ClosedFormName | 'running-speed'
+  /** m at the design load, as asked; null when none was given */
+  strokeLimit: number | null
 }
 
 /** Largest response per unit load over the band, in `unit`; null when unbounded. */
@@ -107,6 +111,10 @@ export interface DesignReport {
   maxStrokeFrequencyHz: number | null
   /** 1 − with/without, as in peak.reduction */
   peakReduction: number | null
+  /** largest stroke over the band at the design load (excitation.amplitude), m */
+  maxStroke: number | null
+  /** whether maxStroke stays within absorber.strokeLimit; null without a limit */
+  strokeWithinLimit: boolean | null
 }
 
 /** Result of `solveSizing`: the contract of the command line and the sizing API. */

@@ -32,6 +32,8 @@ export interface TuningProblem {
   mass: number
   /** scratch, one value per grid point */
   mag: Float64Array
+  /** scratch for strokes, one value per grid point */
+  stroke: Float64Array
   /** secular poles of the host at the attachment, for the natural frequencies with the absorber */
   poles: Poles
   /** what is read and minimised */
@@ -52,7 +54,8 @@ export function tuningProblem(
 ): TuningProblem {
   const weight = rec.lambda.map((_, i) => (rec.participation[3 * i + 2] ?? 0) ** 2)
   const poles = secularPoles(rec.lambda, weight)
-  return { rec, omegaTarget, mass, mag: new Float64Array(rec.omega.length), poles, measure }
+  const mag = new Float64Array(rec.omega.length)
+  return { rec, omegaTarget, mass, mag, stroke: new Float64Array(mag.length), poles, measure }
 }
 
 /**
@@ -111,6 +114,18 @@ export function coupledFrequencies(pb: TuningProblem, a: AbsorberValues): number
 export function peakWith(pb: TuningProblem, a: AbsorberValues): Peak {
   absorberOnGrid(pb.rec, a, pb.measure, pb.mag)
   return findPeak(pb.rec.omega, pb.mag, exactMagnitude(pb.rec, a, pb.measure), {
+    extra: coupledFrequencies(pb, a),
+  })
+}
+
+/**
+ * Largest absorber stroke per unit load over the band with the absorber, refined like the peak.
+ * @param pb the problem
+ * @param a absorber values
+ */
+export function strokeWith(pb: TuningProblem, a: AbsorberValues): Peak {
+  absorberOnGrid(pb.rec, a, pb.measure, pb.mag, pb.stroke)
+  return findPeak(pb.rec.omega, pb.stroke, exactMagnitude(pb.rec, a, pb.measure, true), {
     extra: coupledFrequencies(pb, a),
   })
 }

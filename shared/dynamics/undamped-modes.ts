@@ -56,7 +56,7 @@ function clusterDamping(prep: PreparedHost, from: number, to: number): Matrix {
   const g = new Matrix(m, m)
   for (let k = 0; k < m; k++) g.set(k, k, 2 * (prep.zeta[from + k] ?? 0) * (omega[from + k] ?? 0))
   const at = (node: number, k: number): number => (node < 0 ? 0 : (phi[node * n + from + k] ?? 0))
-  for (const s of prep.host.springs) {
+  for (const s of prep.dampers) {
     if (s.damping === 0) continue
     for (let k = 0; k < m; k++) {
       for (let l = 0; l < m; l++) {

@@ -33,6 +33,8 @@ export interface ValidAbsorber {
   /** kg */
   mass: number | null
   tuning: TuningName | ExplicitTuning
+  /** m at the design load, or null */
+  strokeLimit: number | null
 }
 
 function positive(value: number, field: string, unit: string): number {
@@ -84,7 +86,9 @@ function validAbsorber(a: AbsorberInput, index: NodeIndex): ValidAbsorber {
       throw new ModelError('absorber.tuning.dampingRatio', `must be a finite number ≥ 0, got ${z}`)
     }
   }
-  return { node, relativeTo, massRatio, mass, tuning }
+  const strokeLimit =
+    a.strokeLimit === undefined ? null : positive(a.strokeLimit, 'absorber.strokeLimit', ' of m')
+  return { node, relativeTo, massRatio, mass, tuning, strokeLimit }
 }
 
 function validBand(band: ModelInput['band']): ValidRequest['band'] {

@@ -90,4 +90,45 @@ export const cliCases: CliCase[] = [
       expect(out.band).toMatchObject({ minHz: 3.5, maxHz: 4.5, source: 'speed' })
     },
   },
+  {
+    name: 'an absorber acting between two nodes',
+    model: { ...base, absorber: { node: 'rail', relativeTo: 'deck', massRatio: 0.02 } },
+    check(out) {
+      expect(out.absorber?.relativeTo).toBe('deck')
+      expect(out.peak.with).toBeLessThan(out.peak.without ?? 0)
+    },
+  },
+  {
+    name: 'a stroke limit at the design load',
+    model: {
+      ...base,
+      excitation: { node: 'deck', amplitude: 500 },
+      absorber: { node: 'deck', massRatio: 0.02, strokeLimit: 0.02 },
+    },
+    check(out) {
+      expect(out.absorber?.strokeLimit).toBe(0.02)
+      expect(out.design?.maxStroke).toBeLessThanOrEqual(0.02)
+      expect(out.design?.strokeWithinLimit).toBe(true)
+    },
+  },
+  {
+    name: 'a pure dashpot and a massless node',
+    model: {
+      ...base,
+      nodes: [...base.nodes, { id: 'hanger' }],
+      springs: [
+        ...base.springs,
+        { from: 'rail', to: 'hanger', stiffness: 2e6 },
+        { from: 'hanger', to: 'ground', stiffness: 2e6 },
+        { from: 'deck', to: 'ground', stiffness: 0, damping: 800 },
+      ],
+      response: { node: 'hanger' },
+    },
+    check(out) {
+      expect(out.nodeIds).toEqual(['deck', 'rail', 'hanger'])
+      expect(out.modes).toHaveLength(2)
+      expect(out.notes.join(' ')).toMatch(/'hanger' condensed statically/)
+      expect(out.peak.with).toBeLessThan(out.peak.without ?? 0)
+    },
+  },
 ]

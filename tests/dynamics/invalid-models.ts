@@ -63,10 +63,10 @@ export const invalidCases: InvalidCase[] = [
     cli: /nodes\[2\]\.mass: expected a finite number/,
   },
   {
-    name: 'a non-positive mass',
+    name: 'a negative mass',
     model: edit((m) => (at(m.nodes, 2).mass = -200)),
     field: 'nodes[2].mass',
-    message: /^nodes\[2\]\.mass: must be positive \(kg\), got -200$/,
+    message: /^nodes\[2\]\.mass: must not be negative \(kg\), got -200$/,
   },
   {
     name: 'a non-finite stiffness',
@@ -77,10 +77,25 @@ export const invalidCases: InvalidCase[] = [
     cli: /springs\[0\]\.stiffness: expected a finite number/,
   },
   {
-    name: 'a non-positive stiffness',
+    name: 'a spring with neither stiffness nor damping',
     model: edit((m) => (at(m.springs, 1).stiffness = 0)),
     field: 'springs[1].stiffness',
-    message: /^springs\[1\]\.stiffness: must be positive \(N\/m\), got 0$/,
+    message: /^springs\[1\]\.stiffness: a spring with stiffness 0 and no damping does nothing/,
+  },
+  {
+    name: 'a negative stiffness',
+    model: edit((m) => (at(m.springs, 1).stiffness = -5)),
+    field: 'springs[1].stiffness',
+    message: /^springs\[1\]\.stiffness: must not be negative \(N\/m\), got -5$/,
+  },
+  {
+    name: 'a node held only by a dashpot',
+    model: edit((m) => {
+      m.nodes.push({ id: 'cart', mass: 10 })
+      m.springs.push({ from: 'ground', to: 'cart', stiffness: 0, damping: 50 })
+    }),
+    field: 'nodes[3]',
+    message: /^nodes\[3\]: node 'cart' has no path through springs to a fixed node/,
   },
   {
     name: 'a negative damping',
@@ -111,11 +126,20 @@ export const invalidCases: InvalidCase[] = [
       /^absorber\.node: node 'ground' is fixed \(grounded\); an absorber must be a free node$/,
   },
   {
-    name: 'a massless free node',
-    model: edit((m) => delete at(m.nodes, 2).mass),
-    field: 'nodes[2].mass',
+    name: 'a dashpot on a massless node',
+    model: edit((m) => {
+      delete at(m.nodes, 2).mass
+      at(m.springs, 1).damping = 40
+    }),
+    field: 'springs[1].damping',
     message:
-      /^nodes\[2\]\.mass: free node 'rail' has no mass; massless free nodes are refused, not condensed/,
+      /^springs\[1\]\.damping: a dashpot on massless node 'rail' cannot be condensed exactly/,
+  },
+  {
+    name: 'a model without mass',
+    model: edit((m) => m.nodes.forEach((x) => delete x.mass)),
+    field: 'nodes',
+    message: /^nodes: every free node is massless/,
   },
   {
     name: 'a target mode that does not exist',
