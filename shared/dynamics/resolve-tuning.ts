@@ -14,7 +14,7 @@ export interface ResolvedTuning extends Tuning {
   startedFrom?: StartName
   /** with a stroke limit and an optimiser: whether some tuning respects it, and if none does the
    * smallest stroke found per unit load */
-  strokeSearch?: { respected: boolean; smallest: number | null }
+  strokeSearch?: { respected: boolean; active: boolean; smallest: number | null }
 }
 
 /**
@@ -72,7 +72,11 @@ export function resolveTuning(
       scope: optimizerScopes[tuning],
       startedFrom: o.startedFrom,
       ...(limited && {
-        strokeSearch: { respected: limited.respected, smallest: limited.smallest },
+        strokeSearch: {
+          respected: limited.respected,
+          active: limited.active,
+          smallest: limited.smallest,
+        },
       }),
     }
   }

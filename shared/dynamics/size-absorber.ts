@@ -1,4 +1,6 @@
 import type { ModelInput } from '../schemas/model'
+import { closedForms, type ClosedFormName } from './closed-forms'
+import { outsideScope } from './closed-form-scope'
 import { resolveTuning } from './resolve-tuning'
 import { sizingContext, type SizingContext } from './sizing-context'
 import type { AbsorberReport } from './sizing-result'
@@ -11,7 +13,7 @@ export interface SizedAbsorber {
   report: AbsorberReport
   values: AbsorberValues
   /** the optimiser's search under a stroke limit, when there was one */
-  strokeSearch?: { respected: boolean; smallest: number | null }
+  strokeSearch?: { respected: boolean; active: boolean; smallest: number | null }
 }
 
 /** A model's context and its sized absorber: computed once, shared by every part of a study. */
@@ -45,6 +47,7 @@ export function sizeAbsorber(ctx: SizingContext): SizedAbsorber | null {
     scope: t.scope,
     ...(t.startedFrom ? { startedFrom: t.startedFrom } : {}),
     strokeLimit: ab.strokeLimit,
+    outsideScope: t.method in closedForms ? outsideScope(ctx, t.method as ClosedFormName) : [],
   }
   return { report, values, ...(t.strokeSearch && { strokeSearch: t.strokeSearch }) }
 }

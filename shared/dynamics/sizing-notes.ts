@@ -54,7 +54,7 @@ function strokeNotes(sized: SizedAbsorber, design: DesignReport, amplitude: numb
     ]
   }
   if (design.strokeWithinLimit) {
-    return search
+    return search?.active
       ? [`The stroke limit of ${mm(limit)} holds: the tuning shown is the best that respects it.`]
       : []
   }
@@ -90,6 +90,14 @@ export function sizingNotes(
     )
   }
   notes.push(...closeModeNotes(ctx))
+  const outside = sized?.report.outsideScope ?? []
+  if (sized && outside.length > 0) {
+    notes.push(
+      `The closed form '${sized.report.tuning}' is used outside its stated scope: ` +
+        `${outside.join('; ')}. Its tuning is the formula's; the peaks shown are the model's. ` +
+        "Prefer 'optimize' (the default), which tunes this model as it is.",
+    )
+  }
   if (sized && design) notes.push(...strokeNotes(sized, design, ctx.req.excitation.amplitude))
   return notes
 }

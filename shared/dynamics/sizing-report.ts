@@ -33,11 +33,20 @@ export function bandModes(ctx: SizingContext): number[] {
   return out
 }
 
+/** The running speed or range in Hz as given (no round trip through rad/s), or null. */
+export function speedReport(ctx: SizingContext): { minHz: number; maxHz: number } | null {
+  const s = ctx.model.speed
+  if (!s || !ctx.req.speed) return null
+  return { minHz: s.hz ?? s.minHz ?? 0, maxHz: s.hz ?? s.maxHz ?? 0 }
+}
+
 /** @param ctx sizing context */
 export function bandReport(ctx: SizingContext): BandReport {
+  // A band the person gave is shown as given, not after a round trip through rad/s.
+  const given = speedReport(ctx) ?? (ctx.req.band ? ctx.model.band : undefined)
   return {
-    minHz: ctx.band.min * HZ,
-    maxHz: ctx.band.max * HZ,
+    minHz: given?.minHz ?? ctx.band.min * HZ,
+    maxHz: given?.maxHz ?? ctx.band.max * HZ,
     modes: bandModes(ctx),
     source: ctx.bandSource,
   }

@@ -72,6 +72,8 @@ export interface AbsorberReport {
   startedFrom?: ClosedFormName | 'running-speed'
   /** m at the design load, as asked; null when none was given */
   strokeLimit: number | null
+  /** for a closed form: the choices of this sizing outside its stated scope (empty when none) */
+  outsideScope: string[]
 }
 
 /** Largest response per unit load over the band, in `unit`; null when unbounded. */

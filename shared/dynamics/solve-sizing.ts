@@ -9,6 +9,7 @@ import {
   modeReports,
   peakReport,
   responseReport,
+  speedReport,
 } from './sizing-report'
 import { designReport, SIZING_CAUTIONS } from './design-values'
 import { sizingNotes } from './sizing-notes'
@@ -52,7 +53,7 @@ export function solveSizing(
     responseNode: ids[ctx.req.response.node] ?? '',
     excitation: excitationReport(ctx),
     response: responseReport(ctx),
-    speed: ctx.req.speed ? { minHz: ctx.req.speed.min * HZ, maxHz: ctx.req.speed.max * HZ } : null,
+    speed: speedReport(ctx),
     effectiveMass: ctx.effectiveMass,
     band: bandReport(ctx),
     absorber: sized?.report ?? null,

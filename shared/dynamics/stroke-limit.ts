@@ -20,6 +20,8 @@ export interface StrokeLimited {
   tuning: Tuning
   /** true when the tuning keeps the stroke within the limit */
   respected: boolean
+  /** true when the unconstrained optimum exceeded the limit, so the limit shaped the tuning */
+  active: boolean
   /** smallest stroke per unit load found when no tuning respects the limit, else null */
   smallest: number | null
 }
@@ -122,12 +124,14 @@ function alongLimit(pb: TuningProblem, best: Tuning, limit: number): Tuning | nu
  * @param limit largest stroke per unit load, m per unit
  */
 export function limitStroke(pb: TuningProblem, best: Tuning, limit: number): StrokeLimited {
-  if (stroke(pb, best) <= limit) return { tuning: best, respected: true, smallest: null }
+  if (stroke(pb, best) <= limit)
+    return { tuning: best, respected: true, active: false, smallest: null }
   const f0 = best.frequencyRatio
   let start = alongLimit(pb, best, limit)
   if (!start) {
     const least = smallestStroke(pb, best)
-    if (least.stroke > limit) return { tuning: best, respected: false, smallest: least.stroke }
+    if (least.stroke > limit)
+      return { tuning: best, respected: false, active: true, smallest: least.stroke }
     start = least.tuning
   }
   const toTuning = (x: number[]): Tuning => clamped(x, f0)
@@ -140,5 +144,5 @@ export function limitStroke(pb: TuningProblem, best: Tuning, limit: number): Str
   const x0 = [Math.log(start.frequencyRatio), Math.log(start.dampingRatio)]
   const found = nelderMead(cost, x0, { step: [0.01, 0.05], maxEvaluations: 120, tolerance: 1e-9 })
   // Ranked below every feasible tuning, an infeasible one never wins over the feasible start.
-  return { tuning: toTuning(found.x), respected: true, smallest: null }
+  return { tuning: toTuning(found.x), respected: true, active: true, smallest: null }
 }
