@@ -87,8 +87,8 @@ export function optimizeTuning(
     Math.log(start.t.frequencyRatio),
     Math.log(Math.max(start.t.dampingRatio, MIN_START_DAMPING)),
   ]
-  const first = nelderMead(f, x0, { step: [0.02, 0.15], maxEvaluations, tolerance: 1e-9 })
-  const second = nelderMead(f, first.x, { step: [0.005, 0.05], maxEvaluations, tolerance: 1e-9 })
+  const first = nelderMead(f, x0, { step: [0.02, 0.15], maxEvaluations, tolerance: 1e-7 })
+  const second = nelderMead(f, first.x, { step: [0.005, 0.05], maxEvaluations, tolerance: 1e-7 })
   const best = second.value <= first.value ? second : first
   const evaluations = first.evaluations + second.evaluations + candidates.length
   return best.value < start.value

@@ -82,53 +82,12 @@ function brentMax(
   return { value: -fx, omega: x }
 }
 
-/** Scratch for the merged samples, grown as needed and reused: findPeak runs in tight loops. */
-let bufW = new Float64Array(0)
-let bufM = new Float64Array(0)
-
-/** Grid and extra points merged in ascending order, the extra ones evaluated exactly. */
-function samples(
-  omega: Float64Array,
-  mag: Float64Array,
-  exact: (w: number) => number,
-  extra: ArrayLike<number>,
-): { omega: Float64Array; mag: Float64Array; n: number } {
-  const first = omega[0] ?? 0
-  const last = omega[omega.length - 1] ?? 0
-  const more: number[] = []
-  for (let k = 0; k < extra.length; k++) {
-    const w = extra[k] ?? 0
-    if (w > first && w < last) more.push(w)
-  }
-  if (more.length === 0) return { omega, mag, n: omega.length }
-  more.sort((a, b) => a - b)
-  const n = omega.length + more.length
-  if (bufW.length < n) {
-    bufW = new Float64Array(2 * n)
-    bufM = new Float64Array(2 * n)
-  }
-  let i = 0
-  let k = 0
-  for (let o = 0; o < n; o++) {
-    const next = more[k]
-    if (next !== undefined && (i >= omega.length || next < (omega[i] ?? 0))) {
-      bufW[o] = next
-      bufM[o] = exact(next)
-      k++
-    } else {
-      bufW[o] = omega[i] ?? 0
-      bufM[o] = mag[i] ?? 0
-      i++
-    }
-  }
-  return { omega: bufW, mag: bufM, n }
-}
-
 /**
- * Largest value of a curve over its band: every local maximum of the samples is refined between
- * its neighbours with the exact curve, so a sharp resonance is not missed between samples as long as each
- * resonance has a sample near it (the grid carries the natural frequencies for that). The band is
- * [omega[0], omega[last]]; the peak returned is a value the curve takes inside it.
+ * Largest value of a curve over its band: every local maximum of the samples (grid and extra
+ * points merged in order) is refined between its neighbours with the exact curve, so a sharp
+ * resonance is not missed between samples as long as each resonance has a sample near it (the
+ * grid carries the natural frequencies for that). The band is [omega[0], omega[last]]; the peak
+ * returned is a value the curve takes inside it.
  * @param omega grid, rad/s, ascending
  * @param mag curve values on the grid
  * @param exact the curve at any frequency (rad/s)
@@ -140,19 +99,50 @@ export function findPeak(
   exact: (w: number) => number,
   options: PeakOptions = {},
 ): Peak {
-  const { tolerance = 3e-9 } = options
-  const s = samples(omega, mag, exact, options.extra ?? [])
-  const n = s.n
-  let best: Peak = { value: -Infinity, omega: s.omega[0] ?? 0 }
-  for (let i = 0; i < n; i++) {
-    const y = s.mag[i] ?? 0
-    if (i > 0 && !(y > (s.mag[i - 1] ?? 0))) continue
-    if (i < n - 1 && y < (s.mag[i + 1] ?? 0)) continue
-    const here: Peak = { value: y, omega: s.omega[i] ?? 0 }
-    const lo = s.omega[Math.max(i - 1, 0)] ?? 0
-    const hi = s.omega[Math.min(i + 1, n - 1)] ?? 0
-    const p = hi > lo ? brentMax(exact, lo, hi, here, tolerance) : here
-    if (p.value > best.value) best = p
+  const { tolerance = 3e-9, extra = [] } = options
+  const n = omega.length
+  const first = omega[0] ?? 0
+  const last = omega[n - 1] ?? 0
+  const ew: number[] = []
+  for (let k = 0; k < extra.length; k++) {
+    const w = extra[k] ?? 0
+    if (w > first && w < last) ew.push(w)
+  }
+  ew.sort((a, b) => a - b)
+  const ey = ew.map(exact)
+  const total = n + ew.length
+  let best: Peak = { value: -Infinity, omega: first }
+  // One pass over grid and extra points merged in order, with a window of three samples
+  // (previous p, current c, next); plain variables, as this runs for every candidate tuning.
+  let gi = 0
+  let ei = 0
+  let pw = first
+  let py = -Infinity
+  let cw = 0
+  let cy = 0
+  for (let k = 0; k <= total; k++) {
+    let nw = NaN
+    let ny = -Infinity
+    if (ei < ew.length && (gi >= n || (ew[ei] ?? 0) < (omega[gi] ?? 0))) {
+      nw = ew[ei] ?? 0
+      ny = ey[ei] ?? 0
+      ei++
+    } else if (gi < n) {
+      nw = omega[gi] ?? 0
+      ny = mag[gi] ?? 0
+      gi++
+    }
+    if (k > 0 && cy > py && cy >= ny) {
+      const here: Peak = { value: cy, omega: cw }
+      const hi = k < total ? nw : cw
+      const lo = k > 1 ? pw : cw
+      const p = hi > lo ? brentMax(exact, lo, hi, here, tolerance) : here
+      if (p.value > best.value) best = p
+    }
+    pw = cw
+    py = k > 0 ? cy : -Infinity
+    cw = nw
+    cy = ny
   }
   return best
 }
