@@ -316,6 +316,51 @@ describe('repeated quote actions (a double tap, a retry)', () => {
   })
 })
 
+describe('a quote of a sizing handed over with failed checks', () => {
+  it('is sent only with the sales confirmation, which a new revision asks for again', async () => {
+    const ack = {
+      revision: 1,
+      failed: [
+        {
+          check: 'acceptance' as const,
+          passes: false,
+          title: 'Acceptance limit',
+          message:
+            'With the absorber the peak acceleration is 0.06 m/s², above the limit of 0.05 m/s² (Office floor).',
+          details: [],
+        },
+      ],
+      reason: 'Tenant accepts the residual response until the second unit is fitted.',
+      at: '2026-01-05T10:00:00.000Z',
+      byName: 'Field engineer',
+    }
+    const { company, contact } = await customerWithContact(sales)
+    const sizing = sizingSummary(company.id, { designAcknowledgement: ack })
+    sizings.put(sizing)
+    const draft = await sales.post('/api/quotes').send({
+      sizingId: sizing.id,
+      contactId: contact.id,
+      validUntil: daysFromNow(t, 30),
+      lines: [{ kind: 'unit', productLineId: ids.unit('FLR-S'), quantity: 1 }],
+    })
+    const id = draft.body.id
+    const refused = await sales.post(`/api/quotes/${id}/send`)
+    expect(refused.status).toBe(422)
+    expect(refused.body.error).toMatchObject({
+      code: 'design-checks-unconfirmed',
+      details: [{ check: 'acceptance', title: 'Acceptance limit' }],
+    })
+    const sent = await sales.post(`/api/quotes/${id}/send`).send({ confirmDesignChecks: true })
+    expect(sent.body.designConfirmation).toMatchObject({ byName: expect.stringMatching(/^sales /) })
+    const mail = await mailTo(t, contact.email)
+    expect(mail.text).toContain('Design checks not met')
+    const rev = await sales.post(`/api/quotes/${id}/revise`)
+    expect(rev.body.designConfirmation).toBeNull()
+    expect(rev.body.sizing.designAcknowledgement).toEqual(ack)
+    expect((await sales.post(`/api/quotes/${rev.body.id}/send`)).status).toBe(422)
+  })
+})
+
 describe('who may see and do what with quotes', () => {
   it('keeps quotes from engineers and production altogether (403)', async () => {
     const { res } = await draftFor()
