@@ -12,6 +12,7 @@ import type { Mailer } from './integrations/mail'
 import { authenticate } from './middleware/authenticate'
 import { errorHandler, notFoundHandler } from './middleware/error-handler'
 import { requestId } from './middleware/request-id'
+import { refuseCrossSite } from './middleware/same-origin'
 import { authRouter } from './modules/auth/auth.router'
 import { authService } from './modules/auth/auth.service'
 import { tokensRepository } from './modules/auth/tokens.repository'
@@ -22,6 +23,7 @@ import { usersRepository } from './modules/users/users.repository'
 import { usersRouter } from './modules/users/users.router'
 import { usersService } from './modules/users/users.service'
 import { fileStore } from './integrations/file-store'
+import { throttle } from './integrations/rate-limits'
 import { sitesRepository } from './modules/sites/sites.repository'
 import { sitesRouter } from './modules/sites/sites.router'
 import { sitesService } from './modules/sites/sites.service'
@@ -64,12 +66,38 @@ export interface AppDeps {
   pdf?: PdfRenderer
 }
 
+const MINUTE = 60
+
+/** Shared counters in MariaDB, so every instance behind a proxy counts the same attempts. */
+function buildLimits({ dataSource: ds, config: c }: AppDeps) {
+  const wait = 'Too many attempts; wait a while and try again.'
+  return {
+    signIn: throttle(ds, c.DB_NAME, 'sign-in', {
+      account: { points: c.SIGN_IN_LIMIT, seconds: 15 * MINUTE },
+      address: { points: c.SIGN_IN_ADDRESS_LIMIT, seconds: 15 * MINUTE },
+      message: 'Too many failed sign-ins; wait a few minutes.',
+    }),
+    reset: throttle(ds, c.DB_NAME, 'reset', {
+      account: { points: c.RESET_LIMIT, seconds: 60 * MINUTE },
+      address: { points: c.RESET_ADDRESS_LIMIT, seconds: 60 * MINUTE },
+      message: wait,
+    }),
+    invite: throttle(ds, c.DB_NAME, 'invite', {
+      account: { points: c.INVITE_LIMIT, seconds: 24 * 60 * MINUTE },
+      address: { points: c.INVITE_ADDRESS_LIMIT, seconds: 60 * MINUTE },
+      message: wait,
+    }),
+  }
+}
+
 /** Builds the services the routers call; one place to see how the app is wired. */
 export function buildServices(deps: AppDeps) {
   const now = deps.now ?? (() => new Date())
   const users = usersRepository(deps.dataSource)
   const companies = companiesRepository(deps.dataSource)
+  const limits = buildLimits(deps)
   const auth = authService({
+    limits,
     users,
     tokens: tokensRepository(deps.dataSource),
     mailer: deps.mailer,
@@ -91,7 +119,7 @@ export function buildServices(deps: AppDeps) {
   const measurements = buildMeasurements({ dataSource: deps.dataSource, sites, models, files })
   const commerce = buildCommerce(
     { ...deps, sizingSource: deps.sizingSource ?? sizings },
-    { users, companies, auth, now },
+    { users, companies, auth, inviteLimit: limits.invite, now },
   )
   const production = productionService({
     repo: productionRepository(deps.dataSource),
@@ -118,7 +146,7 @@ export function buildServices(deps: AppDeps) {
     companies,
     auth,
     files,
-    usersAdmin: usersService({ users, companies, auth }),
+    usersAdmin: usersService({ users, companies, auth, inviteLimit: limits.invite }),
     sites,
     models,
     sizings,
@@ -136,7 +164,7 @@ export function createApp(deps: AppDeps): Express {
   const services = buildServices(deps)
   const api = new ApiRegistry()
   const app = express()
-  app.set('trust proxy', 'loopback')
+  app.set('trust proxy', config.TRUST_PROXY)
   app.disable('x-powered-by')
   const https = config.publicUrl.startsWith('https:')
   app.use(
@@ -166,8 +194,15 @@ export function createApp(deps: AppDeps): Express {
     }),
   )
   app.use(cookieParser())
-  app.use(authenticate(config.JWT_SECRET, (id) => services.auth.loadActiveUser(id)))
+  app.use(
+    authenticate(config.JWT_SECRET, (id, version) => services.auth.loadSessionUser(id, version)),
+  )
+  // The webhook is signed by the payment service and comes from its servers, not a browser.
   app.use(paymentsWebhookRouter(api, services.payments))
+  app.use(
+    '/api',
+    refuseCrossSite(() => config.publicUrl),
+  )
   app.use('/api', express.json({ limit: '2mb' }))
 
   app.use(healthRouter(api, deps.dataSource, VERSION))
@@ -175,7 +210,6 @@ export function createApp(deps: AppDeps): Express {
     authRouter(api, services.auth, {
       tokenTtlHours: config.TOKEN_TTL_HOURS,
       secureCookie: https,
-      signInLimit: config.SIGN_IN_LIMIT,
     }),
   )
   app.use(usersRouter(api, services.usersAdmin))

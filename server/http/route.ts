@@ -56,6 +56,21 @@ function parsePart<T>(schema: ZodType<T> | undefined, value: unknown, where: str
   throw new AppError('invalid-input', message, 400, details)
 }
 
+/**
+ * A body must come in the type the route reads: JSON, or multipart for an upload. An HTML form
+ * on another site can only send form or plain-text bodies without a preflight, so this also
+ * shuts the classic cross-site form post out of every JSON route.
+ */
+function checkContentType(spec: { method: Method; upload?: string }, req: Request) {
+  if (spec.method === 'get') return
+  const expected = spec.upload ? 'multipart/form-data' : 'application/json'
+  const length = Number(req.get('content-length') ?? 0)
+  const hasBody =
+    req.get('content-type') !== undefined || length > 0 || req.get('transfer-encoding')
+  if (hasBody && !req.is(expected))
+    throw new AppError('unsupported-media-type', `Send the request body as ${expected}.`, 415)
+}
+
 function checkAccess(access: Access, user: AuthUser | undefined): AuthUser {
   if (access === 'public') return user as AuthUser
   if (!user) throw new AppError('not-signed-in', 'Sign in to continue.', 401)
@@ -79,6 +94,7 @@ export function route<B = undefined, Q = undefined, P = undefined>(
   registry.add(spec)
   const guard: RequestHandler = (req, _res, next) => {
     checkAccess(spec.access, req.user as AuthUser | undefined)
+    checkContentType(spec, req)
     next()
   }
   router[spec.method](

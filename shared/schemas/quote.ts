@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { IdSchema } from './ids'
 import { CURRENCIES } from '../money'
 import { SizingSummarySchema } from './sizing'
 
@@ -48,7 +49,7 @@ export type QuoteCreate = z.infer<typeof QuoteCreateSchema>
 
 export const QuoteListQuerySchema = z.object({
   state: QuoteStateSchema.optional(),
-  companyId: z.coerce.number().int().positive().optional(),
+  companyId: IdSchema.optional(),
   /** created on or after, YYYY-MM-DD */
   from: isoDate.optional(),
   /** created on or before, YYYY-MM-DD */

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { IdSchema } from './ids'
 import {
   bandSchema,
   explicitTuningSchema,
@@ -116,7 +117,7 @@ export const SizingSubmitSchema = z.object({
 })
 
 export const SizingListQuerySchema = z.object({
-  siteId: z.coerce.number().int().positive().optional(),
+  siteId: IdSchema.optional(),
   state: z.enum(SIZING_STATES).optional(),
   search: z.string().trim().max(100).optional(),
 })

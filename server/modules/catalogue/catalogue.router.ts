@@ -1,6 +1,6 @@
 import { Router } from 'express'
 import { z } from 'zod'
-import { IdParamSchema } from '../../../shared/schemas/auth'
+import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
   CatalogueOptionInputSchema,
   MatchQuerySchema,

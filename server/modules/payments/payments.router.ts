@@ -1,5 +1,5 @@
 import express, { Router } from 'express'
-import { IdParamSchema } from '../../../shared/schemas/auth'
+import { IdParamSchema } from '../../../shared/schemas/ids'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import type { PaymentsService } from './payments.service'
