@@ -43,7 +43,11 @@ import { paymentsRouter, paymentsWebhookRouter } from './modules/payments/paymen
 import { paymentsService } from './modules/payments/payments.service'
 import { productionRepository } from './modules/production/production.repository'
 import { productionRouter } from './modules/production/production.router'
-import { productionService } from './modules/production/production.service'
+import { productionService, type ProductionService } from './modules/production/production.service'
+import { outboxRepository } from './modules/outbox/outbox.repository'
+import { outboxService } from './modules/outbox/outbox.service'
+import { fulfilment, type FulfilmentDeps } from './modules/payments/fulfilment'
+import type { QuotesService } from './modules/quotes/quotes.service'
 import type { SizingSource } from './modules/quotes/sizing-source'
 import type { PdfRenderer } from './integrations/pdf'
 
@@ -90,9 +94,38 @@ function buildLimits({ dataSource: ds, config: c }: AppDeps) {
   }
 }
 
+/** Payments: the gateway, the exactly-once fulfilment and the routes' service. */
+function buildPayments(
+  deps: AppDeps,
+  s: Pick<FulfilmentDeps, 'now' | 'outbox' | 'users' | 'production' | 'quotes'> & {
+    production: ProductionService
+    quotes: QuotesService
+  },
+) {
+  const repo = paymentsRepository(deps.dataSource)
+  const gateway = deps.gateway ?? stripeGateway(deps.config)
+  const publicUrl = () => deps.config.publicUrl
+  const common = { payments: repo, gateway, publicUrl, now: s.now, logger: deps.logger }
+  return paymentsService({
+    ...common,
+    fulfilment: fulfilment({ ...common, ...s }),
+    quotes: s.quotes,
+    reconcileIntervalMs: deps.config.RECONCILE_INTERVAL_MS,
+    workOrderState: (quoteId) => s.production.stateForQuote(quoteId),
+  })
+}
+
 /** Builds the services the routers call; one place to see how the app is wired. */
 export function buildServices(deps: AppDeps) {
   const now = deps.now ?? (() => new Date())
+  // Every mail goes through the outbox; the SMTP transport in deps is what the sender uses.
+  const outbox = outboxService({
+    repo: outboxRepository(deps.dataSource),
+    transport: deps.mailer,
+    now,
+    logger: deps.logger,
+  })
+  const mailer = outbox.mailer
   const users = usersRepository(deps.dataSource)
   const companies = companiesRepository(deps.dataSource)
   const limits = buildLimits(deps)
@@ -100,7 +133,7 @@ export function buildServices(deps: AppDeps) {
     limits,
     users,
     tokens: tokensRepository(deps.dataSource),
-    mailer: deps.mailer,
+    mailer,
     jwtSecret: deps.config.JWT_SECRET,
     tokenTtlHours: deps.config.TOKEN_TTL_HOURS,
     publicUrl: deps.config.publicUrl,
@@ -118,30 +151,21 @@ export function buildServices(deps: AppDeps) {
   })
   const measurements = buildMeasurements({ dataSource: deps.dataSource, sites, models, files })
   const commerce = buildCommerce(
-    { ...deps, sizingSource: deps.sizingSource ?? sizings },
+    { ...deps, mailer, sizingSource: deps.sizingSource ?? sizings },
     { users, companies, auth, inviteLimit: limits.invite, now },
   )
   const production = productionService({
     repo: productionRepository(deps.dataSource),
     quotes: commerce.quotes,
     users,
-    mailer: deps.mailer,
+    mailer,
     pdf: commerce.pdf,
     now,
   })
-  const payments = paymentsService({
-    onOrderPaid: (o) => production.createFor(o),
-    workOrderState: (quoteId) => production.stateForQuote(quoteId),
-    payments: paymentsRepository(deps.dataSource),
-    gateway: deps.gateway ?? stripeGateway(deps.config),
-    quotes: commerce.quotes,
-    users,
-    mailer: deps.mailer,
-    publicUrl: deps.config.publicUrl,
-    now,
-  })
+  const payments = buildPayments(deps, { now, outbox, users, production, quotes: commerce.quotes })
   return {
     now,
+    outbox,
     users,
     companies,
     auth,
@@ -159,9 +183,8 @@ export function buildServices(deps: AppDeps) {
 export type Services = ReturnType<typeof buildServices>
 
 /** The Express app without listen(): middleware, routers, 404, one error handler. */
-export function createApp(deps: AppDeps): Express {
+export function createApp(deps: AppDeps, services: Services = buildServices(deps)): Express {
   const { config } = deps
-  const services = buildServices(deps)
   const api = new ApiRegistry()
   const app = express()
   app.set('trust proxy', config.TRUST_PROXY)

@@ -31,8 +31,8 @@ export async function makeQuoteApp(extraEnv: Record<string, string> = {}) {
     pool: noSolving,
     sizingSource: sizings,
   }
-  t.app = createApp(deps)
   t.services = buildServices(deps)
+  t.app = createApp(deps, t.services)
   await seedCatalogue(t.services)
   const close = t.close
   t.close = async () => {

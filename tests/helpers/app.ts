@@ -41,12 +41,13 @@ export async function makeTestApp(extraEnv: Record<string, string> = {}): Promis
     now,
     pool,
   }
+  const services = buildServices(deps)
   return {
-    app: createApp(deps),
+    app: createApp(deps, services),
     config,
     ds,
     mail,
-    services: buildServices(deps),
+    services,
     clock,
     close: async () => {
       await ds.destroy()

@@ -32,11 +32,16 @@ export async function signedIn(t: TestApp, role: Role, opts: { companyId?: numbe
   return { agent, user }
 }
 
-/** Waits for the catcher to hold a message to the address (SMTP delivery is asynchronous). */
-export async function mailTo(t: TestApp, to: string, timeoutMs = 5000) {
+/**
+ * Waits for the catcher to hold a message to the address, with a subject matching `subject`
+ * when given (mail leaves through the outbox, after the request has answered).
+ */
+export async function mailTo(t: TestApp, to: string, subject?: RegExp, timeoutMs = 5000) {
   const end = Date.now() + timeoutMs
   for (;;) {
-    const found = t.mail.messages().filter((m) => JSON.stringify(m.to).includes(to))
+    const found = t.mail
+      .messages()
+      .filter((m) => JSON.stringify(m.to).includes(to) && (!subject || subject.test(m.subject)))
     if (found.length) return found[found.length - 1]!
     if (Date.now() > end) throw new Error(`no mail to ${to}`)
     await new Promise((r) => setTimeout(r, 50))

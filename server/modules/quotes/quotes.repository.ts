@@ -126,6 +126,17 @@ export function quotesRepository(ds: DataSource) {
     },
     /** Moves a quote between states and records who and when; false when it was not in `from`. */
     transition: (id: number, t: Transition) => ds.transaction((m) => transitionIn(m, id, t)),
+    /** The same inside the caller's transaction (a payment commits it with the order). */
+    transitionIn,
+    /** Locks the quote row until the caller's transaction ends: two payments of it take turns. */
+    async lockIn(m: EntityManager, id: number) {
+      await m
+        .createQueryBuilder(QuoteEntity, 'q')
+        .select('q.id')
+        .where('q.id = :id', { id })
+        .setLock('pessimistic_write')
+        .getOne()
+    },
     async events(quoteId: number) {
       const rows = await events.find({
         where: { quoteId },

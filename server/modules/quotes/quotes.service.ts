@@ -16,6 +16,7 @@ import { expireDue, isCustomer, quotesCore, type QuotesDeps } from './quote-core
 import { portalLink, quoteMail } from './quote-mail'
 import { insertNumbered } from './quote-numbers'
 import type { QuoteRow } from './quote-rows'
+import type { Tx } from '../outbox/outbox.repository'
 import { REVISABLE, dayOf, sourcesOf } from './quote-states'
 import { referenceOf, summaryOf } from './quote-view'
 
@@ -239,6 +240,18 @@ export function quotesService(deps: QuotesServiceDeps) {
       if (!ok) throw conflict('quote-state', `A ${r.state} quote cannot be marked paid.`)
       return summaryOf((await repo.findById(quoteId)) as QuoteRow, true)
     },
+
+    /** accepted → paid inside the payment's transaction; false from any other state. */
+    markPaidIn: (tx: Tx, quoteId: number, at: Date) =>
+      repo.transitionIn(tx, quoteId, {
+        from: ['accepted'],
+        to: 'paid',
+        actorId: null,
+        at,
+        note: 'payment confirmed',
+        patch: { paidAt: at },
+      }),
+    lockIn: (tx: Tx, quoteId: number) => repo.lockIn(tx, quoteId),
 
     expireDue: (now: Date) => expireDue(repo, now),
   }
