@@ -3,6 +3,8 @@ import type { AddressInfo } from 'node:net'
 import type { Agent } from 'supertest'
 import { startPaymentsFake, TEST_CARDS } from '../../fakes/payments'
 import { signedIn } from '../helpers/factories'
+import { stripeGateway } from '../../server/integrations/payments'
+import { paymentsRepository } from '../../server/modules/payments/payments.repository'
 import {
   catalogueIds,
   customerWithContact,
@@ -17,15 +19,27 @@ import {
  */
 export async function makePaymentRig(extraEnv: Record<string, string> = {}) {
   let handler: (req: IncomingMessage, res: ServerResponse) => void = (_q, r) => r.end()
-  const server = createServer((req, res) => handler(req, res))
+  /** While true the webhook route answers 503, as an app that is down would. */
+  const outage = { webhooks: false }
+  const server = createServer((req, res) => {
+    if (outage.webhooks && req.url?.startsWith('/api/payments/webhook')) {
+      res.writeHead(503).end()
+      return
+    }
+    handler(req, res)
+  })
   await new Promise<void>((r) => server.listen(0, '127.0.0.1', r))
   const appUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`
+  // The fake's clock, moved by the tests to reach its delivery retries; retries run on demand.
+  const fakeClock = { offsetMs: 0 }
   const fake = await startPaymentsFake({
     port: 0,
     host: '127.0.0.1',
     secretKey: 'sk_test_rig',
     webhookSecret: 'whsec_rig',
     webhookUrl: `${appUrl}/api/payments/webhook`,
+    now: () => Date.now() + fakeClock.offsetMs,
+    retryPollMs: 0,
   })
   const { t, sizings } = await makeQuoteApp({
     STRIPE_SECRET_KEY: 'sk_test_rig',
@@ -82,10 +96,53 @@ export async function makePaymentRig(extraEnv: Record<string, string> = {}) {
       data: {
         id: string
         type: string
+        session_id: string
         data: { object: { id: string } }
-        deliveries: { status: number | null }[]
+        deliveries: { status: number | null; error: string | null }[]
       }[]
     }
+  }
+
+  /**
+   * A second open session of a quote made straight through the gateway, as a race between two
+   * tabs could leave one behind the checkout's expiry of earlier sessions.
+   */
+  async function twinSession(
+    q: { id: number; reference: string; total: number; currency: string },
+    createdById: number,
+  ) {
+    const gateway = stripeGateway(t.config)
+    const s = await gateway.createCheckout({
+      quoteId: q.id,
+      reference: q.reference,
+      amount: q.total,
+      currency: q.currency,
+      successUrl: `${appUrl}/portal/payment/done?session_id={CHECKOUT_SESSION_ID}&quote=${q.id}`,
+      cancelUrl: `${appUrl}/portal`,
+    })
+    await paymentsRepository(t.ds).saveSession({
+      sessionId: s.id,
+      quoteId: q.id,
+      amount: q.total,
+      currency: q.currency,
+      createdById,
+      nextCheckAt: new Date(Date.now() + t.config.RECONCILE_INTERVAL_MS),
+    })
+    return { sessionId: s.id, url: s.url ?? '' }
+  }
+
+  /** Moves the fake's clock and sends every delivery retry then due. */
+  async function retryDeliveries(advanceMs: number) {
+    fakeClock.offsetMs += advanceMs
+    const res = await fetch(`${fake.url}/_fake/retries/run`, { method: 'POST' })
+    return ((await res.json()) as { delivered: number }).delivered
+  }
+
+  /** The deliveries of one session's events of a type, in order. */
+  async function deliveriesOf(sessionId: string, type = 'checkout.session.completed') {
+    return (await events()).data
+      .filter((e) => e.session_id === sessionId && e.type === type)
+      .flatMap((e) => e.deliveries)
   }
 
   return {
@@ -98,6 +155,12 @@ export async function makePaymentRig(extraEnv: Record<string, string> = {}) {
     acceptedQuote,
     payOnPage,
     events,
+    outage,
+    fakeClock,
+    retryDeliveries,
+    twinSession,
+    deliveriesOf,
+    setHandler: (h: typeof handler) => (handler = h),
     close: async () => {
       await t.close()
       await fake.close()
