@@ -29,7 +29,9 @@ export async function signedIn(t: TestApp, role: Role, opts: { companyId?: numbe
   const res = await agent.post('/api/auth/sign-in').send({ email: user.email, password: PASSWORD })
   if (res.status !== 200)
     throw new Error(`sign-in failed: ${res.status} ${JSON.stringify(res.body)}`)
-  return { agent, user }
+  // the session cookie alone, to carry the same session to another app instance
+  const cookie = String(res.headers['set-cookie']).split(';')[0] ?? ''
+  return { agent, user, cookie }
 }
 
 /**
