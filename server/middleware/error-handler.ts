@@ -38,13 +38,42 @@ function fromBodyParser(err: BodyParserError): AppError | null {
   return null
 }
 
+// The driver's codes for a database that cannot be reached or went away mid-request.
+const DATABASE_DOWN = new Set([
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'ETIMEDOUT',
+  'EPIPE',
+  'PROTOCOL_CONNECTION_LOST',
+  'ER_SERVER_SHUTDOWN',
+  'ER_CON_COUNT_ERROR',
+])
+
+/** A database outage is ours and passing: 503, so clients and proxies know to try again. */
+function fromDatabaseOutage(err: unknown): AppError | null {
+  const e = err as { code?: unknown; driverError?: { code?: unknown } } | null
+  const code = e?.code ?? e?.driverError?.code
+  if (typeof code !== 'string' || !DATABASE_DOWN.has(code)) return null
+  return new AppError(
+    'service-unavailable',
+    'The service is briefly unavailable; try again in a moment.',
+    503,
+  )
+}
+
 /** The one error path: known errors answer with their code, anything else is logged as a 500. */
 export function errorHandler(err: unknown, req: Request, res: Response, _next: NextFunction) {
   const known =
     err instanceof AppError
       ? err
-      : (fromUpload(err) ?? fromBodyParser((err ?? {}) as BodyParserError))
+      : (fromUpload(err) ??
+        fromBodyParser((err ?? {}) as BodyParserError) ??
+        fromDatabaseOutage(err))
   if (known) {
+    if (known.status === 503) {
+      req.log?.warn({ err }, 'database unavailable')
+      res.set('retry-after', '5')
+    }
     res.status(known.status).json({
       error: { code: known.code, message: known.message, details: known.details },
     })
