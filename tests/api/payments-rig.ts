@@ -3,6 +3,7 @@ import type { AddressInfo } from 'node:net'
 import type { Agent } from 'supertest'
 import { startPaymentsFake, TEST_CARDS } from '../../fakes/payments'
 import { signedIn } from '../helpers/factories'
+import type { SizingSummary } from '../../shared/schemas/sizing'
 import { stripeGateway } from '../../server/integrations/payments'
 import { paymentsRepository } from '../../server/modules/payments/payments.repository'
 import {
@@ -55,9 +56,9 @@ export async function makePaymentRig(extraEnv: Record<string, string> = {}) {
   const ids = await catalogueIds(sales)
 
   /** A quote sent to a fresh customer company. */
-  async function sentQuote() {
+  async function sentQuote(sizingFields: Partial<SizingSummary> = {}) {
     const { company, contact } = await customerWithContact(sales)
-    const sizing = sizingSummary(company.id)
+    const sizing = sizingSummary(company.id, sizingFields)
     sizings.put(sizing)
     const draft = await sales.post('/api/quotes').send({
       sizingId: sizing.id,
@@ -67,7 +68,7 @@ export async function makePaymentRig(extraEnv: Record<string, string> = {}) {
       lines: [{ kind: 'unit', productLineId: ids.unit('FLR-S'), quantity: 1 }],
     })
     await sales.post(`/api/quotes/${draft.body.id}/send`).expect(200)
-    return { quote: draft.body as { id: number; total: number }, company }
+    return { quote: draft.body as { id: number; total: number; number: string }, company }
   }
 
   /** A sent quote accepted by a customer user of its company. */

@@ -130,7 +130,7 @@ export function catalogueRouter(
       access: ['engineer', ...SELLERS],
       query: MatchQuerySchema,
     },
-    async ({ query }) => catalogue.match(await sizings.summary(query.sizingId)),
+    async ({ user, query }) => catalogue.match(await sizings.visibleSummary(user, query.sizingId)),
   )
   return router
 }

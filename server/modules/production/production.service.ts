@@ -11,15 +11,6 @@ import { inlineFontCss, type PdfRenderer } from '../../integrations/pdf'
 import { workOrderHtml } from './work-order-html'
 import type { Tx } from '../outbox/outbox.repository'
 
-const SYSTEM: AuthUser = {
-  id: 0,
-  email: '',
-  name: 'system',
-  role: 'admin',
-  companyId: null,
-  companyName: null,
-}
-
 export function productionService(deps: {
   repo: ProductionRepository
   quotes: QuotesService
@@ -49,7 +40,7 @@ export function productionService(deps: {
      * transaction; `createIn` then writes the work order inside it, with the order's id.
      */
     async prepare(quoteId: number, paidAt: Date, leadDays = 28) {
-      const quote = await deps.quotes.get(SYSTEM, quoteId)
+      const quote = await deps.quotes.internal(quoteId)
       const specification = buildSpecification(quote)
       const dueDate = new Date(paidAt.getTime() + leadDays * 86_400_000).toISOString().slice(0, 10)
       const values = { specification, specHash: specificationHash(specification), dueDate }

@@ -56,7 +56,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       summary: 'The summary of a sizing to quote from, as the quote will freeze it',
       access: SELLERS,
     },
-    ({ params }) => quotes.sizing(params.id),
+    ({ user, params }) => quotes.sizing(user, params.id),
   )
   route(
     router,

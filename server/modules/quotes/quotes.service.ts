@@ -4,7 +4,7 @@ import type {
   QuoteDraft,
   QuoteListQuery,
 } from '../../../shared/schemas/quote'
-import { CUSTOMER_VISIBLE_STATES } from '../../../shared/schemas/quote'
+import { CUSTOMER_VISIBLE_STATES, toCustomerQuote } from '../../../shared/schemas/quote'
 import { AppError } from '../../http/app-error'
 import type { Mailer } from '../../integrations/mail'
 import type { PdfRenderer } from '../../integrations/pdf'
@@ -50,8 +50,9 @@ export function quotesService(deps: QuotesServiceDeps) {
     if (!ok) throw conflict('quote-state', `A ${r.state} quote cannot become ${to}.`)
   }
 
-  async function renderPdf(user: AuthUser, r: QuoteRow) {
-    const q = await core.view(user, r)
+  /** The quote document goes to the customer: it is always built from the customer's view. */
+  async function renderPdf(r: QuoteRow) {
+    const q = toCustomerQuote(await core.fullView(r))
     const bytes = await deps.pdf.render(quoteHtml(q, await supplier(), inlineFontCss()), {
       footer: quoteFooter(q.reference),
     })
@@ -88,15 +89,18 @@ export function quotesService(deps: QuotesServiceDeps) {
       return rows.map((r) => summaryOf(r, latest.get(r.number) === r.revision))
     },
 
-    /** A sizing as a new quote would freeze it (any state; create refuses drafts). */
-    sizing: (id: number) => deps.sizings.summary(id),
+    /** A sizing as a new quote would freeze it; another engineer's draft is a 404. */
+    sizing: (user: AuthUser, id: number) => deps.sizings.visibleSummary(user, id),
 
     get: async (user: AuthUser, id: number) => core.view(user, await core.visibleRow(user, id)),
+
+    /** The supplier's full view of a quote, for the server's own use (work orders). */
+    internal: async (id: number) => core.fullView(await core.row(id)),
 
     /** A draft quote from a submitted sizing; the sizing is frozen into it. */
     async create(user: AuthUser, input: QuoteCreate) {
       const { sizingId, ...draft } = input
-      const sizing = await core.submittedSizing(sizingId)
+      const sizing = await core.submittedSizing(user, sizingId)
       const p = await core.priced(draft, sizing)
       const at = deps.now()
       const id = await insertNumbered(
@@ -136,7 +140,7 @@ export function quotesService(deps: QuotesServiceDeps) {
       if (r.validUntil < dayOf(deps.now()))
         throw conflict('quote-lapsed', 'The validity date has passed; change it first.')
       await supersedeEarlier(r, user.id)
-      const pdf = await renderPdf(user, r)
+      const pdf = await renderPdf(r)
       const s = await supplier()
       await deps.mailer.send(
         quoteMail(pdf.quote, pdf.bytes, portalLink(deps.publicUrl(), id), s.name),
@@ -156,7 +160,7 @@ export function quotesService(deps: QuotesServiceDeps) {
         throw conflict('not-latest', `Revise the latest revision (rev ${latest}).`)
       if (!REVISABLE.includes(r.state))
         throw conflict('quote-state', `A ${r.state} quote cannot be revised.`)
-      const sizing = await core.submittedSizing(r.sizingId)
+      const sizing = await core.submittedSizing(null, r.sizingId)
       const {
         id: _id,
         state: _s,
@@ -209,7 +213,7 @@ export function quotesService(deps: QuotesServiceDeps) {
     },
 
     async pdf(user: AuthUser, id: number) {
-      const { bytes, filename } = await renderPdf(user, await core.visibleRow(user, id))
+      const { bytes, filename } = await renderPdf(await core.visibleRow(user, id))
       return { bytes, filename }
     },
 

@@ -168,18 +168,23 @@ export function sizingsService(deps: SizingsDeps) {
     },
 
     /** The frozen figures a quote is made from (no role check: the quote service checks). */
-    async summary(id: number): Promise<SizingSummary> {
-      const v = await view(null, id)
-      return {
-        ...v.summary,
-        id: v.id,
-        revision: v.revision,
-        state: v.state,
-        submittedAt: v.submittedAt,
-        handoverNote: v.handoverNote,
-        ownerName: v.ownerName,
-      }
-    },
+    summary: (id: number) => summaryOf(null, id),
+
+    /** The same for a user: another engineer's draft answers 404, as if it did not exist. */
+    visibleSummary: (user: AuthUser, id: number) => summaryOf(user, id),
+  }
+
+  async function summaryOf(user: AuthUser | null, id: number): Promise<SizingSummary> {
+    const v = await view(user, id)
+    return {
+      ...v.summary,
+      id: v.id,
+      revision: v.revision,
+      state: v.state,
+      submittedAt: v.submittedAt,
+      handoverNote: v.handoverNote,
+      ownerName: v.ownerName,
+    }
   }
 }
 export type SizingsService = ReturnType<typeof sizingsService>
