@@ -3,6 +3,7 @@ import type { ZodType } from 'zod'
 import { z } from 'zod'
 import type { Role } from '../../shared/schemas/auth'
 import { AppError } from './app-error'
+import { OUT_OF_RANGE } from '../../shared/schemas/model'
 import type { AuthUser } from '../middleware/authenticate'
 import type { ApiRegistry } from './api-registry'
 
@@ -53,6 +54,11 @@ function parsePart<T>(schema: ZodType<T> | undefined, value: unknown, where: str
   const details = issuesOf(result.error, where)
   const first = details[0]
   const message = first ? `${first.path}: ${first.message}` : `Invalid ${where}`
+  // Well-formed values outside a documented range (the engine's) cannot be processed: 422.
+  const outOfRange = result.error.issues.every(
+    (i) => i.code === 'custom' && (i.params as typeof OUT_OF_RANGE | undefined)?.unprocessable,
+  )
+  if (outOfRange) throw new AppError('out-of-range', message, 422, details)
   throw new AppError('invalid-input', message, 400, details)
 }
 

@@ -8,7 +8,7 @@ import type {
 import { AppError, forbidden, notFound } from '../../http/app-error'
 import type { AuthUser } from '../../middleware/authenticate'
 import type { SizingPool } from '../../workers/pool'
-import { dotted } from '../models/check-model'
+import { checkModel, dotted } from '../models/check-model'
 import type { ModelsService } from '../models/models.service'
 import type { SitesService } from '../sites/sites.service'
 import { summarise } from './sizing-summary'
@@ -50,7 +50,13 @@ export function sizingsService(deps: SizingsDeps) {
         { path: 'body.input.modelId', message: 'not a model of this site' },
       ])
     const definition = await deps.models.definitionAt(input.modelId, input.modelRevision)
+    // A model stored before today's checks is checked again before it reaches the engine.
+    checkModel(definition, 'model')
     const out = await deps.pool.run({ model: definition, input })
+    if (!out.ok && out.unsolvable)
+      throw new AppError('unsolvable-model', out.message, 422, [
+        { path: 'model', message: out.message },
+      ])
     if (!out.ok) {
       const path = `body.input.${dotted(out.field)
         .replace(/^absorber\.node$/, 'absorberNode')
