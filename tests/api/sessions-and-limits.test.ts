@@ -114,7 +114,7 @@ describe('sign-in and reset limits', () => {
   })
 
   it('answers a reset in the same time whether the address has an account or not', async () => {
-    const users = await Promise.all(Array.from({ length: 7 }, () => makeUser(t, 'sales')))
+    const users = await Promise.all(Array.from({ length: 9 }, () => makeUser(t, 'sales')))
     const timed = async (email: string) => {
       const start = process.hrtime.bigint()
       const res = await request(t.app)
@@ -133,7 +133,7 @@ describe('sign-in and reset limits', () => {
     const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!
     // Before the fix known addresses took 120–210 ms and unknown 5–26 ms; now the mail work
     // happens after the answer. A generous band, for a shared 2-core machine.
-    expect(Math.abs(median(known) - median(unknown))).toBeLessThan(40)
+    expect(Math.abs(median(known) - median(unknown))).toBeLessThan(50)
   })
 })
 
