@@ -23,7 +23,6 @@ import { usersRepository } from './modules/users/users.repository'
 import { usersRouter } from './modules/users/users.router'
 import { usersService } from './modules/users/users.service'
 import { fileStore } from './integrations/file-store'
-import { throttle } from './integrations/rate-limits'
 import { sitesRepository } from './modules/sites/sites.repository'
 import { sitesRouter } from './modules/sites/sites.router'
 import { sitesService } from './modules/sites/sites.service'
@@ -37,19 +36,16 @@ import { buildMeasurements } from './modules/measurements/build-measurements'
 import { measurementsRouter } from './modules/measurements/measurements.router'
 import type { SizingPool } from './workers/pool'
 import { buildCommerce, commerceRouters } from './modules/quotes/commerce'
-import { stripeGateway, type PaymentGateway } from './integrations/payments'
-import { paymentsRepository } from './modules/payments/payments.repository'
+import type { PaymentGateway } from './integrations/payments'
 import { paymentsRouter, paymentsWebhookRouter } from './modules/payments/payments.router'
-import { paymentsService } from './modules/payments/payments.service'
 import { productionRepository } from './modules/production/production.repository'
 import { productionRouter } from './modules/production/production.router'
-import { productionService, type ProductionService } from './modules/production/production.service'
+import { productionService } from './modules/production/production.service'
 import { outboxRepository } from './modules/outbox/outbox.repository'
 import { outboxService } from './modules/outbox/outbox.service'
-import { fulfilment, type FulfilmentDeps } from './modules/payments/fulfilment'
-import type { QuotesService } from './modules/quotes/quotes.service'
 import type { SizingSource } from './modules/quotes/sizing-source'
 import type { PdfRenderer } from './integrations/pdf'
+import { buildLimits, buildPayments } from './wiring'
 
 export const VERSION = '0.1.0'
 
@@ -68,51 +64,6 @@ export interface AppDeps {
   sizingSource?: SizingSource
   /** HTML→PDF; else the shared Chromium renderer of config.CHROMIUM_PATH. */
   pdf?: PdfRenderer
-}
-
-const MINUTE = 60
-
-/** Shared counters in MariaDB, so every instance behind a proxy counts the same attempts. */
-function buildLimits({ dataSource: ds, config: c }: AppDeps) {
-  const wait = 'Too many attempts; wait a while and try again.'
-  return {
-    signIn: throttle(ds, c.DB_NAME, 'sign-in', {
-      account: { points: c.SIGN_IN_LIMIT, seconds: 15 * MINUTE },
-      address: { points: c.SIGN_IN_ADDRESS_LIMIT, seconds: 15 * MINUTE },
-      message: 'Too many failed sign-ins; wait a few minutes.',
-    }),
-    reset: throttle(ds, c.DB_NAME, 'reset', {
-      account: { points: c.RESET_LIMIT, seconds: 60 * MINUTE },
-      address: { points: c.RESET_ADDRESS_LIMIT, seconds: 60 * MINUTE },
-      message: wait,
-    }),
-    invite: throttle(ds, c.DB_NAME, 'invite', {
-      account: { points: c.INVITE_LIMIT, seconds: 24 * 60 * MINUTE },
-      address: { points: c.INVITE_ADDRESS_LIMIT, seconds: 60 * MINUTE },
-      message: wait,
-    }),
-  }
-}
-
-/** Payments: the gateway, the exactly-once fulfilment and the routes' service. */
-function buildPayments(
-  deps: AppDeps,
-  s: Pick<FulfilmentDeps, 'now' | 'outbox' | 'users' | 'production' | 'quotes'> & {
-    production: ProductionService
-    quotes: QuotesService
-  },
-) {
-  const repo = paymentsRepository(deps.dataSource)
-  const gateway = deps.gateway ?? stripeGateway(deps.config)
-  const publicUrl = () => deps.config.publicUrl
-  const common = { payments: repo, gateway, publicUrl, now: s.now, logger: deps.logger }
-  return paymentsService({
-    ...common,
-    fulfilment: fulfilment({ ...common, ...s }),
-    quotes: s.quotes,
-    reconcileIntervalMs: deps.config.RECONCILE_INTERVAL_MS,
-    workOrderState: (quoteId) => s.production.stateForQuote(quoteId),
-  })
 }
 
 /** Builds the services the routers call; one place to see how the app is wired. */
