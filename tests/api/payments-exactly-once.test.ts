@@ -74,12 +74,7 @@ describe('a payment confirmed exactly once, whichever path sees it first', () =>
 
   it('confirms from the customer’s return to the success page when the webhook is down', async () => {
     const { quote, customer, session } = await checkout()
-    rig.outage.webhooks = true
-    try {
-      await rig.payOnPage(session.url)
-    } finally {
-      rig.outage.webhooks = false
-    }
+    await rig.payWhileWebhooksDown(session.url)
     const back = await customer.agent
       .post(`/api/quotes/${quote.id}/payment-return`)
       .send({ sessionId: session.sessionId })
@@ -106,14 +101,12 @@ describe('a payment confirmed exactly once, whichever path sees it first', () =>
 
   it('confirms from the reconciliation when every webhook delivery fails', async () => {
     const { quote, customer, session } = await checkout()
-    rig.outage.webhooks = true
+    await rig.payWhileWebhooksDown(session.url)
+    expect(await rig.t.services.payments.reconcile()).toBe(0) // not due yet
+    rig.t.clock.offsetMs += rig.t.config.RECONCILE_INTERVAL_MS
     try {
-      await rig.payOnPage(session.url)
-      expect(await rig.t.services.payments.reconcile()).toBe(0) // not due yet
-      rig.t.clock.offsetMs += rig.t.config.RECONCILE_INTERVAL_MS
       expect(await rig.t.services.payments.reconcile()).toBeGreaterThanOrEqual(1)
     } finally {
-      rig.outage.webhooks = false
       rig.t.clock.offsetMs = 0
     }
     expect(await seen(quote.id, customer.user.email)).toEqual({
@@ -135,12 +128,7 @@ describe('a payment confirmed exactly once, whichever path sees it first', () =>
 
   it('finds an earlier session paid when a new checkout starts, and confirms it instead', async () => {
     const { quote, customer, session } = await checkout()
-    rig.outage.webhooks = true
-    try {
-      await rig.payOnPage(session.url)
-    } finally {
-      rig.outage.webhooks = false
-    }
+    await rig.payWhileWebhooksDown(session.url)
     const again = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)
     expect(again.status).toBe(409)
     expect(again.body.error.code).toBe('quote-paid')

@@ -132,6 +132,16 @@ export async function makePaymentRig(extraEnv: Record<string, string> = {}) {
     return { sessionId: s.id, url: s.url ?? '' }
   }
 
+  /** Pays on the page while the app's webhook route is down (503), so no delivery lands. */
+  async function payWhileWebhooksDown(url: string) {
+    outage.webhooks = true
+    try {
+      return await payOnPage(url)
+    } finally {
+      outage.webhooks = false
+    }
+  }
+
   /** Moves the fake's clock and sends every delivery retry then due. */
   async function retryDeliveries(advanceMs: number) {
     fakeClock.offsetMs += advanceMs
@@ -159,6 +169,7 @@ export async function makePaymentRig(extraEnv: Record<string, string> = {}) {
     outage,
     fakeClock,
     retryDeliveries,
+    payWhileWebhooksDown,
     twinSession,
     deliveriesOf,
     setHandler: (h: typeof handler) => (handler = h),

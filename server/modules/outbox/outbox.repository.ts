@@ -1,5 +1,6 @@
 import type { DataSource, EntityManager } from 'typeorm'
 import type { MailMessage } from '../../integrations/mail'
+import { claimRows } from './claim-rows'
 import { OutboxMailEntity, type StoredMail } from './outbox-mail.entity'
 
 /** A database transaction handed between repositories, so one story commits as one. */
@@ -56,30 +57,17 @@ export function outboxRepository(ds: DataSource) {
     async enqueue(m: MailMessage, at: Date) {
       await ds.getRepository(OutboxMailEntity).insert(row(m, at))
     },
-    /**
-     * Takes up to `limit` mails that are due, each for this caller alone: the rows are locked
-     * with SKIP LOCKED (another instance passes over them instead of waiting) and leased until
-     * `leaseUntil`, so no other sender picks them up while this one sends.
-     */
+    /** Takes up to `limit` due mails for this sender alone, leased until `leaseUntil`. */
     async claimDue(now: Date, leaseUntil: Date, limit: number): Promise<DueMail[]> {
-      return ds.transaction(async (tx) => {
-        const rows = await tx
-          .createQueryBuilder(OutboxMailEntity, 'o')
-          .where('o.state = :s AND o.nextAttemptAt <= :now', { s: 'pending', now })
-          .orderBy('o.id', 'ASC')
-          .limit(limit)
-          .setLock('pessimistic_write')
-          .setOnLocked('skip_locked')
-          .getMany()
-        if (rows.length === 0) return []
-        await tx
-          .createQueryBuilder()
-          .update(OutboxMailEntity)
-          .set({ nextAttemptAt: leaseUntil })
-          .whereInIds(rows.map((r) => r.id))
-          .execute()
-        return rows.map((r) => ({ id: r.id, attempts: r.attempts, message: fromStored(r.message) }))
+      const rows = await claimRows(ds, OutboxMailEntity, {
+        where: 'r.state = :s AND r.nextAttemptAt <= :now',
+        params: { s: 'pending', now },
+        orderBy: 'r.id',
+        leaseColumn: 'nextAttemptAt',
+        leaseUntil,
+        limit,
       })
+      return rows.map((r) => ({ id: r.id, attempts: r.attempts, message: fromStored(r.message) }))
     },
     async markSent(id: number, at: Date) {
       await ds

@@ -1,5 +1,6 @@
 import { In, type DataSource } from 'typeorm'
 import type { Tx } from '../outbox/outbox.repository'
+import { claimRows } from '../outbox/claim-rows'
 import { AppError } from '../../http/app-error'
 import { OrderEntity } from './order.entity'
 import { PaymentEventEntity } from './payment-event.entity'
@@ -116,29 +117,15 @@ export function paymentsRepository(ds: DataSource) {
      * alone: SKIP LOCKED lets another instance pass over them, and the next check time moves to
      * `next` in the same transaction, so they are not taken again before then.
      */
-    async claimDueSessions(now: Date, next: Date, limit: number) {
-      return ds.transaction(async (tx) => {
-        const rows = await tx
-          .createQueryBuilder(PaymentSessionEntity, 's')
-          .where('s.status IN (:...st) AND s.nextCheckAt <= :now', {
-            st: ['open', 'refund_due'],
-            now,
-          })
-          .orderBy('s.nextCheckAt', 'ASC')
-          .limit(limit)
-          .setLock('pessimistic_write')
-          .setOnLocked('skip_locked')
-          .getMany()
-        if (rows.length === 0) return []
-        await tx
-          .createQueryBuilder()
-          .update(PaymentSessionEntity)
-          .set({ nextCheckAt: next })
-          .whereInIds(rows.map((r) => r.id))
-          .execute()
-        return rows
-      })
-    },
+    claimDueSessions: (now: Date, next: Date, limit: number) =>
+      claimRows(ds, PaymentSessionEntity, {
+        where: 'r.status IN (:...st) AND r.nextCheckAt <= :now',
+        params: { st: ['open', 'refund_due'], now },
+        orderBy: 'r.nextCheckAt',
+        leaseColumn: 'nextCheckAt',
+        leaseUntil: next,
+        limit,
+      }),
 
     orderForQuote: (quoteId: number) =>
       orders.findOneBy({ quoteId }) as Promise<OrderRecord | null>,
