@@ -82,7 +82,7 @@ describe('a payment taken while the database is down', () => {
     expect(deliveries.map((d) => d.status).slice(1)).toEqual([200])
     const work = (await production.get('/api/work-orders')).body as { quoteId: number }[]
     expect(work.filter((w) => w.quoteId === quote.id)).toHaveLength(1)
-    await new Promise((r) => setTimeout(r, 500))
+    await rig.t.services.outbox.drain()
     const mails = rig.t.mail.messages()
     const to = (email: string, subject: RegExp) =>
       mails.filter((m) => JSON.stringify(m.to).includes(email) && subject.test(m.subject)).length

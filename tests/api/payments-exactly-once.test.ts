@@ -19,7 +19,7 @@ async function seen(quoteId: number, customerEmail: string) {
   const orders = (await admin.get('/api/orders')).body as { quoteId: number }[]
   const work = (await production.get('/api/work-orders')).body as { quoteId: number }[]
   const quote = (await admin.get(`/api/quotes/${quoteId}`)).body as { state: string }
-  await new Promise((r) => setTimeout(r, 300)) // let the outbox finish a send under way
+  await rig.t.services.outbox.drain() // every queued mail handed to SMTP, once
   const receipts = rig.t.mail
     .messages()
     .filter((m) => JSON.stringify(m.to).includes(customerEmail) && /^Payment/.test(m.subject))

@@ -54,7 +54,6 @@ describe('two app instances on one database', () => {
     } finally {
       rig.t.clock.offsetMs = 0
     }
-    await new Promise((r) => setTimeout(r, 300))
     const orders = (await (await signedIn(rig.t, 'admin')).agent.get('/api/orders')).body as {
       quoteId: number
     }[]
@@ -74,7 +73,6 @@ describe('two app instances on one database', () => {
       b.services.outbox.drain(),
       b.services.outbox.drain(),
     ])
-    await new Promise((r) => setTimeout(r, 300))
     expect(to.map((a) => mailsTo(a, /^Bulk$/).length)).toEqual(to.map(() => 1))
   })
 
