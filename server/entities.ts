@@ -20,6 +20,7 @@ import { ContactEntity } from './modules/customers/contact.entity'
 import { QuoteEntity } from './modules/quotes/quote.entity'
 import { QuoteLineEntity } from './modules/quotes/quote-line.entity'
 import { QuoteEventEntity } from './modules/quotes/quote-event.entity'
+import { OutboxMailEntity } from './modules/outbox/outbox-mail.entity'
 
 /** Every entity class, listed (no globs: esbuild-built code has no stable file layout). */
 export const entities = [
@@ -45,4 +46,5 @@ export const entities = [
   QuoteEntity,
   QuoteLineEntity,
   QuoteEventEntity,
+  OutboxMailEntity,
 ]

@@ -1,5 +1,6 @@
 import { z } from 'zod'
 import { AcknowledgeInputSchema, DesignAcknowledgementSchema } from './design-checks'
+import { IdSchema } from './ids'
 import {
   bandSchema,
   explicitTuningSchema,
@@ -10,8 +11,8 @@ import {
 
 /** The host structure as the engineer edits it: a revision of a model stores exactly this. */
 export const ModelDefinitionSchema = z.object({
-  nodes: z.array(nodeSchema).min(1, 'add at least one node'),
-  springs: z.array(springSchema),
+  nodes: z.array(nodeSchema).min(1, 'add at least one node').max(1000, 'at most 1000 nodes'),
+  springs: z.array(springSchema).max(5000, 'at most 5000 springs'),
   hostDampingRatio: z.union([z.number(), z.array(z.number())]).default(0.02),
 })
 export type ModelDefinition = z.infer<typeof ModelDefinitionSchema>
@@ -28,8 +29,8 @@ export const AcceptanceSchema = z.object({
   presetId: z.string().max(60).optional(),
   label: z.string().max(160),
   quantity: ResponseQuantitySchema,
-  /** m, m/s or m/s², peak (not rms) */
-  limit: z.number().positive('must be above zero'),
+  /** m, m/s or m/s², peak (not rms), up to 1e6 */
+  limit: z.number().positive('must be above zero').max(1e6, 'at most 1e6'),
 })
 export type Acceptance = z.infer<typeof AcceptanceSchema>
 
@@ -42,8 +43,8 @@ export const SizingInputSchema = z.object({
   absorberNode: z.string().min(1, 'required'),
   excitationNode: z.string().min(1, 'required'),
   responseNode: z.string().min(1, 'required'),
-  /** N, amplitude of the harmonic design force */
-  forceAmplitude: z.number().positive('must be above zero'),
+  /** N, amplitude of the harmonic design force, up to 1e9 N */
+  forceAmplitude: z.number().positive('must be above zero').max(1e9, 'at most 1e9 N'),
   loadPresetId: z.string().max(60).optional(),
   massRatio: z.number().min(0.001, 'at least 0.1 %').max(0.5, 'at most 50 %'),
   tuning: z.union([tuningNameSchema, explicitTuningSchema]).default('optimize'),
@@ -122,7 +123,7 @@ export const SizingSubmitSchema = z.object({
 export type SizingSubmit = z.infer<typeof SizingSubmitSchema>
 
 export const SizingListQuerySchema = z.object({
-  siteId: z.coerce.number().int().positive().optional(),
+  siteId: IdSchema.optional(),
   state: z.enum(SIZING_STATES).optional(),
   search: z.string().trim().max(100).optional(),
 })

@@ -1,3 +1,4 @@
+import type { RefundInfo } from '@shared/schemas/payment'
 import { api } from './client'
 
 export interface OrderInfo {
@@ -22,5 +23,9 @@ export const paymentsApi = {
       `/api/quotes/${quoteId}/checkout`,
     ),
   order: (quoteId: number) => api.get<{ order: OrderInfo | null }>(`/api/quotes/${quoteId}/order`),
+  /** Back from the payment page: the server asks the payment service about the session. */
+  returned: (quoteId: number, sessionId: string) =>
+    api.post<{ order: OrderInfo | null }>(`/api/quotes/${quoteId}/payment-return`, { sessionId }),
+  refunds: () => api.get<RefundInfo[]>('/api/payments/refunds'),
   orders: () => api.get<OrderInfo[]>('/api/orders'),
 }

@@ -165,3 +165,68 @@ describe('paying an accepted quote through the SDK and the payment stand-in', ()
     expect((await rig.sales.post(`/api/quotes/${quote.id}/checkout`)).status).toBe(403)
   })
 })
+
+describe('webhook events that are signed but not to be believed', () => {
+  const post = (payload: string, header: string) =>
+    request(rig.t.app)
+      .post('/api/payments/webhook')
+      .set('content-type', 'application/json')
+      .set('stripe-signature', header)
+      .send(payload)
+  const completed = (id: unknown, object: Record<string, unknown>) =>
+    JSON.stringify({ id, object: 'event', type: 'checkout.session.completed', data: { object } })
+
+  it('refuses a signature dated a year ahead with 400, within the SDK’s 300 s otherwise', async () => {
+    const { quote, customer } = await rig.acceptedQuote()
+    const { body } = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)
+    const object = { id: body.sessionId, amount_total: quote.total, currency: 'eur' }
+    const payload = completed(`evt_ahead_${quote.id}`, { ...object, payment_status: 'paid' })
+    const yearAhead = Math.floor(Date.now() / 1000) + 365 * 86_400
+    const ahead = stripe.webhooks.generateTestHeaderString({
+      payload,
+      secret: 'whsec_rig',
+      timestamp: yearAhead,
+    })
+    const res = await post(payload, ahead)
+    expect(res.status).toBe(400)
+    expect(res.body.error.code).toBe('invalid-signature')
+    const nearly = stripe.webhooks.generateTestHeaderString({
+      payload,
+      secret: 'whsec_rig',
+      timestamp: Math.floor(Date.now() / 1000) + 200,
+    })
+    expect((await post(payload, nearly)).status).toBe(200)
+  })
+
+  it('answers a signed but malformed event with 400 naming the field, and stores nothing', async () => {
+    const sign = (payload: string) =>
+      stripe.webhooks.generateTestHeaderString({ payload, secret: 'whsec_rig' })
+    for (const payload of [
+      completed(null, { id: 'cs_test_x', payment_status: 'paid' }),
+      completed(`evt_${'a'.repeat(300_000)}`, { id: 'cs_test_x', payment_status: 'paid' }),
+      completed('evt_ok', { id: null, payment_status: 'paid' }),
+      completed('evt_ok', { id: 'cs_test_x', amount_total: 'lots' }),
+      JSON.stringify({ id: 'evt_ok', type: 'checkout.session.completed' }),
+      '[]',
+    ]) {
+      const res = await post(payload, sign(payload))
+      expect(res.status).toBe(400)
+      expect(res.body.error.code).toBe('invalid-event')
+    }
+  })
+
+  it('ignores a paid session whose currency differs from the one the server asked for', async () => {
+    const { quote, customer } = await rig.acceptedQuote()
+    const { body } = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)
+    const payload = completed(`evt_gbp_${quote.id}`, {
+      id: body.sessionId,
+      amount_total: quote.total,
+      currency: 'gbp',
+      payment_status: 'paid',
+    })
+    const header = stripe.webhooks.generateTestHeaderString({ payload, secret: 'whsec_rig' })
+    const res = await post(payload, header)
+    expect(res.body.outcome).toBe('ignored')
+    expect(await orders(quote.id)).toHaveLength(0)
+  })
+})

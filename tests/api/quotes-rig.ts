@@ -10,7 +10,7 @@ import { seedCatalogue } from '../../seed/seed-catalogue'
 import { makeTestApp, type TestApp } from '../helpers/app'
 
 /** Quotes never solve a sizing; a call here would be a wiring mistake worth a loud failure. */
-const noSolving: SizingPool = {
+export const noSolving: SizingPool = {
   run: () => Promise.reject(new Error('the quotes tests do not solve sizings')),
   close: async () => undefined,
 }
@@ -44,8 +44,8 @@ export async function makeQuoteApp(
     pool: noSolving,
     sizingSource: sizings,
   }
-  t.app = createApp(deps)
   t.services = buildServices(deps)
+  t.app = createApp(deps, t.services)
   await seedCatalogue(t.services)
   return { t, sizings }
 }

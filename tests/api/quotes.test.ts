@@ -119,7 +119,7 @@ describe('quote totals, priced on the server', () => {
     expect(past.res.body.error.details[0].path).toBe('body.validUntil')
   })
 
-  it('quotes only a submitted sizing: 409 for a draft, 404 for an unknown one', async () => {
+  it('quotes only a submitted sizing: a draft is 404 to sales and 409 to the admin', async () => {
     const { company } = await customerWithContact(sales)
     const draft = sizingSummary(company.id, { state: 'draft' })
     sizings.put(draft)
@@ -127,10 +127,29 @@ describe('quote totals, priced on the server', () => {
       validUntil: daysFromNow(t, 30),
       lines: [{ kind: 'unit', productLineId: ids.unit('FLR-S'), quantity: 1 }],
     }
-    const res = await sales.post('/api/quotes').send({ ...base, sizingId: draft.id })
+    expect((await sales.post('/api/quotes').send({ ...base, sizingId: draft.id })).status).toBe(404)
+    const { agent: admin } = await signedIn(t, 'admin')
+    const res = await admin.post('/api/quotes').send({ ...base, sizingId: draft.id })
     expect(res.status).toBe(409)
     expect(res.body.error.code).toBe('sizing-not-submitted')
     expect((await sales.post('/api/quotes').send({ ...base, sizingId: 123 })).status).toBe(404)
+  })
+
+  it('numbers quotes saved at the same moment one after another, none refused', async () => {
+    const { company, contact } = await customerWithContact(sales)
+    const sizing = sizingSummary(company.id)
+    sizings.put(sizing)
+    const body = {
+      sizingId: sizing.id,
+      contactId: contact.id,
+      validUntil: daysFromNow(t, 30),
+      lines: [{ kind: 'unit', productLineId: ids.unit('FLR-S'), quantity: 1 }],
+    }
+    const answers = await Promise.all(
+      Array.from({ length: 8 }, () => sales.post('/api/quotes').send(body)),
+    )
+    expect(answers.map((r) => r.status)).toEqual(Array(8).fill(201))
+    expect(new Set(answers.map((r) => r.body.number)).size).toBe(8)
   })
 
   it('keeps the sizing frozen in the quote when the sizing changes later', async () => {
@@ -389,7 +408,10 @@ describe('who may see and do what with quotes', () => {
     expect(list.body.map((q: { id: number }) => q.id)).toEqual([mine.res.body.id])
     const one = await customer.get(`/api/quotes/${mine.res.body.id}`)
     expect(one.status).toBe(200)
-    expect(one.body.events).toEqual([])
+    // the customer projection: no supplier history, no engineer's note or name
+    expect(one.body.events).toBeUndefined()
+    expect(one.body.sizing).not.toHaveProperty('handoverNote')
+    expect(one.body.sizing).not.toHaveProperty('ownerName')
     expect((await customer.get(`/api/quotes/${theirs.res.body.id}`)).status).toBe(404)
     expect((await customer.get(`/api/quotes/${theirs.res.body.id}/pdf`)).status).toBe(404)
     expect((await customer.get(`/api/quotes/${myDraft.res.body.id}`)).status).toBe(404)

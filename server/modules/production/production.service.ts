@@ -9,20 +9,12 @@ import type { ProductionRepository } from './production.repository'
 import { buildSpecification, specificationHash } from './specification'
 import { inlineFontCss, type PdfRenderer } from '../../integrations/pdf'
 import { workOrderHtml } from './work-order-html'
+import type { Tx } from '../outbox/outbox.repository'
 
 const moved = (state: string) =>
   new AppError('state-changed', `Someone else moved this work order to ${state}; reload it.`, 409, {
     state,
   })
-
-const SYSTEM: AuthUser = {
-  id: 0,
-  email: '',
-  name: 'system',
-  role: 'admin',
-  companyId: null,
-  companyName: null,
-}
 
 export function productionService(deps: {
   repo: ProductionRepository
@@ -48,24 +40,24 @@ export function productionService(deps: {
     get,
     list: () => deps.repo.list(),
 
-    /** Freezes the paid quote's build values; called once the order exists. */
-    async createFor(
-      order: { id: number; quoteId: number; companyId: number; paidAt: Date },
-      leadDays = 28,
-    ) {
-      const quote = await deps.quotes.get(SYSTEM, order.quoteId)
+    /**
+     * The frozen build values of a quote about to be paid, read before the payment's
+     * transaction; `createIn` then writes the work order inside it, with the order's id.
+     */
+    async prepare(quoteId: number, paidAt: Date, leadDays = 28) {
+      const quote = await deps.quotes.internal(quoteId)
       const specification = buildSpecification(quote)
-      const due = new Date(order.paidAt.getTime() + leadDays * 86_400_000)
-        .toISOString()
-        .slice(0, 10)
-      return deps.repo.createOnce({
-        orderId: order.id,
-        quoteId: order.quoteId,
-        companyId: order.companyId,
-        specification,
-        specHash: specificationHash(specification),
-        dueDate: due,
-      })
+      const dueDate = new Date(paidAt.getTime() + leadDays * 86_400_000).toISOString().slice(0, 10)
+      const values = { specification, specHash: specificationHash(specification), dueDate }
+      return {
+        createIn: (tx: Tx, order: { id: number; quoteId: number; companyId: number }) =>
+          deps.repo.createIn(tx, {
+            ...values,
+            orderId: order.id,
+            quoteId: order.quoteId,
+            companyId: order.companyId,
+          }),
+      }
     },
 
     /**

@@ -1,5 +1,5 @@
 import { formatMoney } from '../../../shared/money'
-import type { Quote } from '../../../shared/schemas/quote'
+import type { CustomerQuote as Quote } from '../../../shared/schemas/quote'
 import type { MailMessage } from '../../integrations/mail'
 
 /** The portal page of a quote; the customer signs in to read, accept and pay it. */

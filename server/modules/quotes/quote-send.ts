@@ -1,4 +1,9 @@
-import type { Quote, QuoteSend } from '../../../shared/schemas/quote'
+import {
+  toCustomerQuote,
+  type CustomerQuote,
+  type Quote,
+  type QuoteSend,
+} from '../../../shared/schemas/quote'
 import { AppError, notFound } from '../../http/app-error'
 import { inlineFontCss } from '../../integrations/pdf'
 import type { AuthUser } from '../../middleware/authenticate'
@@ -32,8 +37,9 @@ export function quoteSending(deps: QuotesServiceDeps, core: QuotesCore) {
     return s ? { name: s.name, address: s.address } : { name: 'Quellnode', address: '' }
   }
 
-  async function renderPdf(user: AuthUser, r: QuoteRow) {
-    const q = await core.view(user, r)
+  /** The quote document goes to the customer: it is always built from the customer's view. */
+  async function renderPdf(r: QuoteRow) {
+    const q = toCustomerQuote(await core.fullView(r))
     const bytes = await deps.pdf.render(quoteHtml(q, await supplier(), inlineFontCss()), {
       footer: quoteFooter(q.reference),
     })
@@ -61,7 +67,7 @@ export function quoteSending(deps: QuotesServiceDeps, core: QuotesCore) {
    * quote's row lock: a second send waits, finds it sent and answers it as it is, mailing
    * nothing.
    */
-  async function send(user: AuthUser, id: number, body: QuoteSend): Promise<Quote> {
+  async function send(user: AuthUser, id: number, body: QuoteSend): Promise<Quote | CustomerQuote> {
     await repo.exclusive(id, async (transition) => {
       const r = await repo.findById(id)
       if (!r) throw notFound('quote')
@@ -75,7 +81,7 @@ export function quoteSending(deps: QuotesServiceDeps, core: QuotesCore) {
       const ack = r.sizing.designAcknowledgement
       if (ack && !body.confirmDesignChecks) throw unconfirmed(r)
       await supersedeEarlier(r, user.id)
-      const pdf = await renderPdf(user, r)
+      const pdf = await renderPdf(r)
       const s = await supplier()
       await deps.mailer.send(
         quoteMail(pdf.quote, pdf.bytes, portalLink(deps.publicUrl(), id), s.name),

@@ -1,3 +1,4 @@
+import { withNamedLock } from '../../db/named-lock'
 import { Brackets, In, type DataSource, type EntityManager } from 'typeorm'
 import type { QuoteListQuery, QuoteState } from '../../../shared/schemas/quote'
 import { QuoteEventEntity } from './quote-event.entity'
@@ -92,6 +93,9 @@ export function quotesRepository(ds: DataSource) {
       }
       return (await qb.getMany()).map((e) => toRow({ ...e, lines: [] } as QuoteEntity))
     },
+    /** Runs `work` while no other instance numbers a quote of the year. */
+    numbering: <T>(year: number, work: () => Promise<T>) =>
+      withNamedLock(ds, `quote-number:${year}`, work),
     async maxSeq(year: number) {
       const r = await quotes
         .createQueryBuilder('q')
@@ -153,6 +157,17 @@ export function quotesRepository(ds: DataSource) {
         await m.findOne(QuoteEntity, { where: { id }, lock: { mode: 'pessimistic_write' } })
         return work((t) => transitionIn(m, id, t))
       })
+    },
+    /** The same inside the caller's transaction (a payment commits it with the order). */
+    transitionIn,
+    /** Locks the quote row until the caller's transaction ends: two payments of it take turns. */
+    async lockIn(m: EntityManager, id: number) {
+      await m
+        .createQueryBuilder(QuoteEntity, 'q')
+        .select('q.id')
+        .where('q.id = :id', { id })
+        .setLock('pessimistic_write')
+        .getOne()
     },
     async events(quoteId: number) {
       const rows = await events.find({

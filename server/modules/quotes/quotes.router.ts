@@ -1,5 +1,5 @@
 import { Router } from 'express'
-import { IdParamSchema } from '../../../shared/schemas/auth'
+import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
   QuoteAcceptSchema,
   QuoteCreateSchema,
@@ -57,7 +57,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       summary: 'The summary of a sizing to quote from, as the quote will freeze it',
       access: SELLERS,
     },
-    ({ params }) => quotes.sizing(params.id),
+    ({ user, params }) => quotes.sizing(user, params.id),
   )
   route(
     router,

@@ -14,6 +14,7 @@ import { expireDue, isCustomer, quotesCore, type QuotesDeps } from './quote-core
 import { quoteSending } from './quote-send'
 import { insertNumbered } from './quote-numbers'
 import type { QuoteRow } from './quote-rows'
+import type { Tx } from '../outbox/outbox.repository'
 import { REVISABLE, sourcesOf } from './quote-states'
 import { referenceOf, summaryOf } from './quote-view'
 
@@ -69,15 +70,18 @@ export function quotesService(deps: QuotesServiceDeps) {
       return rows.map((r) => summaryOf(r, latest.get(r.number) === r.revision))
     },
 
-    /** A sizing as a new quote would freeze it (any state; create refuses drafts). */
-    sizing: (id: number) => deps.sizings.summary(id),
+    /** A sizing as a new quote would freeze it; another engineer's draft is a 404. */
+    sizing: (user: AuthUser, id: number) => deps.sizings.visibleSummary(user, id),
 
     get: async (user: AuthUser, id: number) => core.view(user, await core.visibleRow(user, id)),
+
+    /** The supplier's full view of a quote, for the server's own use (work orders). */
+    internal: async (id: number) => core.fullView(await core.row(id)),
 
     /** A draft quote from a submitted sizing; the sizing is frozen into it. */
     async create(user: AuthUser, input: QuoteCreate) {
       const { sizingId, ...draft } = input
-      const sizing = await core.submittedSizing(sizingId)
+      const sizing = await core.submittedSizing(user, sizingId)
       const p = await core.priced(draft, sizing)
       const at = deps.now()
       const id = await insertNumbered(
@@ -118,7 +122,7 @@ export function quotesService(deps: QuotesServiceDeps) {
         throw conflict('not-latest', `Revise the latest revision (rev ${latest}).`)
       if (!REVISABLE.includes(r.state))
         throw conflict('quote-state', `A ${r.state} quote cannot be revised.`)
-      const sizing = await core.submittedSizing(r.sizingId)
+      const sizing = await core.submittedSizing(null, r.sizingId)
       const {
         id: _id,
         state: _s,
@@ -185,7 +189,7 @@ export function quotesService(deps: QuotesServiceDeps) {
     },
 
     async pdf(user: AuthUser, id: number) {
-      const { bytes, filename } = await sending.renderPdf(user, await core.visibleRow(user, id))
+      const { bytes, filename } = await sending.renderPdf(await core.visibleRow(user, id))
       return { bytes, filename }
     },
 
@@ -216,6 +220,18 @@ export function quotesService(deps: QuotesServiceDeps) {
       if (!ok) throw conflict('quote-state', `A ${r.state} quote cannot be marked paid.`)
       return summaryOf((await repo.findById(quoteId)) as QuoteRow, true)
     },
+
+    /** accepted → paid inside the payment's transaction; false from any other state. */
+    markPaidIn: (tx: Tx, quoteId: number, at: Date) =>
+      repo.transitionIn(tx, quoteId, {
+        from: ['accepted'],
+        to: 'paid',
+        actorId: null,
+        at,
+        note: 'payment confirmed',
+        patch: { paidAt: at },
+      }),
+    lockIn: (tx: Tx, quoteId: number) => repo.lockIn(tx, quoteId),
 
     expireDue: (now: Date) => expireDue(repo, now),
   }

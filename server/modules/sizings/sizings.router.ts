@@ -1,6 +1,6 @@
 import { Router } from 'express'
 import { z } from 'zod'
-import { IdParamSchema } from '../../../shared/schemas/auth'
+import { IdParamSchema, IdSchema } from '../../../shared/schemas/ids'
 import {
   SizingCreateSchema,
   SizingListQuerySchema,
@@ -13,7 +13,7 @@ import type { SizingsService } from './sizings.service'
 
 const READERS = ['engineer', 'sales', 'admin'] as const
 const WRITERS = ['engineer', 'admin'] as const
-const RevisionQuery = z.object({ revision: z.coerce.number().int().positive().optional() })
+const RevisionQuery = z.object({ revision: IdSchema.optional() })
 
 export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
   const router = Router()

@@ -8,7 +8,7 @@ import type {
 import { AppError, forbidden, notFound } from '../../http/app-error'
 import type { AuthUser } from '../../middleware/authenticate'
 import type { SizingPool } from '../../workers/pool'
-import { dotted } from '../models/check-model'
+import { checkModel, dotted } from '../models/check-model'
 import type { ModelsService } from '../models/models.service'
 import type { SitesService } from '../sites/sites.service'
 import { designChecks } from '../../../shared/sizing/design-checks'
@@ -50,7 +50,13 @@ export function sizingsService(deps: SizingsDeps) {
         { path: 'body.input.modelId', message: 'not a model of this site' },
       ])
     const definition = await deps.models.definitionAt(input.modelId, input.modelRevision)
+    // A model stored before today's checks is checked again before it reaches the engine.
+    checkModel(definition, 'model')
     const out = await deps.pool.run({ model: definition, input })
+    if (!out.ok && out.unsolvable)
+      throw new AppError('unsolvable-model', out.message, 422, [
+        { path: 'model', message: out.message },
+      ])
     if (!out.ok) {
       const path = `body.input.${dotted(out.field)
         .replace(/^absorber\.node$/, 'absorberNode')
@@ -147,19 +153,24 @@ export function sizingsService(deps: SizingsDeps) {
     ...handover,
 
     /** The frozen figures a quote is made from (no role check: the quote service checks). */
-    async summary(id: number): Promise<SizingSummary> {
-      const v = await view(null, id)
-      return {
-        ...v.summary,
-        id: v.id,
-        revision: v.revision,
-        state: v.state,
-        submittedAt: v.submittedAt,
-        handoverNote: v.handoverNote,
-        ownerName: v.ownerName,
-        designAcknowledgement: v.acknowledgement,
-      }
-    },
+    summary: (id: number) => summaryOf(null, id),
+
+    /** The same for a user: another engineer's draft answers 404, as if it did not exist. */
+    visibleSummary: (user: AuthUser, id: number) => summaryOf(user, id),
+  }
+
+  async function summaryOf(user: AuthUser | null, id: number): Promise<SizingSummary> {
+    const v = await view(user, id)
+    return {
+      ...v.summary,
+      id: v.id,
+      revision: v.revision,
+      state: v.state,
+      submittedAt: v.submittedAt,
+      handoverNote: v.handoverNote,
+      ownerName: v.ownerName,
+      designAcknowledgement: v.acknowledgement,
+    }
   }
 }
 export type SizingsService = ReturnType<typeof sizingsService>

@@ -1,5 +1,5 @@
 import { formatBasisPoints, formatMoney } from '../../../../shared/money'
-import type { Quote } from '../../../../shared/schemas/quote'
+import type { CustomerQuote as Quote } from '../../../../shared/schemas/quote'
 import { esc, sig } from './html'
 import { responseChartSvg } from './response-chart'
 import { QUOTE_CSS } from './quote-styles'
@@ -80,7 +80,7 @@ export function quoteHtml(q: Quote, supplier: Supplier, fontCss: string): string
 <div style="text-align:right"><h1>Quotation</h1><div><strong>${esc(q.reference)}</strong></div><div class="muted">Issued ${esc(issued)}</div><div>Valid until <strong>${esc(q.validUntil)}</strong></div></div></div>
 <div class="cols"><div><h2>Customer</h2><div><strong>${esc(q.companyName)}</strong></div>
 ${q.contactName ? `<div>${esc(q.contactName)}</div><div class="muted">${esc(q.contactEmail)}</div>` : ''}</div>
-<div><h2>Site</h2><div>${esc(q.siteName)}</div><div class="muted">Sized by ${esc(q.sizing.ownerName)}</div></div></div>
+<div><h2>Site</h2><div>${esc(q.siteName)}</div></div></div>
 ${sizingSection(q)}
 ${acknowledgementHtml(q.sizing.designAcknowledgement, { names: false })}
 ${linesSection(q)}
