@@ -1,5 +1,6 @@
 import { bandLu, bandSolve, type BandLu } from './band-lu'
 import { bandNorm, type BandMatrix } from './band-matrix'
+import { seeded } from './seeded'
 
 /** Relative gap (to ‖A‖) below which eigenvalues form a cluster whose vectors are reorthogonalised. */
 const CLUSTER_GAP = 1e-5
@@ -72,16 +73,4 @@ function norm2(x: Float64Array): number {
 
 function scale(x: Float64Array, f: number): void {
   for (let r = 0; r < x.length; r++) x[r] = x[r]! * f
-}
-
-/** Deterministic generator in [0, 1) (mulberry32), so start vectors repeat from run to run. */
-function seeded(seed: number): () => number {
-  let s = seed >>> 0
-  return () => {
-    s = (s + 0x6d2b79f5) >>> 0
-    let t = s
-    t = Math.imul(t ^ (t >>> 15), t | 1)
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61)
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
-  }
 }

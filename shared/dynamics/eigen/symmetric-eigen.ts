@@ -85,7 +85,7 @@ function solveComponent(
 /**
  * Cost model: band path ≈ m²(6b² + 24b) (a band LU and a few solves per vector, plus the
  * reduction), dense path ≈ 10m³/3 flops. The b² weight was fitted to timings on random band
- * matrices (m = 100 and 500: the paths cost the same near b ≈ m/40).
+ * matrices: at m = 500 the two paths cost about the same near b = 15.
  */
 function bandPays(m: number, b: number): boolean {
   return 6 * b * b + 24 * b < (10 / 3) * m
