@@ -6,6 +6,13 @@ export { identifyRecord } from './identify'
 export { identifyPeakAt, type PeakAtOptions } from './identify-peak-at'
 export { parseRecordBytes, parseRecordCsv, type ParsedRecord } from './parse-csv'
 export type { ParseRecordOptions } from './parse-options'
+export {
+  CHANNEL_DIRECTIONS,
+  type ChannelDirection,
+  type ChannelMapping,
+  type RecordChannel,
+} from './channels'
+export { timeUnitFromName, type TimeUnit, type TimeUnitSource } from './time-unit'
 export { decodeRecordBytes } from './decode'
 export { RecordError, isRecordError, type RecordErrorCode } from './record-error'
 export { dampingFromLogDecrement, logDecrementFromDamping } from './log-decrement'

@@ -73,7 +73,7 @@ describe('parseRecordCsv', () => {
     lines[20] = lines[19] ?? ''
     const e = refusal(() => parseRecordCsv(lines.join('\n')))
     expect(e.code).toBe('time-order')
-    expect(e.message).toBe('line 21: time 0.18 s is not after the previous 0.18 s')
+    expect(e.message).toBe('line 21: time 0.18 is not after the previous 0.18')
   })
 
   it('names the line where the sampling is uneven beyond the tolerance', () => {
