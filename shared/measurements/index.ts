@@ -4,6 +4,13 @@
  */
 export { identifyRecord } from './identify'
 export { identifyModes } from './identify-modes'
+export {
+  identifyModesSsi,
+  type SsiIdentification,
+  type SsiMode,
+  type SsiOptions,
+} from './identify-modes-ssi'
+export type { DiagramPole, StabilityCriteria } from './stabilisation'
 export type {
   IdentifiedMode,
   ModalIdentification,

@@ -14,7 +14,12 @@ export interface ModalAnalysis {
   durationS: number
 }
 
-function checkChannels(record: MultiChannelRecord): Float64Array[] {
+/**
+ * Check every channel (same length, finite samples, enough of them) and detrend it.
+ * @param record channels in m/s², sample rate in Hz
+ * @throws RangeError naming the channel
+ */
+export function checkChannels(record: MultiChannelRecord): Float64Array[] {
   const channels = record.channels
   if (!Array.isArray(channels) || channels.length === 0) {
     throw new RangeError('channels must hold at least one acceleration channel')
@@ -29,7 +34,8 @@ function checkChannels(record: MultiChannelRecord): Float64Array[] {
   })
 }
 
-function strongest(signals: Float64Array[]): Float64Array {
+/** The channel with the most energy. */
+export function strongest(signals: Float64Array[]): Float64Array {
   const energy = signals.map((s) => s.reduce((a, v) => a + v * v, 0))
   return signals[energy.indexOf(Math.max(...energy))] ?? signals[0]!
 }
