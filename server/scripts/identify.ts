@@ -1,25 +1,28 @@
 // Identify natural frequencies, damping ratios and mode shapes from a site acceleration record
 // (CSV: a time column and one or more acceleration columns).
 // Usage: npm run --silent identify -- FILE.csv [--sample-rate HZ] [--kind decay|ambient]
-//        [--time-unit s|ms]
+//        [--time-unit s|ms] [--method efdd|ssi]
 // Prints JSON on stdout; a file that cannot be read exits with code 2 and one line on stderr.
 import { readFileSync } from 'node:fs'
 import {
   identifyModes,
+  identifyModesSsi,
   identifyRecord,
   isRecordError,
   parseRecordBytes,
 } from '../../shared/measurements/index'
-import type { RecordKind, TimeUnit } from '../../shared/measurements/index'
+import type { ParsedRecord, RecordKind, TimeUnit } from '../../shared/measurements/index'
 
 const USAGE =
-  'usage: identify FILE.csv [--sample-rate HZ] [--kind decay|ambient] [--time-unit s|ms]'
+  'usage: identify FILE.csv [--sample-rate HZ] [--kind decay|ambient] [--time-unit s|ms] ' +
+  '[--method efdd|ssi]'
 
 interface Args {
   file: string
   sampleRateHz?: number
   kind?: RecordKind
   timeUnit?: TimeUnit
+  method?: 'efdd' | 'ssi'
 }
 
 class UsageError extends Error {}
@@ -35,6 +38,9 @@ function option(arg: string, value: string | undefined, args: Partial<Args>) {
   } else if (arg === '--time-unit') {
     if (value !== 's' && value !== 'ms') throw new UsageError('--time-unit is s or ms')
     args.timeUnit = value
+  } else if (arg === '--method') {
+    if (value !== 'efdd' && value !== 'ssi') throw new UsageError('--method is efdd or ssi')
+    args.method = value
   } else {
     throw new UsageError(`unexpected argument '${arg}'`)
   }
@@ -64,12 +70,19 @@ function identifyFile(bytes: Uint8Array, args: Args) {
     timeUnit: args.timeUnit,
   })
   const { spectrum: _spectrum, ...summary } = identifyRecord(record, { kind: args.kind })
-  const modal = identifyModes(record, { kind: args.kind })
+  const modal = args.method === 'ssi' ? ssi(record, args.kind) : efdd(record, args.kind)
   return {
     ...summary,
     fileWarnings: record.warnings,
     timeUnit: record.timeUnit,
     channels: record.channels.map(({ name, column }) => ({ name, column })),
+    ...modal,
+  }
+}
+
+function efdd(record: ParsedRecord, kind?: RecordKind) {
+  const modal = identifyModes(record, { kind })
+  return {
     modes: modal.modes.map(({ frequencyHz, dampingRatio, shape, method, flags, warnings }) => ({
       frequencyHz,
       dampingRatio,
@@ -83,6 +96,28 @@ function identifyFile(bytes: Uint8Array, args: Args) {
       resolutionHz: modal.resolutionHz,
       segmentLength: modal.segmentLength,
       averages: modal.averages,
+      flags: modal.flags,
+      warnings: modal.warnings,
+    },
+  }
+}
+
+function ssi(record: ParsedRecord, kind?: RecordKind) {
+  const modal = identifyModesSsi(record, { kind })
+  return {
+    modes: modal.modes.map(({ frequencyHz, dampingRatio, shape, flags, warnings }) => ({
+      frequencyHz,
+      dampingRatio,
+      shape,
+      method: modal.method,
+      flags,
+      warnings,
+    })),
+    modalAnalysis: {
+      method: modal.method,
+      blockRows: modal.blockRows,
+      orders: modal.orders,
+      stablePoles: modal.diagram.filter((p) => p.stable).length,
       flags: modal.flags,
       warnings: modal.warnings,
     },

@@ -85,7 +85,14 @@ describe('identify command line', () => {
       expect(Math.abs(mode.frequencyHz / t.frequencyHz - 1)).toBeLessThan(0.005)
       expect(mac(mode.shape, [t.shape[2]!, t.shape[0]!, t.shape[1]!])).toBeGreaterThan(0.98)
     })
-  }, 60_000)
+    // the same file by covariance-driven subspace identification (Peeters & De Roeck 1999)
+    const bySsi = identify(file, '--method', 'ssi')
+    const ssi = JSON.parse(bySsi.stdout) as { modes: { frequencyHz: number; method: string }[] }
+    expect(ssi.modes.map((mode) => mode.method)).toEqual(['ssi-cov', 'ssi-cov', 'ssi-cov'])
+    ssi.modes.forEach((mode, i) => {
+      expect(Math.abs(mode.frequencyHz / truth[i]!.frequencyHz - 1)).toBeLessThan(0.005)
+    })
+  }, 90_000)
 
   it('asks for the time unit when the step fits both, and takes it as an option', () => {
     const rows = ['t,a']
