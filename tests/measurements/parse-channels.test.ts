@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest'
-import { RecordError, parseRecordCsv } from '../../shared/measurements/index'
+import { parseRecordCsv } from '../../shared/measurements/index'
+import { refusal } from './helpers/refusal'
 
 // Records with several acceleration channels and time columns in s or ms. The thresholds for
 // the time unit (a step giving ≥ 10 Hz read as seconds is seconds, < 1 Hz is milliseconds,
@@ -11,16 +12,6 @@ function table(header: string | null, step: number, columns: number, rows = 100)
     lines.push([Number((j * step).toFixed(6)), ...values].join(','))
   }
   return lines.join('\n') + '\n'
-}
-
-function refusal(run: () => unknown): RecordError {
-  try {
-    run()
-  } catch (error) {
-    if (error instanceof RecordError) return error
-    throw error
-  }
-  throw new Error('expected a RecordError')
 }
 
 describe('parseRecordCsv with several channels', () => {

@@ -33,11 +33,38 @@ export function chainModes(n: number, m: number, k: number, dampingRatio: number
 }
 
 /**
+ * Acceleration at every mass, a_j = Σ_r φ_jr q̈_r, of modes driven by modal forces held over
+ * each sample, from rest or from initial velocities, through the exact discrete-time
+ * recursion for a zero-order-hold input (x_{j+1} = x_eq + Φ(x_j − x_eq), x_eq = (u/ω², 0);
+ * closed-form state transition Φ, helpers/synthesize); q̈ = u − 2ζω q̇ − ω² q.
+ */
+function superpose(
+  modes: NormalMode[],
+  sampleRateHz: number,
+  n: number,
+  modalForce: (mode: NormalMode, j: number) => number,
+  velocity: (mode: NormalMode) => number,
+): Float64Array[] {
+  const dofs = modes[0]?.shape.length ?? 0
+  const out = Array.from({ length: dofs }, () => new Float64Array(n))
+  for (const mode of modes) {
+    const t = transition(mode, 1 / sampleRateHz)
+    let [x, v] = [0, velocity(mode)]
+    for (let j = 0; j < n; j++) {
+      const u = modalForce(mode, j)
+      const a = u - t.twoSigma * v - t.w2 * x
+      for (let d = 0; d < dofs; d++) out[d]![j] = (out[d]![j] ?? 0) + (mode.shape[d] ?? 0) * a
+      const xe = u / t.w2
+      ;[x, v] = [xe + t.a11 * (x - xe) + t.a12 * v, t.a21 * (x - xe) + t.a22 * v]
+    }
+  }
+  return out
+}
+
+/**
  * Ambient acceleration at every mass of a classically damped structure: independent
  * Gaussian white forces (seeded) at every mass, held over each sample; each mode q_r driven
- * by u_r = φ_rᵀ f through the exact discrete-time recursion for a zero-order-hold input
- * (closed-form state transition, helpers/synthesize); a_j = Σ_r φ_jr q̈_r with
- * q̈_r = u_r − 2ζω q̇_r − ω² q_r; then independent sensor noise on every channel.
+ * by u_r = φ_rᵀ f (see superpose), then independent sensor noise on every channel.
  * @param modes all modes of the structure (the direct term M⁻¹f needs every one)
  * @param sampleRateHz Hz
  * @param durationS s
@@ -58,26 +85,15 @@ export function ambientResponse(
   const dofs = modes[0]?.shape.length ?? 0
   const normal = gaussian(mulberry32(seed))
   const forces = Array.from({ length: dofs }, () => Float64Array.from({ length: n }, normal))
-  const out = Array.from({ length: dofs }, () => new Float64Array(n))
-  for (const mode of modes) {
-    const t = transition(mode, 1 / sampleRateHz)
-    let [x, v] = [0, 0]
-    for (let j = 0; j < n; j++) {
-      let u = 0
-      for (let d = 0; d < dofs; d++) u += (mode.shape[d] ?? 0) * force * (forces[d]?.[j] ?? 0)
-      const a = u - t.twoSigma * v - t.w2 * x
-      for (let d = 0; d < dofs; d++) out[d]![j] = (out[d]![j] ?? 0) + (mode.shape[d] ?? 0) * a
-      const xe = u / t.w2
-      ;[x, v] = [xe + t.a11 * (x - xe) + t.a12 * v, t.a21 * (x - xe) + t.a22 * v]
-    }
-  }
+  const modalForce = (mode: NormalMode, j: number) =>
+    mode.shape.reduce((u, phi, d) => u + phi * force * (forces[d]?.[j] ?? 0), 0)
+  const out = superpose(modes, sampleRateHz, n, modalForce, () => 0)
   return out.map((c) => c.map((a) => a + noise * normal()))
 }
 
 /**
  * Free decay at every mass after an impulse I (N·s) at one mass, from rest: each mode starts
- * with velocity q̇_r(0) = φ_{j,r} I and decays by the closed-form state transition
- * (helpers/synthesize); a_j = Σ_r φ_jr q̈_r, exact at every sample; sensor noise added.
+ * with velocity q̇_r(0) = φ_{j,r} I (see superpose), exact at every sample; sensor noise added.
  * @param modes all modes (mass-normalised shapes)
  * @param at index of the struck mass
  * @param impulse N·s
@@ -92,17 +108,13 @@ export function impulseResponse(
   seed: number,
 ): Float64Array[] {
   const n = Math.round(durationS * sampleRateHz)
-  const dofs = modes[0]?.shape.length ?? 0
   const normal = gaussian(mulberry32(seed))
-  const out = Array.from({ length: dofs }, () => new Float64Array(n))
-  for (const mode of modes) {
-    const t = transition(mode, 1 / sampleRateHz)
-    let [x, v] = [0, (mode.shape[at] ?? 0) * impulse]
-    for (let j = 0; j < n; j++) {
-      const a = -t.twoSigma * v - t.w2 * x
-      for (let d = 0; d < dofs; d++) out[d]![j] = (out[d]![j] ?? 0) + (mode.shape[d] ?? 0) * a
-      ;[x, v] = [t.a11 * x + t.a12 * v, t.a21 * x + t.a22 * v]
-    }
-  }
+  const out = superpose(
+    modes,
+    sampleRateHz,
+    n,
+    () => 0,
+    (mode) => (mode.shape[at] ?? 0) * impulse,
+  )
   return out.map((c) => c.map((a) => a + noise * normal()))
 }
