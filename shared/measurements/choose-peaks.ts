@@ -24,7 +24,7 @@ function checkMaxModes(value: number): number {
 }
 
 // At a true mode the first singular value stands well above the second; where two modes
-// cross, or in noise, the two are alike (common practice).
+// cross, or in noise, the two are alike (common practice; the factor 4 is our choice).
 const DOMINANCE = 4
 
 function dominant(ma: ModalAnalysis, index: number): boolean {

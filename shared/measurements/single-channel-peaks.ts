@@ -9,7 +9,8 @@ import { bandWiderThanFrequency, refusedBandWarning } from './plausibility'
 
 // A Welch estimate from K segments scatters by about 1/√K in power, 1/(2√K) in amplitude;
 // a maximum standing less than four such deviations above its surroundings may be ripple
-// (common practice). Decays are single transforms and are not tested this way.
+// (the test is common practice; four deviations is our choice). Decays are single
+// transforms and are not tested this way.
 const SIGNIFICANCE = 4
 
 /**
@@ -42,7 +43,7 @@ function highestLine(ma: ModalAnalysis, lowHz: number, highHz: number): number {
 
 // One channel has no shapes to tell ripple from modes: its peaks are picked on a spectrum
 // averaged over at least this many segments, smooth enough that ripple seldom stands out
-// (common practice; the peak is then placed on the finer lines).
+// (our choice; the peak is then placed on the finer lines).
 const SMOOTH_AVERAGES = 64
 
 /**
