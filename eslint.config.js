@@ -19,7 +19,7 @@ export default defineConfigWithVueTs(
     },
   },
   {
-    files: ['shared/dynamics/**/*.ts', 'shared/measurements/**/*.ts'],
+    files: ['shared/dynamics/**/*.ts', 'shared/measurements/**/*.ts', 'shared/updating/**/*.ts'],
     rules: {
       'no-restricted-properties': [
         'error',

@@ -12,6 +12,16 @@ export default defineConfig({
       '@shared': fileURLToPath(new URL('./shared', import.meta.url)),
     },
   },
+  // The chart component's apexcharts entries must share one core: pre-bundle them together.
+  optimizeDeps: {
+    include: [
+      'vue3-apexcharts/core',
+      'apexcharts/core',
+      'apexcharts/line',
+      'apexcharts/features/legend',
+      'apexcharts/features/annotations',
+    ],
+  },
   server: {
     host: '127.0.0.1',
     proxy: { '/api': `http://127.0.0.1:${apiPort}` },

@@ -12,6 +12,7 @@ import type { Mailer } from './integrations/mail'
 import { authenticate } from './middleware/authenticate'
 import { errorHandler, notFoundHandler } from './middleware/error-handler'
 import { requestId } from './middleware/request-id'
+import { refuseCrossSite } from './middleware/same-origin'
 import { authRouter } from './modules/auth/auth.router'
 import { authService } from './modules/auth/auth.service'
 import { tokensRepository } from './modules/auth/tokens.repository'
@@ -31,19 +32,22 @@ import { modelsService } from './modules/models/models.service'
 import { sizingsRepository } from './modules/sizings/sizings.repository'
 import { sizingsRouter } from './modules/sizings/sizings.router'
 import { sizingsService } from './modules/sizings/sizings.service'
+import { sizingHandoverRepository } from './modules/sizings/sizing-handover.repository'
+import { catalogueRepository } from './modules/catalogue/catalogue.repository'
 import { buildMeasurements } from './modules/measurements/build-measurements'
 import { measurementsRouter } from './modules/measurements/measurements.router'
 import type { SizingPool } from './workers/pool'
 import { buildCommerce, commerceRouters } from './modules/quotes/commerce'
-import { stripeGateway, type PaymentGateway } from './integrations/payments'
-import { paymentsRepository } from './modules/payments/payments.repository'
+import type { PaymentGateway } from './integrations/payments'
 import { paymentsRouter, paymentsWebhookRouter } from './modules/payments/payments.router'
-import { paymentsService } from './modules/payments/payments.service'
 import { productionRepository } from './modules/production/production.repository'
 import { productionRouter } from './modules/production/production.router'
 import { productionService } from './modules/production/production.service'
+import { outboxRepository } from './modules/outbox/outbox.repository'
+import { outboxService } from './modules/outbox/outbox.service'
 import type { SizingSource } from './modules/quotes/sizing-source'
 import type { PdfRenderer } from './integrations/pdf'
+import { buildLimits, buildPayments } from './wiring'
 
 export const VERSION = '0.1.0'
 
@@ -67,12 +71,22 @@ export interface AppDeps {
 /** Builds the services the routers call; one place to see how the app is wired. */
 export function buildServices(deps: AppDeps) {
   const now = deps.now ?? (() => new Date())
+  // Every mail goes through the outbox; the SMTP transport in deps is what the sender uses.
+  const outbox = outboxService({
+    repo: outboxRepository(deps.dataSource),
+    transport: deps.mailer,
+    now,
+    logger: deps.logger,
+  })
+  const mailer = outbox.mailer
   const users = usersRepository(deps.dataSource)
   const companies = companiesRepository(deps.dataSource)
+  const limits = buildLimits(deps)
   const auth = authService({
+    limits,
     users,
     tokens: tokensRepository(deps.dataSource),
-    mailer: deps.mailer,
+    mailer,
     jwtSecret: deps.config.JWT_SECRET,
     tokenTtlHours: deps.config.TOKEN_TTL_HOURS,
     publicUrl: deps.config.publicUrl,
@@ -81,8 +95,11 @@ export function buildServices(deps: AppDeps) {
   const files = fileStore(deps.config.UPLOAD_DIR)
   const sites = sitesService({ sites: sitesRepository(deps.dataSource), companies, files })
   const models = modelsService({ models: modelsRepository(deps.dataSource), sites })
+  const catalogueLines = catalogueRepository(deps.dataSource)
   const sizings = sizingsService({
     sizings: sizingsRepository(deps.dataSource),
+    handover: sizingHandoverRepository(deps.dataSource),
+    catalogueUnits: () => catalogueLines.listLines(true),
     models,
     sites,
     pool: deps.pool,
@@ -90,35 +107,26 @@ export function buildServices(deps: AppDeps) {
   })
   const measurements = buildMeasurements({ dataSource: deps.dataSource, sites, models, files })
   const commerce = buildCommerce(
-    { ...deps, sizingSource: deps.sizingSource ?? sizings },
-    { users, companies, auth, now },
+    { ...deps, mailer, sizingSource: deps.sizingSource ?? sizings },
+    { users, companies, auth, inviteLimit: limits.invite, now },
   )
   const production = productionService({
     repo: productionRepository(deps.dataSource),
     quotes: commerce.quotes,
     users,
-    mailer: deps.mailer,
+    mailer,
     pdf: commerce.pdf,
     now,
   })
-  const payments = paymentsService({
-    onOrderPaid: (o) => production.createFor(o),
-    workOrderState: (quoteId) => production.stateForQuote(quoteId),
-    payments: paymentsRepository(deps.dataSource),
-    gateway: deps.gateway ?? stripeGateway(deps.config),
-    quotes: commerce.quotes,
-    users,
-    mailer: deps.mailer,
-    publicUrl: deps.config.publicUrl,
-    now,
-  })
+  const payments = buildPayments(deps, { now, outbox, users, production, quotes: commerce.quotes })
   return {
     now,
+    outbox,
     users,
     companies,
     auth,
     files,
-    usersAdmin: usersService({ users, companies, auth }),
+    usersAdmin: usersService({ users, companies, auth, inviteLimit: limits.invite }),
     sites,
     models,
     sizings,
@@ -131,12 +139,11 @@ export function buildServices(deps: AppDeps) {
 export type Services = ReturnType<typeof buildServices>
 
 /** The Express app without listen(): middleware, routers, 404, one error handler. */
-export function createApp(deps: AppDeps): Express {
+export function createApp(deps: AppDeps, services: Services = buildServices(deps)): Express {
   const { config } = deps
-  const services = buildServices(deps)
   const api = new ApiRegistry()
   const app = express()
-  app.set('trust proxy', 'loopback')
+  app.set('trust proxy', config.TRUST_PROXY)
   app.disable('x-powered-by')
   const https = config.publicUrl.startsWith('https:')
   app.use(
@@ -166,8 +173,15 @@ export function createApp(deps: AppDeps): Express {
     }),
   )
   app.use(cookieParser())
-  app.use(authenticate(config.JWT_SECRET, (id) => services.auth.loadActiveUser(id)))
+  app.use(
+    authenticate(config.JWT_SECRET, (id, version) => services.auth.loadSessionUser(id, version)),
+  )
+  // The webhook is signed by the payment service and comes from its servers, not a browser.
   app.use(paymentsWebhookRouter(api, services.payments))
+  app.use(
+    '/api',
+    refuseCrossSite(() => config.publicUrl),
+  )
   app.use('/api', express.json({ limit: '2mb' }))
 
   app.use(healthRouter(api, deps.dataSource, VERSION))
@@ -175,7 +189,6 @@ export function createApp(deps: AppDeps): Express {
     authRouter(api, services.auth, {
       tokenTtlHours: config.TOKEN_TTL_HOURS,
       secureCookie: https,
-      signInLimit: config.SIGN_IN_LIMIT,
     }),
   )
   app.use(usersRouter(api, services.usersAdmin))

@@ -6,6 +6,25 @@ const bool = z
   .optional()
 
 const port = z.coerce.number().int().min(0).max(65535)
+const count = (fallback: number) => z.coerce.number().int().min(1).default(fallback)
+const ms = (fallback: number) => z.coerce.number().int().min(10).default(fallback)
+
+/**
+ * Which proxies to believe about the client's address (Express's `trust proxy`): off unless
+ * set, so a client cannot pick its own address with X-Forwarded-For. A hop count ("1") or a
+ * comma list of addresses, subnets or the names loopback, linklocal, uniquelocal; "true"
+ * (believe anyone) is refused.
+ */
+const trustProxy = z
+  .string()
+  .trim()
+  .default('false')
+  .refine((v) => v !== 'true', 'name the proxies or give a hop count; "true" trusts anyone')
+  .transform((v): false | number | string[] => {
+    if (v === '' || v === 'false' || v === '0') return false
+    if (/^[0-9]+$/.test(v)) return Number(v)
+    return v.split(',').map((x) => x.trim())
+  })
 
 const EnvSchema = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
@@ -38,7 +57,20 @@ const EnvSchema = z.object({
   UPLOAD_DIR: z.string().default('.local/uploads'),
   CHROMIUM_PATH: z.string().default('/usr/bin/chromium'),
   WORKER_THREADS: z.coerce.number().int().min(1).max(16).default(2),
-  SIGN_IN_LIMIT: z.coerce.number().int().min(1).default(5),
+  TRUST_PROXY: trustProxy,
+  /** failed sign-ins per account, and per client address, within 15 minutes */
+  SIGN_IN_LIMIT: count(5),
+  SIGN_IN_ADDRESS_LIMIT: count(20),
+  /** reset requests per account, and per client address, within an hour */
+  RESET_LIMIT: count(3),
+  RESET_ADDRESS_LIMIT: count(10),
+  /** invitations per invited address within a day, and per client address within an hour */
+  INVITE_LIMIT: count(5),
+  INVITE_ADDRESS_LIMIT: count(30),
+  /** how often open payment sessions are checked with the payment service */
+  RECONCILE_INTERVAL_MS: ms(60_000),
+  /** how often the mail outbox is looked at for mail due (new mail is sent at once anyway) */
+  OUTBOX_INTERVAL_MS: ms(5_000),
   CLIENT_DIR: z.string().default('dist/client'),
 })
 

@@ -7,6 +7,7 @@ import { HostModelEntity } from './modules/models/host-model.entity'
 import { ModelRevisionEntity } from './modules/models/model-revision.entity'
 import { SizingEntity } from './modules/sizings/sizing.entity'
 import { SizingRevisionEntity } from './modules/sizings/sizing-revision.entity'
+import { SizingAcknowledgementEntity } from './modules/sizings/sizing-acknowledgement.entity'
 import { MeasurementRecordEntity } from './modules/measurements/measurement-record.entity'
 import { PaymentSessionEntity } from './modules/payments/payment-session.entity'
 import { PaymentEventEntity } from './modules/payments/payment-event.entity'
@@ -19,6 +20,7 @@ import { ContactEntity } from './modules/customers/contact.entity'
 import { QuoteEntity } from './modules/quotes/quote.entity'
 import { QuoteLineEntity } from './modules/quotes/quote-line.entity'
 import { QuoteEventEntity } from './modules/quotes/quote-event.entity'
+import { OutboxMailEntity } from './modules/outbox/outbox-mail.entity'
 
 /** Every entity class, listed (no globs: esbuild-built code has no stable file layout). */
 export const entities = [
@@ -31,6 +33,7 @@ export const entities = [
   ModelRevisionEntity,
   SizingEntity,
   SizingRevisionEntity,
+  SizingAcknowledgementEntity,
   MeasurementRecordEntity,
   PaymentSessionEntity,
   PaymentEventEntity,
@@ -43,4 +46,5 @@ export const entities = [
   QuoteEntity,
   QuoteLineEntity,
   QuoteEventEntity,
+  OutboxMailEntity,
 ]

@@ -1,6 +1,7 @@
 import 'reflect-metadata'
 import { pino } from 'pino'
-import { createApp } from './app'
+import { buildServices, createApp } from './app'
+import { startBackgroundJobs } from './jobs'
 import { loadConfig } from './config'
 import { createDataSource } from './data-source'
 import { smtpMailer } from './integrations/mail'
@@ -18,16 +19,20 @@ async function main() {
   const logger = pino({ level: config.LOG_LEVEL })
   const dataSource = await createDataSource(config).initialize()
   const pool = createSizingPool(config.WORKER_THREADS)
-  const app = createApp({ config, dataSource, mailer: smtpMailer(config), logger, pool })
+  const deps = { config, dataSource, mailer: smtpMailer(config), logger, pool }
+  const services = buildServices(deps)
+  const app = createApp(deps, services)
+  const jobs = startBackgroundJobs(services, config, logger)
   const server = app.listen(config.PORT, config.HOST, () => {
     logger.info({ url: config.publicUrl }, 'Quellnode is listening')
   })
   const stop = () => {
     server.close(
       () =>
-        void Promise.all([dataSource.destroy(), pool.close(), closePdfRenderers()]).then(() =>
-          process.exit(0),
-        ),
+        void jobs
+          .stop()
+          .then(() => Promise.all([dataSource.destroy(), pool.close(), closePdfRenderers()]))
+          .then(() => process.exit(0)),
     )
     setTimeout(() => process.exit(0), 5000).unref()
   }

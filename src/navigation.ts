@@ -27,6 +27,7 @@ export const NAV_ITEMS: NavItem[] = [
   { name: 'customers', label: 'Customers', icon: 'pi pi-building', roles: ['sales', 'admin'] },
   { name: 'catalogue', label: 'Catalogue', icon: 'pi pi-box', roles: ['admin'] },
   { name: 'admin-users', label: 'Users', icon: 'pi pi-users', roles: ['admin'] },
+  { name: 'admin-refunds', label: 'Refunds', icon: 'pi pi-replay', roles: ['admin'] },
   { name: 'portal', label: 'My quotes', icon: 'pi pi-file', roles: ['customer'] },
   {
     name: 'work-orders',

@@ -4,6 +4,8 @@ import { apiErrorHandler, requireSecretKey } from './api-errors'
 import type { FakeContext } from './context'
 import { parseSessionParams } from './session-params'
 import { createSession } from './store'
+import { listEvents } from './event-list'
+import { createRefund } from './refunds'
 import { FakeApiError } from './types'
 
 /**
@@ -29,7 +31,7 @@ function idempotency(ctx: FakeContext) {
   }
 }
 
-/** The `/v1` API: the three Checkout Session calls the app makes. */
+/** The `/v1` API: Checkout Sessions, events and refunds, the calls the app makes. */
 export function apiRouter(ctx: FakeContext): Router {
   const router = Router()
   router.use(requireSecretKey(ctx))
@@ -46,11 +48,28 @@ export function apiRouter(ctx: FakeContext): Router {
   router.post('/checkout/sessions/:id/expire', async (req, res) => {
     res.json(await expireSession(ctx, req.params.id))
   })
+  router.get('/events', (req, res) => {
+    res.json(listEvents(ctx, req.query as Record<string, unknown>))
+  })
+  router.get('/events/:id', (req, res) => {
+    const found = ctx.store.events.find((e) => e.event.id === req.params.id)
+    if (!found)
+      throw new FakeApiError(
+        404,
+        'invalid_request_error',
+        `No such event: '${req.params.id}'`,
+        'id',
+      )
+    res.json(found.event)
+  })
+  router.post('/refunds', async (req, res) => {
+    res.json(await createRefund(ctx, (req.body ?? {}) as Record<string, unknown>))
+  })
   router.use((req) => {
     throw new FakeApiError(
       404,
       'invalid_request_error',
-      `Unrecognized request URL (${req.method}: ${req.originalUrl}). The payments fake implements Checkout Sessions only.`,
+      `Unrecognized request URL (${req.method}: ${req.originalUrl}). The payments fake implements Checkout Sessions, events and refunds only.`,
     )
   })
   router.use(apiErrorHandler)

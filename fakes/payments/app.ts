@@ -12,14 +12,20 @@ import type { PaymentsFakeOptions } from './types'
  * @param options keys, webhook target and the public base URL of the pay page
  */
 export function createPaymentsFake(options: PaymentsFakeOptions): Express {
+  return paymentsFakeApp(fakeContext(options))
+}
+
+/** The state one fake instance keeps: its options, its store and its clock. */
+export function fakeContext(options: PaymentsFakeOptions): FakeContext {
   const now = options.now ?? Date.now
-  const ctx: FakeContext = {
-    options,
-    store: createStore(),
-    nowS: () => Math.floor(now() / 1000),
-  }
+  return { options, store: createStore(), nowS: () => Math.floor(now() / 1000) }
+}
+
+export function paymentsFakeApp(ctx: FakeContext): Express {
   const app = express()
   app.disable('x-powered-by')
+  // The SDK encodes ranges and lists with brackets (created[gte]=…), as qs reads them.
+  app.set('query parser', 'extended')
   app.use('/v1', apiRouter(ctx))
   app.use('/pay', payRouter(ctx))
   app.use('/_fake', fakeRouter(ctx))

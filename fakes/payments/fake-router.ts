@@ -4,7 +4,7 @@ import { apiErrorHandler } from './api-errors'
 import type { FakeContext } from './context'
 import { ensurePaymentIntent, resetStore } from './store'
 import { FakeApiError, type SentEvent } from './types'
-import { deliver, recordEvent } from './webhooks'
+import { deliver, recordEvent, runDueRetries } from './webhooks'
 
 const SESSION_EVENT_TYPES = [
   'checkout.session.completed',
@@ -58,10 +58,11 @@ export function fakeRouter(ctx: FakeContext): Router {
     )
     res.json({
       object: 'list',
-      data: list.map(({ event, sessionId: sid, deliveries }) => ({
+      data: list.map(({ event, sessionId: sid, deliveries, nextRetryAt }) => ({
         ...event,
         session_id: sid,
         deliveries,
+        next_retry_at: nextRetryAt,
       })),
     })
   })
@@ -80,6 +81,10 @@ export function fakeRouter(ctx: FakeContext): Router {
 
   router.post('/sessions/:id/expire', async (req, res) => {
     res.json(await expireSession(ctx, req.params.id))
+  })
+
+  router.post('/retries/run', async (_req, res) => {
+    res.json({ delivered: await runDueRetries(ctx) })
   })
 
   router.post('/reset', (_req, res) => {

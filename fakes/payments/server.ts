@@ -1,6 +1,7 @@
 import { createServer } from 'node:http'
 import { closeServer, listen } from '../shared/listen'
-import { createPaymentsFake } from './app'
+import { fakeContext, paymentsFakeApp } from './app'
+import { runDueRetries } from './webhooks'
 import type { PaymentsFakeOptions } from './types'
 
 export interface StartPaymentsFakeOptions extends Omit<PaymentsFakeOptions, 'publicUrl'> {
@@ -29,6 +30,19 @@ export async function startPaymentsFake(
   const server = createServer()
   const port = await listen(server, wanted, host)
   const url = `http://${host}:${port}`
-  server.on('request', createPaymentsFake({ ...rest, publicUrl: publicUrl ?? url }))
-  return { url, port, close: () => closeServer(server) }
+  const ctx = fakeContext({ ...rest, publicUrl: publicUrl ?? url })
+  server.on('request', paymentsFakeApp(ctx))
+  const pollMs = options.retryPollMs ?? 1000
+  const timer =
+    pollMs > 0
+      ? setInterval(() => void runDueRetries(ctx).catch(() => undefined), pollMs).unref()
+      : undefined
+  return {
+    url,
+    port,
+    close: () => {
+      clearInterval(timer)
+      return closeServer(server)
+    },
+  }
 }

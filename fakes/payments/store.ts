@@ -1,6 +1,12 @@
 import { newId } from './ids'
 import type { SessionParams } from './session-params'
-import { FakeApiError, type CheckoutSession, type SentEvent, type SessionRecord } from './types'
+import {
+  FakeApiError,
+  type CheckoutSession,
+  type Refund,
+  type SentEvent,
+  type SessionRecord,
+} from './types'
 
 /** Hosted sessions stay open for a day unless the request says otherwise. */
 const DEFAULT_LIFETIME_S = 24 * 60 * 60
@@ -10,16 +16,18 @@ export interface PaymentsStore {
   events: SentEvent[]
   /** Idempotency-Key → the response first given, replayed for a repeated POST. */
   idempotent: Map<string, { status: number; body: unknown }>
+  refunds: Refund[]
 }
 
 export function createStore(): PaymentsStore {
-  return { sessions: new Map(), events: [], idempotent: new Map() }
+  return { sessions: new Map(), events: [], idempotent: new Map(), refunds: [] }
 }
 
 export function resetStore(store: PaymentsStore): void {
   store.sessions.clear()
   store.events.length = 0
   store.idempotent.clear()
+  store.refunds.length = 0
 }
 
 /** Builds and stores a new open session; the total is Σ unit_amount × quantity. */
@@ -55,6 +63,7 @@ export function createSession(
     session,
     lineItems: params.lineItems,
     paymentIntentMetadata: params.paymentIntentMetadata,
+    refunded: 0,
   })
   return session
 }

@@ -10,6 +10,11 @@ export interface PaymentsFakeOptions {
   publicUrl: string
   /** Clock in milliseconds; tests inject one to move past expires_at. Defaults to Date.now. */
   now?: () => number
+  /**
+   * How often (real milliseconds) a started fake looks for failed deliveries that are due
+   * again by its clock; 0 leaves retries to POST /_fake/retries/run. Default 1000.
+   */
+  retryPollMs?: number
 }
 
 export interface LineItem {
@@ -46,6 +51,8 @@ export interface SessionRecord {
   session: CheckoutSession
   lineItems: LineItem[]
   paymentIntentMetadata: Record<string, string>
+  /** Minor units refunded so far. */
+  refunded: number
 }
 
 export interface WebhookEvent {
@@ -74,6 +81,24 @@ export interface SentEvent {
   payload: string
   sessionId: string
   deliveries: Delivery[]
+  /** Unix seconds of the next retry of a failed delivery; null when delivered or given up. */
+  nextRetryAt: number | null
+  /** A delivery under way, so a retry round never sends it twice at once. */
+  sending?: boolean
+}
+
+/** A refund as the API returns it. */
+export interface Refund {
+  id: string
+  object: 'refund'
+  amount: number
+  currency: string
+  payment_intent: string
+  charge: string
+  status: 'succeeded'
+  reason: string | null
+  metadata: Record<string, string>
+  created: number
 }
 
 /** A Stripe-shaped error raised inside the fake and answered by its error handler. */

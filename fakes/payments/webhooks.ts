@@ -30,6 +30,7 @@ export function recordEvent(
     payload: JSON.stringify(event, null, 2),
     sessionId,
     deliveries: [],
+    nextRetryAt: null,
   }
   ctx.store.events.push(sent)
   return sent
@@ -47,6 +48,7 @@ export async function deliver(ctx: FakeContext, sent: SentEvent): Promise<Delive
     delivery.error = 'no webhookUrl configured'
     return delivery
   }
+  sent.sending = true
   // Signed at the fake's clock, so a test that moves the clock verifies at the same time.
   const header = Stripe.webhooks.generateTestHeaderString({
     payload: sent.payload,
@@ -64,8 +66,36 @@ export async function deliver(ctx: FakeContext, sent: SentEvent): Promise<Delive
     await res.arrayBuffer()
   } catch (err) {
     delivery.error = err instanceof Error ? err.message : String(err)
+  } finally {
+    sent.sending = false
   }
+  scheduleRetry(ctx, sent, delivery)
   return delivery
+}
+
+/** After a failed delivery, the next attempt by the retry schedule; none after a success. */
+function scheduleRetry(ctx: FakeContext, sent: SentEvent, delivery: Delivery): void {
+  const ok = delivery.status !== null && delivery.status >= 200 && delivery.status < 300
+  const failures = sent.deliveries.filter((d) => d !== delivery).length
+  const delay = RETRY_DELAYS_S[failures]
+  sent.nextRetryAt = ok || delay === undefined ? null : ctx.nowS() + delay
+}
+
+/**
+ * The hosted service retries a failed delivery with exponential back-off for up to three days
+ * (its webhook documentation). Here: 1 min, then doubling — 2, 4, 8 … 2048 min, twelve
+ * retries, the last about 68 h after the first attempt; then the event is given up.
+ */
+export const RETRY_DELAYS_S: readonly number[] = Array.from({ length: 12 }, (_, i) => 60 * 2 ** i)
+
+/** Sends every failed event whose retry is due by the fake's clock; returns how many. */
+export async function runDueRetries(ctx: FakeContext): Promise<number> {
+  const now = ctx.nowS()
+  const due = ctx.store.events.filter(
+    (e) => e.nextRetryAt !== null && e.nextRetryAt <= now && !e.sending,
+  )
+  for (const e of due) await deliver(ctx, e)
+  return due.length
 }
 
 /** Records and sends in one step, for events born from a state change. */

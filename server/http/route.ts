@@ -3,6 +3,7 @@ import type { ZodType } from 'zod'
 import { z } from 'zod'
 import type { Role } from '../../shared/schemas/auth'
 import { AppError } from './app-error'
+import { OUT_OF_RANGE } from '../../shared/schemas/model'
 import type { AuthUser } from '../middleware/authenticate'
 import type { ApiRegistry } from './api-registry'
 
@@ -53,7 +54,27 @@ function parsePart<T>(schema: ZodType<T> | undefined, value: unknown, where: str
   const details = issuesOf(result.error, where)
   const first = details[0]
   const message = first ? `${first.path}: ${first.message}` : `Invalid ${where}`
+  // Well-formed values outside a documented range (the engine's) cannot be processed: 422.
+  const outOfRange = result.error.issues.every(
+    (i) => i.code === 'custom' && (i.params as typeof OUT_OF_RANGE | undefined)?.unprocessable,
+  )
+  if (outOfRange) throw new AppError('out-of-range', message, 422, details)
   throw new AppError('invalid-input', message, 400, details)
+}
+
+/**
+ * A body must come in the type the route reads: JSON, or multipart for an upload. An HTML form
+ * on another site can only send form or plain-text bodies without a preflight, so this also
+ * shuts the classic cross-site form post out of every JSON route.
+ */
+function checkContentType(spec: { method: Method; upload?: string }, req: Request) {
+  if (spec.method === 'get') return
+  const expected = spec.upload ? 'multipart/form-data' : 'application/json'
+  const length = Number(req.get('content-length') ?? 0)
+  const hasBody =
+    req.get('content-type') !== undefined || length > 0 || req.get('transfer-encoding')
+  if (hasBody && !req.is(expected))
+    throw new AppError('unsupported-media-type', `Send the request body as ${expected}.`, 415)
 }
 
 function checkAccess(access: Access, user: AuthUser | undefined): AuthUser {
@@ -79,6 +100,7 @@ export function route<B = undefined, Q = undefined, P = undefined>(
   registry.add(spec)
   const guard: RequestHandler = (req, _res, next) => {
     checkAccess(spec.access, req.user as AuthUser | undefined)
+    checkContentType(spec, req)
     next()
   }
   router[spec.method](

@@ -10,6 +10,8 @@ export interface CheckoutRequest {
   customerEmail?: string
   successUrl: string
   cancelUrl: string
+  /** the same key gives the same session back, so two racing requests make one */
+  idempotencyKey?: string
 }
 
 export interface CheckoutSession {
@@ -19,26 +21,49 @@ export interface CheckoutSession {
   currency: string | null
   status: string | null
   paymentStatus: string
+  paymentIntent: string | null
   metadata: Record<string, string>
 }
 
-export interface PaymentEvent {
+export interface RefundRequest {
+  paymentIntent: string
+  /** the same key for the same refund: a retry (from any instance) never refunds twice */
+  idempotencyKey: string
+  metadata: Record<string, string>
+}
+
+export interface Refund {
   id: string
-  type: string
-  /** the event's object as sent: a checkout session or a payment intent */
-  object: {
-    id: string
-    metadata?: Record<string, string> | null
-    amount_total?: number | null
-    currency?: string | null
-    payment_status?: string
-  }
+  amount: number
+  currency: string
+  status: string | null
 }
 
 export interface PaymentGateway {
   createCheckout(req: CheckoutRequest): Promise<CheckoutSession>
-  /** Verifies the signature over the raw body; throws when it does not hold. */
-  verify(rawBody: Buffer, signature: string | undefined): PaymentEvent
+  /** The session as the payment service knows it now. */
+  retrieveCheckout(id: string): Promise<CheckoutSession>
+  /** Closes an open session so it can no longer be paid; throws when it is not open. */
+  expireCheckout(id: string): Promise<CheckoutSession>
+  refund(req: RefundRequest): Promise<Refund>
+  /**
+   * Verifies the signature over the raw body at the instant `nowMs`; throws when it does not
+   * hold or was made more than the tolerance before or after that instant.
+   */
+  verify(rawBody: Buffer, signature: string | undefined, nowMs: number): unknown
+}
+
+/** The SDK's default: a signature more than 5 minutes off the receiver's clock is refused. */
+export const SIGNATURE_TOLERANCE_S = 300
+
+/**
+ * The SDK refuses a signature older than the tolerance but not one dated ahead; a replayed or
+ * pre-made signature dated in the future is refused here with the same bound.
+ */
+export function assertNotFuture(signature: string, nowMs: number) {
+  const t = /(?:^|,)t=(\d{1,12})(?:,|$)/.exec(signature)?.[1]
+  if (!t || Number(t) - nowMs / 1000 > SIGNATURE_TOLERANCE_S)
+    throw new Error('Webhook signature timestamp is outside the tolerance zone')
 }
 
 const toSession = (s: Stripe.Checkout.Session): CheckoutSession => ({
@@ -48,6 +73,8 @@ const toSession = (s: Stripe.Checkout.Session): CheckoutSession => ({
   currency: s.currency,
   status: s.status,
   paymentStatus: s.payment_status,
+  paymentIntent:
+    typeof s.payment_intent === 'string' ? s.payment_intent : (s.payment_intent?.id ?? null),
   metadata: (s.metadata ?? {}) as Record<string, string>,
 })
 
@@ -74,37 +101,50 @@ export function stripeGateway(
   })
   return {
     async createCheckout(req) {
-      const session = await stripe.checkout.sessions.create({
-        mode: 'payment',
-        line_items: [
-          {
-            quantity: 1,
-            price_data: {
-              currency: req.currency.toLowerCase(),
-              unit_amount: req.amount,
-              product_data: { name: `Quote ${req.reference}` },
+      const session = await stripe.checkout.sessions.create(
+        {
+          mode: 'payment',
+          line_items: [
+            {
+              quantity: 1,
+              price_data: {
+                currency: req.currency.toLowerCase(),
+                unit_amount: req.amount,
+                product_data: { name: `Quote ${req.reference}` },
+              },
             },
-          },
-        ],
-        client_reference_id: String(req.quoteId),
-        customer_email: req.customerEmail,
-        metadata: { quoteId: String(req.quoteId), reference: req.reference },
-        success_url: req.successUrl,
-        cancel_url: req.cancelUrl,
-      })
+          ],
+          client_reference_id: String(req.quoteId),
+          customer_email: req.customerEmail,
+          metadata: { quoteId: String(req.quoteId), reference: req.reference },
+          success_url: req.successUrl,
+          cancel_url: req.cancelUrl,
+        },
+        req.idempotencyKey ? { idempotencyKey: req.idempotencyKey } : undefined,
+      )
       return toSession(session)
     },
-    verify(rawBody, signature) {
+    retrieveCheckout: async (id) => toSession(await stripe.checkout.sessions.retrieve(id)),
+    expireCheckout: async (id) => toSession(await stripe.checkout.sessions.expire(id)),
+    async refund(req) {
+      const r = await stripe.refunds.create(
+        { payment_intent: req.paymentIntent, reason: 'duplicate', metadata: req.metadata },
+        { idempotencyKey: req.idempotencyKey },
+      )
+      return { id: r.id, amount: r.amount, currency: r.currency, status: r.status }
+    },
+    verify(rawBody, signature, nowMs) {
+      const header = signature ?? ''
       const event = stripe.webhooks.constructEvent(
         rawBody,
-        signature ?? '',
+        header,
         config.STRIPE_WEBHOOK_SECRET,
+        SIGNATURE_TOLERANCE_S,
+        undefined,
+        nowMs,
       )
-      return {
-        id: event.id,
-        type: event.type,
-        object: event.data.object as unknown as PaymentEvent['object'],
-      }
+      assertNotFuture(header, nowMs)
+      return event
     },
   }
 }

@@ -15,7 +15,8 @@ export interface AuthUser {
   companyName: string | null
 }
 
-export type LoadUser = (id: number) => Promise<AuthUser | null>
+/** The user of a session, or null when the account is inactive or the session was ended. */
+export type LoadUser = (id: number, tokenVersion: number) => Promise<AuthUser | null>
 
 /**
  * Reads the session token from its HttpOnly cookie and attaches the user when the token is
@@ -33,10 +34,13 @@ export function authenticate(secret: string, loadUser: LoadUser) {
         algorithms: ['HS256'],
         issuer: 'quellnode',
       },
-      (payload: { sub?: string }, done: (e: unknown, u?: AuthUser | false) => void) => {
+      (
+        payload: { sub?: string; ver?: unknown },
+        done: (e: unknown, u?: AuthUser | false) => void,
+      ) => {
         const id = Number(payload.sub)
-        if (!Number.isInteger(id)) return done(null, false)
-        loadUser(id).then((u) => done(null, u ?? false), done)
+        if (!Number.isInteger(id) || !Number.isInteger(payload.ver)) return done(null, false)
+        loadUser(id, payload.ver as number).then((u) => done(null, u ?? false), done)
       },
     ),
   )

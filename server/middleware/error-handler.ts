@@ -38,13 +38,66 @@ function fromBodyParser(err: BodyParserError): AppError | null {
   return null
 }
 
+// The driver's codes for a database that cannot be reached or went away mid-request.
+const DATABASE_DOWN = new Set([
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'ETIMEDOUT',
+  'EPIPE',
+  'PROTOCOL_CONNECTION_LOST',
+  'ER_SERVER_SHUTDOWN',
+  'ER_CON_COUNT_ERROR',
+])
+
+/** A database outage is ours and passing: 503, so clients and proxies know to try again. */
+function fromDatabaseOutage(err: unknown): AppError | null {
+  const code = driverCode(err)
+  if (code === undefined || !DATABASE_DOWN.has(code)) return null
+  return new AppError(
+    'service-unavailable',
+    'The service is briefly unavailable; try again in a moment.',
+    503,
+  )
+}
+
+/** The driver's code of an error, whether TypeORM wrapped it or not. */
+function driverCode(err: unknown): string | undefined {
+  const e = err as { code?: unknown; driverError?: { code?: unknown } } | null
+  const code = e?.code ?? e?.driverError?.code
+  return typeof code === 'string' ? code : undefined
+}
+
+/**
+ * Two requests racing for the same record: the unique key or the lock refused one of them. The
+ * services guard the races they expect; this keeps any other from answering 500.
+ */
+function fromRace(err: unknown): AppError | null {
+  const code = driverCode(err)
+  if (code === 'ER_DUP_ENTRY')
+    return new AppError(
+      'conflict',
+      'Someone saved the same record at the same moment; reload and try again.',
+      409,
+    )
+  if (code === 'ER_LOCK_DEADLOCK' || code === 'ER_LOCK_WAIT_TIMEOUT')
+    return new AppError('busy', 'The record is being changed; try again in a moment.', 409)
+  return null
+}
+
 /** The one error path: known errors answer with their code, anything else is logged as a 500. */
 export function errorHandler(err: unknown, req: Request, res: Response, _next: NextFunction) {
   const known =
     err instanceof AppError
       ? err
-      : (fromUpload(err) ?? fromBodyParser((err ?? {}) as BodyParserError))
+      : (fromUpload(err) ??
+        fromBodyParser((err ?? {}) as BodyParserError) ??
+        fromDatabaseOutage(err) ??
+        fromRace(err))
   if (known) {
+    if (known.status === 503) {
+      req.log?.warn({ err }, 'database unavailable')
+      res.set('retry-after', '5')
+    }
     res.status(known.status).json({
       error: { code: known.code, message: known.message, details: known.details },
     })

@@ -1,76 +1,117 @@
 /**
- * Shows that a long optimisation on the server does not hold up other requests: a 200-node
- * sizing runs in the worker pool while GET /api/health is timed, against the running MariaDB.
+ * Server figures for `npm run bench`: the real app in this process on a free loopback port,
+ * against a throwaway database on the private MariaDB (seeded through the services, dropped
+ * afterwards). Health: p95 of GET /api/health idle, then while a 500-node sizing runs in the
+ * worker pool and an 8 MB record is uploaded. List: p95 of GET /api/quotes with 1 000 quotes
+ * stored, at 50 connections.
  */
 import 'reflect-metadata'
+import { mkdtempSync, rmSync } from 'node:fs'
 import type { AddressInfo } from 'node:net'
+import { tmpdir } from 'node:os'
+import path from 'node:path'
 import { pino } from 'pino'
-import { spanModel } from '../../shared/dynamics'
-import type { SizingInput } from '../../shared/schemas/sizing'
-import { createApp } from '../app'
+import { buildServices, createApp } from '../app'
 import { loadConfig } from '../config'
 import { createDataSource } from '../data-source'
 import { smtpMailer } from '../integrations/mail'
 import { createSizingPool } from '../workers/pool'
+import { throwawayDatabase } from './bench/bench-db'
+import { client, concurrentP95, scheduledP95 } from './bench/http-load'
+import { benchSizing } from './bench/models'
+import { recordFile, signIn, upload } from './bench/requests'
+import { seedBench } from './bench/seed-bench'
 
-const config = loadConfig({ ...process.env, LOG_LEVEL: 'silent', NODE_ENV: 'test' })
-const dataSource = await createDataSource(config).initialize()
-const pool = createSizingPool(2)
-const app = createApp({
-  config,
-  dataSource,
-  mailer: smtpMailer(config),
-  logger: pino({ level: 'silent' }),
-  pool,
-})
-const server = app.listen(0, '127.0.0.1')
-await new Promise((r) => server.once('listening', r))
-const url = `http://127.0.0.1:${(server.address() as AddressInfo).port}/api/health`
+export const QUOTES = 1000
+export const CONNECTIONS = 50
+const SIZING_NODES = 500
+const LIST_SECONDS = 20
+/** s a request may still run after the load stops before it is cut off */
+const LIST_GRACE = 40
+/** ms between health probes */
+const PROBE_MS = 10
 
-async function healthTimes(n: number, until?: () => boolean) {
-  const times: number[] = []
-  for (let i = 0; until ? !until() : i < n; i++) {
-    const t0 = performance.now()
-    await fetch(url).then((r) => r.json())
-    times.push(performance.now() - t0)
-    await new Promise((r) => setTimeout(r, 5))
+export interface ServerFigures {
+  health: { idleP95Ms: number; busyP95Ms: number }
+  list: { rows: number; connections: number; p95Ms: number; note?: string }
+}
+
+export async function benchServer(progress: (s: string) => void): Promise<ServerFigures> {
+  const db = await throwawayDatabase()
+  const uploads = mkdtempSync(path.join(tmpdir(), 'quellnode-bench-'))
+  const env = { ...process.env, DB_NAME: db.name, LOG_LEVEL: 'silent', UPLOAD_DIR: uploads }
+  const config = loadConfig({ ...env, NODE_ENV: 'test' })
+  const dataSource = await createDataSource(config).initialize()
+  const pool = createSizingPool(2)
+  const deps = {
+    config,
+    dataSource,
+    pool,
+    mailer: smtpMailer(config),
+    logger: pino({ level: 'silent' }),
   }
-  return times.sort((a, b) => a - b)
+  try {
+    progress(`seeding ${QUOTES} quotes in ${db.name}`)
+    const ids = await seedBench(buildServices(deps), QUOTES, SIZING_NODES)
+    const server = createApp(deps).listen(0, '127.0.0.1')
+    await new Promise((r) => server.once('listening', r))
+    const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`
+    try {
+      const engineer = await signIn(base, 'engineer@quellnode.test', 'demo-engineer-1')
+      const sales = await signIn(base, 'sales@quellnode.test', 'demo-sales-1')
+      progress('health, idle and busy')
+      const health = client(base, '', CONNECTIONS)
+      await scheduledP95(health, '/api/health', PROBE_MS, 50) // warm-up
+      const idle = await scheduledP95(health, '/api/health', PROBE_MS, 300)
+      const sizing = benchSizing(SIZING_NODES, ids)
+      let running = 2
+      const failures: string[] = []
+      const finish = async (r: Response) => {
+        running--
+        if (!r.ok) failures.push(`${r.url}: ${r.status} ${(await r.text()).slice(0, 300)}`)
+      }
+      const busyWork = Promise.all([
+        fetch(`${base}/api/sizings`, {
+          method: 'POST',
+          headers: { cookie: engineer, 'content-type': 'application/json' },
+          body: JSON.stringify({ input: sizing }),
+        }).then(finish),
+        upload(base, engineer, ids.siteId, recordFile(8_000_000)).then(finish),
+      ])
+      const t0 = performance.now()
+      const busy = await scheduledP95(health, '/api/health', PROBE_MS, 50, () => running === 0)
+      await busyWork
+      progress(
+        `health p95 idle ${idle.p95.toFixed(1)} ms; busy ${busy.p95.toFixed(1)} ms over ` +
+          `${busy.count} requests in ${((performance.now() - t0) / 1000).toFixed(1)} s ` +
+          `(longest ${busy.max.toFixed(0)} ms)`,
+      )
+      if (failures.length) throw new Error(`busy requests failed: ${failures.join('; ')}`)
+      health.close()
+      progress(`quotes list at ${CONNECTIONS} connections for ${LIST_SECONDS} s`)
+      const list = client(base, sales, CONNECTIONS)
+      const rows = (JSON.parse((await list.get('/api/quotes')).body) as unknown[]).length
+      const load = await concurrentP95(list, '/api/quotes', CONNECTIONS, LIST_SECONDS, LIST_GRACE)
+      list.close()
+      progress(`quotes list p95 ${load.p95.toFixed(0)} ms over ${load.count} requests`)
+      return {
+        health: { idleP95Ms: idle.p95, busyP95Ms: busy.p95 },
+        list: {
+          rows,
+          connections: CONNECTIONS,
+          p95Ms: load.p95,
+          ...(load.stopped > 0 && {
+            note: `${load.stopped} requests still open ${LIST_SECONDS + LIST_GRACE} s after the start were cut off there: the p95 is a lower bound`,
+          }),
+        },
+      }
+    } finally {
+      server.closeAllConnections()
+      server.close()
+    }
+  } finally {
+    await Promise.all([pool.close(), dataSource.destroy()])
+    await db.drop()
+    rmSync(uploads, { recursive: true, force: true })
+  }
 }
-
-const model = spanModel(200, 200 * 500, 3.2)
-const input: SizingInput = {
-  title: 'bench',
-  siteId: 1,
-  modelId: 1,
-  modelRevision: 1,
-  targetMode: 1,
-  absorberNode: 'node-100',
-  excitationNode: 'node-100',
-  responseNode: 'node-100',
-  forceAmplitude: 300,
-  massRatio: 0.02,
-  tuning: 'optimize',
-  orientation: 'vertical',
-  acceptance: { label: 'bench', quantity: 'acceleration', limit: 0.05 },
-  detuningTolerance: 0.05,
-}
-const definition = { nodes: model.nodes, springs: model.springs, hostDampingRatio: 0.01 }
-await pool.run({ model: definition, input }) // warm the worker
-const idle = await healthTimes(40)
-const t0 = performance.now()
-let busyMs = 0
-const job = pool.run({ model: definition, input }).then(() => (busyMs = performance.now() - t0))
-const busy = await healthTimes(0, () => busyMs > 0)
-await job
-const p = (a: number[], q: number) =>
-  a[Math.min(a.length - 1, Math.floor(q * a.length))]!.toFixed(2)
-console.log(
-  `\nGET /api/health while a 200-node sizing (${busyMs.toFixed(0)} ms) runs in the worker pool`,
-)
-console.log(`  idle:  median ${p(idle, 0.5)} ms, p95 ${p(idle, 0.95)} ms`)
-console.log(
-  `  busy:  median ${p(busy, 0.5)} ms, p95 ${p(busy, 0.95)} ms (target: within a few ms of idle)`,
-)
-server.close()
-await Promise.all([pool.close(), dataSource.destroy()])

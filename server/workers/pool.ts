@@ -4,7 +4,8 @@ import type { SizingEvaluation } from '../../shared/sizing/evaluate-sizing'
 import type { SizingJob } from './sizing.worker'
 
 export type SizingOutcome =
-  { ok: true; evaluation: SizingEvaluation } | { ok: false; field: string; message: string }
+  | { ok: true; evaluation: SizingEvaluation }
+  | { ok: false; field: string; message: string; unsolvable?: boolean }
 
 export interface SizingPool {
   run(job: SizingJob): Promise<SizingOutcome>

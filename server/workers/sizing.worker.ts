@@ -16,6 +16,14 @@ export default function run(job: SizingJob) {
     return { ok: true as const, evaluation: evaluateSizing(job.model, job.input) }
   } catch (e) {
     if (e instanceof ModelError) return { ok: false as const, field: e.field, message: e.message }
-    throw e
+    // Past the range and conditioning checks a numerical failure is still the model's: the
+    // engine cannot solve it (a singular solve, say). Say so, rather than fail the request.
+    const why = e instanceof Error ? e.message : String(e)
+    return {
+      ok: false as const,
+      field: '',
+      message: `the engine could not solve this model (${why.slice(0, 200)})`,
+      unsolvable: true,
+    }
   }
 }

@@ -1,10 +1,11 @@
-import { EigenvalueDecomposition, Matrix } from 'ml-matrix'
+import { symmetricEigen } from './eigen/symmetric-eigen'
 import type { Modes } from './types'
 
 /**
  * Undamped modes of K φ = ω² M φ with diagonal M, through the symmetric problem
- * (M^-½ K M^-½) v = ω² v and φ = M^-½ v, so φᵀMφ = 1 (standard; design.md "Modes").
- * Each shape is signed so that its largest component is positive, for repeatable output.
+ * (M^-½ K M^-½) v = ω² v and φ = M^-½ v, so φᵀMφ = 1 (standard; Golub & Van Loan, Matrix
+ * Computations, §8.7). Each shape is signed so that the largest component of v is positive (the
+ * first of those equal within 1e-9), for repeatable output.
  * @param stiffness row-major n×n, N/m
  * @param mass kg, diagonal of M
  * @returns modes in ascending frequency, ω in rad/s
@@ -12,26 +13,30 @@ import type { Modes } from './types'
 export function solveModes(stiffness: Float64Array, mass: Float64Array): Modes {
   const n = mass.length
   const s = Float64Array.from(mass, (m) => 1 / Math.sqrt(m))
-  const a = new Matrix(n, n)
+  const a = new Float64Array(n * n)
+  // k_ij (s_i s_j) keeps M^-½ K M^-½ exactly symmetric, row by row.
   for (let i = 0; i < n; i++) {
-    for (let j = 0; j < n; j++) a.set(i, j, (stiffness[i * n + j] ?? 0) * (s[i] ?? 0) * (s[j] ?? 0))
+    for (let j = 0; j < n; j++) a[i * n + j] = (stiffness[i * n + j] ?? 0) * (s[i]! * s[j]!)
   }
-  const evd = new EigenvalueDecomposition(a, { assumeSymmetric: true })
-  const values = evd.realEigenvalues
-  const vectors = evd.eigenvectorMatrix
-  const order = values.map((_, i) => i).sort((p, q) => (values[p] ?? 0) - (values[q] ?? 0))
-  const omega = new Float64Array(n)
-  const phi = new Float64Array(n * n)
-  order.forEach((src, i) => {
-    omega[i] = Math.sqrt(Math.max(values[src] ?? 0, 0))
+  const { values, vectors } = symmetricEigen(a, n)
+  const omega = values.map((v) => Math.sqrt(Math.max(v, 0)))
+  const sign = new Float64Array(n)
+  for (let i = 0; i < n; i++) {
     let big = 0
     for (let r = 0; r < n; r++) {
-      const v = vectors.get(r, src)
+      const v = vectors[i * n + r]!
       if (Math.abs(v) > Math.abs(big) * (1 + 1e-9)) big = v
     }
-    const sign = big < 0 ? -1 : 1
-    for (let r = 0; r < n; r++) phi[r * n + i] = sign * vectors.get(r, src) * (s[r] ?? 0)
-  })
+    sign[i] = big < 0 ? -1 : 1
+  }
+  const phi = new Float64Array(n * n)
+  // Transpose in blocks of modes so each row of φ is written a cache line at a time.
+  for (let i0 = 0; i0 < n; i0 += 8) {
+    const i1 = Math.min(i0 + 8, n)
+    for (let r = 0; r < n; r++) {
+      for (let i = i0; i < i1; i++) phi[r * n + i] = sign[i]! * vectors[i * n + r]! * s[r]!
+    }
+  }
   return { n, omega, phi }
 }
 

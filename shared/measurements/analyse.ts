@@ -22,17 +22,23 @@ export interface Analysis {
 
 const MIN_SAMPLES = 64
 
-function checkRecord(record: RecordSamples): Float64Array {
+/**
+ * Check a record's sample rate and samples, and detrend them.
+ * @param record sample rate in Hz, acceleration in m/s²
+ * @param field name of the samples in messages
+ * @throws RangeError naming the field
+ */
+export function checkRecord(record: RecordSamples, field = 'acceleration'): Float64Array {
   const fs = record.sampleRateHz
   if (!Number.isFinite(fs) || fs <= 0) {
     throw new RangeError(`sampleRateHz must be a positive finite number, got ${fs}`)
   }
   const a = record.acceleration
   if (a.length < MIN_SAMPLES) {
-    throw new RangeError(`acceleration needs at least ${MIN_SAMPLES} samples, got ${a.length}`)
+    throw new RangeError(`${field} needs at least ${MIN_SAMPLES} samples, got ${a.length}`)
   }
   for (let j = 0; j < a.length; j++) {
-    if (!Number.isFinite(a[j])) throw new RangeError(`acceleration[${j}] is not finite: ${a[j]}`)
+    if (!Number.isFinite(a[j])) throw new RangeError(`${field}[${j}] is not finite: ${a[j]}`)
   }
   return detrendLinear(a)
 }
@@ -60,13 +66,6 @@ export function analyseRecord(record: RecordSamples, options: IdentifyOptions = 
   const fs = record.sampleRateHz
   const kind = options.kind ?? detectRecordKind(signal)
   const spectrum = spectrumOf(signal, fs, kind, options)
-  const { frequencyHz, resolutionHz, binHz } = spectrum
-  const fMin = options.minFrequencyHz ?? 3 * resolutionHz
-  const fMax = options.maxFrequencyHz ?? 0.45 * fs
-  if (!(fMin >= 0 && fMax > fMin)) {
-    throw new RangeError(`minFrequencyHz (${fMin}) must be ≥ 0 and below maxFrequencyHz (${fMax})`)
-  }
-  const last = frequencyHz.length - 1
   return {
     sampleRateHz: fs,
     signal,
@@ -74,7 +73,31 @@ export function analyseRecord(record: RecordSamples, options: IdentifyOptions = 
     kindDetected: options.kind === undefined,
     spectrum,
     amplitude: spectrum.power.map(Math.sqrt),
-    fromIndex: Math.max(1, Math.ceil(fMin / binHz)),
-    toIndex: Math.min(last - 1, Math.floor(fMax / binHz)),
+    ...searchRange(spectrum, fs, options),
+  }
+}
+
+/**
+ * The bins searched for peaks: from `minFrequencyHz` (default 3 spectral lines) to
+ * `maxFrequencyHz` (default 0.45 × sample rate, below the anti-alias roll-off).
+ * @param spectrum the spectrum searched
+ * @param fs sample rate, Hz
+ * @param options the two limits, Hz
+ * @throws RangeError when the limits are out of order
+ */
+export function searchRange(
+  spectrum: Pick<Spectrum, 'frequencyHz' | 'resolutionHz' | 'binHz'>,
+  fs: number,
+  options: { minFrequencyHz?: number; maxFrequencyHz?: number },
+): { fromIndex: number; toIndex: number } {
+  const fMin = options.minFrequencyHz ?? 3 * spectrum.resolutionHz
+  const fMax = options.maxFrequencyHz ?? 0.45 * fs
+  if (!(fMin >= 0 && fMax > fMin)) {
+    throw new RangeError(`minFrequencyHz (${fMin}) must be ≥ 0 and below maxFrequencyHz (${fMax})`)
+  }
+  const last = spectrum.frequencyHz.length - 1
+  return {
+    fromIndex: Math.max(1, Math.ceil(fMin / spectrum.binHz)),
+    toIndex: Math.min(last - 1, Math.floor(fMax / spectrum.binHz)),
   }
 }

@@ -11,7 +11,8 @@ import { RecordError } from './record-error'
 /** The rows of a record file, checked for numbers, column count and time order. */
 export interface Table {
   times: number[] | null
-  values: number[]
+  /** every column after the time column (all columns without one), in file order */
+  channels: number[][]
   lines: number[]
   columnNames: string[] | null
   columnCount: number
@@ -24,7 +25,7 @@ interface Layout {
   timed: boolean
 }
 
-function readRow(fields: string[], line: number, layout: Layout, column: number, table: Table) {
+function readRow(fields: string[], line: number, layout: Layout, table: Table) {
   if (fields.length !== layout.columnCount) {
     const detail = `expected ${layout.columnCount} columns, found ${fields.length}`
     throw new RecordError('column-count', line, detail)
@@ -41,19 +42,21 @@ function readRow(fields: string[], line: number, layout: Layout, column: number,
     const t = numbers[0] ?? 0
     const previous = table.times[table.times.length - 1]
     if (previous !== undefined && !(t > previous)) {
-      const detail = `time ${formatValue(t)} s is not after the previous ${formatValue(previous)} s`
+      const detail = `time ${formatValue(t)} is not after the previous ${formatValue(previous)}`
       throw new RecordError('time-order', line, detail)
     }
     table.times.push(t)
   }
-  table.values.push(numbers[column - 1] ?? 0)
+  const first = table.times ? 1 : 0
+  for (let c = first; c < numbers.length; c++) table.channels[c - first]?.push(numbers[c] ?? 0)
   table.lines.push(line)
 }
 
 function startTable(fields: string[], line: number, separator: Separator, o: ResolvedParseOptions) {
   const timed = o.sampleRateHz === null
   if (timed && fields.length < 2) {
-    const detail = 'one column and no sample rate: give the sample rate, or add a time column in s'
+    const detail =
+      'one column and no sample rate: give the sample rate, or add a time column (s or ms)'
     throw new RecordError('missing-sample-rate', line, detail)
   }
   if (o.accelerationColumn > fields.length) {
@@ -63,7 +66,7 @@ function startTable(fields: string[], line: number, separator: Separator, o: Res
   const isHeader = fields.some((f) => parseNumber(f, separator) === null)
   const table: Table = {
     times: timed ? [] : null,
-    values: [],
+    channels: Array.from({ length: fields.length - (timed ? 1 : 0) }, () => []),
     lines: [],
     columnNames: isHeader ? fields : null,
     columnCount: fields.length,
@@ -91,17 +94,11 @@ export function readTable(text: string, o: ResolvedParseOptions): Table {
       state = startTable(splitFields(raw, separator), line, separator, o)
       if (state.isHeader) continue
     }
-    if (state.table.values.length >= o.maxSamples) {
+    if (state.table.lines.length >= o.maxSamples) {
       const detail = `more than ${o.maxSamples} samples: shorten the record or lower its sample rate`
       throw new RecordError('too-many-samples', line, detail)
     }
-    readRow(
-      splitFields(raw, state.layout.separator),
-      line,
-      state.layout,
-      o.accelerationColumn,
-      state.table,
-    )
+    readRow(splitFields(raw, state.layout.separator), line, state.layout, state.table)
     state.table.lastLine = line
   }
   if (!state) throw new RecordError('empty', 1, 'the file is empty: no samples found')

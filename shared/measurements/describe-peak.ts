@@ -3,6 +3,7 @@ import { nextPowerOfTwo } from './fft'
 import type { HalfPowerBand } from './half-power'
 import { logDecrementFit, type LogDecrementFit } from './log-decrement'
 import { peakBand } from './peak-band'
+import { dampingWarning, type ResultFlag } from './plausibility'
 import type { IdentifiedPeak } from './types'
 
 // Δf ≤ 2ζf_n/5: about five lines across the half-power band (engineering-references.md).
@@ -97,9 +98,19 @@ export function describePeak(
   const lines = linesInBand(a, band, warnings)
   const fit: LogDecrementFit | null =
     a.kind === 'decay' ? logDecrement(a, band, others, warnings) : null
+  const dampingRatio = fit ? fit.dampingRatio : halfPower
+  const flags: ResultFlag[] = []
+  if (lines !== null && a.spectrum.window !== 'none' && lines < MIN_LINES) {
+    flags.push('coarse-resolution')
+  }
+  const implausible = dampingWarning(band.frequencyHz, [dampingRatio, halfPower])
+  if (implausible) {
+    flags.push('damping-out-of-range')
+    warnings.push(implausible)
+  }
   return {
     frequencyHz: band.frequencyHz,
-    dampingRatio: fit ? fit.dampingRatio : halfPower,
+    dampingRatio,
     method: fit ? 'log-decrement' : 'half-power',
     halfPowerDampingRatio: halfPower,
     halfPowerBandHz: [band.lowerHz, band.upperHz],
@@ -108,6 +119,7 @@ export function describePeak(
     logDecrement: fit,
     prominence,
     amplitude: Math.sqrt(band.power),
+    flags,
     warnings,
   }
 }

@@ -2,6 +2,12 @@ import { analyseRecord, type Analysis } from './analyse'
 import { chartSpectrum } from './chart-spectrum'
 import { describePeak } from './describe-peak'
 import { pickModes, warnOverlaps } from './pick-modes'
+import {
+  bandWiderThanFrequency,
+  refusedBandWarning,
+  shortRecordWarning,
+  type ResultFlag,
+} from './plausibility'
 import { analysisForPeak } from './refine-segment'
 import type { IdentificationResult, IdentifyOptions, RecordSamples } from './types'
 
@@ -25,16 +31,31 @@ export function identifyRecord(
   const picks = pickModes(a, options.minRelativeProminence ?? 0.05, options.maxPeaks ?? 8)
   const frequencies = picks.map((p) => p.band.frequencyHz)
   const cache = new Map<number, Analysis>()
-  const peaks = picks.map((p, i) => {
-    const at = analysisForPeak(record, options, a, p.index, p.band, cache)
-    const others = frequencies.filter((_, j) => j !== i)
-    return describePeak(at.analysis, at.index, p.prominence, others)
-  })
-  warnOverlaps(peaks)
   const warnings: string[] = []
+  const peaks = picks
+    .map((p, i) => {
+      const at = analysisForPeak(record, options, a, p.index, p.band, cache)
+      const others = frequencies.filter((_, j) => j !== i)
+      return describePeak(at.analysis, at.index, p.prominence, others)
+    })
+    .filter((p) => {
+      const [lo, hi] = p.halfPowerBandHz
+      if (!bandWiderThanFrequency(lo, hi, p.frequencyHz)) return true
+      warnings.push(refusedBandWarning(p.frequencyHz, lo, hi))
+      return false
+    })
+  warnOverlaps(peaks)
   if (peaks.length === 0) warnings.push('no spectral peak found in the searched range')
-  if (a.kind === 'ambient' && a.spectrum.averages < 4) {
-    warnings.push(`only ${a.spectrum.averages} Welch segments averaged: the spectrum is noisy`)
+  const flags: ResultFlag[] = []
+  if (a.kind === 'ambient') {
+    const short = recordTooShort(a, peaks)
+    if (short) {
+      flags.push('short-record')
+      warnings.push(short)
+    }
+    if (a.spectrum.averages < 4) {
+      warnings.push(`only ${a.spectrum.averages} Welch segments averaged: the spectrum is noisy`)
+    }
   }
   const s = a.spectrum
   return {
@@ -51,6 +72,12 @@ export function identifyRecord(
       unit: s.unit,
     },
     peaks,
+    flags,
     warnings,
   }
+}
+
+function recordTooShort(a: Analysis, peaks: { frequencyHz: number }[]): string | null {
+  const lowest = peaks.reduce((m, p) => Math.min(m, p.frequencyHz), Infinity)
+  return shortRecordWarning(a.signal.length / a.sampleRateHz, lowest < Infinity ? lowest : null)
 }

@@ -9,6 +9,7 @@ export type RecordErrorCode =
   | 'too-few-samples'
   | 'too-many-samples'
   | 'missing-sample-rate'
+  | 'time-unit'
 
 /**
  * A record file that cannot be read as a measurement. The message starts with

@@ -19,6 +19,27 @@ function impactIndex(x: ArrayLike<number>): number {
 }
 
 /**
+ * The exponential window a free decay needs, from the impact (the largest sample) so the end
+ * falls to 1 % (common practice); none when the decay has died out by the end of the record.
+ * @param x detrended acceleration, m/s²
+ * @param sampleRateHz Hz
+ * @returns the window and its added decay rate 1/τ (1/s), or null
+ */
+export function decayWindow(
+  x: Float64Array,
+  sampleRateHz: number,
+): { window: Float64Array; decayRate: number } | null {
+  const n = x.length
+  const start = impactIndex(x)
+  const peak = Math.abs(x[start] ?? 0)
+  const endLevel = Math.SQRT2 * rms(x, Math.floor(n * 0.95), n)
+  const remaining = (n - 1 - start) / sampleRateHz
+  if (!(peak > 0 && endLevel > DECAYED * peak && remaining > 0)) return null
+  const tau = remaining / Math.log(1 / DECAYED)
+  return { window: exponentialWindow(n, sampleRateHz, tau, start), decayRate: 1 / tau }
+}
+
+/**
  * Spectrum of a free decay: one transform of the whole record, zero-padded ×4 so the
  * half-power points of a lightly damped peak fall between well-spaced bins. No window when
  * the decay has died out by the end (it then has no leakage); otherwise an exponential
@@ -30,18 +51,9 @@ function impactIndex(x: ArrayLike<number>): number {
  */
 export function decaySpectrum(x: Float64Array, sampleRateHz: number): Spectrum {
   const n = x.length
-  const start = impactIndex(x)
-  const peak = Math.abs(x[start] ?? 0)
-  const endLevel = Math.SQRT2 * rms(x, Math.floor(n * 0.95), n)
-  let input = x
-  let windowDecayRate = 0
-  const remaining = (n - 1 - start) / sampleRateHz
-  if (peak > 0 && endLevel > DECAYED * peak && remaining > 0) {
-    const tau = remaining / Math.log(1 / DECAYED)
-    const w = exponentialWindow(n, sampleRateHz, tau, start)
-    input = x.map((v, j) => v * (w[j] ?? 0))
-    windowDecayRate = 1 / tau
-  }
+  const expo = decayWindow(x, sampleRateHz)
+  const input = expo ? x.map((v, j) => v * (expo.window[j] ?? 0)) : x
+  const windowDecayRate = expo?.decayRate ?? 0
   const base = nextPowerOfTwo(n)
   const size = Math.max(base, Math.min(4 * base, MAX_PADDED))
   const X = realDft(input, size)

@@ -4,7 +4,12 @@ import { hannWindow } from './windows'
 
 const MIN_SEGMENT = 64
 
-function segmentCount(n: number, length: number): number {
+/**
+ * Half-overlapping segments of `length` samples that fit in `n`.
+ * @param n record length in samples
+ * @param length segment length in samples
+ */
+export function segmentCount(n: number, length: number): number {
   return n < length ? 0 : Math.floor((n - length) / (length / 2)) + 1
 }
 
@@ -20,6 +25,24 @@ export function chooseSegmentLength(n: number, minAverages: number): number {
   while (segmentCount(n, 2 * length) >= minAverages) length *= 2
   while (length > 4 && segmentCount(n, length) < 1) length /= 2
   return length
+}
+
+/**
+ * Transform of one Welch segment: mean removed, windowed, zero-padded to `size`.
+ * @param x record
+ * @param from first sample of the segment
+ * @param w window, its length the segment length
+ * @param size transform length (power of two ≥ the segment)
+ * @returns interleaved non-negative-frequency half, as realDft
+ */
+export function segmentDft(x: ArrayLike<number>, from: number, w: Float64Array, size: number) {
+  const L = w.length
+  let mean = 0
+  for (let j = 0; j < L; j++) mean += x[from + j] ?? 0
+  mean /= L
+  const segment = new Float64Array(L)
+  for (let j = 0; j < L; j++) segment[j] = ((x[from + j] ?? 0) - mean) * (w[j] ?? 0)
+  return realDft(segment, size)
 }
 
 /**
@@ -46,14 +69,8 @@ export function welchSpectrum(
   const bins = L + 1
   const sum = new Float64Array(bins)
   const averages = segmentCount(x.length, L)
-  const segment = new Float64Array(L)
   for (let s = 0; s < averages; s++) {
-    const from = (s * L) / 2
-    let mean = 0
-    for (let j = 0; j < L; j++) mean += x[from + j] ?? 0
-    mean /= L
-    for (let j = 0; j < L; j++) segment[j] = ((x[from + j] ?? 0) - mean) * (w[j] ?? 0)
-    const X = realDft(segment, size)
+    const X = segmentDft(x, (s * L) / 2, w, size)
     for (let k = 0; k < bins; k++)
       sum[k] = (sum[k] ?? 0) + (X[2 * k] ?? 0) ** 2 + (X[2 * k + 1] ?? 0) ** 2
   }

@@ -1,4 +1,5 @@
 import type { LogDecrementFit } from './log-decrement'
+import type { ResultFlag } from './plausibility'
 import type { RecordKind } from './record-kind'
 import type { Spectrum } from './spectrum-types'
 
@@ -50,6 +51,8 @@ export interface IdentifiedPeak {
   prominence: number
   /** peak amplitude in the spectrum's amplitude unit */
   amplitude: number
+  /** what needs care: damping outside (0, 0.3], a half-power band under five lines */
+  flags: ResultFlag[]
   warnings: string[]
 }
 
@@ -70,7 +73,12 @@ export interface IdentificationResult {
     quantity: Spectrum['quantity']
     unit: Spectrum['unit']
   }
-  /** largest prominence first */
+  /**
+   * Largest prominence first. A bump whose half-power band is wider than its frequency is not
+   * a mode and is left out (a warning says so).
+   */
   peaks: IdentifiedPeak[]
+  /** 'short-record' when an ambient record spans fewer than ~1000 periods of its lowest mode */
+  flags: ResultFlag[]
   warnings: string[]
 }

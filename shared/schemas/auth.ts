@@ -4,8 +4,6 @@ export const ROLES = ['engineer', 'sales', 'customer', 'production', 'admin'] as
 export const RoleSchema = z.enum(ROLES)
 export type Role = z.infer<typeof RoleSchema>
 
-export const IdParamSchema = z.object({ id: z.coerce.number().int().positive() })
-
 export const EmailSchema = z.string().trim().toLowerCase().pipe(z.email('a valid e-mail address'))
 
 export const PasswordSchema = z

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { IdSchema } from './ids'
 import { OrientationSchema } from './sizing'
 
 /** How a unit dissipates energy; names of the trade. */
@@ -93,4 +94,4 @@ export const UnitMatchSchema = z.object({
 })
 export type UnitMatch = z.infer<typeof UnitMatchSchema>
 
-export const MatchQuerySchema = z.object({ sizingId: z.coerce.number().int().positive() })
+export const MatchQuerySchema = z.object({ sizingId: IdSchema })

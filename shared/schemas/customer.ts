@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { IdSchema } from './ids'
 import { EmailSchema } from './auth'
 
 export const CustomerInputSchema = z.object({
@@ -32,6 +33,6 @@ export const CustomerSchema = z.object({
 export type Customer = z.infer<typeof CustomerSchema>
 
 export const ContactParamsSchema = z.object({
-  id: z.coerce.number().int().positive(),
-  contactId: z.coerce.number().int().positive(),
+  id: IdSchema,
+  contactId: IdSchema,
 })

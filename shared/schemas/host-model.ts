@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { IdSchema } from './ids'
 import { ModelDefinitionSchema } from './sizing'
 
 export const ModelCreateSchema = z.object({
@@ -18,7 +19,7 @@ export const ModelReviseSchema = z.object({
 export type ModelRevise = z.infer<typeof ModelReviseSchema>
 
 export const ModelListQuerySchema = z.object({
-  siteId: z.coerce.number().int().positive().optional(),
+  siteId: IdSchema.optional(),
 })
 
 export interface ModelRevisionInfo {

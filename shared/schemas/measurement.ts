@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { IdSchema, IndexSchema } from './ids'
 import type { IdentificationResult } from '../measurements'
 
 /** The largest record file accepted, bytes (8 MiB; about 400 000 rows of time and acceleration). */
@@ -15,7 +16,7 @@ export const RecordUploadSchema = z.object({
   /** Hz, for a file without a time column */
   sampleRateHz: optionalNumber(z.coerce.number().positive('must be above zero').max(1e6)),
   kind: optionalNumber(z.enum(['decay', 'ambient'])),
-  modelId: optionalNumber(z.coerce.number().int().positive()),
+  modelId: optionalNumber(IdSchema),
   nodeId: optionalText(60),
 })
 export type RecordUpload = z.infer<typeof RecordUploadSchema>
@@ -26,8 +27,8 @@ export const PeakAddSchema = z.object({
 })
 
 export const PeakIndexParamsSchema = z.object({
-  id: z.coerce.number().int().positive(),
-  index: z.coerce.number().int().min(0),
+  id: IdSchema,
+  index: IndexSchema,
 })
 
 export const CalibrateSchema = z.object({

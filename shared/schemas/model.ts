@@ -11,6 +11,39 @@ import { strictObject } from './strict'
 const finite = () => z.number({ error: 'expected a finite number' })
 const text = () => z.string({ error: 'expected a text' }).min(1, { error: 'must not be empty' })
 
+/**
+ * The documented range of each engine input, SI units. Outside it the eigen-solve and the
+ * frequency sweep lose their accuracy or overflow (1e308 kg, 5e-324 N/m, a 1e-300 Hz band), so
+ * such a value is refused before any solve, naming the field; the server answers 422. Zero
+ * and negative values are left to the engine's own checks, whose messages explain them.
+ */
+export const ENGINE_RANGES = {
+  mass: { min: 1e-6, max: 1e12, unit: 'kg' },
+  stiffness: { min: 1e-3, max: 1e15, unit: 'N/m' },
+  damping: { min: 1e-9, max: 1e12, unit: 'N·s/m' },
+  massRatio: { min: 1e-6, max: 10, unit: '' },
+  frequencyRatio: { min: 1e-3, max: 1e3, unit: '' },
+  dampingRatio: { min: 1e-9, max: 10, unit: '' },
+  frequencyHz: { min: 1e-4, max: 1e6, unit: 'Hz' },
+} as const
+
+/** Marks a zod issue as a value outside the engine's range (422, not a malformed body). */
+export const OUT_OF_RANGE = { unprocessable: true } as const
+
+/** A band is refused when it is narrower than this fraction of its upper frequency. */
+export const MIN_RELATIVE_BAND = 1e-6
+
+const ranged = (name: keyof typeof ENGINE_RANGES) => {
+  const { min, max, unit } = ENGINE_RANGES[name]
+  const range = `${min} … ${max}${unit ? ` ${unit}` : ''}`
+  return finite()
+    .refine((v) => v <= 0 || (v >= min && v <= max), {
+      message: `outside the engine's range ${range}`,
+      params: OUT_OF_RANGE,
+    })
+    .describe(`${unit || 'ratio'}; the engine's range is ${range}`)
+}
+
 export const tuningNameSchema = z.enum([
   'optimize',
   'optimize-h2',
@@ -26,7 +59,7 @@ export const nodeSchema = strictObject({
   id: text(),
   label: z.string().optional(),
   /** kg; ignored on a fixed node */
-  mass: finite().optional(),
+  mass: ranged('mass').optional(),
   /** grounded to a support (wall, column, abutment, foundation) */
   fixed: z.boolean().optional(),
 })
@@ -35,16 +68,16 @@ export const springSchema = strictObject({
   from: text(),
   to: text(),
   /** N/m */
-  stiffness: finite(),
+  stiffness: ranged('stiffness'),
   /** N·s/m, a physical dashpot in parallel */
-  damping: finite().optional(),
+  damping: ranged('damping').optional(),
 })
 
 export const explicitTuningSchema = strictObject({
   /** ω_a / ω_target */
-  frequencyRatio: finite(),
+  frequencyRatio: ranged('frequencyRatio'),
   /** c_a / (2 m_a ω_a), referred to the absorber's own frequency */
-  dampingRatio: finite(),
+  dampingRatio: ranged('dampingRatio'),
 })
 
 export const absorberSchema = strictObject({
@@ -52,15 +85,22 @@ export const absorberSchema = strictObject({
   /** a second free node: the absorber acts on the relative motion of `node` against it */
   relativeTo: text().optional(),
   /** m_a / m_eff of the target mode at the absorber node; or give `mass` */
-  massRatio: finite().optional(),
+  massRatio: ranged('massRatio').optional(),
   /** kg, instead of massRatio */
-  mass: finite().optional(),
+  mass: ranged('mass').optional(),
   tuning: z.union([tuningNameSchema, explicitTuningSchema]).optional(),
   /** m: the largest stroke allowed at the design load (excitation.amplitude) */
   strokeLimit: finite().optional(),
 })
 
-export const bandSchema = strictObject({ minHz: finite(), maxHz: finite() })
+export const bandSchema = strictObject({
+  minHz: ranged('frequencyHz'),
+  maxHz: ranged('frequencyHz'),
+}).refine((b) => !(b.maxHz > b.minHz) || b.maxHz - b.minHz >= MIN_RELATIVE_BAND * b.maxHz, {
+  message: `the band is narrower than ${MIN_RELATIVE_BAND} of its upper frequency`,
+  path: ['maxHz'],
+  params: OUT_OF_RANGE,
+})
 
 /** What loads the structure. */
 export const LOAD_KINDS = ['force', 'forces', 'mode-shaped', 'base'] as const
@@ -100,9 +140,9 @@ export const responseSchema = strictObject({
 
 /** A machine's running speed (`hz`) or speed range (`minHz`…`maxHz`): the band to tune over. */
 export const speedSchema = strictObject({
-  hz: finite().optional(),
-  minHz: finite().optional(),
-  maxHz: finite().optional(),
+  hz: ranged('frequencyHz').optional(),
+  minHz: ranged('frequencyHz').optional(),
+  maxHz: ranged('frequencyHz').optional(),
 })
 
 export const modelSchema = strictObject({

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { IdSchema } from './ids'
 import { CURRENCIES } from '../money'
 import { SizingSummarySchema } from './sizing'
 
@@ -48,7 +49,7 @@ export type QuoteCreate = z.infer<typeof QuoteCreateSchema>
 
 export const QuoteListQuerySchema = z.object({
   state: QuoteStateSchema.optional(),
-  companyId: z.coerce.number().int().positive().optional(),
+  companyId: IdSchema.optional(),
   /** created on or after, YYYY-MM-DD */
   from: isoDate.optional(),
   /** created on or before, YYYY-MM-DD */
@@ -58,6 +59,13 @@ export const QuoteListQuerySchema = z.object({
 export type QuoteListQuery = z.infer<typeof QuoteListQuerySchema>
 
 export const QuoteNoteSchema = z.object({ note: z.string().trim().max(500).default('') })
+
+/** Sending; a quote whose sizing was handed over with failed checks needs them confirmed. */
+export const QuoteSendSchema = z.object({
+  /** sales have read the acknowledged failed design checks and send the quote with them */
+  confirmDesignChecks: z.boolean().default(false),
+})
+export type QuoteSend = z.infer<typeof QuoteSendSchema>
 export const QuoteAcceptSchema = z.object({
   name: z.string().trim().min(1, 'required').max(120),
   purchaseOrder: z.string().trim().min(1, 'required').max(60),
@@ -129,7 +137,87 @@ export const QuoteSchema = QuoteSummarySchema.extend({
   acceptedName: z.string().nullable(),
   purchaseOrder: z.string().nullable(),
   paidAt: z.string().nullable(),
+  /** Who in sales confirmed the sizing's acknowledged failed checks when sending, and when. */
+  designConfirmation: z.object({ at: z.string(), byName: z.string() }).nullable(),
   /** Supplier-side history; empty for a customer. */
   events: z.array(QuoteEventSchema),
 })
 export type Quote = z.infer<typeof QuoteSchema>
+
+/**
+ * What a customer reads of the sizing behind a quote. Picked field by field: a field added to
+ * the sizing for the supplier's own use (the engineer's handover note and name, say) never
+ * reaches a customer unless it is listed here. To show a customer a new field, add it here.
+ */
+export const CustomerSizingSchema = SizingSummarySchema.pick({
+  id: true,
+  revision: true,
+  title: true,
+  state: true,
+  siteName: true,
+  companyName: true,
+  targetMode: true,
+  hostFrequencyHz: true,
+  effectiveMass: true,
+  orientation: true,
+  absorber: true,
+  stroke: true,
+  strokeLimit: true,
+  load: true,
+  staticDeflection: true,
+  reduction: true,
+  acceptance: true,
+  chart: true,
+  designAcknowledgement: true,
+})
+export type CustomerSizing = z.infer<typeof CustomerSizingSchema>
+
+/** A quote as its customer reads it: the supplier's history and internal notes left out. */
+export const CustomerQuoteSchema = QuoteSchema.pick({
+  id: true,
+  number: true,
+  revision: true,
+  reference: true,
+  state: true,
+  sizingId: true,
+  sizingTitle: true,
+  companyId: true,
+  companyName: true,
+  siteName: true,
+  currency: true,
+  total: true,
+  validUntil: true,
+  createdAt: true,
+  sentAt: true,
+  latest: true,
+  contactId: true,
+  contactName: true,
+  contactEmail: true,
+  discountBp: true,
+  taxBp: true,
+  terms: true,
+  lines: true,
+  subtotal: true,
+  discount: true,
+  discountedSubtotal: true,
+  tax: true,
+  createdByName: true,
+  acceptedAt: true,
+  acceptedName: true,
+  purchaseOrder: true,
+  paidAt: true,
+}).extend({ sizing: CustomerSizingSchema })
+export type CustomerQuote = z.infer<typeof CustomerQuoteSchema>
+
+/**
+ * Builds the customer's view of a quote; unknown keys are dropped, so only listed fields pass.
+ * An acknowledgement of failed design checks stays (which limit is not met and why it was
+ * accepted) without the name behind it or the staff's specifics.
+ */
+export function toCustomerQuote(q: Quote): CustomerQuote {
+  const c = CustomerQuoteSchema.parse(q)
+  const ack = c.sizing.designAcknowledgement
+  if (!ack) return c
+  const failed = ack.failed.map((f) => ({ ...f, details: [] }))
+  return { ...c, sizing: { ...c.sizing, designAcknowledgement: { ...ack, byName: null, failed } } }
+}

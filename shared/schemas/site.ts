@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { IdSchema } from './ids'
 
 export const STRUCTURE_KINDS = [
   'floor',
@@ -25,7 +26,7 @@ export type SiteInput = z.infer<typeof SiteInputSchema>
 export const SiteListQuerySchema = z.object({
   search: z.string().trim().max(100).optional(),
   structureKind: StructureKindSchema.optional(),
-  companyId: z.coerce.number().int().positive().optional(),
+  companyId: IdSchema.optional(),
 })
 export type SiteListQuery = z.infer<typeof SiteListQuerySchema>
 

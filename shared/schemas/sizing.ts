@@ -1,4 +1,6 @@
 import { z } from 'zod'
+import { AcknowledgeInputSchema, DesignAcknowledgementSchema } from './design-checks'
+import { IdSchema } from './ids'
 import {
   bandSchema,
   explicitTuningSchema,
@@ -14,8 +16,8 @@ import { strictObject } from './strict'
 
 /** The host structure as the engineer edits it: a revision of a model stores exactly this. */
 export const ModelDefinitionSchema = z.object({
-  nodes: z.array(nodeSchema).min(1, 'add at least one node'),
-  springs: z.array(springSchema),
+  nodes: z.array(nodeSchema).min(1, 'add at least one node').max(1000, 'at most 1000 nodes'),
+  springs: z.array(springSchema).max(5000, 'at most 5000 springs'),
   hostDampingRatio: z.union([z.number(), z.array(z.number())]).default(0.02),
 })
 export type ModelDefinition = z.infer<typeof ModelDefinitionSchema>
@@ -32,8 +34,8 @@ export const AcceptanceSchema = strictObject({
   presetId: z.string().max(60).optional(),
   label: z.string().max(160),
   quantity: ResponseQuantitySchema,
-  /** m, m/s or m/s², peak (not rms) */
-  limit: z.number().positive('must be above zero'),
+  /** m, m/s or m/s², peak (not rms), up to 1e6 */
+  limit: z.number().positive('must be above zero').max(1e6, 'at most 1e6'),
 })
 export type Acceptance = z.infer<typeof AcceptanceSchema>
 
@@ -47,8 +49,9 @@ const SizingInputFields = strictObject({
   /** where a single force acts (loadKind 'force') */
   excitationNode: z.string().min(1, 'required'),
   responseNode: z.string().min(1, 'required'),
-  /** N, amplitude of the harmonic design force ('force'; the total for 'mode-shaped') */
-  forceAmplitude: z.number().positive('must be above zero'),
+  /** N, amplitude of the harmonic design force ('force'; the total for 'mode-shaped'), up to
+   * 1e9 N */
+  forceAmplitude: z.number().positive('must be above zero').max(1e9, 'at most 1e9 N'),
   loadPresetId: z.string().max(60).optional(),
   massRatio: z.number().min(0.001, 'at least 0.1 %').max(0.5, 'at most 50 %'),
   tuning: z.union([tuningNameSchema, explicitTuningSchema]).default('optimize'),
@@ -62,18 +65,26 @@ const SizingInputFields = strictObject({
    * (walking on a span), or base (support) acceleration; absent means 'force' */
   loadKind: loadKindSchema.optional(),
   /** for loadKind 'forces': N each, in phase (forceAmplitude is not used) */
-  forces: z.array(nodeForceSchema).min(1, 'give at least one force').optional(),
+  forces: z
+    .array(nodeForceSchema)
+    .min(1, 'give at least one force')
+    .max(1000, 'at most 1000 forces')
+    .optional(),
   /** for loadKind 'mode-shaped': the mode the load follows (default the target mode) */
   loadMode: z.number().int().min(1, 'modes are numbered from 1 (the lowest)').optional(),
   /** for loadKind 'base': amplitude of the support acceleration, m/s² */
-  baseAcceleration: z.number().positive('must be above zero').optional(),
+  baseAcceleration: z
+    .number()
+    .positive('must be above zero')
+    .max(1e4, 'at most 1e4 m/s²')
+    .optional(),
   /** a machine's running speed { hz } or speed range { minHz, maxHz }: the band to tune over */
   speed: speedSchema.optional(),
   /** kg·m, a rotating unbalance m·e at excitationNode: the force is unbalance × ω²
    * (forceAmplitude is not used) */
-  unbalance: z.number().positive('must be above zero').optional(),
+  unbalance: z.number().positive('must be above zero').max(1e6, 'at most 1e6 kg·m').optional(),
   /** m, the largest absorber stroke allowed at the design load: a constraint of the optimiser */
-  strokeLimit: z.number().positive('must be above zero').optional(),
+  strokeLimit: z.number().positive('must be above zero').max(10, 'at most 10 m').optional(),
   /** a second node: the absorber acts on the relative motion of absorberNode against it */
   relativeToNode: z.string().min(1, 'required').optional(),
 })
@@ -160,6 +171,8 @@ export const SizingSummarySchema = z.object({
   }),
   submittedAt: z.string().nullable(),
   handoverNote: z.string(),
+  /** present when the design fails a check and was handed over with a reason; absent on old quotes */
+  designAcknowledgement: DesignAcknowledgementSchema.nullable().optional(),
 })
 export type SizingSummary = z.infer<typeof SizingSummarySchema>
 
@@ -175,10 +188,13 @@ export type SizingSave = z.infer<typeof SizingSaveSchema>
 export const SizingSubmitSchema = z.object({
   revision: z.number().int().positive(),
   note: z.string().trim().max(2000).default(''),
+  /** required when the stored design fails a check; ignored when it passes them all */
+  acknowledge: AcknowledgeInputSchema.optional(),
 })
+export type SizingSubmit = z.infer<typeof SizingSubmitSchema>
 
 export const SizingListQuerySchema = z.object({
-  siteId: z.coerce.number().int().positive().optional(),
+  siteId: IdSchema.optional(),
   state: z.enum(SIZING_STATES).optional(),
   search: z.string().trim().max(100).optional(),
 })

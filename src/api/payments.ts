@@ -1,3 +1,4 @@
+import type { RefundInfo } from '@shared/schemas/payment'
 import { api } from './client'
 
 export interface OrderInfo {
@@ -13,9 +14,18 @@ export interface OrderInfo {
 }
 
 export const paymentsApi = {
-  /** The server prices the session from the stored quote; no amount is sent. */
+  /**
+   * The server prices the session from the stored quote; no amount is sent. A paid quote
+   * answers with no url.
+   */
   checkout: (quoteId: number) =>
-    api.post<{ sessionId: string; url: string }>(`/api/quotes/${quoteId}/checkout`),
+    api.post<{ sessionId: string | null; url: string | null; state: string }>(
+      `/api/quotes/${quoteId}/checkout`,
+    ),
   order: (quoteId: number) => api.get<{ order: OrderInfo | null }>(`/api/quotes/${quoteId}/order`),
+  /** Back from the payment page: the server asks the payment service about the session. */
+  returned: (quoteId: number, sessionId: string) =>
+    api.post<{ order: OrderInfo | null }>(`/api/quotes/${quoteId}/payment-return`, { sessionId }),
+  refunds: () => api.get<RefundInfo[]>('/api/payments/refunds'),
   orders: () => api.get<OrderInfo[]>('/api/orders'),
 }

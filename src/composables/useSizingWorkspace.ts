@@ -3,7 +3,7 @@ import type { Site } from '@shared/schemas/site'
 import { fieldErrors, isApiError } from '@/api/client'
 import { modelsApi } from '@/api/models'
 import { sitesApi } from '@/api/sites'
-import { sizingsApi, type SizingView } from '@/api/sizings'
+import { sizingsApi, type HandoverRequest, type SizingView } from '@/api/sizings'
 import { useErrorToast } from '@/composables/useErrorToast'
 import { router } from '@/router'
 import { useAuthStore } from '@/stores/auth'
@@ -147,10 +147,16 @@ export function useSizingWorkspace() {
       return true
     }, 'Not saved')
 
-  const submit = (note: string) =>
+  const submit = (h: HandoverRequest) =>
     guarded(async (d) => {
       if (!d.sizingId || d.changed) return false
-      saved.value = await sizingsApi.submit(d.sizingId, d.sizingRevision ?? 1, note)
+      const id = d.sizingId
+      saved.value = await sizingsApi.submit(id, d.sizingRevision ?? 1, h).catch(async (e) => {
+        // The checks changed on the server (the catalogue, say): show them as they are now.
+        if (isApiError(e) && e.code === 'design-checks-failed')
+          saved.value = await sizingsApi.get(id)
+        throw e
+      })
       return true
     }, 'Not handed over')
 

@@ -8,6 +8,7 @@ export type RouteName =
   | 'set-password'
   | 'forgot-password'
   | 'admin-users'
+  | 'admin-refunds'
   | 'not-found'
   | 'sites'
   | 'site'
@@ -68,6 +69,12 @@ const routes: (RouteRecordRaw & { name: RouteName })[] = [
     name: 'admin-users',
     component: () => import('@/views/AdminUsersView.vue'),
     meta: { roles: ['admin'], title: 'Users' },
+  },
+  {
+    path: '/admin/refunds',
+    name: 'admin-refunds',
+    component: () => import('@/views/PaymentRefundsView.vue'),
+    meta: { roles: ['admin'], title: 'Second payments' },
   },
   {
     path: '/portal',

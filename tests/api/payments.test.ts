@@ -39,9 +39,10 @@ describe('paying an accepted quote through the SDK and the payment stand-in', ()
     expect((await mailTo(rig.t, customer.user.email)).subject).toMatch(/^Payment received/)
     expect((await mailTo(rig.t, builder.email)).subject).toMatch(/^New order ORD-/)
     expect((await production.get('/api/orders')).status).toBe(200)
+    // paying again after it went through answers the paid quote and starts nothing
     const again = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)
-    expect(again.status).toBe(409)
-    expect(again.body.error.code).toBe('quote-paid')
+    expect(again.status).toBe(200)
+    expect(again.body).toEqual({ state: 'paid', sessionId: null, url: null })
   })
 
   it('applies a replayed event once and makes one order from two events of the same session', async () => {
@@ -139,10 +140,93 @@ describe('paying an accepted quote through the SDK and the payment stand-in', ()
     expect(await orders(quote.id)).toHaveLength(1)
   })
 
+  it('answers a repeated or racing checkout start with one open session', async () => {
+    const { quote, customer } = await rig.acceptedQuote()
+    const start = () => customer.agent.post(`/api/quotes/${quote.id}/checkout`)
+    const [a, b] = await Promise.all([start(), start()])
+    const c = await start()
+    expect(a.status).toBe(201)
+    expect(c.status).toBe(200)
+    expect(new Set([a.body.sessionId, b.body.sessionId, c.body.sessionId]).size).toBe(1)
+    expect(c.body).toMatchObject({ state: 'accepted', url: a.body.url })
+    const [row] = await rig.t.ds.query(
+      'SELECT COUNT(*) AS n FROM payment_sessions WHERE quoteId = ?',
+      [quote.id],
+    )
+    expect(Number(row.n)).toBe(1)
+    expect((await rig.payOnPage(c.body.url)).status).toBe(303)
+    expect(await orders(quote.id)).toHaveLength(1)
+  })
+
   it('does not make a session for another company’s quote, nor for sales', async () => {
     const { quote } = await rig.acceptedQuote()
     const { agent: stranger } = await signedIn(rig.t, 'customer')
     expect((await stranger.post(`/api/quotes/${quote.id}/checkout`)).status).toBe(404)
     expect((await rig.sales.post(`/api/quotes/${quote.id}/checkout`)).status).toBe(403)
+  })
+})
+
+describe('webhook events that are signed but not to be believed', () => {
+  const post = (payload: string, header: string) =>
+    request(rig.t.app)
+      .post('/api/payments/webhook')
+      .set('content-type', 'application/json')
+      .set('stripe-signature', header)
+      .send(payload)
+  const completed = (id: unknown, object: Record<string, unknown>) =>
+    JSON.stringify({ id, object: 'event', type: 'checkout.session.completed', data: { object } })
+
+  it('refuses a signature dated a year ahead with 400, within the SDK’s 300 s otherwise', async () => {
+    const { quote, customer } = await rig.acceptedQuote()
+    const { body } = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)
+    const object = { id: body.sessionId, amount_total: quote.total, currency: 'eur' }
+    const payload = completed(`evt_ahead_${quote.id}`, { ...object, payment_status: 'paid' })
+    const yearAhead = Math.floor(Date.now() / 1000) + 365 * 86_400
+    const ahead = stripe.webhooks.generateTestHeaderString({
+      payload,
+      secret: 'whsec_rig',
+      timestamp: yearAhead,
+    })
+    const res = await post(payload, ahead)
+    expect(res.status).toBe(400)
+    expect(res.body.error.code).toBe('invalid-signature')
+    const nearly = stripe.webhooks.generateTestHeaderString({
+      payload,
+      secret: 'whsec_rig',
+      timestamp: Math.floor(Date.now() / 1000) + 200,
+    })
+    expect((await post(payload, nearly)).status).toBe(200)
+  })
+
+  it('answers a signed but malformed event with 400 naming the field, and stores nothing', async () => {
+    const sign = (payload: string) =>
+      stripe.webhooks.generateTestHeaderString({ payload, secret: 'whsec_rig' })
+    for (const payload of [
+      completed(null, { id: 'cs_test_x', payment_status: 'paid' }),
+      completed(`evt_${'a'.repeat(300_000)}`, { id: 'cs_test_x', payment_status: 'paid' }),
+      completed('evt_ok', { id: null, payment_status: 'paid' }),
+      completed('evt_ok', { id: 'cs_test_x', amount_total: 'lots' }),
+      JSON.stringify({ id: 'evt_ok', type: 'checkout.session.completed' }),
+      '[]',
+    ]) {
+      const res = await post(payload, sign(payload))
+      expect(res.status).toBe(400)
+      expect(res.body.error.code).toBe('invalid-event')
+    }
+  })
+
+  it('ignores a paid session whose currency differs from the one the server asked for', async () => {
+    const { quote, customer } = await rig.acceptedQuote()
+    const { body } = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)
+    const payload = completed(`evt_gbp_${quote.id}`, {
+      id: body.sessionId,
+      amount_total: quote.total,
+      currency: 'gbp',
+      payment_status: 'paid',
+    })
+    const header = stripe.webhooks.generateTestHeaderString({ payload, secret: 'whsec_rig' })
+    const res = await post(payload, header)
+    expect(res.body.outcome).toBe('ignored')
+    expect(await orders(quote.id)).toHaveLength(0)
   })
 })

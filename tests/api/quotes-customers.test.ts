@@ -40,6 +40,14 @@ describe('customers and contacts', () => {
     expect(read.body.contacts[0].userId).toBe(res.body.id)
   })
 
+  it('invites a contact once when two invitations race, answering the other with 409', async () => {
+    const { agent } = await signedIn(t, 'sales')
+    const { company, contact } = await customerWithContact(agent)
+    const url = `/api/customers/${company.id}/contacts/${contact.id}/invite`
+    const answers = await Promise.all([1, 2, 3].map(() => agent.post(url)))
+    expect(answers.map((r) => r.status).sort()).toEqual([201, 409, 409])
+  })
+
   it('answers 404 for a contact of another customer', async () => {
     const { agent } = await signedIn(t, 'sales')
     const a = await customerWithContact(agent)

@@ -10,18 +10,31 @@ import { seedCatalogue } from '../../seed/seed-catalogue'
 import { makeTestApp, type TestApp } from '../helpers/app'
 
 /** Quotes never solve a sizing; a call here would be a wiring mistake worth a loud failure. */
-const noSolving: SizingPool = {
+export const noSolving: SizingPool = {
   run: () => Promise.reject(new Error('the quotes tests do not solve sizings')),
   close: async () => undefined,
 }
 
 /**
  * The test app rebuilt with sizings held in memory, so each test states the exact absorber
- * values its hand-checked prices rest on, and with the demo catalogue loaded.
+ * values its hand-checked prices rest on, and with the demo catalogue loaded. With
+ * `solvedSizings` the app keeps its real sizings service and worker pool instead.
  */
-export async function makeQuoteApp(extraEnv: Record<string, string> = {}) {
+export async function makeQuoteApp(
+  extraEnv: Record<string, string> = {},
+  opts: { solvedSizings?: boolean } = {},
+) {
   const t: TestApp = await makeTestApp(extraEnv)
   const sizings = memorySizingSource()
+  const close = t.close
+  t.close = async () => {
+    await closePdfRenderers()
+    await close()
+  }
+  if (opts.solvedSizings) {
+    await seedCatalogue(t.services)
+    return { t, sizings }
+  }
   const deps = {
     config: t.config,
     dataSource: t.ds,
@@ -31,14 +44,9 @@ export async function makeQuoteApp(extraEnv: Record<string, string> = {}) {
     pool: noSolving,
     sizingSource: sizings,
   }
-  t.app = createApp(deps)
   t.services = buildServices(deps)
+  t.app = createApp(deps, t.services)
   await seedCatalogue(t.services)
-  const close = t.close
-  t.close = async () => {
-    await closePdfRenderers()
-    await close()
-  }
   return { t, sizings }
 }
 

@@ -15,8 +15,9 @@ afterAll(async () => {
   await rig?.close()
 })
 
+/** Moves one step; the button is off for a moment after each answer, so wait until it is on. */
 async function move(page: Page, to: string) {
-  await page.locator(`button ::-p-text(Move to ${to})`).click()
+  await page.locator(`button:not([disabled]) ::-p-text(Move to ${to})`).click()
   await page.waitForSelector(`::-p-text(→ ${to})`)
 }
 
@@ -36,11 +37,18 @@ it('takes a paid order through build and tuning to shipping, and the customer se
   const wo = (await rig.t.services.production.list()).find((w) => w.quoteId === quote.id)!
   expect(links).toContain(`/work-orders/${wo.id}`)
   await page.goto(`${rig.appUrl}/work-orders/${wo.id}`)
-  await move(page, 'in-build')
+  // A double tap moves one step: the second tap must not take the next step's button.
+  await page.locator('button:not([disabled]) ::-p-text(Move to in-build)').click({ count: 2 })
+  await page.waitForSelector('::-p-text(→ in-build)')
+  await page.waitForSelector('button:not([disabled]) ::-p-text(Move to tuning)')
+  expect(await page.$$('.p-toast-message-error')).toHaveLength(0)
+  const once = (await rig.t.services.production.get(wo.id)).events
+  expect(once.map((e) => e.toState)).toEqual(['in-build'])
   await move(page, 'tuning')
   const target = wo.specification.targetFrequencyHz
   await page.locator('#measured-hz').fill(target.toFixed(3))
-  await page.locator('button ::-p-text(Record measurement)').click()
+  await page.keyboard.press('Tab')
+  await page.locator('button:not([disabled]) ::-p-text(Record measurement)').click()
   await page.waitForSelector('::-p-text(within tolerance)')
   await shot(page, 'production-2-tuned')
   await move(page, 'ready')

@@ -10,6 +10,8 @@ export interface ReceivedHook {
 export interface WebhookReceiver {
   url: string
   received: ReceivedHook[]
+  /** The status the receiver answers with; set it to 500 to play a receiver that is down. */
+  status: number
   close: () => Promise<void>
 }
 
@@ -18,13 +20,21 @@ export interface WebhookReceiver {
  * is computed over the exact bytes sent.
  */
 export async function startWebhookReceiver(): Promise<WebhookReceiver> {
-  const received: ReceivedHook[] = []
   const app = express()
-  app.post('/hook', express.raw({ type: 'application/json' }), (req, res) => {
-    received.push({ rawBody: req.body as Buffer, signature: req.get('stripe-signature') ?? '' })
-    res.json({ received: true })
-  })
   const server = createServer(app)
   const port = await listen(server, 0, '127.0.0.1')
-  return { url: `http://127.0.0.1:${port}/hook`, received, close: () => closeServer(server) }
+  const receiver: WebhookReceiver = {
+    url: `http://127.0.0.1:${port}/hook`,
+    received: [],
+    status: 200,
+    close: () => closeServer(server),
+  }
+  app.post('/hook', express.raw({ type: 'application/json' }), (req, res) => {
+    receiver.received.push({
+      rawBody: req.body as Buffer,
+      signature: req.get('stripe-signature') ?? '',
+    })
+    res.status(receiver.status).json({ received: receiver.status < 300 })
+  })
+  return receiver
 }

@@ -2,7 +2,7 @@ import 'reflect-metadata'
 import { pino } from 'pino'
 import { inject } from 'vitest'
 import type { DataSource } from 'typeorm'
-import { buildServices, createApp } from '../../server/app'
+import { buildServices, createApp, type AppDeps } from '../../server/app'
 import { loadConfig, type Config } from '../../server/config'
 import { createDataSource } from '../../server/data-source'
 import { smtpMailer } from '../../server/integrations/mail'
@@ -41,12 +41,13 @@ export async function makeTestApp(extraEnv: Record<string, string> = {}): Promis
     now,
     pool,
   }
+  const services = buildServices(deps)
   return {
-    app: createApp(deps),
+    app: createApp(deps, services),
     config,
     ds,
     mail,
-    services: buildServices(deps),
+    services,
     clock,
     close: async () => {
       await ds.destroy()
@@ -54,4 +55,22 @@ export async function makeTestApp(extraEnv: Record<string, string> = {}): Promis
       await pool.close()
     },
   }
+}
+
+/**
+ * Another instance of the app on the same database and clock, as a second server behind a
+ * proxy would be: its own connection pool, outbox sender and payment reconciliation.
+ */
+export async function anotherInstance(t: TestApp, extra: Pick<AppDeps, 'pool'> & Partial<AppDeps>) {
+  const ds = await createDataSource(t.config).initialize()
+  const deps: AppDeps = {
+    config: t.config,
+    dataSource: ds,
+    mailer: smtpMailer(t.config),
+    logger: pino({ level: 'silent' }),
+    now: () => new Date(Date.now() + t.clock.offsetMs),
+    ...extra,
+  }
+  const services = buildServices(deps)
+  return { app: createApp(deps, services), services, ds, close: () => ds.destroy() }
 }

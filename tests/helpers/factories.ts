@@ -29,14 +29,21 @@ export async function signedIn(t: TestApp, role: Role, opts: { companyId?: numbe
   const res = await agent.post('/api/auth/sign-in').send({ email: user.email, password: PASSWORD })
   if (res.status !== 200)
     throw new Error(`sign-in failed: ${res.status} ${JSON.stringify(res.body)}`)
-  return { agent, user }
+  // the session cookie alone, to carry the same session to another app instance
+  const cookie = String(res.headers['set-cookie']).split(';')[0] ?? ''
+  return { agent, user, cookie }
 }
 
-/** Waits for the catcher to hold a message to the address (SMTP delivery is asynchronous). */
-export async function mailTo(t: TestApp, to: string, timeoutMs = 5000) {
+/**
+ * Waits for the catcher to hold a message to the address, with a subject matching `subject`
+ * when given (mail leaves through the outbox, after the request has answered).
+ */
+export async function mailTo(t: TestApp, to: string, subject?: RegExp, timeoutMs = 5000) {
   const end = Date.now() + timeoutMs
   for (;;) {
-    const found = t.mail.messages().filter((m) => JSON.stringify(m.to).includes(to))
+    const found = t.mail
+      .messages()
+      .filter((m) => JSON.stringify(m.to).includes(to) && (!subject || subject.test(m.subject)))
     if (found.length) return found[found.length - 1]!
     if (Date.now() > end) throw new Error(`no mail to ${to}`)
     await new Promise((r) => setTimeout(r, 50))

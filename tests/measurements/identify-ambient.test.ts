@@ -55,3 +55,36 @@ describe('identifyRecord on a long ambient record', () => {
     expect(wellResolved.warnings.join(' ')).not.toMatch(/too short/)
   })
 })
+
+describe('identifyRecord on a 10 s ambient record', () => {
+  // The reported defect: 10 s of this two-mode record gave a "mode" at 21.5 Hz with a damping
+  // ratio of 2.11. The limits (0 < ζ ≤ 0.3 unflagged; no band wider than its frequency;
+  // about 1000 periods of the lowest mode) are common practice.
+  const results = [1, 2, 3, 4, 5, 6, 7, 8, 9].map((seed) =>
+    identifyRecord({ sampleRateHz: fs, acceleration: ambient(modes, fs, 10, 0.05, seed) }),
+  )
+
+  it('flags the record as too short for its lowest mode', () => {
+    for (const r of results) {
+      expect(r.flags).toContain('short-record')
+      expect(r.warnings.join(' ')).toMatch(/the record lasts 10\.0 s, fewer than 1000 periods/)
+    }
+  })
+
+  it('reports no damping ratio outside (0, 0.3] without a flag, and no over-wide band', () => {
+    let refused = 0
+    for (const r of results) {
+      for (const p of r.peaks) {
+        const values = [p.dampingRatio, p.halfPowerDampingRatio].filter((z) => z !== null)
+        if (values.some((z) => !(z > 0 && z <= 0.3))) {
+          expect(p.flags).toContain('damping-out-of-range')
+        }
+        const [lo, hi] = p.halfPowerBandHz
+        if (lo !== null && hi !== null) expect(hi - lo).toBeLessThanOrEqual(p.frequencyHz)
+      }
+      refused += r.warnings.filter((w) => /is not reported as a mode/.test(w)).length
+    }
+    // Seed 4 gave a bump at 23.7 Hz with a band from −7.2 to 54.6 Hz before the check.
+    expect(refused).toBeGreaterThan(0)
+  })
+})

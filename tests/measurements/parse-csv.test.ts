@@ -1,24 +1,14 @@
 import { describe, expect, it } from 'vitest'
 import {
-  RecordError,
   decodeRecordBytes,
   parseRecordBytes,
   parseRecordCsv,
 } from '../../shared/measurements/index'
 import { recordCsv } from './helpers/csv'
+import { refusal } from './helpers/refusal'
 
 const wave = Array.from({ length: 100 }, (_, j) => Math.sin(j / 5))
 const good = recordCsv(wave, { sampleRateHz: 100, header: 'time_s,acceleration_m_s2' })
-
-function refusal(run: () => unknown): RecordError {
-  try {
-    run()
-  } catch (error) {
-    if (error instanceof RecordError) return error
-    throw error
-  }
-  throw new Error('expected a RecordError')
-}
 
 describe('parseRecordCsv', () => {
   it('reads time and acceleration with a header and derives the sample rate', () => {
@@ -73,7 +63,7 @@ describe('parseRecordCsv', () => {
     lines[20] = lines[19] ?? ''
     const e = refusal(() => parseRecordCsv(lines.join('\n')))
     expect(e.code).toBe('time-order')
-    expect(e.message).toBe('line 21: time 0.18 s is not after the previous 0.18 s')
+    expect(e.message).toBe('line 21: time 0.18 is not after the previous 0.18')
   })
 
   it('names the line where the sampling is uneven beyond the tolerance', () => {

@@ -1,9 +1,8 @@
 import { Router, type Response } from 'express'
-import { rateLimit } from 'express-rate-limit'
 import { ResetRequestSchema, SetPasswordSchema, SignInSchema } from '../../../shared/schemas/auth'
 import type { ApiRegistry } from '../../http/api-registry'
-import { AppError } from '../../http/app-error'
 import { route } from '../../http/route'
+import { clientAddress } from '../../http/client-address'
 import { SESSION_COOKIE } from '../../middleware/authenticate'
 import type { AuthService } from './auth.service'
 
@@ -20,24 +19,9 @@ function setSession(res: Response, token: string, hours: number, secure: boolean
 export function authRouter(
   api: ApiRegistry,
   auth: AuthService,
-  opts: { tokenTtlHours: number; secureCookie: boolean; signInLimit: number },
+  opts: { tokenTtlHours: number; secureCookie: boolean },
 ) {
   const router = Router()
-  // Counts failed attempts only, per client address; the sixth within the window gets 429.
-  router.use(
-    '/api/auth/sign-in',
-    rateLimit({
-      windowMs: 15 * 60_000,
-      limit: opts.signInLimit,
-      skipSuccessfulRequests: true,
-      standardHeaders: 'draft-8',
-      legacyHeaders: false,
-      handler: (_req, _res, next) =>
-        next(
-          new AppError('too-many-attempts', 'Too many failed sign-ins; wait a few minutes.', 429),
-        ),
-    }),
-  )
   const tag = 'Sign-in'
   route(
     router,
@@ -50,8 +34,8 @@ export function authRouter(
       access: 'public',
       body: SignInSchema,
     },
-    async ({ body, res }) => {
-      const { user, token } = await auth.signIn(body.email, body.password)
+    async ({ body, req, res }) => {
+      const { user, token } = await auth.signIn(body.email, body.password, clientAddress(req))
       setSession(res, token, opts.tokenTtlHours, opts.secureCookie)
       return { user }
     },
@@ -66,7 +50,8 @@ export function authRouter(
       summary: 'Sign out; clears the session cookie',
       access: 'public',
     },
-    ({ res }) => {
+    async ({ user, res }) => {
+      if (user) await auth.endSessions(user.id)
       res.clearCookie(SESSION_COOKIE, { path: '/' })
       return undefined
     },
@@ -111,8 +96,13 @@ export function authRouter(
       body: ResetRequestSchema,
       status: 202,
     },
-    async ({ body }) => {
-      await auth.requestReset(body.email)
+    async ({ body, req, res }) => {
+      await auth.admitReset(body.email, clientAddress(req))
+      // The lookup, the link and the mail happen after the answer has left, so a known and an
+      // unknown address answer in the same time.
+      res.on('finish', () => {
+        auth.requestReset(body.email).catch((err: unknown) => req.log?.error({ err }, 'reset'))
+      })
       return { message: 'If the address has an account, a link is on its way.' }
     },
   )

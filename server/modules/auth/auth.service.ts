@@ -6,6 +6,7 @@ import type { UsersRepository, UserRecord } from '../users/users.repository'
 import type { TokensRepository } from './tokens.repository'
 import { hashLinkToken, newLinkToken } from './link-tokens'
 import type { Mailer } from '../../integrations/mail'
+import type { Throttle } from '../../integrations/rate-limits'
 
 export interface AuthDeps {
   users: UsersRepository
@@ -15,6 +16,7 @@ export interface AuthDeps {
   tokenTtlHours: number
   publicUrl: string
   now: () => Date
+  limits: { signIn: Throttle; reset: Throttle }
 }
 
 const BAD_CREDENTIALS = 'The e-mail address or the password is wrong.'
@@ -59,14 +61,22 @@ export function authService(deps: AuthDeps) {
   return {
     sendLink,
 
-    /** Checks the credentials and returns the user and a signed session token. */
-    async signIn(email: string, password: string) {
+    /**
+     * Checks the credentials and returns the user and a signed session token. Failures count
+     * against the account and the client address; past either allowance the answer is 429
+     * before any password is compared, from whichever address the attempts come.
+     */
+    async signIn(email: string, password: string, address: string) {
+      const keys = { account: email, address }
+      await deps.limits.signIn.assertOpen(keys)
       const user = await deps.users.findByEmail(email)
       const ok = await bcrypt.compare(password, user?.passwordHash ?? DUMMY_HASH)
       if (!user || !user.passwordHash || !ok || !user.active) {
+        await deps.limits.signIn.take(keys).catch(() => undefined)
         throw new AppError('invalid-credentials', BAD_CREDENTIALS, 401)
       }
-      const token = jwt.sign({ role: user.role }, deps.jwtSecret, {
+      await deps.limits.signIn.forgive(email)
+      const token = jwt.sign({ role: user.role, ver: user.tokenVersion }, deps.jwtSecret, {
         algorithm: 'HS256',
         subject: String(user.id),
         issuer: 'quellnode',
@@ -75,11 +85,17 @@ export function authService(deps: AuthDeps) {
       return { user: toAuthUser(user), token }
     },
 
-    /** The user a valid session belongs to, or null when the account is gone or inactive. */
-    async loadActiveUser(id: number): Promise<AuthUser | null> {
+    /**
+     * The user a valid session belongs to, or null when the account is gone or inactive or the
+     * session was ended (its token version is behind the user's).
+     */
+    async loadSessionUser(id: number, tokenVersion: number): Promise<AuthUser | null> {
       const user = await deps.users.findById(id)
-      return user && user.active ? toAuthUser(user) : null
+      return user && user.active && user.tokenVersion === tokenVersion ? toAuthUser(user) : null
     },
+
+    /** Sign-out: ends this and every other session of the user. */
+    endSessions: (userId: number) => deps.users.endSessions(userId),
 
     /** Spends a single-use link token and sets the password it was sent for. */
     async setPassword(token: string, password: string) {
@@ -93,9 +109,18 @@ export function authService(deps: AuthDeps) {
       if (!user || !user.active)
         throw new AppError('link-invalid', 'This account is not active.', 400)
       await deps.users.update(user.id, { passwordHash: await hashPassword(password) })
+      // A new password ends every session, including one a thief may hold.
+      await deps.users.endSessions(user.id)
     },
 
-    /** Always answers the same, so the form cannot be used to find out who has an account. */
+    /**
+     * Counts a reset request against the account and the address (429 past either); the same
+     * work whether or not the address has an account, so the answer's timing tells nothing.
+     */
+    admitReset: (email: string, address: string) =>
+      deps.limits.reset.take({ account: email, address }),
+
+    /** The reset itself, run after the answer has gone: makes the link and queues the mail. */
     async requestReset(email: string) {
       const user = await deps.users.findByEmail(email)
       if (user && user.active) await sendLink(user, 'reset', RESET_TTL_HOURS)

@@ -1,6 +1,6 @@
 import { Router } from 'express'
 import { z } from 'zod'
-import { IdParamSchema } from '../../../shared/schemas/auth'
+import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
   CatalogueOptionInputSchema,
   MatchQuerySchema,
@@ -130,7 +130,7 @@ export function catalogueRouter(
       access: ['engineer', ...SELLERS],
       query: MatchQuerySchema,
     },
-    async ({ query }) => catalogue.match(await sizings.summary(query.sizingId)),
+    async ({ user, query }) => catalogue.match(await sizings.visibleSummary(user, query.sizingId)),
   )
   return router
 }

@@ -1,5 +1,5 @@
 import { Router } from 'express'
-import { IdParamSchema } from '../../../shared/schemas/auth'
+import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
   ContactInputSchema,
   ContactParamsSchema,
@@ -7,6 +7,7 @@ import {
 } from '../../../shared/schemas/customer'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
+import { clientAddress } from '../../http/client-address'
 import type { CustomersService } from './customers.service'
 
 const SELLERS = ['sales', 'admin'] as const
@@ -97,7 +98,7 @@ export function customersRouter(api: ApiRegistry, customers: CustomersService) {
       params: ContactParamsSchema,
       status: 201,
     },
-    ({ params }) => customers.invite(params.id, params.contactId),
+    ({ params, req }) => customers.invite(params.id, params.contactId, clientAddress(req)),
   )
   return router
 }

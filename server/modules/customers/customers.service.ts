@@ -63,16 +63,14 @@ export function customersService(deps: {
       return deps.customers.updateContact(contactId, input)
     },
     /** Makes the contact a customer user of their company and mails the set-password link. */
-    async invite(companyId: number, contactId: number): Promise<UserSummary> {
+    async invite(companyId: number, contactId: number, address: string): Promise<UserSummary> {
       const contact = await contactOf(companyId, contactId)
       if (contact.userId !== null)
         throw new AppError('already-invited', 'This contact has a user account already.', 409)
-      const user = await deps.usersAdmin.invite({
-        email: contact.email,
-        name: contact.name,
-        role: 'customer',
-        companyId,
-      })
+      const user = await deps.usersAdmin.invite(
+        { email: contact.email, name: contact.name, role: 'customer', companyId },
+        address,
+      )
       await deps.customers.updateContact(contactId, { userId: user.id })
       return user
     },

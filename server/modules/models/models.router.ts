@@ -1,5 +1,5 @@
 import { Router } from 'express'
-import { IdParamSchema } from '../../../shared/schemas/auth'
+import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
   ModelCreateSchema,
   ModelListQuerySchema,

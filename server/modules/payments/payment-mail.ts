@@ -1,5 +1,5 @@
-import type { Mailer } from '../../integrations/mail'
-import type { UsersRepository } from '../users/users.repository'
+import type { MailMessage } from '../../integrations/mail'
+import type { UserRecord } from '../users/users.repository'
 import { formatMoney, type Currency } from '../../../shared/money'
 
 export interface PaidOrder {
@@ -11,30 +11,23 @@ export interface PaidOrder {
 }
 
 /** The receipt to the customer's users and the order notice to production. */
-export async function mailPaidOrder(
-  mailer: Mailer,
-  users: UsersRepository,
-  o: PaidOrder,
-  publicUrl: string,
-) {
-  const all = await users.list()
-  const customers = all.filter(
+export function paidOrderMails(users: UserRecord[], o: PaidOrder, publicUrl: string) {
+  const customers = users.filter(
     (u) => u.active && u.role === 'customer' && u.companyId === o.companyId,
   )
-  const production = all.filter((u) => u.active && u.role === 'production')
+  const production = users.filter((u) => u.active && u.role === 'production')
   const amount = formatMoney(o.amount, o.currency as Currency)
-  for (const u of customers) {
-    await mailer.send({
-      to: u.email,
-      subject: `Payment received for quote ${o.reference}`,
-      text: `Hello ${u.name},\n\nwe have received ${amount} for quote ${o.reference}. Your order ${o.orderNumber} is confirmed and goes to production.\n\nFollow its progress: ${publicUrl}/portal\n\nTessera Damping Works Ltd`,
-    })
-  }
+  const mails: MailMessage[] = customers.map((u) => ({
+    to: u.email,
+    subject: `Payment received for quote ${o.reference}`,
+    text: `Hello ${u.name},\n\nwe have received ${amount} for quote ${o.reference}. Your order ${o.orderNumber} is confirmed and goes to production.\n\nFollow its progress: ${publicUrl}/portal\n\nTessera Damping Works Ltd`,
+  }))
   for (const u of production) {
-    await mailer.send({
+    mails.push({
       to: u.email,
       subject: `New order ${o.orderNumber} (quote ${o.reference})`,
       text: `Order ${o.orderNumber} for quote ${o.reference} is paid (${amount}); its specification is frozen and ready to build.\n\n${publicUrl}`,
     })
   }
+  return mails
 }

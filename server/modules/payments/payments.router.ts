@@ -1,5 +1,6 @@
 import express, { Router } from 'express'
-import { IdParamSchema } from '../../../shared/schemas/auth'
+import { IdParamSchema } from '../../../shared/schemas/ids'
+import { PaymentReturnSchema } from '../../../shared/schemas/payment'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import type { PaymentsService } from './payments.service'
@@ -37,12 +38,43 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
       method: 'post',
       path: '/api/quotes/:id/checkout',
       tag,
-      summary: 'Start paying an accepted quote; answers the hosted payment page URL',
+      summary:
+        'Start paying an accepted quote; answers the hosted payment page URL (201), the still open one on a repeat, or a paid quote as paid (200)',
       access: ['customer'],
       params: IdParamSchema,
       status: 201,
     },
-    ({ user, params }) => payments.checkout(user, params.id),
+    async ({ user, params, res }) => {
+      const { created, ...answer } = await payments.checkout(user, params.id)
+      res.status(created ? 201 : 200).json(answer)
+      return undefined
+    },
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'post',
+      path: '/api/quotes/:id/payment-return',
+      tag,
+      summary: 'Back from the payment page: confirm the session with the payment service',
+      access: ['customer'],
+      params: IdParamSchema,
+      body: PaymentReturnSchema,
+    },
+    ({ user, params, body }) => payments.returned(user, params.id, body.sessionId),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/payments/refunds',
+      tag,
+      summary: 'Second payments of paid quotes and their refunds',
+      access: ['admin'],
+    },
+    () => payments.refunds(),
   )
   route(
     router,

@@ -4,10 +4,20 @@ import { QuoteEventEntity } from '../quotes/quote-event.entity'
 import { UserEntity } from '../users/user.entity'
 import { WorkOrderEventEntity } from './work-order-event.entity'
 import { WorkOrderEntity } from './work-order.entity'
+import type { Tx } from '../outbox/outbox.repository'
 
 export type WorkOrderEvent = Omit<WorkOrderEventEntity, 'at'> & {
   at: string
   actorName: string | null
+}
+
+export interface NewWorkOrder {
+  orderId: number
+  quoteId: number
+  companyId: number
+  specification: BuildSpecification
+  specHash: string
+  dueDate: string
 }
 
 export function productionRepository(ds: DataSource) {
@@ -73,23 +83,9 @@ export function productionRepository(ds: DataSource) {
     findById: (id: number) => orders.findOneBy({ id }),
     findByQuote: (quoteId: number) => orders.findOneBy({ quoteId }),
     list: () => orders.find({ order: { dueDate: 'ASC', id: 'ASC' } }),
-    /** One work order per paid order, whatever calls this twice. */
-    async createOnce(w: {
-      orderId: number
-      quoteId: number
-      companyId: number
-      specification: BuildSpecification
-      specHash: string
-      dueDate: string
-    }) {
-      await orders
-        .createQueryBuilder()
-        .insert()
-        .into(WorkOrderEntity)
-        .values({ ...w, state: 'queued' })
-        .orIgnore()
-        .execute()
-      return orders.findOneByOrFail({ orderId: w.orderId })
+    /** The work order of a new order, inside the order's own transaction. */
+    async createIn(tx: Tx, w: NewWorkOrder) {
+      await tx.insert(WorkOrderEntity, { ...w, state: 'queued' })
     },
     /** Changes the state only from the one the caller saw, and records the change with it. */
     async move(

@@ -1,5 +1,5 @@
 import { Router } from 'express'
-import { IdParamSchema } from '../../../shared/schemas/auth'
+import { IdParamSchema } from '../../../shared/schemas/ids'
 import { StatusChangeSchema, TuningRecordInputSchema } from '../../../shared/schemas/work-order'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'

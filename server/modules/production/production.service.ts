@@ -9,15 +9,12 @@ import type { ProductionRepository } from './production.repository'
 import { buildSpecification, specificationHash } from './specification'
 import { inlineFontCss, type PdfRenderer } from '../../integrations/pdf'
 import { workOrderHtml } from './work-order-html'
+import type { Tx } from '../outbox/outbox.repository'
 
-const SYSTEM: AuthUser = {
-  id: 0,
-  email: '',
-  name: 'system',
-  role: 'admin',
-  companyId: null,
-  companyName: null,
-}
+const moved = (state: string) =>
+  new AppError('state-changed', `Someone else moved this work order to ${state}; reload it.`, 409, {
+    state,
+  })
 
 export function productionService(deps: {
   repo: ProductionRepository
@@ -43,41 +40,48 @@ export function productionService(deps: {
     get,
     list: () => deps.repo.list(),
 
-    /** Freezes the paid quote's build values; called once the order exists. */
-    async createFor(
-      order: { id: number; quoteId: number; companyId: number; paidAt: Date },
-      leadDays = 28,
-    ) {
-      const quote = await deps.quotes.get(SYSTEM, order.quoteId)
+    /**
+     * The frozen build values of a quote about to be paid, read before the payment's
+     * transaction; `createIn` then writes the work order inside it, with the order's id.
+     */
+    async prepare(quoteId: number, paidAt: Date, leadDays = 28) {
+      const quote = await deps.quotes.internal(quoteId)
       const specification = buildSpecification(quote)
-      const due = new Date(order.paidAt.getTime() + leadDays * 86_400_000)
-        .toISOString()
-        .slice(0, 10)
-      return deps.repo.createOnce({
-        orderId: order.id,
-        quoteId: order.quoteId,
-        companyId: order.companyId,
-        specification,
-        specHash: specificationHash(specification),
-        dueDate: due,
-      })
+      const dueDate = new Date(paidAt.getTime() + leadDays * 86_400_000).toISOString().slice(0, 10)
+      const values = { specification, specHash: specificationHash(specification), dueDate }
+      return {
+        createIn: (tx: Tx, order: { id: number; quoteId: number; companyId: number }) =>
+          deps.repo.createIn(tx, {
+            ...values,
+            orderId: order.id,
+            quoteId: order.quoteId,
+            companyId: order.companyId,
+          }),
+      }
     },
 
+    /**
+     * One step of the build flow. A move to the state the work order is in already (a repeated
+     * tap) answers it as it is; a move from a state it has left is a 409.
+     */
     async move(user: AuthUser, id: number, change: StatusChange) {
       const w = await get(id)
+      if (w.state === change.to) return w
+      if (change.from && change.from !== w.state) throw moved(w.state)
       const check = checkStep(w.state, change.to, {
         note: change.note,
         tuningPasses: w.latestTuning?.passes ?? null,
       })
       if (!check.ok) throw new AppError(check.code, check.message, 409)
-      if (
-        !(await deps.repo.move(id, w.state, change.to, {
-          actorId: user.id,
-          at: deps.now(),
-          note: change.note,
-        }))
-      ) {
-        throw new AppError('state-changed', 'Someone else moved this work order; reload it.', 409)
+      const done = await deps.repo.move(id, w.state, change.to, {
+        actorId: user.id,
+        at: deps.now(),
+        note: change.note,
+      })
+      if (!done) {
+        const now = await get(id)
+        if (now.state === change.to) return now
+        throw moved(now.state)
       }
       if (change.to === 'shipped')
         await notifyShipped(w.companyId, w.specification.quoteReference, w.number)

@@ -13,6 +13,7 @@ import { customersRepository } from '../customers/customers.repository'
 import { customersRouter } from '../customers/customers.router'
 import { customersService, type CustomersService } from '../customers/customers.service'
 import type { UsersRepository } from '../users/users.repository'
+import type { Throttle } from '../../integrations/rate-limits'
 import { usersService } from '../users/users.service'
 import { noSizings, type SizingSource } from './sizing-source'
 import { quotesRepository } from './quotes.repository'
@@ -43,6 +44,7 @@ export function buildCommerce(
     users: UsersRepository
     companies: CompaniesRepository
     auth: AuthService
+    inviteLimit: Throttle
     now: () => Date
   },
 ): CommerceServices {

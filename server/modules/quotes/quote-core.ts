@@ -1,4 +1,10 @@
-import { CUSTOMER_VISIBLE_STATES, type Quote, type QuoteDraft } from '../../../shared/schemas/quote'
+import {
+  CUSTOMER_VISIBLE_STATES,
+  toCustomerQuote,
+  type CustomerQuote,
+  type Quote,
+  type QuoteDraft,
+} from '../../../shared/schemas/quote'
 import type { SizingSummary } from '../../../shared/schemas/sizing'
 import { AppError, notFound } from '../../http/app-error'
 import type { AuthUser } from '../../middleware/authenticate'
@@ -55,13 +61,21 @@ export function quotesCore(deps: QuotesDeps) {
     return r
   }
 
-  async function view(user: AuthUser, r: QuoteRow): Promise<Quote> {
+  /** The supplier's full view, or for a customer the customer projection. */
+  async function view(user: AuthUser, r: QuoteRow): Promise<Quote | CustomerQuote> {
     const latest = (await repo.latestRevision(r.number)) === r.revision
-    return quoteOf(r, latest, isCustomer(user) ? [] : await repo.events(r.id))
+    if (isCustomer(user)) return toCustomerQuote(quoteOf(r, latest, []))
+    return quoteOf(r, latest, await repo.events(r.id))
   }
 
-  async function submittedSizing(id: number): Promise<SizingSummary> {
-    const s = await deps.sizings.summary(id)
+  /** The supplier's full view, for internal use (the work order's frozen specification). */
+  async function fullView(r: QuoteRow): Promise<Quote> {
+    return quoteOf(r, (await repo.latestRevision(r.number)) === r.revision, await repo.events(r.id))
+  }
+
+  /** A submitted sizing the user may read: a draft stays its engineer's (404 to others). */
+  async function submittedSizing(user: AuthUser | null, id: number): Promise<SizingSummary> {
+    const s = user ? await deps.sizings.visibleSummary(user, id) : await deps.sizings.summary(id)
     if (s.state !== 'submitted')
       throw new AppError('sizing-not-submitted', 'Only a submitted sizing can be quoted.', 409, [
         { path: 'body.sizingId', message: 'still a draft' },
@@ -87,7 +101,7 @@ export function quotesCore(deps: QuotesDeps) {
     return { ...head, ...totalsOf(lines, draft.discountBp, draft.taxBp), lines }
   }
 
-  return { row, visibleRow, view, submittedSizing, priced, fresh }
+  return { row, visibleRow, view, fullView, submittedSizing, priced, fresh }
 }
 export type QuotesCore = ReturnType<typeof quotesCore>
 

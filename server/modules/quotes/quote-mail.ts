@@ -1,5 +1,5 @@
 import { formatMoney } from '../../../shared/money'
-import type { Quote } from '../../../shared/schemas/quote'
+import type { CustomerQuote as Quote } from '../../../shared/schemas/quote'
 import type { MailMessage } from '../../integrations/mail'
 
 /** The portal page of a quote; the customer signs in to read, accept and pay it. */
@@ -17,6 +17,12 @@ export function quoteMail(q: Quote, pdf: Buffer, link: string, supplierName: str
     `You can read and accept it in the customer portal:`,
     link,
     '',
+    ...(q.sizing.designAcknowledgement
+      ? [
+          'Please read the section "Design checks not met" in the quotation: the design does not meet every check, and the quotation says which and why it was accepted.',
+          '',
+        ]
+      : []),
     'The sizing it rests on is a design aid: the final design, the anchorage of the absorber mass and its fall restraint are for a licensed engineer under the local codes.',
     '',
     `Kind regards,`,

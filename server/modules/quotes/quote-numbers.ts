@@ -7,13 +7,9 @@ export const QUOTE_PREFIX = 'TDW'
 export const quoteNumber = (year: number, seq: number) =>
   `${QUOTE_PREFIX}-${year}-${String(seq).padStart(4, '0')}`
 
-const isDuplicate = (e: unknown) =>
-  (e as { code?: string; errno?: number }).code === 'ER_DUP_ENTRY' ||
-  (e as { driverError?: { errno?: number } }).driverError?.errno === 1062
-
 /**
- * Inserts revision 1 of a new quote under the next free number of the year. Two sales people
- * saving at once may pick the same number: the unique index refuses the second, which retries.
+ * Inserts revision 1 of a new quote under the next free number of the year, under a named lock
+ * so two sales people saving at once (on any instance) take turns instead of colliding.
  */
 export async function insertNumbered(
   repo: QuotesRepository,
@@ -22,16 +18,12 @@ export async function insertNumbered(
   at: Date,
 ) {
   const year = at.getUTCFullYear()
-  for (let attempt = 0; ; attempt++) {
+  return repo.numbering(year, async () => {
     const seq = (await repo.maxSeq(year)) + 1
-    try {
-      return await repo.insert(
-        { ...q, number: quoteNumber(year, seq), year, seq, revision: 1 },
-        actorId,
-        at,
-      )
-    } catch (e) {
-      if (!isDuplicate(e) || attempt >= 4) throw e
-    }
-  }
+    return repo.insert(
+      { ...q, number: quoteNumber(year, seq), year, seq, revision: 1 },
+      actorId,
+      at,
+    )
+  })
 }

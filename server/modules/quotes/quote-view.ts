@@ -48,6 +48,9 @@ export function quoteOf(r: QuoteRow, latest: boolean, events: QuoteEvent[]): Quo
     acceptedName: r.acceptedName,
     purchaseOrder: r.purchaseOrder,
     paidAt: iso(r.paidAt),
+    designConfirmation: r.designConfirmedAt
+      ? { at: r.designConfirmedAt.toISOString(), byName: r.designConfirmedByName ?? '' }
+      : null,
     events,
   }
 }

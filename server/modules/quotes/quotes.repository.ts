@@ -1,3 +1,4 @@
+import { withNamedLock } from '../../db/named-lock'
 import { Brackets, In, type DataSource, type EntityManager } from 'typeorm'
 import type { QuoteListQuery, QuoteState } from '../../../shared/schemas/quote'
 import { QuoteEventEntity } from './quote-event.entity'
@@ -13,11 +14,26 @@ export interface Transition {
   note?: string
   /** Columns set together with the state (sentAt, acceptedAt, …). */
   patch?: Partial<
-    Pick<QuoteEntity, 'sentAt' | 'acceptedAt' | 'acceptedName' | 'purchaseOrder' | 'paidAt'>
+    Pick<
+      QuoteEntity,
+      | 'sentAt'
+      | 'acceptedAt'
+      | 'acceptedName'
+      | 'purchaseOrder'
+      | 'paidAt'
+      | 'designConfirmedById'
+      | 'designConfirmedAt'
+    >
   >
 }
 
-const relations = { company: true, contact: true, createdBy: true, lines: true } as const
+const relations = {
+  company: true,
+  contact: true,
+  createdBy: true,
+  designConfirmedBy: true,
+  lines: true,
+} as const
 
 function linesOf(quoteId: number, lines: LineWrite[]) {
   return lines.map((l, i) => ({ ...l, quoteId, position: i + 1 }))
@@ -77,6 +93,9 @@ export function quotesRepository(ds: DataSource) {
       }
       return (await qb.getMany()).map((e) => toRow({ ...e, lines: [] } as QuoteEntity))
     },
+    /** Runs `work` while no other instance numbers a quote of the year. */
+    numbering: <T>(year: number, work: () => Promise<T>) =>
+      withNamedLock(ds, `quote-number:${year}`, work),
     async maxSeq(year: number) {
       const r = await quotes
         .createQueryBuilder('q')
@@ -126,6 +145,30 @@ export function quotesRepository(ds: DataSource) {
     },
     /** Moves a quote between states and records who and when; false when it was not in `from`. */
     transition: (id: number, t: Transition) => ds.transaction((m) => transitionIn(m, id, t)),
+    /**
+     * Runs `work` holding the quote's row lock, so a concurrent caller waits and then sees the
+     * outcome. `work` must change this quote only through the transition it is handed.
+     */
+    exclusive<T>(
+      id: number,
+      work: (transition: (t: Transition) => Promise<boolean>) => Promise<T>,
+    ) {
+      return ds.transaction(async (m) => {
+        await m.findOne(QuoteEntity, { where: { id }, lock: { mode: 'pessimistic_write' } })
+        return work((t) => transitionIn(m, id, t))
+      })
+    },
+    /** The same inside the caller's transaction (a payment commits it with the order). */
+    transitionIn,
+    /** Locks the quote row until the caller's transaction ends: two payments of it take turns. */
+    async lockIn(m: EntityManager, id: number) {
+      await m
+        .createQueryBuilder(QuoteEntity, 'q')
+        .select('q.id')
+        .where('q.id = :id', { id })
+        .setLock('pessimistic_write')
+        .getOne()
+    },
     async events(quoteId: number) {
       const rows = await events.find({
         where: { quoteId },

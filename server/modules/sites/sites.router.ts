@@ -1,13 +1,12 @@
 import { Router } from 'express'
-import { z } from 'zod'
-import { IdParamSchema } from '../../../shared/schemas/auth'
+import { IdParamSchema, IdSchema } from '../../../shared/schemas/ids'
 import { SiteInputSchema, SiteListQuerySchema } from '../../../shared/schemas/site'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import { singleUpload } from '../../http/upload'
 import { MAX_PHOTO_BYTES, type SitesService } from './sites.service'
 
-const PhotoParams = IdParamSchema.extend({ photoId: z.coerce.number().int().positive() })
+const PhotoParams = IdParamSchema.extend({ photoId: IdSchema })
 const READERS = ['engineer', 'sales', 'admin'] as const
 const WRITERS = ['engineer', 'admin'] as const
 

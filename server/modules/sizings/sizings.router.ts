@@ -1,6 +1,6 @@
 import { Router } from 'express'
 import { z } from 'zod'
-import { IdParamSchema } from '../../../shared/schemas/auth'
+import { IdParamSchema, IdSchema } from '../../../shared/schemas/ids'
 import {
   SizingCreateSchema,
   SizingListQuerySchema,
@@ -13,7 +13,7 @@ import type { SizingsService } from './sizings.service'
 
 const READERS = ['engineer', 'sales', 'admin'] as const
 const WRITERS = ['engineer', 'admin'] as const
-const RevisionQuery = z.object({ revision: z.coerce.number().int().positive().optional() })
+const RevisionQuery = z.object({ revision: IdSchema.optional() })
 
 export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
   const router = Router()
@@ -80,12 +80,13 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
       method: 'post',
       path: '/api/sizings/:id/submit',
       tag,
-      summary: 'Hand the sizing over to sales',
+      summary:
+        'Hand the sizing over to sales; a design that fails its checks needs them acknowledged with a reason (422 design-checks-failed)',
       access: WRITERS,
       params: IdParamSchema,
       body: SizingSubmitSchema,
     },
-    ({ user, params, body }) => sizings.submit(user, params.id, body.revision, body.note),
+    ({ user, params, body }) => sizings.submit(user, params.id, body),
   )
   route(
     router,

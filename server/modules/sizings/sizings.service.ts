@@ -8,18 +8,18 @@ import type {
 import { AppError, forbidden, notFound } from '../../http/app-error'
 import type { AuthUser } from '../../middleware/authenticate'
 import type { SizingPool } from '../../workers/pool'
-import { dotted } from '../models/check-model'
+import { checkModel, dotted } from '../models/check-model'
 import type { ModelsService } from '../models/models.service'
 import type { SitesService } from '../sites/sites.service'
+import { designChecks } from '../../../shared/sizing/design-checks'
+import { sizingHandover, type HandoverDeps } from './sizing-handover.service'
 import { summarise } from './sizing-summary'
-import type { SizingRecord, SizingsRepository } from './sizings.repository'
+import type { SizingRecord } from './sizings.repository'
 
-export interface SizingsDeps {
-  sizings: SizingsRepository
+export interface SizingsDeps extends HandoverDeps {
   models: ModelsService
   sites: SitesService
   pool: SizingPool
-  now: () => Date
 }
 
 /** Engineers see their own sizings and every submitted one; sales the submitted; admin all. */
@@ -50,7 +50,13 @@ export function sizingsService(deps: SizingsDeps) {
         { path: 'body.input.modelId', message: 'not a model of this site' },
       ])
     const definition = await deps.models.definitionAt(input.modelId, input.modelRevision)
+    // A model stored before today's checks is checked again before it reaches the engine.
+    checkModel(definition, 'model')
     const out = await deps.pool.run({ model: definition, input })
+    if (!out.ok && out.unsolvable)
+      throw new AppError('unsolvable-model', out.message, 422, [
+        { path: 'model', message: out.message },
+      ])
     if (!out.ok) {
       const path = `body.input.${dotted(out.field)
         .replace(/^absorber\.node$/, 'absorberNode')
@@ -75,8 +81,15 @@ export function sizingsService(deps: SizingsDeps) {
       updatedAt: s.updatedAt.toISOString(),
       revision: revision ?? s.currentRevision,
       ...rev,
+      /** judged now, by the server, on the stored result and the active catalogue */
+      designChecks: designChecks(rev.summary, await deps.catalogueUnits()),
+      acknowledgement: s.acknowledgementId
+        ? await deps.handover.acknowledgement(s.acknowledgementId)
+        : null,
     }
   }
+
+  const handover = sizingHandover(deps, { record, assertOwner, view })
 
   return {
     view,
@@ -141,49 +154,27 @@ export function sizingsService(deps: SizingsDeps) {
       )
     },
 
-    /** Hands the sizing to sales; it is read-only from then on unless reopened. */
-    async submit(user: AuthUser, id: number, revision: number, note: string) {
-      const s = await record(user, id)
-      assertOwner(user, s)
-      const ok = await deps.sizings.setState(id, 'draft', 'submitted', {
-        submittedAt: deps.now(),
-        handoverNote: note,
-        revision,
-      })
-      if (!ok)
-        throw new AppError(
-          'sizing-not-submittable',
-          'Only the latest revision of a draft can be handed over.',
-          409,
-        )
-      return view(user, id)
-    },
-
-    async reopen(user: AuthUser, id: number) {
-      const s = await record(user, id)
-      assertOwner(user, s)
-      if (!(await deps.sizings.setState(id, 'submitted', 'draft', { submittedAt: null })))
-        throw new AppError(
-          'sizing-not-submitted',
-          'Only a handed-over sizing can be reopened.',
-          409,
-        )
-      return view(user, id)
-    },
+    ...handover,
 
     /** The frozen figures a quote is made from (no role check: the quote service checks). */
-    async summary(id: number): Promise<SizingSummary> {
-      const v = await view(null, id)
-      return {
-        ...v.summary,
-        id: v.id,
-        revision: v.revision,
-        state: v.state,
-        submittedAt: v.submittedAt,
-        handoverNote: v.handoverNote,
-        ownerName: v.ownerName,
-      }
-    },
+    summary: (id: number) => summaryOf(null, id),
+
+    /** The same for a user: another engineer's draft answers 404, as if it did not exist. */
+    visibleSummary: (user: AuthUser, id: number) => summaryOf(user, id),
+  }
+
+  async function summaryOf(user: AuthUser | null, id: number): Promise<SizingSummary> {
+    const v = await view(user, id)
+    return {
+      ...v.summary,
+      id: v.id,
+      revision: v.revision,
+      state: v.state,
+      submittedAt: v.submittedAt,
+      handoverNote: v.handoverNote,
+      ownerName: v.ownerName,
+      designAcknowledgement: v.acknowledgement,
+    }
   }
 }
 export type SizingsService = ReturnType<typeof sizingsService>

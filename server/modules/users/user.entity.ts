@@ -31,6 +31,13 @@ export class UserEntity {
   @Column('boolean', { default: true })
   active: boolean
 
+  /**
+   * Goes up whenever every session of the user must end (sign-out, new password, role change,
+   * deactivation); a session token carries the version it was issued at.
+   */
+  @Column('int', { default: 0 })
+  tokenVersion: number
+
   @Column('int', { nullable: true })
   companyId: number | null
 

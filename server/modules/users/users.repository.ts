@@ -9,6 +9,7 @@ export interface UserRecord {
   role: Role
   passwordHash: string | null
   active: boolean
+  tokenVersion: number
   companyId: number | null
   companyName: string | null
   createdAt: Date
@@ -22,6 +23,7 @@ function toRecord(u: UserEntity): UserRecord {
     role: u.role,
     passwordHash: u.passwordHash,
     active: u.active,
+    tokenVersion: u.tokenVersion,
     companyId: u.companyId,
     companyName: u.company?.name ?? null,
     createdAt: u.createdAt,
@@ -59,6 +61,10 @@ export function usersRepository(ds: DataSource) {
       patch: Partial<Pick<UserRecord, 'role' | 'active' | 'passwordHash' | 'name' | 'companyId'>>,
     ) {
       await repo.update({ id }, patch)
+    },
+    /** Ends every session of the user at once, on every instance: one atomic increment. */
+    async endSessions(id: number) {
+      await repo.increment({ id }, 'tokenVersion', 1)
     },
   }
 }

@@ -1,7 +1,9 @@
 import { Router } from 'express'
-import { IdParamSchema, InviteSchema, UserPatchSchema } from '../../../shared/schemas/auth'
+import { InviteSchema, UserPatchSchema } from '../../../shared/schemas/auth'
+import { IdParamSchema } from '../../../shared/schemas/ids'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
+import { clientAddress } from '../../http/client-address'
 import type { usersService } from './users.service'
 
 export function usersRouter(api: ApiRegistry, users: ReturnType<typeof usersService>) {
@@ -25,7 +27,7 @@ export function usersRouter(api: ApiRegistry, users: ReturnType<typeof usersServ
       body: InviteSchema,
       status: 201,
     },
-    ({ body }) => users.invite(body),
+    ({ body, req }) => users.invite(body, clientAddress(req)),
   )
   route(
     router,

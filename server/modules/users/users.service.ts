@@ -2,6 +2,7 @@ import type { Invite, UserPatch, UserSummary } from '../../../shared/schemas/aut
 import { AppError, notFound } from '../../http/app-error'
 import { hashPassword, type AuthService } from '../auth/auth.service'
 import type { CompaniesRepository } from '../companies/companies.repository'
+import type { Throttle } from '../../integrations/rate-limits'
 import type { UserRecord, UsersRepository } from './users.repository'
 
 export const INVITE_TTL_HOURS = 72
@@ -24,6 +25,7 @@ export function usersService(deps: {
   users: UsersRepository
   companies: CompaniesRepository
   auth: AuthService
+  inviteLimit: Throttle
 }) {
   return {
     async list() {
@@ -31,7 +33,8 @@ export function usersService(deps: {
     },
 
     /** Makes the account without a password and mails a single-use link to set one. */
-    async invite(input: Invite) {
+    async invite(input: Invite, address: string) {
+      await deps.inviteLimit.take({ account: input.email, address })
       if (await deps.users.findByEmail(input.email)) {
         throw new AppError('email-taken', 'A user with this e-mail address exists already.', 409, [
           { path: 'body.email', message: 'already in use' },
@@ -86,6 +89,8 @@ export function usersService(deps: {
         )
       }
       await deps.users.update(id, patch)
+      // A new role or a deactivation takes effect on sessions already open, on every instance.
+      await deps.users.endSessions(id)
       return summary((await deps.users.findById(id)) as UserRecord)
     },
   }

@@ -1,0 +1,51 @@
+/** The requests the server benchmark makes as a signed-in user would. */
+import { seeded } from '../../../shared/dynamics/eigen/seeded'
+
+/** Signs in; returns the session cookie to send back. */
+export async function signIn(base: string, email: string, password: string): Promise<string> {
+  const r = await fetch(`${base}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email, password }),
+  })
+  if (!r.ok) throw new Error(`sign-in ${email}: ${r.status}`)
+  return r.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .join('; ')
+}
+
+/**
+ * An invented heel-drop-like record of about `bytes` bytes: time and acceleration columns at
+ * 1 kHz, a decaying 6 Hz response with seeded noise.
+ */
+export function recordFile(bytes: number): Uint8Array<ArrayBuffer> {
+  const rnd = seeded(8)
+  const rows = ['time_s,acceleration_m_s2']
+  let size = rows[0]!.length + 1
+  for (let i = 0; size < bytes; i++) {
+    const t = i / 1000
+    const a =
+      0.05 * Math.exp(-0.4 * (t % 10)) * Math.sin(2 * Math.PI * 6 * t) + 0.002 * (rnd() - 0.5)
+    const row = `${t.toFixed(3)},${a.toFixed(7)}`
+    rows.push(row)
+    size += row.length + 1
+  }
+  return new TextEncoder().encode(rows.join('\n') + '\n')
+}
+
+/** Uploads a record to a site as the measurements screen does (multipart field "record"). */
+export function upload(
+  base: string,
+  cookie: string,
+  siteId: number,
+  file: Uint8Array<ArrayBuffer>,
+) {
+  const form = new FormData()
+  form.append('record', new Blob([file], { type: 'text/csv' }), 'bench-record.csv')
+  return fetch(`${base}/api/sites/${siteId}/records`, {
+    method: 'POST',
+    headers: { cookie },
+    body: form,
+  })
+}
