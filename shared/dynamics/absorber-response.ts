@@ -11,7 +11,7 @@ export interface AbsorberPoint {
 
 /**
  * Exact response with an absorber (m_a, k_a, c_a) acting on the coordinate uᵀx, from host
- * receptances, by the Sherman–Morrison identity (Sherman & Morrison 1950; design.md "Fast path").
+ * receptances, by the Sherman–Morrison identity (Sherman & Morrison, Ann. Math. Stat. 21, 1950).
  * The absorber adds z(ω) = −ω² m_a k̃/(k̃ − ω² m_a), k̃ = k_a + iωc_a, along u; a load p_a on its
  * mass (−m_a a_g under base acceleration) reaches the host through the spring as q·p_a, with
  * q = k̃/(k̃ − ω² m_a). So (D + z uuᵀ)x = p + q p_a u gives

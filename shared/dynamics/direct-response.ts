@@ -17,7 +17,7 @@ export type DirectTargets = Pick<NodeTriple, 'r' | 'f'> | { r: Float64Array; p: 
 /**
  * Reference path: solves (K − ω²M + iωC) X = P on the host plus absorber (n+1 degrees of
  * freedom) at every frequency, C being dashpots + host modal damping + the absorber's damper
- * (design.md "Reference path"). O(n³) per frequency: for checks and charts, not optimisation.
+ * (the reference for the rank-one path). O(n³) per frequency: for checks and charts, not optimisation.
  * The absorber's spring and damper join host node `node` to its own degree of freedom y; its mass
  * sits on y, or, with `relativeTo`, its inertance acts between y and that node (the exact reading
  * of an absorber acting on the relative coordinate x_node − x_relativeTo).

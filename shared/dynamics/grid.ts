@@ -29,8 +29,8 @@ export interface TargetBand extends Band {
 /**
  * Default band of a target mode: from √(ω_{a−1} ω_a) to √(ω_b ω_{b+1}), or ½ω_a and 2ω_b where
  * there is no neighbour, with a = b = r widened to an immediate neighbour within
- * CLOSE_MODE_RATIO (and to every copy of a repeated frequency) (design.md "Frequency band of the
- * target mode"; common practice).
+ * CLOSE_MODE_RATIO (and to every copy of a repeated frequency): the geometric midpoints between
+ * natural frequencies split the spectrum evenly on a log scale (common practice).
  * @param omega host natural frequencies, rad/s, ascending
  * @param r 0-based target mode
  */

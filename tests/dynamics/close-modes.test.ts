@@ -9,7 +9,7 @@ import { closeModeFloor } from './fixtures'
 const TWO_PI = 2 * Math.PI
 
 describe('the default band covers close modes', () => {
-  // Source: the band rule of design.md ("Frequency band of the target mode"), widened to a
+  // Source: geometric midpoints between natural frequencies (common practice), widened to a
   // neighbour within CLOSE_MODE_RATIO (common practice, justified in grid.ts).
   it('widens to a neighbour within 25 % and keeps the geometric midpoints otherwise', () => {
     const omega = Float64Array.of(10, 11, 20, 40)

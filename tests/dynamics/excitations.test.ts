@@ -18,7 +18,7 @@ const UNIT_BAND = { minHz: 0.3 / (2 * Math.PI), maxHz: 3 / (2 * Math.PI) }
 
 describe('load vectors and base motion through the rank-one path', () => {
   // Source: the direct solve of the (n+1) system (K − ω²M + iωC)X = P, with P = [p; p_a]
-  // (design.md "Reference path"); under base acceleration the absorber mass is loaded too,
+  // (the reference path, solved by complex LU); under base acceleration the absorber mass is loaded too,
   // p_a = −m_a a_g, and the rank-one path carries it as q·p_a on the attachment (derived in
   // absorber-response.ts).
   it('agrees with the direct (n+1) solve for force vectors and for base acceleration to 1e-9', () => {
