@@ -11,6 +11,7 @@ import { ApiRegistry } from './http/api-registry'
 import type { Mailer } from './integrations/mail'
 import { authenticate } from './middleware/authenticate'
 import { errorHandler, notFoundHandler } from './middleware/error-handler'
+import { noStore } from './middleware/no-store'
 import { requestId } from './middleware/request-id'
 import { authRouter } from './modules/auth/auth.router'
 import { authService } from './modules/auth/auth.service'
@@ -81,14 +82,15 @@ export function buildServices(deps: AppDeps) {
   const files = fileStore(deps.config.UPLOAD_DIR)
   const sites = sitesService({ sites: sitesRepository(deps.dataSource), companies, files })
   const models = modelsService({ models: modelsRepository(deps.dataSource), sites })
+  const measurements = buildMeasurements({ dataSource: deps.dataSource, sites, models, files })
   const sizings = sizingsService({
     sizings: sizingsRepository(deps.dataSource),
     models,
     sites,
+    siteRecordIds: async (siteId) => (await measurements.list(siteId)).map((r) => r.id),
     pool: deps.pool,
     now,
   })
-  const measurements = buildMeasurements({ dataSource: deps.dataSource, sites, models, files })
   const commerce = buildCommerce(
     { ...deps, sizingSource: deps.sizingSource ?? sizings },
     { users, companies, auth, now },
@@ -165,6 +167,7 @@ export function createApp(deps: AppDeps): Express {
       },
     }),
   )
+  app.use('/api', noStore)
   app.use(cookieParser())
   app.use(authenticate(config.JWT_SECRET, (id) => services.auth.loadActiveUser(id)))
   app.use(paymentsWebhookRouter(api, services.payments))
