@@ -70,7 +70,7 @@ describe('demo sizings, drafts and hand-over in Chromium', () => {
     const page = await newPage(rig)
     await signInAs(page, rig.url, demo('engineer').email, demo('engineer').password)
     await openSizing(page, 'Millrace footbridge vertical absorber')
-    const id = Number(/\/sizings\/(\d+)$/.exec(page.url())?.[1])
+    const id = Number(/\/sizings\/(\d+)/.exec(page.url())?.[1])
     await page.locator('#sizing-title').fill('Millrace footbridge, mid-span absorber')
     await waitForText(page, 'Unsaved changes')
     await page.reload()
