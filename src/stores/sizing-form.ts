@@ -100,9 +100,11 @@ export function newDraft(siteId: number, now: string): SizingDraft {
 
 /** The API's sizing input; ids not yet given by the server are 1 for the local preview only. */
 export function toSizingInput(d: SizingDraft): SizingInput {
-  const f = d.form
+  const { records, ...f } = d.form
   return {
     ...f,
+    // no links: left out, as in sizings saved before records could be linked
+    ...(records.length > 0 && { records }),
     title: f.title.trim() || 'Untitled sizing',
     siteId: d.siteId,
     modelId: d.modelId ?? 1,

@@ -4,11 +4,20 @@ import { mount } from '@vue/test-utils'
 import PrimeVue from 'primevue/config'
 import QuantityInput from '../../src/components/QuantityInput.vue'
 import { provideFormErrors } from '../../src/forms/form-errors'
+import type { FieldKind } from '../../shared/field-text'
+import type { Currency } from '../../shared/money'
 
-type Props = InstanceType<typeof QuantityInput>['$props']
+interface Props {
+  kind: FieldKind
+  label?: string
+  currency?: Currency
+  range?: readonly [number, number]
+  step?: number
+  path?: string
+}
 
 /** A field inside a form, bound to a value the test can read, as a parent would bind it. */
-function field(props: Partial<Props> & Pick<Props, 'kind'>, start?: number) {
+function field(props: Props, start?: number) {
   const value = ref<number | undefined>(start)
   let form: ReturnType<typeof provideFormErrors> | undefined
   const Host = defineComponent({

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, expect, it } from 'vitest'
 import type { Browser, Page } from 'puppeteer-core'
 import { PASSWORD, makeUser } from '../helpers/factories'
-import { launchBrowser, newPage, shot, signInAs } from '../helpers/browser'
+import { enter, launchBrowser, newPage, shot, signInAs } from '../helpers/browser'
 import { makePaymentRig, type PaymentRig } from '../api/payments-rig'
 
 let rig: PaymentRig
@@ -36,12 +36,23 @@ it('takes a paid order through build and tuning to shipping, and the customer se
   const wo = (await rig.t.services.production.list()).find((w) => w.quoteId === quote.id)!
   expect(links).toContain(`/work-orders/${wo.id}`)
   await page.goto(`${rig.appUrl}/work-orders/${wo.id}`)
-  await move(page, 'in-build')
+  // a double tap on a move makes one step and no error
+  const first = await page.waitForSelector('button ::-p-text(Move to in-build)')
+  await first!.click({ count: 2 })
+  await page.waitForSelector('::-p-text(→ in-build)')
   await move(page, 'tuning')
+  const moves = (await rig.t.services.production.get(wo.id)).events
+  expect(moves.filter((e) => e.toState === 'in-build')).toHaveLength(1)
+  expect(await page.$$('.p-toast-message-error')).toHaveLength(0)
+  // the measured frequency typed as on the workshop floor: a decimal comma and its unit
   const target = wo.specification.targetFrequencyHz
-  await page.locator('#measured-hz').fill(target.toFixed(3))
+  const typed = Number(target.toFixed(2))
+  await enter(page, '#measured-hz', `${String(typed).replace('.', ',')} Hz`)
+  await page.waitForSelector(`::-p-text(= ${typed} Hz)`)
   await page.locator('button ::-p-text(Record measurement)').click()
   await page.waitForSelector('::-p-text(within tolerance)')
+  const tuned = await rig.t.services.production.get(wo.id)
+  expect(tuned.latestTuning?.measuredHz).toBe(typed)
   await shot(page, 'production-2-tuned')
   await move(page, 'ready')
   await move(page, 'shipped')
