@@ -3,7 +3,6 @@ import '@fontsource/lato/700.css'
 import 'primeicons/primeicons.css'
 import './theme/base.css'
 import { createApp } from 'vue'
-import { registerSW } from 'virtual:pwa-register'
 import { createPinia } from 'pinia'
 import PrimeVue from 'primevue/config'
 import ToastService from 'primevue/toastservice'
@@ -19,9 +18,6 @@ createApp(App)
   .use(ToastService)
   .use(ConfirmationService)
   .mount('#app')
-
-// The app shell is cached for use on site without signal (see vite.config.ts).
-if (import.meta.env.PROD) registerSW({ immediate: true })
 
 // A page restored from the back-forward cache could show data of a user who has signed out
 // since; load it afresh so the session is checked again.

@@ -134,9 +134,10 @@ describe('demo sizings, drafts and hand-over in Chromium', () => {
     await signInAs(page, rig.url, demo('engineer').email, demo('engineer').password)
     await openSizing(page, 'Millrace footbridge vertical absorber')
     const id = Number(/\/sizings\/(\d+)/.exec(page.url())?.[1])
-    // the service worker has cached the app shell once it controls the page
+    // the service worker has cached the app shell once it controls the page (slow on a busy
+    // machine: it downloads the whole client once)
     await page.waitForFunction(() => navigator.serviceWorker.controller !== null, {
-      timeout: 30_000,
+      timeout: 90_000,
     })
     await page.locator('#sizing-title').fill('Millrace footbridge, mid-span absorber')
     await waitForText(page, 'Unsaved changes')
@@ -178,7 +179,7 @@ describe('demo sizings, drafts and hand-over in Chromium', () => {
     expect(stored.input.massRatio).toBe(0.03)
     expect((await s.sizings.view(owner, id, 2)).input.massRatio).toBe(0.035)
     await page.browserContext().close()
-  })
+  }, 150_000)
 
   it('reads every kind of numeric field as typed, saves once on a double tap and reopens each input as entered', async () => {
     const { engineer, sizing, modelId } = await engineerWithSizing()
