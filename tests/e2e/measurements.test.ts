@@ -1,11 +1,18 @@
 import { readFileSync } from 'node:fs'
 import path from 'node:path'
 import request from 'supertest'
-import type { Page } from 'puppeteer-core'
 import { singleModeModel } from '../../shared/dynamics'
 import { afterAll, beforeAll, expect, it } from 'vitest'
 import { PASSWORD, makeUser } from '../helpers/factories'
-import { newPage, shot, signInAs, startBrowserRig, type BrowserRig } from '../helpers/browser'
+import {
+  mainText,
+  newPage,
+  shot,
+  signInAs,
+  startBrowserRig,
+  waitForText,
+  type BrowserRig,
+} from '../helpers/browser'
 import { buildingDefinition, makeCompany, siteBody, sizingInput } from '../helpers/records'
 
 let rig: BrowserRig
@@ -46,18 +53,6 @@ it('lets an engineer upload a heel-drop record, see its peaks and calibrate a mo
   const after = await agent.get(`/api/models/${model.body.id}`)
   expect(after.body.currentRevision).toBe(2)
 })
-
-async function mainText(page: Page) {
-  return page.$eval('main', (m) => m.textContent ?? '')
-}
-
-async function waitForText(page: Page, needle: string) {
-  await page.waitForFunction(
-    (n) => document.querySelector('main')?.textContent?.includes(n),
-    {},
-    needle,
-  )
-}
 
 it('calibrates from step 2 of a sizing, shows model against measurement before and after, and moves the sizing only when asked', async () => {
   const engineer = await makeUser(rig.t, 'engineer')

@@ -13,12 +13,15 @@ import { spanModel } from '../../shared/dynamics'
 import type { SizingInput } from '../../shared/schemas/sizing'
 import { toAuthUser } from '../../server/modules/auth/auth.service'
 import {
+  choose,
   enter,
   newPage,
+  openStep,
   shot,
   signInAs,
   startBrowserRig,
   valueOf,
+  waitForText,
   type BrowserRig,
 } from '../helpers/browser'
 import { makeUser, PASSWORD } from '../helpers/factories'
@@ -34,27 +37,6 @@ beforeAll(async () => {
 afterAll(() => rig?.close())
 
 const demo = (role: string) => DEMO_USERS.find((u) => u.role === role)!
-
-async function waitForText(page: Page, needle: string) {
-  await page.waitForFunction(
-    (n) => document.querySelector('main')?.textContent?.includes(n),
-    {},
-    needle,
-  )
-}
-
-async function openStep(page: Page, name: string) {
-  for (const t of await page.$$('button[role="tab"]')) {
-    if ((await t.evaluate((e) => e.textContent ?? '')).includes(name)) return t.click()
-  }
-  throw new Error(`no step ${name}`)
-}
-
-/** Opens a PrimeVue Select by its input id and picks the option that starts with the text. */
-async function choose(page: Page, inputId: string, option: string) {
-  await page.locator(`#${inputId}`).click()
-  await page.locator(`li[role="option"][aria-label^="${option}"]`).click()
-}
 
 /** A fresh engineer with a three-mass floor span (5.8 Hz) and a draft sizing on it. */
 async function engineerWithSizing() {
@@ -241,14 +223,18 @@ describe('demo sizings, drafts and hand-over in Chromium', () => {
     await page.evaluate(() => localStorage.clear())
     await page.goto(`${base}/absorber`)
     await page.waitForSelector('#mass-ratio')
-    expect(await valueOf(page, '#mass-ratio')).toBe('5 %')
-    expect(await valueOf(page, '#tuning-ratio')).toBe('0.95')
-    expect(await valueOf(page, '#tuning-damping')).toBe('8 %')
-    expect(await valueOf(page, '#detuning-tolerance')).toBe('7.5 %')
-    expect(await valueOf(page, '#band-max')).toBe('6.3 Hz')
-    expect(await valueOf(page, '#limit-value')).toBe('0.14709975 m/s²')
-    expect(await valueOf(page, '#host-damping-1')).toBe('5 %')
-    expect(await valueOf(page, '#host-damping-2')).toBe('0.05 %')
+    const entered = {
+      '#mass-ratio': '5 %',
+      '#tuning-ratio': '0.95',
+      '#tuning-damping': '8 %',
+      '#detuning-tolerance': '7.5 %',
+      '#band-max': '6.3 Hz',
+      '#limit-value': '0.14709975 m/s²',
+      '#host-damping-1': '5 %',
+      '#host-damping-2': '0.05 %',
+    }
+    for (const [field, text] of Object.entries(entered))
+      expect(await valueOf(page, field)).toBe(text)
     await page.browserContext().close()
   })
 })

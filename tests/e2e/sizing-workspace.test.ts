@@ -1,14 +1,17 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import type { Page } from 'puppeteer-core'
 import { makeUser, PASSWORD } from '../helpers/factories'
 import { makeCompany } from '../helpers/records'
 import {
+  choose,
   LANDSCAPE,
+  mainText,
   newPage,
+  openStep,
   PORTRAIT,
   shot,
   signInAs,
   startBrowserRig,
+  waitForText,
   type BrowserRig,
 } from '../helpers/browser'
 
@@ -17,33 +20,6 @@ beforeAll(async () => {
   rig = await startBrowserRig()
 })
 afterAll(() => rig?.close())
-
-/** Opens a PrimeVue Select by its input id and picks the option that starts with the text. */
-async function choose(page: Page, inputId: string, option: string) {
-  await page.locator(`#${inputId}`).click()
-  await page.locator(`li[role="option"][aria-label^="${option}"]`).click()
-}
-
-/** Clicks the stepper's step button (role tab) whose text names the step. */
-async function openStep(page: Page, name: string) {
-  const tabs = await page.$$('button[role="tab"]')
-  for (const t of tabs) {
-    if ((await t.evaluate((e) => e.textContent ?? '')).includes(name)) return t.click()
-  }
-  throw new Error(`no step ${name}`)
-}
-
-async function text(page: Page) {
-  return page.$eval('main', (m) => m.textContent ?? '')
-}
-
-async function waitForText(page: Page, needle: string) {
-  await page.waitForFunction(
-    (n) => document.querySelector('main')?.textContent?.includes(n),
-    {},
-    needle,
-  )
-}
 
 describe.each([
   ['portrait', PORTRAIT],
@@ -95,7 +71,7 @@ describe.each([
     await openStep(page, 'Results')
     await waitForText(page, 'Reduction')
     await page.waitForSelector('[aria-label="Detuning robustness"] .apexcharts-series path')
-    const preview = /peak ÷ (\d+\.\d\d)/.exec(await text(page))?.[1]
+    const preview = /peak ÷ (\d+\.\d\d)/.exec(await mainText(page))?.[1]
     expect(Number(preview)).toBeGreaterThan(1)
     await shot(page, `sizing-${tag}-5-results`)
 

@@ -125,3 +125,31 @@ export async function enter(page: Page, selector: string, text: string) {
 export function valueOf(page: Page, selector: string) {
   return page.$eval(selector, (e) => (e as HTMLInputElement).value)
 }
+
+/** The visible text of the page's main area. */
+export function mainText(page: Page) {
+  return page.$eval('main', (m) => m.textContent ?? '')
+}
+
+/** Waits until the page's main area shows the text. */
+export async function waitForText(page: Page, needle: string) {
+  await page.waitForFunction(
+    (n) => document.querySelector('main')?.textContent?.includes(n),
+    {},
+    needle,
+  )
+}
+
+/** Clicks the sizing workspace's step button (role tab) whose text names the step. */
+export async function openStep(page: Page, name: string) {
+  for (const t of await page.$$('button[role="tab"]')) {
+    if ((await t.evaluate((e) => e.textContent ?? '')).includes(name)) return t.click()
+  }
+  throw new Error(`no step ${name}`)
+}
+
+/** Opens a PrimeVue Select by its input id and picks the option that starts with the text. */
+export async function choose(page: Page, inputId: string, option: string) {
+  await page.locator(`#${inputId}`).click()
+  await page.locator(`li[role="option"][aria-label^="${option}"]`).click()
+}
