@@ -23,8 +23,8 @@ async function main() {
       pool,
     })
     const { companyIds } = await seedPeople(services)
-    await seedSizings(services, { companyIds })
     await seedCatalogue(services)
+    await seedSizings(services, { companyIds })
     console.log('demo data loaded')
   } finally {
     await Promise.all([dataSource.destroy(), pool.close()])

@@ -57,7 +57,8 @@ async function scenario(
 
 /**
  * The demo sizings: an office floor sized and handed to sales (the quote demo starts from it) and
- * a footbridge still in draft. Skipped when the office site exists already.
+ * a footbridge still in draft. Skipped when the office site exists already. Load the catalogue
+ * first: the handover checks the office absorber against it.
  */
 export async function seedSizings(s: Services, opts: { companyIds: Map<string, number> }) {
   const existing = await s.sites.list({ search: DEMO_OFFICE_SITE })
@@ -93,12 +94,10 @@ export async function seedSizings(s: Services, opts: { companyIds: Map<string, n
       detuningTolerance: 0.1,
     },
   )
-  await s.sizings.submit(
-    user,
-    office.id,
-    office.currentRevision,
-    'Ceiling void access from the level 3 plant room; lift via the goods hoist.',
-  )
+  await s.sizings.submit(user, office.id, {
+    revision: office.currentRevision,
+    note: 'Ceiling void access from the level 3 plant room; lift via the goods hoist.',
+  })
 
   // A light steel footbridge over the mill race, 2.1 Hz, 0.8 % damping: a draft in progress.
   await scenario(

@@ -32,6 +32,8 @@ import { modelsService } from './modules/models/models.service'
 import { sizingsRepository } from './modules/sizings/sizings.repository'
 import { sizingsRouter } from './modules/sizings/sizings.router'
 import { sizingsService } from './modules/sizings/sizings.service'
+import { sizingHandoverRepository } from './modules/sizings/sizing-handover.repository'
+import { catalogueRepository } from './modules/catalogue/catalogue.repository'
 import { buildMeasurements } from './modules/measurements/build-measurements'
 import { measurementsRouter } from './modules/measurements/measurements.router'
 import type { SizingPool } from './workers/pool'
@@ -83,8 +85,11 @@ export function buildServices(deps: AppDeps) {
   const sites = sitesService({ sites: sitesRepository(deps.dataSource), companies, files })
   const models = modelsService({ models: modelsRepository(deps.dataSource), sites })
   const measurements = buildMeasurements({ dataSource: deps.dataSource, sites, models, files })
+  const catalogueLines = catalogueRepository(deps.dataSource)
   const sizings = sizingsService({
     sizings: sizingsRepository(deps.dataSource),
+    handover: sizingHandoverRepository(deps.dataSource),
+    catalogueUnits: () => catalogueLines.listLines(true),
     models,
     sites,
     siteRecordIds: async (siteId) => (await measurements.list(siteId)).map((r) => r.id),

@@ -7,6 +7,7 @@ import { HostModelEntity } from './modules/models/host-model.entity'
 import { ModelRevisionEntity } from './modules/models/model-revision.entity'
 import { SizingEntity } from './modules/sizings/sizing.entity'
 import { SizingRevisionEntity } from './modules/sizings/sizing-revision.entity'
+import { SizingAcknowledgementEntity } from './modules/sizings/sizing-acknowledgement.entity'
 import { MeasurementRecordEntity } from './modules/measurements/measurement-record.entity'
 import { PaymentSessionEntity } from './modules/payments/payment-session.entity'
 import { PaymentEventEntity } from './modules/payments/payment-event.entity'
@@ -31,6 +32,7 @@ export const entities = [
   ModelRevisionEntity,
   SizingEntity,
   SizingRevisionEntity,
+  SizingAcknowledgementEntity,
   MeasurementRecordEntity,
   PaymentSessionEntity,
   PaymentEventEntity,

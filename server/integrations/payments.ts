@@ -10,6 +10,8 @@ export interface CheckoutRequest {
   customerEmail?: string
   successUrl: string
   cancelUrl: string
+  /** the same key gives the same session back, so two racing requests make one */
+  idempotencyKey?: string
 }
 
 export interface CheckoutSession {
@@ -37,6 +39,8 @@ export interface PaymentEvent {
 
 export interface PaymentGateway {
   createCheckout(req: CheckoutRequest): Promise<CheckoutSession>
+  /** The session as the payment service holds it now (open, complete or expired). */
+  retrieveCheckout(id: string): Promise<CheckoutSession>
   /** Verifies the signature over the raw body; throws when it does not hold. */
   verify(rawBody: Buffer, signature: string | undefined): PaymentEvent
 }
@@ -74,25 +78,31 @@ export function stripeGateway(
   })
   return {
     async createCheckout(req) {
-      const session = await stripe.checkout.sessions.create({
-        mode: 'payment',
-        line_items: [
-          {
-            quantity: 1,
-            price_data: {
-              currency: req.currency.toLowerCase(),
-              unit_amount: req.amount,
-              product_data: { name: `Quote ${req.reference}` },
+      const session = await stripe.checkout.sessions.create(
+        {
+          mode: 'payment',
+          line_items: [
+            {
+              quantity: 1,
+              price_data: {
+                currency: req.currency.toLowerCase(),
+                unit_amount: req.amount,
+                product_data: { name: `Quote ${req.reference}` },
+              },
             },
-          },
-        ],
-        client_reference_id: String(req.quoteId),
-        customer_email: req.customerEmail,
-        metadata: { quoteId: String(req.quoteId), reference: req.reference },
-        success_url: req.successUrl,
-        cancel_url: req.cancelUrl,
-      })
+          ],
+          client_reference_id: String(req.quoteId),
+          customer_email: req.customerEmail,
+          metadata: { quoteId: String(req.quoteId), reference: req.reference },
+          success_url: req.successUrl,
+          cancel_url: req.cancelUrl,
+        },
+        req.idempotencyKey ? { idempotencyKey: req.idempotencyKey } : undefined,
+      )
       return toSession(session)
+    },
+    async retrieveCheckout(id) {
+      return toSession(await stripe.checkout.sessions.retrieve(id))
     },
     verify(rawBody, signature) {
       const event = stripe.webhooks.constructEvent(

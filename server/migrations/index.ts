@@ -5,6 +5,7 @@ import { ModelsSizings1796198622102 } from './1796198622102-ModelsSizings'
 import { Payments1796201603698 } from './1796201603698-Payments'
 import { Production1796202027823 } from './1796202027823-Production'
 import { Measurements1796202424685 } from './1796202424685-Measurements'
+import { DesignGates1796267311937 } from './1796267311937-DesignGates'
 
 /** Every migration class in order; a new migration is added here too. */
 export const migrations = [
@@ -15,4 +16,5 @@ export const migrations = [
   Payments1796201603698,
   Production1796202027823,
   Measurements1796202424685,
+  DesignGates1796267311937,
 ]

@@ -58,6 +58,13 @@ export const QuoteListQuerySchema = z.object({
 export type QuoteListQuery = z.infer<typeof QuoteListQuerySchema>
 
 export const QuoteNoteSchema = z.object({ note: z.string().trim().max(500).default('') })
+
+/** Sending; a quote whose sizing was handed over with failed checks needs them confirmed. */
+export const QuoteSendSchema = z.object({
+  /** sales have read the acknowledged failed design checks and send the quote with them */
+  confirmDesignChecks: z.boolean().default(false),
+})
+export type QuoteSend = z.infer<typeof QuoteSendSchema>
 export const QuoteAcceptSchema = z.object({
   name: z.string().trim().min(1, 'required').max(120),
   purchaseOrder: z.string().trim().min(1, 'required').max(60),
@@ -129,6 +136,8 @@ export const QuoteSchema = QuoteSummarySchema.extend({
   acceptedName: z.string().nullable(),
   purchaseOrder: z.string().nullable(),
   paidAt: z.string().nullable(),
+  /** Who in sales confirmed the sizing's acknowledged failed checks when sending, and when. */
+  designConfirmation: z.object({ at: z.string(), byName: z.string() }).nullable(),
   /** Supplier-side history; empty for a customer. */
   events: z.array(QuoteEventSchema),
 })

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { AcknowledgeInputSchema, DesignAcknowledgementSchema } from './design-checks'
 import {
   bandSchema,
   explicitTuningSchema,
@@ -101,6 +102,8 @@ export const SizingSummarySchema = z.object({
   }),
   submittedAt: z.string().nullable(),
   handoverNote: z.string(),
+  /** present when the design fails a check and was handed over with a reason; absent on old quotes */
+  designAcknowledgement: DesignAcknowledgementSchema.nullable().optional(),
 })
 export type SizingSummary = z.infer<typeof SizingSummarySchema>
 
@@ -116,7 +119,10 @@ export type SizingSave = z.infer<typeof SizingSaveSchema>
 export const SizingSubmitSchema = z.object({
   revision: z.number().int().positive(),
   note: z.string().trim().max(2000).default(''),
+  /** required when the stored design fails a check; ignored when it passes them all */
+  acknowledge: AcknowledgeInputSchema.optional(),
 })
+export type SizingSubmit = z.infer<typeof SizingSubmitSchema>
 
 export const SizingListQuerySchema = z.object({
   siteId: z.coerce.number().int().positive().optional(),

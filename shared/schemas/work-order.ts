@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import type { DesignAcknowledgement } from './design-checks'
 
 /** The build flow of a unit, in order; every step is recorded with who and when. */
 export const WORK_ORDER_STATES = ['queued', 'in-build', 'tuning', 'ready', 'shipped'] as const
@@ -7,6 +8,8 @@ export type WorkOrderState = z.infer<typeof WorkOrderStateSchema>
 
 export const StatusChangeSchema = z.object({
   to: WorkOrderStateSchema,
+  /** the state the caller saw; a move from a state the work order has left is a 409 */
+  from: WorkOrderStateSchema.optional(),
   /** required when going back a step */
   note: z.string().trim().max(500).default(''),
 })
@@ -41,4 +44,8 @@ export interface BuildSpecification {
   /** ± fraction */
   frequencyTolerance: number
   options: string[]
+  /** the failed design checks the sizing was handed over with; absent on older work orders */
+  designAcknowledgement?: DesignAcknowledgement | null
+  /** sales' confirmation of those checks when the quote was sent */
+  designConfirmation?: { at: string; byName: string } | null
 }

@@ -13,9 +13,14 @@ export interface OrderInfo {
 }
 
 export const paymentsApi = {
-  /** The server prices the session from the stored quote; no amount is sent. */
+  /**
+   * The server prices the session from the stored quote; no amount is sent. A paid quote
+   * answers with no url.
+   */
   checkout: (quoteId: number) =>
-    api.post<{ sessionId: string; url: string }>(`/api/quotes/${quoteId}/checkout`),
+    api.post<{ sessionId: string | null; url: string | null; state: string }>(
+      `/api/quotes/${quoteId}/checkout`,
+    ),
   order: (quoteId: number) => api.get<{ order: OrderInfo | null }>(`/api/quotes/${quoteId}/order`),
   orders: () => api.get<OrderInfo[]>('/api/orders'),
 }

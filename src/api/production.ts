@@ -31,8 +31,9 @@ export interface WorkOrder extends WorkOrderRow {
 export const productionApi = {
   list: () => api.get<WorkOrderRow[]>('/api/work-orders'),
   get: (id: number) => api.get<WorkOrder>(`/api/work-orders/${id}`),
-  move: (id: number, to: WorkOrderState, note = '') =>
-    api.post<WorkOrder>(`/api/work-orders/${id}/state`, { to, note }),
+  /** from: the state the page shows; a move from a state the order has left is refused */
+  move: (id: number, from: WorkOrderState, to: WorkOrderState, note = '') =>
+    api.post<WorkOrder>(`/api/work-orders/${id}/state`, { from, to, note }),
   tuning: (id: number, measuredHz: number) =>
     api.post<WorkOrder>(`/api/work-orders/${id}/tuning`, { measuredHz }),
 }

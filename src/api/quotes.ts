@@ -21,7 +21,9 @@ export const quotesApi = {
   get: (id: number) => api.get<Quote>(`/api/quotes/${id}`),
   create: (body: QuoteCreate) => api.post<Quote>('/api/quotes', body),
   update: (id: number, body: QuoteDraft) => api.put<Quote>(`/api/quotes/${id}`, body),
-  send: (id: number) => api.post<Quote>(`/api/quotes/${id}/send`),
+  /** confirmDesignChecks: sales have read the failed checks the sizing was handed over with */
+  send: (id: number, confirmDesignChecks = false) =>
+    api.post<Quote>(`/api/quotes/${id}/send`, { confirmDesignChecks }),
   revise: (id: number) => api.post<Quote>(`/api/quotes/${id}/revise`),
   withdraw: (id: number, note = '') => api.post<Quote>(`/api/quotes/${id}/withdraw`, { note }),
   accept: (id: number, body: QuoteAccept) => api.post<Quote>(`/api/quotes/${id}/accept`, body),

@@ -6,6 +6,11 @@ import type {
   SizingSummary,
 } from '@shared/schemas/sizing'
 import type { SizingEvaluation } from '@shared/sizing/evaluate-sizing'
+import type {
+  AcknowledgeInput,
+  DesignAcknowledgement,
+  DesignCheck,
+} from '@shared/schemas/design-checks'
 import { api } from './client'
 import { queryString } from './sites'
 
@@ -26,6 +31,16 @@ export interface SizingView {
   input: SizingInput
   evaluation: SizingEvaluation
   summary: SizingSummary
+  /** the server's checks of this revision against its limit and the active catalogue */
+  designChecks: DesignCheck[]
+  /** the failed checks accepted at the current handover, if any */
+  acknowledgement: DesignAcknowledgement | null
+}
+
+/** What the handover step sends: the note for sales and, for a failing design, the reason. */
+export interface HandoverRequest {
+  note: string
+  acknowledge?: AcknowledgeInput
 }
 
 export const sizingsApi = {
@@ -35,7 +50,7 @@ export const sizingsApi = {
   create: (input: SizingInput) => api.post<SizingView>('/api/sizings', { input }),
   save: (id: number, baseRevision: number, input: SizingInput) =>
     api.put<SizingView>(`/api/sizings/${id}`, { baseRevision, input }),
-  submit: (id: number, revision: number, note: string) =>
-    api.post<SizingView>(`/api/sizings/${id}/submit`, { revision, note }),
+  submit: (id: number, revision: number, h: HandoverRequest) =>
+    api.post<SizingView>(`/api/sizings/${id}/submit`, { revision, ...h }),
   reopen: (id: number) => api.post<SizingView>(`/api/sizings/${id}/reopen`),
 }

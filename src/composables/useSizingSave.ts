@@ -2,7 +2,7 @@ import { ref, watch } from 'vue'
 import { ModelDefinitionSchema, SizingInputSchema } from '@shared/schemas/sizing'
 import { isApiError } from '@/api/client'
 import { modelsApi } from '@/api/models'
-import { sizingsApi } from '@/api/sizings'
+import { sizingsApi, type HandoverRequest } from '@/api/sizings'
 import { useAction } from '@/composables/useAction'
 import type { FormErrors } from '@/forms/form-errors'
 import { router } from '@/router'
@@ -111,10 +111,16 @@ export function useSizingSave(ws: SizingWorkspace, form: FormErrors) {
     asked = 'save'
     return action.run(saveSizing)
   }
-  const submit = (note: string) =>
+  const submit = (h: HandoverRequest) =>
     action.run(async (d) => {
       if (!d.sizingId || d.changed) return false
-      ws.saved.value = await sizingsApi.submit(d.sizingId, d.sizingRevision ?? 1, note)
+      const id = d.sizingId
+      ws.saved.value = await sizingsApi.submit(id, d.sizingRevision ?? 1, h).catch(async (e) => {
+        // The checks changed on the server (the catalogue, say): show them as they are now.
+        if (isApiError(e) && e.code === 'design-checks-failed')
+          ws.saved.value = await sizingsApi.get(id)
+        throw e
+      })
       return true
     })
   const reopen = () =>

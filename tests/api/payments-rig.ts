@@ -15,7 +15,10 @@ import {
  * The app listening on loopback with the payment stand-in beside it: the official SDK talks to
  * the fake, and the fake posts signed webhooks back to the app.
  */
-export async function makePaymentRig(extraEnv: Record<string, string> = {}) {
+export async function makePaymentRig(
+  extraEnv: Record<string, string> = {},
+  opts: { solvedSizings?: boolean } = {},
+) {
   let handler: (req: IncomingMessage, res: ServerResponse) => void = (_q, r) => r.end()
   const server = createServer((req, res) => handler(req, res))
   await new Promise<void>((r) => server.listen(0, '127.0.0.1', r))
@@ -27,15 +30,18 @@ export async function makePaymentRig(extraEnv: Record<string, string> = {}) {
     webhookSecret: 'whsec_rig',
     webhookUrl: `${appUrl}/api/payments/webhook`,
   })
-  const { t, sizings } = await makeQuoteApp({
-    STRIPE_SECRET_KEY: 'sk_test_rig',
-    STRIPE_WEBHOOK_SECRET: 'whsec_rig',
-    STRIPE_API_HOST: '127.0.0.1',
-    STRIPE_API_PORT: String(fake.port),
-    STRIPE_API_PROTOCOL: 'http',
-    PUBLIC_URL: appUrl,
-    ...extraEnv,
-  })
+  const { t, sizings } = await makeQuoteApp(
+    {
+      STRIPE_SECRET_KEY: 'sk_test_rig',
+      STRIPE_WEBHOOK_SECRET: 'whsec_rig',
+      STRIPE_API_HOST: '127.0.0.1',
+      STRIPE_API_PORT: String(fake.port),
+      STRIPE_API_PROTOCOL: 'http',
+      PUBLIC_URL: appUrl,
+      ...extraEnv,
+    },
+    opts,
+  )
   handler = t.app
   const sales = (await signedIn(t, 'sales')).agent
   const ids = await catalogueIds(sales)

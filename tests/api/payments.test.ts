@@ -39,9 +39,10 @@ describe('paying an accepted quote through the SDK and the payment stand-in', ()
     expect((await mailTo(rig.t, customer.user.email)).subject).toMatch(/^Payment received/)
     expect((await mailTo(rig.t, builder.email)).subject).toMatch(/^New order ORD-/)
     expect((await production.get('/api/orders')).status).toBe(200)
+    // paying again after it went through answers the paid quote and starts nothing
     const again = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)
-    expect(again.status).toBe(409)
-    expect(again.body.error.code).toBe('quote-paid')
+    expect(again.status).toBe(200)
+    expect(again.body).toEqual({ state: 'paid', sessionId: null, url: null })
   })
 
   it('applies a replayed event once and makes one order from two events of the same session', async () => {
@@ -136,6 +137,24 @@ describe('paying an accepted quote through the SDK and the payment stand-in', ()
     const second = (await customer.agent.post(`/api/quotes/${quote.id}/checkout`)).body
     expect(second.sessionId).not.toBe(first.sessionId)
     expect((await rig.payOnPage(second.url)).status).toBe(303)
+    expect(await orders(quote.id)).toHaveLength(1)
+  })
+
+  it('answers a repeated or racing checkout start with one open session', async () => {
+    const { quote, customer } = await rig.acceptedQuote()
+    const start = () => customer.agent.post(`/api/quotes/${quote.id}/checkout`)
+    const [a, b] = await Promise.all([start(), start()])
+    const c = await start()
+    expect(a.status).toBe(201)
+    expect(c.status).toBe(200)
+    expect(new Set([a.body.sessionId, b.body.sessionId, c.body.sessionId]).size).toBe(1)
+    expect(c.body).toMatchObject({ state: 'accepted', url: a.body.url })
+    const [row] = await rig.t.ds.query(
+      'SELECT COUNT(*) AS n FROM payment_sessions WHERE quoteId = ?',
+      [quote.id],
+    )
+    expect(Number(row.n)).toBe(1)
+    expect((await rig.payOnPage(c.body.url)).status).toBe(303)
     expect(await orders(quote.id)).toHaveLength(1)
   })
 

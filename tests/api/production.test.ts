@@ -1,6 +1,6 @@
-import { execFileSync } from 'node:child_process'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { mailTo, signedIn } from '../helpers/factories'
+import { fetchPdf, pdfText } from '../helpers/pdf'
 import { makePaymentRig, type PaymentRig } from './payments-rig'
 
 let rig: PaymentRig
@@ -46,6 +46,27 @@ describe('work orders', () => {
       .post(`/api/work-orders/${wo.id}/state`)
       .send({ to: 'queued', note: 'spring batch rejected' })
     expect(withReason.body.state).toBe('queued')
+  })
+
+  it('answers a repeated move with the work order as it is, and a move from a state it has left with 409', async () => {
+    const { agent, wo } = await paidWorkOrder()
+    const step = { from: 'queued', to: 'in-build' }
+    const [a, b] = await Promise.all([
+      agent.post(`/api/work-orders/${wo.id}/state`).send(step),
+      agent.post(`/api/work-orders/${wo.id}/state`).send(step),
+    ])
+    const c = await agent.post(`/api/work-orders/${wo.id}/state`).send(step)
+    expect([a.status, b.status, c.status]).toEqual([200, 200, 200])
+    expect(c.body.state).toBe('in-build')
+    expect(c.body.events.filter((e: { kind: string }) => e.kind === 'state')).toHaveLength(1)
+    const stale = await agent
+      .post(`/api/work-orders/${wo.id}/state`)
+      .send({ from: 'queued', to: 'tuning' })
+    expect(stale.status).toBe(409)
+    expect(stale.body.error).toMatchObject({
+      code: 'state-changed',
+      details: { state: 'in-build' },
+    })
   })
 
   it('blocks shipping after an out-of-tolerance tuning until a new measurement passes, then mails the customer', async () => {
@@ -105,19 +126,11 @@ describe('work orders', () => {
 
   it('prints the work order as a PDF with its target frequency and the safety note', async () => {
     const { agent, wo } = await paidWorkOrder()
-    const res = await agent
-      .get(`/api/work-orders/${wo.id}/pdf`)
-      .buffer(true)
-      .parse((r, cb) => {
-        const chunks: Buffer[] = []
-        r.on('data', (c: Buffer) => chunks.push(c))
-        r.on('end', () => cb(null, Buffer.concat(chunks)))
-      })
+    const res = await fetchPdf(agent, `/api/work-orders/${wo.id}/pdf`)
     expect(res.status).toBe(200)
     const pdf = res.body as Buffer
     expect(pdf.subarray(0, 5).toString()).toBe('%PDF-')
-    // pdftotext from Debian's poppler-utils
-    const text = execFileSync('pdftotext', ['-', '-'], { input: pdf }).toString()
+    const text = await pdfText(pdf)
     expect(text).toContain(wo.number)
     expect(text).toContain('6.75 Hz')
     expect(text).toMatch(/licensed engineer/)

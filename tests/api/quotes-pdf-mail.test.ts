@@ -1,12 +1,8 @@
-import { execFile } from 'node:child_process'
-import { mkdtemp, writeFile } from 'node:fs/promises'
-import { tmpdir } from 'node:os'
-import path from 'node:path'
-import { promisify } from 'node:util'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Agent } from 'supertest'
 import type { TestApp } from '../helpers/app'
 import { mailTo, signedIn } from '../helpers/factories'
+import { fetchPdf, pdfText } from '../helpers/pdf'
 import {
   catalogueIds,
   customerWithContact,
@@ -15,7 +11,6 @@ import {
   sizingSummary,
 } from './quotes-rig'
 
-const run = promisify(execFile)
 let t: TestApp
 let sizings: Awaited<ReturnType<typeof makeQuoteApp>>['sizings']
 let sales: Agent
@@ -47,27 +42,11 @@ async function quote() {
   return { quote: res.body, company, contact }
 }
 
-/** pdftotext (poppler-utils) output, whitespace folded so line breaks do not split phrases. */
-async function pdfText(bytes: Buffer) {
-  const dir = await mkdtemp(path.join(tmpdir(), 'qn-quote-'))
-  const file = path.join(dir, 'quote.pdf')
-  await writeFile(file, bytes)
-  const { stdout } = await run('pdftotext', ['-layout', file, '-'])
-  return stdout.replace(/\s+/g, ' ')
-}
-
 describe('the quote PDF', () => {
   it('is a valid PDF whose text holds the number, the total and the engineering caution', async () => {
     const { quote: q } = await quote()
     expect(q.total).toBe(1_201_200)
-    const res = await sales
-      .get(`/api/quotes/${q.id}/pdf`)
-      .buffer(true)
-      .parse((r, done) => {
-        const chunks: Buffer[] = []
-        r.on('data', (c: Buffer) => chunks.push(c))
-        r.on('end', () => done(null, Buffer.concat(chunks)))
-      })
+    const res = await fetchPdf(sales, `/api/quotes/${q.id}/pdf`)
     expect(res.status).toBe(200)
     expect(res.headers['content-type']).toBe('application/pdf')
     const bytes = res.body as Buffer

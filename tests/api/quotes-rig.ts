@@ -17,11 +17,24 @@ const noSolving: SizingPool = {
 
 /**
  * The test app rebuilt with sizings held in memory, so each test states the exact absorber
- * values its hand-checked prices rest on, and with the demo catalogue loaded.
+ * values its hand-checked prices rest on, and with the demo catalogue loaded. With
+ * `solvedSizings` the app keeps its real sizings service and worker pool instead.
  */
-export async function makeQuoteApp(extraEnv: Record<string, string> = {}) {
+export async function makeQuoteApp(
+  extraEnv: Record<string, string> = {},
+  opts: { solvedSizings?: boolean } = {},
+) {
   const t: TestApp = await makeTestApp(extraEnv)
   const sizings = memorySizingSource()
+  const close = t.close
+  t.close = async () => {
+    await closePdfRenderers()
+    await close()
+  }
+  if (opts.solvedSizings) {
+    await seedCatalogue(t.services)
+    return { t, sizings }
+  }
   const deps = {
     config: t.config,
     dataSource: t.ds,
@@ -34,11 +47,6 @@ export async function makeQuoteApp(extraEnv: Record<string, string> = {}) {
   t.app = createApp(deps)
   t.services = buildServices(deps)
   await seedCatalogue(t.services)
-  const close = t.close
-  t.close = async () => {
-    await closePdfRenderers()
-    await close()
-  }
   return { t, sizings }
 }
 

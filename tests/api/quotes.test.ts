@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Agent } from 'supertest'
 import type { TestApp } from '../helpers/app'
-import { signedIn } from '../helpers/factories'
+import { mailTo, signedIn } from '../helpers/factories'
 import {
   catalogueIds,
   customerWithContact,
@@ -260,6 +260,104 @@ describe('quote revisions and states', () => {
     expect(paid.state).toBe('paid')
     expect((await t.services.quotes.forPayment(id)).total).toBe(816_000)
     await expect(t.services.quotes.markPaid(id, new Date())).rejects.toMatchObject({ status: 409 })
+  })
+})
+
+describe('repeated quote actions (a double tap, a retry)', () => {
+  it('sends once when sending races or repeats: one mail, one event, each answer the sent quote', async () => {
+    const { res, contact } = await draftFor()
+    const id = res.body.id
+    const [a, b] = await Promise.all([
+      sales.post(`/api/quotes/${id}/send`),
+      sales.post(`/api/quotes/${id}/send`),
+    ])
+    const c = await sales.post(`/api/quotes/${id}/send`)
+    expect([a.status, b.status, c.status]).toEqual([200, 200, 200])
+    expect([a.body.state, b.body.state, c.body.state]).toEqual(['sent', 'sent', 'sent'])
+    await mailTo(t, contact.email)
+    await new Promise((r) => setTimeout(r, 300))
+    expect(t.mail.messages().filter((m) => m.to.join().includes(contact.email))).toHaveLength(1)
+    const events = (await sales.get(`/api/quotes/${id}`)).body.events
+    expect(events.filter((e: { toState: string }) => e.toState === 'sent')).toHaveLength(1)
+  })
+
+  it('accepts once on a repeated yes, and answers a different purchase order with 409', async () => {
+    const { res, company } = await draftFor()
+    const id = res.body.id
+    await sales.post(`/api/quotes/${id}/send`).expect(200)
+    const { agent: customer } = await signedIn(t, 'customer', { companyId: company.id })
+    const yes = { name: 'Dana Whitlock', purchaseOrder: 'PO-5501' }
+    const [a, b] = await Promise.all([
+      customer.post(`/api/quotes/${id}/accept`).send(yes),
+      customer.post(`/api/quotes/${id}/accept`).send(yes),
+    ])
+    const c = await customer.post(`/api/quotes/${id}/accept`).send(yes)
+    expect([a.status, b.status, c.status]).toEqual([200, 200, 200])
+    expect(c.body).toMatchObject({ state: 'accepted', purchaseOrder: 'PO-5501' })
+    const events = (await sales.get(`/api/quotes/${id}`)).body.events
+    expect(events.filter((e: { toState: string }) => e.toState === 'accepted')).toHaveLength(1)
+    const other = await customer
+      .post(`/api/quotes/${id}/accept`)
+      .send({ name: 'Sam Okafor', purchaseOrder: 'PO-9' })
+    expect(other.status).toBe(409)
+    expect(other.body.error.code).toBe('quote-accepted-already')
+    expect(other.body.error.message).toContain('Dana Whitlock')
+  })
+
+  it('answers a repeated withdrawal with the withdrawn quote', async () => {
+    const { res } = await draftFor()
+    const id = res.body.id
+    for (let i = 0; i < 2; i++)
+      expect((await sales.post(`/api/quotes/${id}/withdraw`).send({ note: 'lost' })).status).toBe(
+        200,
+      )
+    const events = (await sales.get(`/api/quotes/${id}`)).body.events
+    expect(events.filter((e: { toState: string }) => e.toState === 'withdrawn')).toHaveLength(1)
+  })
+})
+
+describe('a quote of a sizing handed over with failed checks', () => {
+  it('is sent only with the sales confirmation, which a new revision asks for again', async () => {
+    const ack = {
+      revision: 1,
+      failed: [
+        {
+          check: 'acceptance' as const,
+          passes: false,
+          title: 'Acceptance limit',
+          message:
+            'With the absorber the peak acceleration is 0.06 m/s², above the limit of 0.05 m/s² (Office floor).',
+          details: [],
+        },
+      ],
+      reason: 'Tenant accepts the residual response until the second unit is fitted.',
+      at: '2026-01-05T10:00:00.000Z',
+      byName: 'Field engineer',
+    }
+    const { company, contact } = await customerWithContact(sales)
+    const sizing = sizingSummary(company.id, { designAcknowledgement: ack })
+    sizings.put(sizing)
+    const draft = await sales.post('/api/quotes').send({
+      sizingId: sizing.id,
+      contactId: contact.id,
+      validUntil: daysFromNow(t, 30),
+      lines: [{ kind: 'unit', productLineId: ids.unit('FLR-S'), quantity: 1 }],
+    })
+    const id = draft.body.id
+    const refused = await sales.post(`/api/quotes/${id}/send`)
+    expect(refused.status).toBe(422)
+    expect(refused.body.error).toMatchObject({
+      code: 'design-checks-unconfirmed',
+      details: [{ check: 'acceptance', title: 'Acceptance limit' }],
+    })
+    const sent = await sales.post(`/api/quotes/${id}/send`).send({ confirmDesignChecks: true })
+    expect(sent.body.designConfirmation).toMatchObject({ byName: expect.stringMatching(/^sales /) })
+    const mail = await mailTo(t, contact.email)
+    expect(mail.text).toContain('Design checks not met')
+    const rev = await sales.post(`/api/quotes/${id}/revise`)
+    expect(rev.body.designConfirmation).toBeNull()
+    expect(rev.body.sizing.designAcknowledgement).toEqual(ack)
+    expect((await sales.post(`/api/quotes/${rev.body.id}/send`)).status).toBe(422)
   })
 })
 

@@ -9,11 +9,19 @@ import request, { type Agent } from 'supertest'
 import { toModelInput } from '../../shared/sizing/model-input'
 import { makeTestApp, type TestApp } from '../helpers/app'
 import { signedIn } from '../helpers/factories'
-import { buildingDefinition, makeCompany, siteBody, sizingInput } from '../helpers/records'
+import { seedCatalogue } from '../../seed/seed-catalogue'
+import {
+  PASSING_CHOICES,
+  buildingDefinition,
+  makeCompany,
+  siteBody,
+  sizingInput,
+} from '../helpers/records'
 
 let t: TestApp
 beforeAll(async () => {
   t = await makeTestApp()
+  await seedCatalogue(t.services)
 })
 afterAll(() => t.close())
 
@@ -232,13 +240,18 @@ describe('sizings', () => {
     const { agent } = await signedIn(t, 'engineer')
     const { agent: sales } = await signedIn(t, 'sales')
     const { site, model } = await siteAndModel(agent)
-    const s = (await agent.post('/api/sizings').send({ input: sizingInput(site.id, model.id) }))
-      .body
+    const s = (
+      await agent
+        .post('/api/sizings')
+        .send({ input: sizingInput(site.id, model.id, PASSING_CHOICES) })
+    ).body
+    expect(s.designChecks.map((c: { passes: boolean }) => c.passes)).toEqual([true, true, true])
     expect((await sales.get(`/api/sizings/${s.id}`)).status).toBe(404)
     const sub = await agent
       .post(`/api/sizings/${s.id}/submit`)
       .send({ revision: 1, note: 'Roof unit, access by the plant room' })
     expect(sub.body.state).toBe('submitted')
+    expect(sub.body.acknowledgement).toBeNull()
     const seen = await sales.get(`/api/sizings/${s.id}`)
     expect(seen.status).toBe(200)
     expect(seen.body.handoverNote).toBe('Roof unit, access by the plant room')

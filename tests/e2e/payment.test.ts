@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, expect, it } from 'vitest'
 import type { Browser } from 'puppeteer-core'
 import { TEST_CARDS } from '../../fakes/payments'
-import { PASSWORD, makeUser } from '../helpers/factories'
+import { PASSWORD, makeUser, signedIn } from '../helpers/factories'
 import { launchBrowser, newPage, shot, signInAs } from '../helpers/browser'
 import { makePaymentRig, type PaymentRig } from '../api/payments-rig'
 
@@ -16,7 +16,7 @@ afterAll(async () => {
   await rig?.close()
 })
 
-it('lets a customer accept a quote, pay on the payment page and see the order confirmed', async () => {
+it('lets a customer accept a quote, pay on the payment page and see the order confirmed; double taps change it once', async () => {
   const { quote, company } = await rig.sentQuote()
   const customer = await makeUser(rig.t, 'customer', { companyId: company.id })
   const page = await newPage({ browser })
@@ -25,13 +25,23 @@ it('lets a customer accept a quote, pay on the payment page and see the order co
   await page.locator('#accept-name').fill('Dana Whitlock')
   await page.locator('#accept-po').fill('PO-88120')
   await shot(page, 'payment-1-accept')
-  await page.locator('button[type="submit"]').click()
-  await page.locator('button ::-p-text(Pay)').click()
+  await page.locator('button[type="submit"]').click({ count: 2 })
+  await page.waitForSelector('::-p-text(Accepted by Dana Whitlock)')
+  await page.locator('button:not([disabled]) ::-p-text(Pay)').click({ count: 2 })
   await page.waitForSelector('#card')
+  const { agent: sales } = await signedIn(rig.t, 'sales')
+  const events = (await sales.get(`/api/quotes/${quote.id}`)).body.events as { toState: string }[]
+  expect(events.filter((e) => e.toState === 'accepted')).toHaveLength(1)
+  const [sessions] = await rig.t.ds.query(
+    'SELECT COUNT(*) AS n FROM payment_sessions WHERE quoteId = ?',
+    [quote.id],
+  )
+  expect(Number(sessions.n)).toBe(1)
   await shot(page, 'payment-2-pay-page')
   await page.locator('#card').fill(TEST_CARDS.succeeds)
   await Promise.all([page.waitForNavigation(), page.locator('button[value="pay"]').click()])
   await page.waitForSelector('::-p-text(Payment received)')
+  expect(await page.$$('.p-toast-message-error')).toHaveLength(0)
   expect(page.url()).toContain('/portal/payment/done')
   await shot(page, 'payment-3-confirmed')
   const mailbox = (await (await fetch(`${rig.t.mail.httpUrl}/api/messages`)).json()) as {

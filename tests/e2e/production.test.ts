@@ -15,8 +15,9 @@ afterAll(async () => {
   await rig?.close()
 })
 
+/** Moves one step; the button is off for a moment after each answer, so wait until it is on. */
 async function move(page: Page, to: string) {
-  await page.locator(`button ::-p-text(Move to ${to})`).click()
+  await page.locator(`button:not([disabled]) ::-p-text(Move to ${to})`).click()
   await page.waitForSelector(`::-p-text(→ ${to})`)
 }
 
@@ -36,20 +37,20 @@ it('takes a paid order through build and tuning to shipping, and the customer se
   const wo = (await rig.t.services.production.list()).find((w) => w.quoteId === quote.id)!
   expect(links).toContain(`/work-orders/${wo.id}`)
   await page.goto(`${rig.appUrl}/work-orders/${wo.id}`)
-  // a double tap on a move makes one step and no error
-  const first = await page.waitForSelector('button ::-p-text(Move to in-build)')
-  await first!.click({ count: 2 })
+  // A double tap moves one step: the second tap must not take the next step's button.
+  await page.locator('button:not([disabled]) ::-p-text(Move to in-build)').click({ count: 2 })
   await page.waitForSelector('::-p-text(→ in-build)')
-  await move(page, 'tuning')
-  const moves = (await rig.t.services.production.get(wo.id)).events
-  expect(moves.filter((e) => e.toState === 'in-build')).toHaveLength(1)
+  await page.waitForSelector('button:not([disabled]) ::-p-text(Move to tuning)')
   expect(await page.$$('.p-toast-message-error')).toHaveLength(0)
+  const once = (await rig.t.services.production.get(wo.id)).events
+  expect(once.map((e) => e.toState)).toEqual(['in-build'])
+  await move(page, 'tuning')
   // the measured frequency typed as on the workshop floor: a decimal comma and its unit
   const target = wo.specification.targetFrequencyHz
   const typed = Number(target.toFixed(2))
   await enter(page, '#measured-hz', `${String(typed).replace('.', ',')} Hz`)
   await page.waitForSelector(`::-p-text(= ${typed} Hz)`)
-  await page.locator('button ::-p-text(Record measurement)').click()
+  await page.locator('button:not([disabled]) ::-p-text(Record measurement)').click()
   await page.waitForSelector('::-p-text(within tolerance)')
   const tuned = await rig.t.services.production.get(wo.id)
   expect(tuned.latestTuning?.measuredHz).toBe(typed)

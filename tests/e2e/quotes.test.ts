@@ -22,8 +22,8 @@ beforeAll(async () => {
   rig = await startBrowserRig()
   const s = rig.t.services
   const { companyIds } = await seedPeople(s)
-  await seedSizings(s, { companyIds })
   await seedCatalogue(s)
+  await seedSizings(s, { companyIds })
   const admin = toAuthUser((await s.users.findByEmail('admin@quellnode.test'))!)
   const [demo] = await s.sizings.list(admin, { search: DEMO_OFFICE_SIZING })
   sizingId = demo!.id

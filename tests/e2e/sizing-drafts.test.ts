@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import request from 'supertest'
 import type { Page } from 'puppeteer-core'
 import { seedPeople } from '../../seed/seed-people'
+import { seedCatalogue } from '../../seed/seed-catalogue'
 import { DEMO_USERS } from '../../seed/demo-people'
 import {
   DEMO_FOOTBRIDGE_SITE,
@@ -31,6 +32,7 @@ let rig: BrowserRig
 beforeAll(async () => {
   rig = await startBrowserRig()
   const { companyIds } = await seedPeople(rig.t.services)
+  await seedCatalogue(rig.t.services)
   await seedSizings(rig.t.services, { companyIds })
   await seedSizings(rig.t.services, { companyIds })
 })

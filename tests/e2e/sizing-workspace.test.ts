@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { makeUser, PASSWORD } from '../helpers/factories'
+import { seedCatalogue } from '../../seed/seed-catalogue'
+import { makeUser, PASSWORD, signedIn } from '../helpers/factories'
 import { makeCompany } from '../helpers/records'
 import {
   choose,
@@ -86,13 +87,65 @@ describe.each([
     expect(stored.reduction?.toFixed(2)).toBe(preview)
     expect(stored.absorber.mass).toBeCloseTo(0.02 * stored.effectiveMass, 6)
     await shot(page, `sizing-${tag}-6-saved`)
+    // A 10 t class absorber: no catalogue unit carries it, so the handover asks for a reason.
+    await waitForText(page, 'Catalogue unit: fails.')
     await page.locator('#handover-note').fill('Roof access by the east stair.')
     await page.locator('::-p-aria([name="Submit to sales"][role="button"])').click()
+    await page.waitForSelector('#handover-reason-error')
+    expect(await page.$eval('#handover-reason-error', (e) => e.textContent)).toBe(
+      'say in a sentence why the design is handed over anyway',
+    )
+    expect((await rig.t.services.sizings.summary(id)).state).toBe('draft')
+    await page.locator('#handover-reason').fill(REASON)
+    await shot(page, `sizing-${tag}-6b-reason`)
+    await page.locator('::-p-aria([name="Submit to sales"][role="button"])').click()
     await waitForText(page, 'Handed over to sales')
+    await waitForText(page, `Reason given: ${REASON}`)
     await page.waitForSelector('::-p-aria([name="Reopen to revise"][role="button"])')
     expect((await rig.t.services.sizings.summary(id)).state).toBe('submitted')
     expect(await page.$eval('#sizing-title', (e) => (e as HTMLInputElement).disabled)).toBe(true)
     await shot(page, `sizing-${tag}-7-handed-over`)
     await page.browserContext().close()
+    if (tag === 'portrait') await quoteScreenShowsAcknowledgement(id, company.id)
   })
 })
+
+const REASON = 'Custom frame absorber designed with the structural engineer of record.'
+
+/** Sales open a quote of the sizing, read the acknowledgement and confirm it to send. */
+async function quoteScreenShowsAcknowledgement(sizingId: number, companyId: number) {
+  await seedCatalogue(rig.t.services)
+  const contact = await rig.t.services.customers.addContact(companyId, {
+    name: 'Priya Nair',
+    email: `priya-${sizingId}@client.test`,
+    phone: '',
+    position: 'Estates manager',
+  })
+  const { agent, user } = await signedIn(rig.t, 'sales')
+  const options = (await agent.get('/api/catalogue/options')).body as { id: number }[]
+  const quote = await agent.post('/api/quotes').send({
+    sizingId,
+    contactId: contact.id,
+    validUntil: new Date(Date.now() + 20 * 86_400_000).toISOString().slice(0, 10),
+    lines: [{ kind: 'option', optionId: options[0]!.id, quantity: 1 }],
+  })
+  expect(quote.status).toBe(201)
+  const page = await newPage(rig)
+  await signInAs(page, rig.url, user.email, PASSWORD)
+  await page.goto(`${rig.url}/quotes/${quote.body.id}`)
+  await waitForText(page, 'Design checks not met')
+  await waitForText(page, `Reason given: ${REASON}`)
+  await page.locator('::-p-aria([name="Send to customer"][role="button"])').click({ count: 2 })
+  await page.waitForSelector('::-p-text(Send a design that fails checks?)')
+  await shot(page, 'sizing-portrait-8-quote-confirm')
+  await page.locator('::-p-aria([name="Confirm and send"][role="button"])').click({ count: 2 })
+  await page.waitForSelector('[data-state="sent"]')
+  await waitForText(page, 'before sending')
+  await shot(page, 'sizing-portrait-9-quote-sent')
+  expect(await page.$$('.p-toast-message-error')).toHaveLength(0)
+  const events = (await agent.get(`/api/quotes/${quote.body.id}`)).body.events as {
+    toState: string
+  }[]
+  expect(events.filter((e) => e.toState === 'sent')).toHaveLength(1)
+  await page.browserContext().close()
+}

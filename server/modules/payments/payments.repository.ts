@@ -35,9 +35,19 @@ export function paymentsRepository(ds: DataSource) {
       currency: string
       createdById: number
     }) {
-      await sessions.save(sessions.create({ ...s, status: 'open' }))
+      // A session the payment service handed out twice (same idempotency key) is stored once.
+      await sessions
+        .createQueryBuilder()
+        .insert()
+        .into(PaymentSessionEntity)
+        .values({ ...s, status: 'open' })
+        .orIgnore()
+        .execute()
     },
     findSession: (sessionId: string) => sessions.findOneBy({ sessionId }),
+    /** The quote's most recent checkout session, whatever its status. */
+    latestSession: (quoteId: number) =>
+      sessions.findOne({ where: { quoteId }, order: { id: 'DESC' } }),
     async setSessionStatus(sessionId: string, from: SessionStatus, to: SessionStatus) {
       await sessions.update({ sessionId, status: from }, { status: to })
     },

@@ -37,12 +37,17 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
       method: 'post',
       path: '/api/quotes/:id/checkout',
       tag,
-      summary: 'Start paying an accepted quote; answers the hosted payment page URL',
+      summary:
+        'Start paying an accepted quote; answers the hosted payment page URL (201), the still open one on a repeat, or a paid quote as paid (200)',
       access: ['customer'],
       params: IdParamSchema,
       status: 201,
     },
-    ({ user, params }) => payments.checkout(user, params.id),
+    async ({ user, params, res }) => {
+      const { created, ...answer } = await payments.checkout(user, params.id)
+      res.status(created ? 201 : 200).json(answer)
+      return undefined
+    },
   )
   route(
     router,

@@ -21,6 +21,14 @@ export interface PaymentsDeps {
   workOrderState: (quoteId: number) => Promise<string | null>
 }
 
+/** Where the customer goes to pay, or null when the quote is paid already. */
+export interface CheckoutAnswer {
+  created: boolean
+  state: string
+  sessionId: string | null
+  url: string | null
+}
+
 const orderView = (o: OrderRecord) => ({
   id: o.id,
   number: orderNumber(o.id, o.paidAt),
@@ -95,12 +103,27 @@ export function paymentsService(deps: PaymentsDeps) {
   }
 
   return {
-    /** A checkout session for the quote's total as stored; the browser sends no amount. */
-    async checkout(user: AuthUser, quoteId: number) {
+    /**
+     * A checkout session for the quote's total as stored; the browser sends no amount. A repeat
+     * hands back the caller's session while it is still open, and a paid quote answers as paid
+     * (`created` false: nothing new was made).
+     */
+    async checkout(user: AuthUser, quoteId: number): Promise<CheckoutAnswer> {
       const q = await payableQuote(user, quoteId)
-      if (q.state === 'paid') throw new AppError('quote-paid', 'This quote is paid already.', 409)
+      if (q.state === 'paid') return { created: false, state: q.state, sessionId: null, url: null }
       if (q.state !== 'accepted')
         throw new AppError('quote-not-accepted', 'Accept the quote before paying.', 409)
+      const last = await deps.payments.latestSession(q.id)
+      if (
+        last &&
+        last.status === 'open' &&
+        last.createdById === user.id &&
+        last.amount === q.total
+      ) {
+        const s = await deps.gateway.retrieveCheckout(last.sessionId).catch(() => null)
+        if (s?.status === 'open' && s.url)
+          return { created: false, state: q.state, sessionId: s.id, url: s.url }
+      }
       const session = await deps.gateway.createCheckout({
         quoteId: q.id,
         reference: q.reference,
@@ -109,6 +132,8 @@ export function paymentsService(deps: PaymentsDeps) {
         customerEmail: user.email,
         successUrl: `${deps.publicUrl}/portal/payment/done?session_id={CHECKOUT_SESSION_ID}&quote=${q.id}`,
         cancelUrl: `${deps.publicUrl}/portal/quotes/${q.id}?payment=cancelled`,
+        // Racing requests after the same last session share one key, hence one new session.
+        idempotencyKey: `checkout-${q.id}-${user.id}-after-${last?.sessionId ?? 'none'}`,
       })
       await deps.payments.saveSession({
         sessionId: session.id,
@@ -117,7 +142,7 @@ export function paymentsService(deps: PaymentsDeps) {
         currency: q.currency,
         createdById: user.id,
       })
-      return { sessionId: session.id, url: session.url }
+      return { created: true, state: q.state, sessionId: session.id, url: session.url }
     },
 
     /** Verifies and applies one webhook event; every outcome but a bad signature is a 200. */

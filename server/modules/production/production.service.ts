@@ -10,6 +10,11 @@ import { buildSpecification, specificationHash } from './specification'
 import { inlineFontCss, type PdfRenderer } from '../../integrations/pdf'
 import { workOrderHtml } from './work-order-html'
 
+const moved = (state: string) =>
+  new AppError('state-changed', `Someone else moved this work order to ${state}; reload it.`, 409, {
+    state,
+  })
+
 const SYSTEM: AuthUser = {
   id: 0,
   email: '',
@@ -63,21 +68,28 @@ export function productionService(deps: {
       })
     },
 
+    /**
+     * One step of the build flow. A move to the state the work order is in already (a repeated
+     * tap) answers it as it is; a move from a state it has left is a 409.
+     */
     async move(user: AuthUser, id: number, change: StatusChange) {
       const w = await get(id)
+      if (w.state === change.to) return w
+      if (change.from && change.from !== w.state) throw moved(w.state)
       const check = checkStep(w.state, change.to, {
         note: change.note,
         tuningPasses: w.latestTuning?.passes ?? null,
       })
       if (!check.ok) throw new AppError(check.code, check.message, 409)
-      if (
-        !(await deps.repo.move(id, w.state, change.to, {
-          actorId: user.id,
-          at: deps.now(),
-          note: change.note,
-        }))
-      ) {
-        throw new AppError('state-changed', 'Someone else moved this work order; reload it.', 409)
+      const done = await deps.repo.move(id, w.state, change.to, {
+        actorId: user.id,
+        at: deps.now(),
+        note: change.note,
+      })
+      if (!done) {
+        const now = await get(id)
+        if (now.state === change.to) return now
+        throw moved(now.state)
       }
       if (change.to === 'shipped')
         await notifyShipped(w.companyId, w.specification.quoteReference, w.number)

@@ -33,11 +33,27 @@ export function buildSpecification(q: Quote): BuildSpecification {
     options: q.lines
       .filter((l) => l.kind !== 'unit')
       .map((l) => `${l.quantity} × ${l.description}`),
+    designAcknowledgement: q.sizing.designAcknowledgement ?? null,
+    designConfirmation: q.designConfirmation,
   }
 }
 
-/** SHA-256 of the specification's canonical JSON (keys sorted). */
+/** JSON with every object's keys sorted, at every depth: the same content, the same text. */
+function canonical(value: unknown): string {
+  if (Array.isArray(value)) return `[${value.map(canonical).join(',')}]`
+  if (value && typeof value === 'object') {
+    const entries = Object.entries(value as Record<string, unknown>)
+      .filter(([, v]) => v !== undefined)
+      .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))
+    return `{${entries.map(([k, v]) => `${JSON.stringify(k)}:${canonical(v)}`).join(',')}}`
+  }
+  return JSON.stringify(value)
+}
+
+/**
+ * SHA-256 of the specification's canonical JSON (keys sorted at every depth, so the nested
+ * acknowledgement is covered too; a flat specification hashes as it always did).
+ */
 export function specificationHash(spec: BuildSpecification) {
-  const canonical = JSON.stringify(spec, Object.keys(spec).sort())
-  return createHash('sha256').update(canonical).digest('hex')
+  return createHash('sha256').update(canonical(spec)).digest('hex')
 }

@@ -1,4 +1,5 @@
 import { esc, sig } from '../quotes/pdf/html'
+import { ACKNOWLEDGEMENT_CSS, acknowledgementHtml } from '../quotes/pdf/acknowledgement-html'
 import type { BuildSpecification } from '../../../shared/schemas/work-order'
 
 interface Printable {
@@ -32,10 +33,11 @@ body{font-family:Lato,sans-serif;font-size:11pt;color:#1b1f1a;margin:0}
 h1{color:#0f4c5c;margin:0 0 4mm}th{text-align:left;padding:2mm 6mm 2mm 0;vertical-align:top}td{padding:2mm 0}
 table{border-collapse:collapse;width:100%}tr{border-bottom:0.3mm solid #d9ddd6}
 .box{border:0.4mm solid #1b1f1a;height:14mm;margin:2mm 0 5mm}.caution{border-left:2mm solid #b86e00;background:#fff6e6;padding:3mm 4mm;margin-top:6mm}
-.hash{font-family:monospace;font-size:8pt;word-break:break-all}</style></head><body>
+.hash{font-family:monospace;font-size:8pt;word-break:break-all}${ACKNOWLEDGEMENT_CSS}</style></head><body>
 <h1>Work order ${esc(w.number)}</h1>
 <p>Due ${esc(w.dueDate)} · state ${esc(w.state)}</p>
 <table><tbody>${rows.map(([k, v]) => `<tr><th>${esc(k)}</th><td>${esc(v)}</td></tr>`).join('')}</tbody></table>
+${acknowledgementHtml(s.designAcknowledgement, { names: true, confirmedBy: s.designConfirmation })}
 <h2>Tuning record</h2><p>Measured frequency (Hz), tuned by, date:</p><div class="box"></div>
 <p class="hash">Specification hash ${esc(w.specHash)}</p>
 <p class="caution">Build to this frozen specification only. Fit end stops at the maximum stroke and the

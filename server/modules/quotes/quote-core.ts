@@ -7,7 +7,7 @@ import type { CustomersService } from '../customers/customers.service'
 import { priceLines, totalsOf } from './price-lines'
 import type { QuoteRow } from './quote-rows'
 import { dayOf, hasLapsed } from './quote-states'
-import { quoteOf } from './quote-view'
+import { forCustomer, quoteOf } from './quote-view'
 import type { QuotesRepository } from './quotes.repository'
 import type { SizingSource } from './sizing-source'
 
@@ -57,7 +57,8 @@ export function quotesCore(deps: QuotesDeps) {
 
   async function view(user: AuthUser, r: QuoteRow): Promise<Quote> {
     const latest = (await repo.latestRevision(r.number)) === r.revision
-    return quoteOf(r, latest, isCustomer(user) ? [] : await repo.events(r.id))
+    if (isCustomer(user)) return forCustomer(quoteOf(r, latest, []))
+    return quoteOf(r, latest, await repo.events(r.id))
   }
 
   async function submittedSizing(id: number): Promise<SizingSummary> {

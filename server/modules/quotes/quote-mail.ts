@@ -17,6 +17,12 @@ export function quoteMail(q: Quote, pdf: Buffer, link: string, supplierName: str
     `You can read and accept it in the customer portal:`,
     link,
     '',
+    ...(q.sizing.designAcknowledgement
+      ? [
+          'Please read the section "Design checks not met" in the quotation: the design does not meet every check, and the quotation says which and why it was accepted.',
+          '',
+        ]
+      : []),
     'The sizing it rests on is a design aid: the final design, the anchorage of the absorber mass and its fall restraint are for a licensed engineer under the local codes.',
     '',
     `Kind regards,`,

@@ -3,11 +3,15 @@ import type { QuoteEntity } from './quote.entity'
 import type { QuoteEventEntity } from './quote-event.entity'
 
 /** A quote revision as the repository hands it out: plain data, dates as Date. */
-export type QuoteRow = Omit<QuoteEntity, 'company' | 'contact' | 'createdBy' | 'lines'> & {
+export type QuoteRow = Omit<
+  QuoteEntity,
+  'company' | 'contact' | 'createdBy' | 'lines' | 'designConfirmedBy'
+> & {
   companyName: string
   contactName: string | null
   contactEmail: string | null
   createdByName: string
+  designConfirmedByName: string | null
   lines: QuoteLine[]
 }
 
@@ -37,13 +41,14 @@ export type QuoteWrite = Pick<
 > & { lines: LineWrite[] }
 
 export function toRow(e: QuoteEntity): QuoteRow {
-  const { company, contact, createdBy, lines, ...rest } = e
+  const { company, contact, createdBy, lines, designConfirmedBy, ...rest } = e
   return {
     ...rest,
     companyName: company?.name ?? '',
     contactName: contact?.name ?? null,
     contactEmail: contact?.email ?? null,
     createdByName: createdBy?.name ?? '',
+    designConfirmedByName: designConfirmedBy?.name ?? null,
     lines: (lines ?? [])
       .sort((a, b) => a.position - b.position)
       .map((l) => ({

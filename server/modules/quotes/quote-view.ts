@@ -48,6 +48,26 @@ export function quoteOf(r: QuoteRow, latest: boolean, events: QuoteEvent[]): Quo
     acceptedName: r.acceptedName,
     purchaseOrder: r.purchaseOrder,
     paidAt: iso(r.paidAt),
+    designConfirmation: r.designConfirmedAt
+      ? { at: r.designConfirmedAt.toISOString(), byName: r.designConfirmedByName ?? '' }
+      : null,
     events,
+  }
+}
+
+/**
+ * What a customer reads of a quote: the acknowledgement of failed design checks stays (which
+ * limit is not met and why it was accepted), the internal handover note and the name behind
+ * the acknowledgement do not.
+ */
+export function forCustomer(q: Quote): Quote {
+  const ack = q.sizing.designAcknowledgement
+  return {
+    ...q,
+    sizing: {
+      ...q.sizing,
+      handoverNote: '',
+      designAcknowledgement: ack ? { ...ack, byName: null } : ack,
+    },
   }
 }

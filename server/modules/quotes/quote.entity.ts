@@ -120,6 +120,17 @@ export class QuoteEntity {
   @Column('datetime', { precision: 3, nullable: true })
   paidAt: Date | null
 
+  /** Sales confirmed, when sending, the failed design checks the sizing was handed over with. */
+  @Column('int', { nullable: true })
+  designConfirmedById: number | null
+
+  @ManyToOne(() => UserEntity, { nullable: true, onDelete: 'SET NULL' })
+  @JoinColumn({ name: 'designConfirmedById' })
+  designConfirmedBy: Relation<UserEntity> | null
+
+  @Column('datetime', { precision: 3, nullable: true })
+  designConfirmedAt: Date | null
+
   @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
   createdAt: Date
 

@@ -13,11 +13,26 @@ export interface Transition {
   note?: string
   /** Columns set together with the state (sentAt, acceptedAt, …). */
   patch?: Partial<
-    Pick<QuoteEntity, 'sentAt' | 'acceptedAt' | 'acceptedName' | 'purchaseOrder' | 'paidAt'>
+    Pick<
+      QuoteEntity,
+      | 'sentAt'
+      | 'acceptedAt'
+      | 'acceptedName'
+      | 'purchaseOrder'
+      | 'paidAt'
+      | 'designConfirmedById'
+      | 'designConfirmedAt'
+    >
   >
 }
 
-const relations = { company: true, contact: true, createdBy: true, lines: true } as const
+const relations = {
+  company: true,
+  contact: true,
+  createdBy: true,
+  designConfirmedBy: true,
+  lines: true,
+} as const
 
 function linesOf(quoteId: number, lines: LineWrite[]) {
   return lines.map((l, i) => ({ ...l, quoteId, position: i + 1 }))
@@ -126,6 +141,19 @@ export function quotesRepository(ds: DataSource) {
     },
     /** Moves a quote between states and records who and when; false when it was not in `from`. */
     transition: (id: number, t: Transition) => ds.transaction((m) => transitionIn(m, id, t)),
+    /**
+     * Runs `work` holding the quote's row lock, so a concurrent caller waits and then sees the
+     * outcome. `work` must change this quote only through the transition it is handed.
+     */
+    exclusive<T>(
+      id: number,
+      work: (transition: (t: Transition) => Promise<boolean>) => Promise<T>,
+    ) {
+      return ds.transaction(async (m) => {
+        await m.findOne(QuoteEntity, { where: { id }, lock: { mode: 'pessimistic_write' } })
+        return work((t) => transitionIn(m, id, t))
+      })
+    },
     async events(quoteId: number) {
       const rows = await events.find({
         where: { quoteId },

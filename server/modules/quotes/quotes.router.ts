@@ -6,6 +6,7 @@ import {
   QuoteDraftSchema,
   QuoteListQuerySchema,
   QuoteNoteSchema,
+  QuoteSendSchema,
 } from '../../../shared/schemas/quote'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
@@ -84,10 +85,12 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       ...one,
       method: 'post',
       path: '/api/quotes/:id/send',
-      summary: 'Mail the PDF and the portal link to the contact; the quote becomes sent',
+      summary:
+        'Mail the PDF and the portal link to the contact; the quote becomes sent (a repeat answers it as sent). A sizing handed over with failed checks needs confirmDesignChecks (422 design-checks-unconfirmed)',
       access: SELLERS,
+      body: QuoteSendSchema,
     },
-    ({ user, params }) => quotes.send(user, params.id),
+    ({ user, params, body }) => quotes.send(user, params.id, body),
   )
   route(
     router,

@@ -8,15 +8,13 @@ import { CUSTOMER_VISIBLE_STATES } from '../../../shared/schemas/quote'
 import { AppError } from '../../http/app-error'
 import type { Mailer } from '../../integrations/mail'
 import type { PdfRenderer } from '../../integrations/pdf'
-import { inlineFontCss } from '../../integrations/pdf'
 import type { AuthUser } from '../../middleware/authenticate'
 import type { CompaniesRepository } from '../companies/companies.repository'
-import { quoteFooter, quoteHtml, type Supplier } from './pdf/quote-html'
 import { expireDue, isCustomer, quotesCore, type QuotesDeps } from './quote-core'
-import { portalLink, quoteMail } from './quote-mail'
+import { quoteSending } from './quote-send'
 import { insertNumbered } from './quote-numbers'
 import type { QuoteRow } from './quote-rows'
-import { REVISABLE, dayOf, sourcesOf } from './quote-states'
+import { REVISABLE, sourcesOf } from './quote-states'
 import { referenceOf, summaryOf } from './quote-view'
 
 export interface QuotesServiceDeps extends QuotesDeps {
@@ -28,15 +26,23 @@ export interface QuotesServiceDeps extends QuotesDeps {
 
 const conflict = (code: string, message: string) => new AppError(code, message, 409)
 
+/**
+ * Whether the quote already carries this very acceptance (a repeated tap); an acceptance under
+ * another name or order number is a 409 that says who accepted it.
+ */
+function acceptedAs(r: QuoteRow, body: QuoteAccept) {
+  if (r.state !== 'accepted' && r.state !== 'paid') return false
+  if (r.acceptedName === body.name && r.purchaseOrder === body.purchaseOrder) return true
+  throw conflict(
+    'quote-accepted-already',
+    `This quote was accepted already by ${r.acceptedName ?? 'someone else'} with order ${r.purchaseOrder ?? '—'}.`,
+  )
+}
+
 export function quotesService(deps: QuotesServiceDeps) {
   const repo = deps.quotes
   const core = quotesCore(deps)
-
-  async function supplier(): Promise<Supplier> {
-    // The first supplier made (the seed's) is us; later ones are test or archive records.
-    const [s] = (await deps.companies.list('supplier')).sort((a, b) => a.id - b.id)
-    return s ? { name: s.name, address: s.address } : { name: 'Quellnode', address: '' }
-  }
+  const sending = quoteSending(deps, core)
 
   async function move(r: QuoteRow, to: QuoteRow['state'], actorId: number | null, extra = {}) {
     const ok = await repo.transition(r.id, {
@@ -47,30 +53,6 @@ export function quotesService(deps: QuotesServiceDeps) {
       ...extra,
     })
     if (!ok) throw conflict('quote-state', `A ${r.state} quote cannot become ${to}.`)
-  }
-
-  async function renderPdf(user: AuthUser, r: QuoteRow) {
-    const q = await core.view(user, r)
-    const bytes = await deps.pdf.render(quoteHtml(q, await supplier(), inlineFontCss()), {
-      footer: quoteFooter(q.reference),
-    })
-    return { quote: q, bytes, filename: `${q.reference.replace(/\s+/g, '-')}.pdf` }
-  }
-
-  /** Earlier revisions give way when a later one is sent; an accepted one blocks it. */
-  async function supersedeEarlier(r: QuoteRow, actorId: number) {
-    const earlier = (await repo.revisionsOf(r.number)).filter((x) => x.revision < r.revision)
-    if (earlier.some((x) => x.state === 'accepted' || x.state === 'paid'))
-      throw conflict('already-accepted', 'An earlier revision is accepted already.')
-    for (const x of earlier.filter((x) => x.state === 'sent')) {
-      await repo.transition(x.id, {
-        from: ['sent'],
-        to: 'withdrawn',
-        actorId,
-        at: deps.now(),
-        note: `superseded by rev ${r.revision}`,
-      })
-    }
   }
 
   return {
@@ -126,26 +108,7 @@ export function quotesService(deps: QuotesServiceDeps) {
       return core.view(user, await core.row(id))
     },
 
-    /** Renders the PDF, mails it with the portal link, then marks the quote sent. */
-    async send(user: AuthUser, id: number) {
-      const r = await core.row(id)
-      if (r.state !== 'draft') throw conflict('quote-not-draft', 'This quote was sent already.')
-      if (!r.contactEmail)
-        throw conflict('no-contact', 'Choose the customer contact to send it to.')
-      if (r.validUntil < dayOf(deps.now()))
-        throw conflict('quote-lapsed', 'The validity date has passed; change it first.')
-      await supersedeEarlier(r, user.id)
-      const pdf = await renderPdf(user, r)
-      const s = await supplier()
-      await deps.mailer.send(
-        quoteMail(pdf.quote, pdf.bytes, portalLink(deps.publicUrl(), id), s.name),
-      )
-      await move(r, 'sent', user.id, {
-        patch: { sentAt: deps.now() },
-        note: `mailed to ${r.contactEmail}`,
-      })
-      return core.view(user, await core.row(id))
-    },
+    send: sending.send,
 
     /** A new draft revision copying the lines of the latest one, with the sizing frozen anew. */
     async revise(user: AuthUser, id: number) {
@@ -166,6 +129,9 @@ export function quotesService(deps: QuotesServiceDeps) {
         acceptedName: _an,
         purchaseOrder: _po,
         paidAt: _p,
+        designConfirmedById: _dc,
+        designConfirmedAt: _da,
+        designConfirmedByName: _dn,
         companyName: _cn,
         contactName: _ct,
         contactEmail: _ce,
@@ -186,29 +152,40 @@ export function quotesService(deps: QuotesServiceDeps) {
       return core.view(user, await core.row(newId))
     },
 
+    /** A repeat of a withdrawal answers the withdrawn quote. */
     async withdraw(user: AuthUser, id: number, note: string) {
       const r = await core.row(id)
-      await move(r, 'withdrawn', user.id, { note })
+      if (r.state !== 'withdrawn') await move(r, 'withdrawn', user.id, { note })
       return core.view(user, await core.row(id))
     },
 
-    /** The customer's yes: their name and purchase order; only on the latest sent revision. */
+    /**
+     * The customer's yes: their name and purchase order; only on the latest sent revision. The
+     * same yes repeated answers the accepted quote; a different name or order number is a 409.
+     */
     async accept(user: AuthUser, id: number, body: QuoteAccept) {
       const r = await core.visibleRow(user, id)
+      if (acceptedAs(r, body)) return core.view(user, r)
       if (r.state !== 'sent')
         throw conflict('quote-state', `A ${r.state} quote cannot be accepted.`)
       if ((await repo.latestRevision(r.number)) !== r.revision)
         throw conflict('not-latest', 'A newer revision of this quote exists.')
       const at = deps.now()
-      await move(r, 'accepted', user.id, {
+      const ok = await repo.transition(id, {
+        from: ['sent'],
+        to: 'accepted',
+        actorId: user.id,
+        at,
         patch: { acceptedAt: at, acceptedName: body.name, purchaseOrder: body.purchaseOrder },
         note: `accepted by ${body.name}, PO ${body.purchaseOrder}`,
       })
-      return core.view(user, await core.row(id))
+      const now = await core.row(id)
+      if (ok || acceptedAs(now, body)) return core.view(user, now)
+      throw conflict('quote-state', `A ${now.state} quote cannot be accepted.`)
     },
 
     async pdf(user: AuthUser, id: number) {
-      const { bytes, filename } = await renderPdf(user, await core.visibleRow(user, id))
+      const { bytes, filename } = await sending.renderPdf(user, await core.visibleRow(user, id))
       return { bytes, filename }
     },
 

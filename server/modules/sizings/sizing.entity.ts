@@ -9,6 +9,7 @@ import {
   type Relation,
 } from 'typeorm'
 import type { SizingState } from '../../../shared/schemas/sizing'
+import { SizingAcknowledgementEntity } from './sizing-acknowledgement.entity'
 import { HostModelEntity } from '../models/host-model.entity'
 import { SiteEntity } from '../sites/site.entity'
 import { UserEntity } from '../users/user.entity'
@@ -53,6 +54,14 @@ export class SizingEntity {
 
   @Column('varchar', { length: 2000, default: '' })
   handoverNote: string
+
+  /** The acknowledgement of failed checks made at the current handover; null when none was needed. */
+  @Column('int', { nullable: true })
+  acknowledgementId: number | null
+
+  @ManyToOne(() => SizingAcknowledgementEntity, { nullable: true, onDelete: 'SET NULL' })
+  @JoinColumn({ name: 'acknowledgementId' })
+  acknowledgement: Relation<SizingAcknowledgementEntity> | null
 
   @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
   createdAt: Date

@@ -23,6 +23,7 @@ export interface SizingRecord {
   currentRevision: number
   submittedAt: Date | null
   handoverNote: string
+  acknowledgementId: number | null
   updatedAt: Date
 }
 
@@ -43,6 +44,7 @@ const toRecord = (s: SizingEntity): SizingRecord => ({
   currentRevision: s.currentRevision,
   submittedAt: s.submittedAt,
   handoverNote: s.handoverNote,
+  acknowledgementId: s.acknowledgementId,
   updatedAt: s.updatedAt,
 })
 
@@ -166,15 +168,12 @@ export function sizingsRepository(ds: DataSource) {
         return true
       })
     },
-    async setState(
-      id: number,
-      from: SizingState,
-      to: SizingState,
-      patch: { submittedAt?: Date | null; handoverNote?: string; revision?: number },
-    ) {
-      const { revision, ...rest } = patch
-      const where = revision ? { id, state: from, currentRevision: revision } : { id, state: from }
-      const r = await sizings.update(where, { state: to, ...rest })
+    /** Submitted → draft; the handover's acknowledgement stays on record but no longer applies. */
+    async reopen(id: number) {
+      const r = await sizings.update(
+        { id, state: 'submitted' },
+        { state: 'draft', submittedAt: null, acknowledgementId: null },
+      )
       return (r.affected ?? 0) > 0
     },
   }

@@ -80,12 +80,13 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
       method: 'post',
       path: '/api/sizings/:id/submit',
       tag,
-      summary: 'Hand the sizing over to sales',
+      summary:
+        'Hand the sizing over to sales; a design that fails its checks needs them acknowledged with a reason (422 design-checks-failed)',
       access: WRITERS,
       params: IdParamSchema,
       body: SizingSubmitSchema,
     },
-    ({ user, params, body }) => sizings.submit(user, params.id, body.revision, body.note),
+    ({ user, params, body }) => sizings.submit(user, params.id, body),
   )
   route(
     router,

@@ -11,17 +11,17 @@ import type { SizingPool } from '../../workers/pool'
 import { dotted } from '../models/check-model'
 import type { ModelsService } from '../models/models.service'
 import type { SitesService } from '../sites/sites.service'
+import { designChecks } from '../../../shared/sizing/design-checks'
+import { sizingHandover, type HandoverDeps } from './sizing-handover.service'
 import { summarise } from './sizing-summary'
-import type { SizingRecord, SizingsRepository } from './sizings.repository'
+import type { SizingRecord } from './sizings.repository'
 
-export interface SizingsDeps {
-  sizings: SizingsRepository
+export interface SizingsDeps extends HandoverDeps {
   models: ModelsService
   sites: SitesService
   /** ids of the measurement records of a site, to check the records a sizing links */
   siteRecordIds: (siteId: number) => Promise<number[]>
   pool: SizingPool
-  now: () => Date
 }
 
 /** Engineers see their own sizings and every submitted one; sales the submitted; admin all. */
@@ -85,8 +85,15 @@ export function sizingsService(deps: SizingsDeps) {
       updatedAt: s.updatedAt.toISOString(),
       revision: revision ?? s.currentRevision,
       ...rev,
+      /** judged now, by the server, on the stored result and the active catalogue */
+      designChecks: designChecks(rev.summary, await deps.catalogueUnits()),
+      acknowledgement: s.acknowledgementId
+        ? await deps.handover.acknowledgement(s.acknowledgementId)
+        : null,
     }
   }
+
+  const handover = sizingHandover(deps, { record, assertOwner, view })
 
   return {
     view,
@@ -151,35 +158,7 @@ export function sizingsService(deps: SizingsDeps) {
       )
     },
 
-    /** Hands the sizing to sales; it is read-only from then on unless reopened. */
-    async submit(user: AuthUser, id: number, revision: number, note: string) {
-      const s = await record(user, id)
-      assertOwner(user, s)
-      const ok = await deps.sizings.setState(id, 'draft', 'submitted', {
-        submittedAt: deps.now(),
-        handoverNote: note,
-        revision,
-      })
-      if (!ok)
-        throw new AppError(
-          'sizing-not-submittable',
-          'Only the latest revision of a draft can be handed over.',
-          409,
-        )
-      return view(user, id)
-    },
-
-    async reopen(user: AuthUser, id: number) {
-      const s = await record(user, id)
-      assertOwner(user, s)
-      if (!(await deps.sizings.setState(id, 'submitted', 'draft', { submittedAt: null })))
-        throw new AppError(
-          'sizing-not-submitted',
-          'Only a handed-over sizing can be reopened.',
-          409,
-        )
-      return view(user, id)
-    },
+    ...handover,
 
     /** The frozen figures a quote is made from (no role check: the quote service checks). */
     async summary(id: number): Promise<SizingSummary> {
@@ -192,6 +171,7 @@ export function sizingsService(deps: SizingsDeps) {
         submittedAt: v.submittedAt,
         handoverNote: v.handoverNote,
         ownerName: v.ownerName,
+        designAcknowledgement: v.acknowledgement,
       }
     },
   }

@@ -3,6 +3,7 @@ import type { Quote } from '../../../../shared/schemas/quote'
 import { esc, sig } from './html'
 import { responseChartSvg } from './response-chart'
 import { QUOTE_CSS } from './quote-styles'
+import { ACKNOWLEDGEMENT_CSS, acknowledgementHtml } from './acknowledgement-html'
 
 /** The engineering caution printed on every quote. */
 export const QUOTE_CAUTION =
@@ -74,13 +75,14 @@ function linesSection(q: Quote) {
 export function quoteHtml(q: Quote, supplier: Supplier, fontCss: string): string {
   const issued = (q.sentAt ?? q.createdAt).slice(0, 10)
   return `<!doctype html><html lang="en-GB"><head><meta charset="utf-8"><title>${esc(q.reference)}</title>
-<style>${fontCss}${QUOTE_CSS}</style></head><body>
+<style>${fontCss}${QUOTE_CSS}${ACKNOWLEDGEMENT_CSS}</style></head><body>
 <div class="head"><div><div class="supplier">${esc(supplier.name)}</div><div class="muted">${esc(supplier.address)}</div></div>
 <div style="text-align:right"><h1>Quotation</h1><div><strong>${esc(q.reference)}</strong></div><div class="muted">Issued ${esc(issued)}</div><div>Valid until <strong>${esc(q.validUntil)}</strong></div></div></div>
 <div class="cols"><div><h2>Customer</h2><div><strong>${esc(q.companyName)}</strong></div>
 ${q.contactName ? `<div>${esc(q.contactName)}</div><div class="muted">${esc(q.contactEmail)}</div>` : ''}</div>
 <div><h2>Site</h2><div>${esc(q.siteName)}</div><div class="muted">Sized by ${esc(q.sizing.ownerName)}</div></div></div>
 ${sizingSection(q)}
+${acknowledgementHtml(q.sizing.designAcknowledgement, { names: false })}
 ${linesSection(q)}
 <h2>Validity and terms</h2><p>This quotation is valid until ${esc(q.validUntil)}.</p>
 <div class="terms">${esc(q.terms)}</div>
