@@ -90,9 +90,9 @@ it('calibrates from step 2 of a sizing, shows model against measurement before a
   expect((await agent.get(`/api/models/${model.id}`)).body.currentRevision).toBe(2)
   expect((await agent.get(`/api/sizings/${sizing.id}`)).body.input.modelRevision).toBe(1)
   await page.locator('::-p-text(Use revision 2 for this sizing)').click()
-  await waitForText(page, 'Before: revision 1')
+  await waitForText(page, 'Model, revision 2 (in use)')
   const table = await page.$eval('[data-test="calibration-table"]', (t) => t.textContent ?? '')
-  expect(table).toContain('Model, revision 2 (in use)')
+  expect(table).toContain('Before: revision 1')
   expect(table).toMatch(/6\.29\d Hz \(0\.0 %\)/)
   await shot(page, 'measurements-3-sizing-calibrated')
 
