@@ -8,6 +8,7 @@ import {
   springSchema,
   tuningNameSchema,
 } from './model'
+import { SizingRecordLinkSchema } from './measurement'
 
 /** The host structure as the engineer edits it: a revision of a model stores exactly this. */
 export const ModelDefinitionSchema = z.object({
@@ -39,6 +40,8 @@ export const SizingInputSchema = z.object({
   siteId: z.number().int().positive(),
   modelId: z.number().int().positive(),
   modelRevision: z.number().int().positive(),
+  /** site records the engineer linked as evidence, with the peaks paired with modes */
+  records: z.array(SizingRecordLinkSchema).max(20).optional(),
   targetMode: z.number().int().min(1, 'modes are numbered from 1 (the lowest)'),
   absorberNode: z.string().min(1, 'required'),
   excitationNode: z.string().min(1, 'required'),
