@@ -11,6 +11,7 @@ import { ApiRegistry } from './http/api-registry'
 import type { Mailer } from './integrations/mail'
 import { authenticate } from './middleware/authenticate'
 import { errorHandler, notFoundHandler } from './middleware/error-handler'
+import { noStore } from './middleware/no-store'
 import { requestId } from './middleware/request-id'
 import { refuseCrossSite } from './middleware/same-origin'
 import { authRouter } from './modules/auth/auth.router'
@@ -95,6 +96,7 @@ export function buildServices(deps: AppDeps) {
   const files = fileStore(deps.config.UPLOAD_DIR)
   const sites = sitesService({ sites: sitesRepository(deps.dataSource), companies, files })
   const models = modelsService({ models: modelsRepository(deps.dataSource), sites })
+  const measurements = buildMeasurements({ dataSource: deps.dataSource, sites, models, files })
   const catalogueLines = catalogueRepository(deps.dataSource)
   const sizings = sizingsService({
     sizings: sizingsRepository(deps.dataSource),
@@ -102,10 +104,10 @@ export function buildServices(deps: AppDeps) {
     catalogueUnits: () => catalogueLines.listLines(true),
     models,
     sites,
+    siteRecordIds: async (siteId) => (await measurements.list(siteId)).map((r) => r.id),
     pool: deps.pool,
     now,
   })
-  const measurements = buildMeasurements({ dataSource: deps.dataSource, sites, models, files })
   const commerce = buildCommerce(
     { ...deps, mailer, sizingSource: deps.sizingSource ?? sizings },
     { users, companies, auth, inviteLimit: limits.invite, now },
@@ -172,6 +174,7 @@ export function createApp(deps: AppDeps, services: Services = buildServices(deps
       },
     }),
   )
+  app.use('/api', noStore)
   app.use(cookieParser())
   app.use(
     authenticate(config.JWT_SECRET, (id, version) => services.auth.loadSessionUser(id, version)),

@@ -2,6 +2,8 @@
  * Money as integer minor units (cents, pence) with a currency code; never floats. Both
  * currencies we quote in have two decimals (ISO 4217).
  */
+import { readNumber } from './number-text'
+
 export const CURRENCIES = ['EUR', 'GBP'] as const
 export type Currency = (typeof CURRENCIES)[number]
 
@@ -58,16 +60,55 @@ export function formatMoney(minor: number, currency: Currency, locale = 'en-GB')
   return new Intl.NumberFormat(locale, { style: 'currency', currency }).format(minor / 100)
 }
 
+const SYMBOLS: Record<string, Currency> = { '€': 'EUR', '£': 'GBP', EUR: 'EUR', GBP: 'GBP' }
+const CURRENCY_MARK = /^(€|£|EUR|GBP)\s*|\s*(€|£|EUR|GBP)$/gi
+
+export type ParsedMoney = { ok: true; minor: number } | { ok: false; message: string }
+
 /**
- * A typed amount ("1234.5", "1,234.50") in minor units; null when it is not an amount.
+ * A typed amount in minor units: "12,5" and "12.50" are 12.50; "1,234.50", "1.234,50" and
+ * "€ 1 234,50" are 1234.50 (decimal mark rules of readNumber). A currency sign or code is
+ * allowed when it is the field's own.
+ * @param text major units with at most two decimals
+ * @param currency the field's currency; a sign of another currency is refused
+ */
+export function readMoney(text: string, currency?: Currency): ParsedMoney {
+  let named: Currency | undefined
+  const bare = text.trim().replace(CURRENCY_MARK, (m) => {
+    named = SYMBOLS[m.trim().toUpperCase()] ?? SYMBOLS[m.trim()]
+    return ''
+  })
+  if (named && currency && named !== currency)
+    return { ok: false, message: `this amount is in ${currency}, not ${named}` }
+  const n = readNumber(bare)
+  if (!n.ok) return n
+  if (n.rest !== '') return { ok: false, message: `an amount, without "${n.rest}"` }
+  const m = /^(-?)(\d+)(?:\.(\d+))?$/.exec(n.number)
+  if (!m) return { ok: false, message: 'an amount such as 12.50' }
+  if ((m[3] ?? '').length > 2) return { ok: false, message: 'at most two decimals (whole cents)' }
+  const minor = Number(m[2]) * 100 + Number((m[3] ?? '').padEnd(2, '0'))
+  if (!Number.isSafeInteger(minor)) return { ok: false, message: 'too large an amount' }
+  return { ok: true, minor: m[1] ? -minor : minor }
+}
+
+/**
+ * A typed amount in minor units, or null when it is not an amount (see readMoney).
  * @param text major units with at most two decimals
  */
 export function parseMoney(text: string): number | null {
-  const clean = text.replace(/[,\s]/g, '')
-  const m = /^(-?)(\d+)(?:\.(\d{1,2}))?$/.exec(clean)
-  if (!m) return null
-  const minor = Number(m[2]) * 100 + Number((m[3] ?? '').padEnd(2, '0'))
-  return Number.isSafeInteger(minor) ? (m[1] ? -minor : minor) : null
+  const r = readMoney(text)
+  return r.ok ? r.minor : null
+}
+
+/**
+ * Minor units as an editable amount, without grouping ("1234.50").
+ * @param minor minor units
+ */
+export function moneyText(minor: number): string {
+  assertMinor(minor, 'amount')
+  const sign = minor < 0 ? '-' : ''
+  const abs = Math.abs(minor)
+  return `${sign}${Math.floor(abs / 100)}.${String(abs % 100).padStart(2, '0')}`
 }
 
 /**

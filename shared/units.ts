@@ -1,28 +1,43 @@
 /**
- * Typed quantities for the sizing form: "2.5 t", "35 kN/mm", "4.2 Hz", "1.5 %" become SI numbers.
+ * Typed quantities for every numeric field: "2,5 t", "35 kN/mm", "6,3 Hz", "5 %" become SI numbers.
  * mathjs parses the units; "%", "%g" and "rpm" are handled here because mathjs has no such unit.
+ * Numbers are read by `readNumber` (decimal point or comma, see shared/number-text.ts).
  * Pure: no I/O, no framework.
  */
 import { unit } from 'mathjs'
+import { readNumber } from './number-text'
 
 /** Standard gravity, m/s² (CGPM 1901), for "%g". */
 export const G = 9.80665
 
-/** What a field holds, and the SI unit its number is stored in. */
+/**
+ * What a field holds, the SI unit its number is stored in, and the range in which a value is
+ * plausible for a tuned-mass-damper job (SI). A value outside it is kept and warned about, never
+ * clamped; a field may give a narrower range of its own. The ranges are common practice.
+ */
 export const QUANTITY_KINDS = {
-  mass: { si: 'kg', base: 'kg' },
-  stiffness: { si: 'N/m', base: 'N/m' },
-  damping: { si: 'N·s/m', base: 'N s/m' },
-  frequency: { si: 'Hz', base: 'Hz' },
-  force: { si: 'N', base: 'N' },
-  displacement: { si: 'm', base: 'm' },
-  velocity: { si: 'm/s', base: 'm/s' },
-  acceleration: { si: 'm/s²', base: 'm/s^2' },
-  unbalance: { si: 'kg·m', base: 'kg m' },
-  /** rotational speed; stored in rad/s, typed as rpm, Hz (rev/s) or rad/s */
-  speed: { si: 'rad/s', base: 'rad/s' },
-  /** a fraction: "1.5 %" or "0.015" */
-  ratio: { si: '', base: '' },
+  /** node masses from a machine part to a building storey; absorbers from a few kg to tonnes */
+  mass: { si: 'kg', base: 'kg', plausible: [0.1, 1e8] },
+  stiffness: { si: 'N/m', base: 'N/m', plausible: [1, 1e12] },
+  damping: { si: 'N·s/m', base: 'N s/m', plausible: [0, 1e9] },
+  /** structures and machines handled by tuned absorbers: about 0.05 Hz (tall towers) to 500 Hz */
+  frequency: { si: 'Hz', base: 'Hz', plausible: [0.05, 500] },
+  force: { si: 'N', base: 'N', plausible: [0.01, 1e7] },
+  displacement: { si: 'm', base: 'm', plausible: [1e-7, 1] },
+  velocity: { si: 'm/s', base: 'm/s', plausible: [1e-6, 10] },
+  acceleration: { si: 'm/s²', base: 'm/s^2', plausible: [1e-5, 100] },
+  unbalance: { si: 'kg·m', base: 'kg m', plausible: [1e-6, 100] },
+  /** rotational speed; stored in rad/s, typed as rpm, Hz (rev/s) or rad/s; 10 to 20 000 rpm */
+  speed: { si: 'rad/s', base: 'rad/s', plausible: [1, 2100] },
+  /**
+   * A fraction typed as a percentage. The one rule for every percentage field: a bare number is
+   * a percentage, so "5", "5 %" and "5%" are all 5 % (stored 0.05), and "0,05" is 0.05 %.
+   */
+  percent: { si: '%', base: '', plausible: [0, 1] },
+  /** a plain dimensionless number, e.g. a frequency ratio */
+  number: { si: '', base: '', plausible: [-1e12, 1e12] },
+  /** a whole number: a count, a mode number, weeks */
+  count: { si: '', base: '', plausible: [0, 1e6] },
 } as const
 export type QuantityKind = keyof typeof QUANTITY_KINDS
 
@@ -30,62 +45,77 @@ export type ParsedQuantity = { ok: true; value: number } | { ok: false; message:
 
 const fail = (message: string): ParsedQuantity => ({ ok: false, message })
 
-function special(text: string, kind: QuantityKind): ParsedQuantity | null {
-  const m = /^([-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?)\s*(%g|%|rpm)$/i.exec(text)
-  if (!m) return null
-  const n = Number(m[1])
-  const suffix = (m[2] ?? '').toLowerCase()
-  if (suffix === '%' && kind === 'ratio') return { ok: true, value: n / 100 }
-  if (suffix === '%g' && kind === 'acceleration') return { ok: true, value: (n / 100) * G }
-  if (suffix === 'rpm' && kind === 'speed') return { ok: true, value: (n * 2 * Math.PI) / 60 }
-  return fail(`"${m[2]}" is not a unit of ${kind}`)
+function special(value: number, suffix: string, kind: QuantityKind): ParsedQuantity | null {
+  const s = suffix.toLowerCase()
+  if (s === '%g' && kind === 'acceleration') return { ok: true, value: (value / 100) * G }
+  if (s === 'rpm' && kind === 'speed') return { ok: true, value: (value * 2 * Math.PI) / 60 }
+  if (s === '%' || s === '%g' || s === 'rpm') return fail(`"${suffix}" is not a unit of ${kind}`)
+  return null
 }
 
-function viaMathjs(text: string, kind: QuantityKind): ParsedQuantity {
+function viaMathjs(number: string, rest: string, kind: QuantityKind): ParsedQuantity {
+  // so that a displayed value ("9.8 m/s²", "120 N·s/m") reads back as typed
+  const units = rest.replace(/²/g, '^2').replace(/³/g, '^3').replace(/·/g, ' ')
   let u
   try {
-    u = unit(text)
+    u = unit(`${number} ${units}`)
   } catch {
-    return fail(`not a number with a unit: "${text}"`)
+    return fail(`"${rest}" is not a unit`)
   }
-  const value = u.toNumber()
-  if (u.units.length === 0) return { ok: true, value } // a bare number is already SI
-  if (kind === 'ratio') return fail('give a plain number or a percentage, e.g. "1.5 %"')
-  if (kind === 'speed' && u.equalBase(unit('Hz'))) return { ok: true, value: value * 2 * Math.PI }
+  if (kind === 'speed' && u.equalBase(unit('Hz')))
+    return { ok: true, value: u.toNumber('Hz') * 2 * Math.PI }
   const base = QUANTITY_KINDS[kind].base
-  if (!u.equalBase(unit(base))) return fail(`"${text}" is not a ${kind} (expected e.g. ${base})`)
+  if (!u.equalBase(unit(base))) return fail(`"${rest}" is not a unit of ${kind} (e.g. ${base})`)
   return { ok: true, value: u.toNumber(base) }
+}
+
+function dimensionless(value: number, rest: string, kind: QuantityKind): ParsedQuantity {
+  if (kind === 'percent') {
+    if (rest === '' || rest === '%') return { ok: true, value: value / 100 }
+    return fail('a percentage, e.g. "5" or "5 %"')
+  }
+  if (rest !== '') return fail(`a plain number, without "${rest}"`)
+  if (kind === 'count' && !Number.isInteger(value)) return fail('a whole number')
+  return { ok: true, value }
 }
 
 /**
  * Parses a typed quantity to its SI value.
- * @param text what the user typed; a bare number is taken in the SI unit of the kind; a decimal
- *   comma is accepted when there is no point
+ * @param text what the person typed; a bare number is in the SI unit of the kind, except in a
+ *   percentage field where it is a percentage; a decimal comma reads as a point (readNumber)
  * @param kind what the field holds (see QUANTITY_KINDS for the SI unit)
  * @returns the SI value, or a message saying what is wrong
  */
 export function parseQuantity(text: string, kind: QuantityKind): ParsedQuantity {
-  let t = text.trim()
-  if (t === '') return fail('required')
-  if (!t.includes('.')) t = t.replace(',', '.')
-  // so that a displayed value ("9.8 m/s²", "120 N·s/m") reads back as typed
-  t = t.replace(/²/g, '^2').replace(/·/g, ' ')
-  const parsed = special(t, kind) ?? viaMathjs(t, kind)
+  const n = readNumber(text)
+  if (!n.ok) return n
+  const { base } = QUANTITY_KINDS[kind]
+  const parsed =
+    base === ''
+      ? dimensionless(n.value, n.rest, kind)
+      : n.rest === ''
+        ? { ok: true as const, value: n.value }
+        : (special(n.value, n.rest, kind) ?? viaMathjs(n.number, n.rest, kind))
   if (parsed.ok && !Number.isFinite(parsed.value)) return fail('must be a finite number')
   return parsed
 }
 
+/** A number with up to `digits` significant figures, exponent form when very large or small. */
+export function shortNumber(value: number, digits = 4): string {
+  const abs = Math.abs(value)
+  if (abs !== 0 && (abs >= 1e6 || abs < 1e-3))
+    return value.toExponential(digits - 1).replace(/\.?0+e/, 'e')
+  return String(Number(value.toPrecision(digits)))
+}
+
 /**
- * Short display of an SI value with its unit, 4 significant figures; ratios as percent.
+ * Short display of an SI value with its unit, 4 significant figures; percentages as percent.
  * @param value SI value
  * @param kind what it is
  */
-export function formatSi(value: number, kind: QuantityKind): string {
-  if (kind === 'ratio') return `${Number((value * 100).toPrecision(4))} %`
-  const abs = Math.abs(value)
-  const text =
-    abs !== 0 && (abs >= 1e6 || abs < 1e-3)
-      ? value.toExponential(3)
-      : String(Number(value.toPrecision(4)))
-  return `${text} ${QUANTITY_KINDS[kind].si}`
+export function formatSi(value: number, kind: QuantityKind, digits = 4): string {
+  if (kind === 'percent') return `${Number((value * 100).toPrecision(digits))} %`
+  const si = QUANTITY_KINDS[kind].si
+  const text = kind === 'count' ? String(value) : shortNumber(value, digits)
+  return si ? `${text} ${si}` : text
 }

@@ -18,3 +18,9 @@ createApp(App)
   .use(ToastService)
   .use(ConfirmationService)
   .mount('#app')
+
+// A page restored from the back-forward cache could show data of a user who has signed out
+// since; load it afresh so the session is checked again.
+window.addEventListener('pageshow', (e) => {
+  if (e.persisted) window.location.reload()
+})

@@ -22,11 +22,22 @@ export const ModelListQuerySchema = z.object({
   siteId: IdSchema.optional(),
 })
 
+export const ModelRevisionParamsSchema = z.object({
+  id: z.coerce.number().int().positive(),
+  revision: z.coerce.number().int().positive(),
+})
+
 export interface ModelRevisionInfo {
   revision: number
   reason: string
   createdAt: string
   createdByName: string
+}
+
+/** One stored revision of a model with its structure: what a sizing on that revision used. */
+export interface ModelRevision extends ModelRevisionInfo {
+  modelId: number
+  definition: z.infer<typeof ModelDefinitionSchema>
 }
 
 export interface HostModel {

@@ -42,6 +42,27 @@ export const CalibrateSchema = z.object({
 })
 export type CalibrateInput = z.infer<typeof CalibrateSchema>
 
+/**
+ * A site record taken as evidence for a sizing, with the peaks the engineer paired with host
+ * modes. The peak's frequency and damping are copied, so dropping a peak from the record later
+ * does not change what the sizing was based on.
+ */
+export const SizingRecordLinkSchema = z.object({
+  recordId: z.number().int().positive(),
+  peaks: z
+    .array(
+      z.object({
+        /** 1-based host mode the peak is taken as */
+        mode: z.number().int().min(1, 'modes are numbered from 1 (the lowest)'),
+        /** Hz */
+        frequencyHz: z.number().positive('must be above zero'),
+        dampingRatio: z.number().min(0).lt(1, 'must be below 1').nullable(),
+      }),
+    )
+    .max(20),
+})
+export type SizingRecordLink = z.infer<typeof SizingRecordLinkSchema>
+
 /** A stored record as listed. */
 export interface MeasurementRecordSummary {
   id: number

@@ -12,6 +12,7 @@ import {
   tuningNameSchema,
   type LoadKind,
 } from './model'
+import { SizingRecordLinkSchema } from './measurement'
 import { strictObject } from './strict'
 
 /** The host structure as the engineer edits it: a revision of a model stores exactly this. */
@@ -44,6 +45,8 @@ const SizingInputFields = strictObject({
   siteId: z.number().int().positive(),
   modelId: z.number().int().positive(),
   modelRevision: z.number().int().positive(),
+  /** site records the engineer linked as evidence, with the peaks paired with modes */
+  records: z.array(SizingRecordLinkSchema).max(20).optional(),
   targetMode: z.number().int().min(1, 'modes are numbered from 1 (the lowest)'),
   absorberNode: z.string().min(1, 'required'),
   /** where a single force acts (loadKind 'force') */

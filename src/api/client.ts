@@ -1,3 +1,5 @@
+import { pathWords, peopleWords } from '@/forms/messages'
+
 /** The error every API call rejects with; `details` names the fields at fault. */
 export class ApiError extends Error {
   constructor(
@@ -20,9 +22,18 @@ export function fieldErrors(e: unknown): Record<string, string> {
   if (!isApiError(e) || !Array.isArray(e.details)) return {}
   const out: Record<string, string> = {}
   for (const d of e.details as { path?: string; message?: string }[]) {
-    if (d.path && d.message) out[d.path.replace(/^body\./, '')] = d.message
+    if (d.path && d.message)
+      out[d.path.replace(/^(body|query|params)\./, '')] = peopleWords(d.message)
   }
   return out
+}
+
+/** A 400's message in people's words: "Email: not an e-mail address", never "body.email: …". */
+function readable(message: string, details: unknown): string {
+  const first = Array.isArray(details) ? (details[0] as { path?: unknown } | undefined) : undefined
+  if (!first || typeof first.path !== 'string') return message
+  const d = first as { path: string; message?: string }
+  return `${pathWords(d.path)}: ${peopleWords(d.message ?? message)}`
 }
 
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE'
@@ -48,10 +59,11 @@ export async function request<T>(method: Method, path: string, body?: unknown): 
   if (!res.ok) {
     const err = (data as { error?: { code?: string; message?: string; details?: unknown } } | null)
       ?.error
+    const message = err?.message ?? `HTTP ${res.status}`
     throw new ApiError(
       res.status,
       err?.code ?? 'http-error',
-      err?.message ?? `HTTP ${res.status}`,
+      res.status === 400 ? readable(message, err?.details) : message,
       err?.details,
     )
   }

@@ -1,25 +1,31 @@
-import { computed, ref, watch } from 'vue'
+import { computed, ref } from 'vue'
+import type { HostModel } from '@shared/schemas/host-model'
 import type { Site } from '@shared/schemas/site'
-import { fieldErrors, isApiError } from '@/api/client'
+import { isApiError } from '@/api/client'
 import { modelsApi } from '@/api/models'
 import { sitesApi } from '@/api/sites'
-import { sizingsApi, type HandoverRequest, type SizingView } from '@/api/sizings'
+import { sizingsApi, type SizingView } from '@/api/sizings'
 import { useErrorToast } from '@/composables/useErrorToast'
-import { router } from '@/router'
 import { useAuthStore } from '@/stores/auth'
 import { useSizingDraftStore } from '@/stores/sizingDraft'
-import { formOf, newDraft, toSizingInput, type SizingDraft } from '@/stores/sizing-form'
+import { formOf, newDraft, type SizingDraft } from '@/stores/sizing-form'
 
-/** Loading, saving, handing over and reopening one sizing; the draft lives in the store. */
+const keyOf = (id: number | null, siteId: number | null) =>
+  id ? `sizing-${id}` : `new-site-${siteId}`
+
+/**
+ * Opening one sizing: the server's copy, the exact model revision it was sized on, and the copy
+ * kept on this tablet when there is no connection. The draft lives in the store.
+ */
 export function useSizingWorkspace() {
   const store = useSizingDraftStore()
   const auth = useAuthStore()
   const showError = useErrorToast()
   const site = ref<Site | null>(null)
   const saved = ref<SizingView | null>(null)
+  /** the model as it is now on the server (its latest revision and the revision list) */
+  const model = ref<HostModel | null>(null)
   const loading = ref(false)
-  const busy = ref(false)
-  const errors = ref<Record<string, string>>({})
   const notice = ref('')
   const draft = computed(() => store.current)
   const readOnly = computed(() => auth.role === 'sales' || saved.value?.state === 'submitted')
@@ -28,6 +34,7 @@ export function useSizingWorkspace() {
     site.value = await sitesApi.get(siteId)
     const fresh = newDraft(siteId, new Date().toISOString())
     const latest = (await modelsApi.list(siteId))[0]
+    model.value = latest ?? null
     if (latest) {
       Object.assign(fresh, {
         modelId: latest.id,
@@ -43,151 +50,79 @@ export function useSizingWorkspace() {
 
   async function loadSaved(id: number) {
     const view = await sizingsApi.get(id)
-    const [model, s] = await Promise.all([modelsApi.get(view.modelId), sitesApi.get(view.siteId)])
+    const used = view.input.modelRevision
+    const [m, s, revision] = await Promise.all([
+      modelsApi.get(view.modelId),
+      sitesApi.get(view.siteId),
+      modelsApi.revision(view.modelId, used),
+    ])
     site.value = s
     saved.value = view
-    notice.value =
-      model.currentRevision === view.input.modelRevision
-        ? ''
-        : `The model is at revision ${model.currentRevision}; this sizing used revision ${view.input.modelRevision}. The preview uses the latest.`
+    model.value = m
     const fresh: SizingDraft = {
       ...newDraft(view.siteId, view.updatedAt),
-      key: `sizing-${id}`,
+      key: keyOf(id, null),
       sizingId: id,
       sizingRevision: view.currentRevision,
-      modelId: model.id,
-      modelRevision: model.currentRevision,
-      modelName: model.name,
-      definition: model.definition,
+      modelId: m.id,
+      modelRevision: used,
+      modelName: m.name,
+      definition: revision.definition,
       structureChanged: false,
       form: formOf(view.input),
     }
     if (view.state === 'submitted' || auth.role === 'sales') store.discard(fresh.key)
     const local = store.open(fresh)
     if (local.changed && local.sizingRevision !== view.currentRevision)
-      notice.value = `Your unsaved edits started from revision ${local.sizingRevision}; the server has revision ${view.currentRevision}. Saving will be refused: reload to start again.`
+      notice.value = `Your unsaved edits started from revision ${local.sizingRevision}; the server now has revision ${view.currentRevision}. When you save you will be asked which to keep.`
   }
 
   async function load(id: number | null, siteId: number | null) {
     loading.value = true
+    notice.value = ''
     try {
       if (id) await loadSaved(id)
       else if (siteId) await loadNew(siteId)
     } catch (e) {
-      showError(e, 'Could not open the sizing')
+      if (isApiError(e) && e.code === 'offline' && store.openKept(keyOf(id, siteId)))
+        notice.value =
+          'No connection: this is the copy kept on this tablet. Edits are kept here and sent when you are back online.'
+      else showError(e, 'Could not open the sizing')
     } finally {
       loading.value = false
     }
   }
 
-  /** Creates the model or a new revision when the structure changed; false if refused. */
-  async function saveStructure(d: SizingDraft): Promise<boolean> {
-    if (d.modelId !== null && !d.structureChanged) return true
-    if (d.modelId !== null && !d.revisionReason.trim()) {
-      errors.value = { reason: 'say why the model changed' }
-      return false
-    }
-    const m =
-      d.modelId === null
-        ? await modelsApi.create({
-            siteId: d.siteId,
-            name: d.modelName || 'Host structure',
-            definition: d.definition,
-            reason: 'first version',
-          })
-        : await modelsApi.revise(d.modelId, {
-            baseRevision: d.modelRevision ?? 1,
-            definition: d.definition,
-            reason: d.revisionReason,
-          })
-    d.modelId = m.id
-    d.modelRevision = m.currentRevision
-    d.structureChanged = false
-    d.revisionReason = ''
-    return true
-  }
-
-  async function guarded(work: (d: SizingDraft) => Promise<boolean>, failure: string) {
+  /** Moves the sizing onto another revision of its model (the engineer says so, never by itself). */
+  async function useModelRevision(revision: number) {
     const d = draft.value
-    if (!d || busy.value) return false
-    busy.value = true
-    store.syncing = true
-    errors.value = {}
-    try {
-      return await work(d)
-    } catch (e) {
-      if (isApiError(e) && e.code === 'offline') d.pendingSync = true
-      else {
-        errors.value = fieldErrors(e)
-        showError(e, failure)
-      }
-      return false
-    } finally {
-      busy.value = false
-      store.syncing = false
-    }
+    if (!d?.modelId) return
+    const r = await modelsApi.revision(d.modelId, revision)
+    store.edit((x) => {
+      x.definition = r.definition
+      x.modelRevision = r.revision
+      x.structureChanged = false
+      x.revisionReason = ''
+    })
   }
 
-  const saveModel = () => guarded(saveStructure, 'Structure not saved')
-
-  const save = () =>
-    guarded(async (d) => {
-      if (!(await saveStructure(d))) return false
-      const input = toSizingInput(d)
-      const view = d.sizingId
-        ? await sizingsApi.save(d.sizingId, d.sizingRevision ?? 1, input)
-        : await sizingsApi.create(input)
-      saved.value = view
-      Object.assign(d, { sizingRevision: view.currentRevision, changed: false, pendingSync: false })
-      if (!d.sizingId) {
-        d.sizingId = view.id
-        store.rekey(d.key, `sizing-${view.id}`)
-        await router.replace({ name: 'sizing', params: { id: view.id } })
-      }
-      return true
-    }, 'Not saved')
-
-  const submit = (h: HandoverRequest) =>
-    guarded(async (d) => {
-      if (!d.sizingId || d.changed) return false
-      const id = d.sizingId
-      saved.value = await sizingsApi.submit(id, d.sizingRevision ?? 1, h).catch(async (e) => {
-        // The checks changed on the server (the catalogue, say): show them as they are now.
-        if (isApiError(e) && e.code === 'design-checks-failed')
-          saved.value = await sizingsApi.get(id)
-        throw e
-      })
-      return true
-    }, 'Not handed over')
-
-  const reopen = () =>
-    guarded(async (d) => {
-      if (!d.sizingId) return false
-      saved.value = await sizingsApi.reopen(d.sizingId)
-      return true
-    }, 'Not reopened')
-
-  // Back online with a save that could not go through: send it now.
-  watch(
-    () => store.online,
-    (on) => {
-      if (on && draft.value?.pendingSync) void save()
-    },
-  )
+  /** Reads the model again (after a calibration or a structure save made a revision). */
+  async function refreshModel() {
+    const id = draft.value?.modelId
+    if (id) model.value = await modelsApi.get(id)
+  }
 
   return {
     site,
     saved,
+    model,
     draft,
     loading,
-    busy,
-    errors,
     notice,
     readOnly,
     load,
-    save,
-    saveModel,
-    submit,
-    reopen,
+    useModelRevision,
+    refreshModel,
   }
 }
+export type SizingWorkspace = ReturnType<typeof useSizingWorkspace>

@@ -1,6 +1,7 @@
 import { createRouter, createWebHistory, type RouteRecordRaw } from 'vue-router'
 import type { Role } from '@shared/schemas/auth'
 import { useAuthStore } from '@/stores/auth'
+import { STEP_PATTERN } from '@/views/sizing-steps'
 
 export type RouteName =
   | 'home'
@@ -121,13 +122,14 @@ const routes: (RouteRecordRaw & { name: RouteName })[] = [
     meta: { roles: ['engineer', 'sales', 'admin'], title: 'Sizings' },
   },
   {
-    path: '/sizings/new',
+    path: `/sizings/new/${STEP_PATTERN}`,
     name: 'sizing-new',
     component: () => import('@/views/SizingWorkspaceView.vue'),
+    props: true,
     meta: { roles: ['engineer', 'admin'], title: 'New sizing' },
   },
   {
-    path: '/sizings/:id(\\d+)',
+    path: `/sizings/:id(\\d+)/${STEP_PATTERN}`,
     name: 'sizing',
     component: () => import('@/views/SizingWorkspaceView.vue'),
     props: true,

@@ -1,4 +1,5 @@
-import type { TuningName } from '@shared/schemas/model'
+import type { BandInput, ExplicitTuning, TuningName } from '@shared/schemas/model'
+import type { SizingRecordLink } from '@shared/schemas/measurement'
 import type { Acceptance, ModelDefinition, Orientation, SizingInput } from '@shared/schemas/sizing'
 import { acceptancePreset } from '@shared/acceptance-presets'
 import { LOAD_PRESETS } from '@shared/load-presets'
@@ -14,10 +15,15 @@ export interface SizingForm {
   forceAmplitude: number
   loadPresetId?: string
   massRatio: number
-  tuning: TuningName
+  /** a method, or a tuning the engineer gives (frequency ratio and damping ratio) */
+  tuning: TuningName | ExplicitTuning
   orientation: Orientation
   acceptance: Acceptance
   detuningTolerance: number
+  /** Hz; absent: the band around the target mode (see the engine's default) */
+  band?: BandInput
+  /** site records linked as evidence, with their peaks paired with modes */
+  records: SizingRecordLink[]
 }
 
 /** One sizing being edited, as kept in the browser until the server has it. */
@@ -63,6 +69,7 @@ export function defaultForm(): SizingForm {
       limit: office?.limit ?? 0.049,
     },
     detuningTolerance: 0.1,
+    records: [],
   }
 }
 
@@ -93,9 +100,11 @@ export function newDraft(siteId: number, now: string): SizingDraft {
 
 /** The API's sizing input; ids not yet given by the server are 1 for the local preview only. */
 export function toSizingInput(d: SizingDraft): SizingInput {
-  const f = d.form
+  const { records, ...f } = d.form
   return {
     ...f,
+    // no links: left out, as in sizings saved before records could be linked
+    ...(records.length > 0 && { records }),
     title: f.title.trim() || 'Untitled sizing',
     siteId: d.siteId,
     modelId: d.modelId ?? 1,
@@ -103,21 +112,11 @@ export function toSizingInput(d: SizingDraft): SizingInput {
   }
 }
 
-/** The form part of a stored sizing input. */
+/**
+ * The form part of a stored sizing input: every choice the engineer made, exactly as saved, so
+ * that a reopened sizing shows what was entered (only the server's ids are left out).
+ */
 export function formOf(input: SizingInput): SizingForm {
-  const tuning = typeof input.tuning === 'string' ? input.tuning : 'optimize'
-  return {
-    title: input.title,
-    targetMode: input.targetMode,
-    absorberNode: input.absorberNode,
-    excitationNode: input.excitationNode,
-    responseNode: input.responseNode,
-    forceAmplitude: input.forceAmplitude,
-    loadPresetId: input.loadPresetId,
-    massRatio: input.massRatio,
-    tuning,
-    orientation: input.orientation,
-    acceptance: input.acceptance,
-    detuningTolerance: input.detuningTolerance,
-  }
+  const { siteId: _site, modelId: _model, modelRevision: _revision, ...form } = input
+  return { ...form, records: input.records ?? [] }
 }

@@ -1,15 +1,20 @@
 import { defineStore } from 'pinia'
 import { computed, ref, watch } from 'vue'
+import { useAuthStore } from './auth'
 import type { SizingDraft } from './sizing-form'
 
-const STORAGE_KEY = 'quellnode.sizingDrafts'
+/** Drafts are kept per user, so a tablet passed to a colleague never shows the previous user's. */
+const storageKey = (userId: number | undefined) => `quellnode.sizingDrafts.${userId ?? 'none'}`
 
 export type SyncState = 'saved' | 'unsaved' | 'offline' | 'syncing'
 
-function load(): Record<string, SizingDraft> {
+function load(key: string): Record<string, SizingDraft> {
   try {
-    const raw = localStorage.getItem(STORAGE_KEY)
-    return raw ? (JSON.parse(raw) as Record<string, SizingDraft>) : {}
+    const raw = localStorage.getItem(key)
+    const all = raw ? (JSON.parse(raw) as Record<string, SizingDraft>) : {}
+    // drafts kept before records could be linked
+    for (const d of Object.values(all)) d.form.records ??= []
+    return all
   } catch {
     return {}
   }
@@ -20,7 +25,8 @@ function load(): Record<string, SizingDraft> {
  * loses nothing; the server copy is written when the engineer saves (or when back online).
  */
 export const useSizingDraftStore = defineStore('sizingDraft', () => {
-  const drafts = ref<Record<string, SizingDraft>>(load())
+  const auth = useAuthStore()
+  const drafts = ref<Record<string, SizingDraft>>(load(storageKey(auth.user?.id)))
   const currentKey = ref<string | null>(null)
   const online = ref(typeof navigator === 'undefined' ? true : navigator.onLine)
   const syncing = ref(false)
@@ -31,10 +37,19 @@ export const useSizingDraftStore = defineStore('sizingDraft', () => {
   }
 
   watch(
+    () => auth.user?.id,
+    (id) => {
+      drafts.value = load(storageKey(id))
+      currentKey.value = null
+    },
+  )
+
+  watch(
     drafts,
     (all) => {
+      if (!auth.user) return
       try {
-        localStorage.setItem(STORAGE_KEY, JSON.stringify(all))
+        localStorage.setItem(storageKey(auth.user.id), JSON.stringify(all))
       } catch {
         // storage full or blocked: the draft still lives in memory for this page
       }
@@ -59,6 +74,13 @@ export const useSizingDraftStore = defineStore('sizingDraft', () => {
     return drafts.value[fresh.key] as SizingDraft
   }
 
+  /** Makes the copy kept on this device current (no connection); false when there is none. */
+  function openKept(key: string) {
+    if (!drafts.value[key]) return false
+    currentKey.value = key
+    return true
+  }
+
   /** Applies an edit to the current draft and marks it unsaved. */
   function edit(change: (d: SizingDraft) => void) {
     const d = current.value
@@ -81,5 +103,17 @@ export const useSizingDraftStore = defineStore('sizingDraft', () => {
     delete drafts.value[key]
   }
 
-  return { drafts, current, currentKey, online, syncing, state, open, edit, rekey, discard }
+  return {
+    drafts,
+    current,
+    currentKey,
+    online,
+    syncing,
+    state,
+    open,
+    openKept,
+    edit,
+    rekey,
+    discard,
+  }
 })

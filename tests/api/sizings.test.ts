@@ -3,8 +3,9 @@ import { mkdtemp, writeFile } from 'node:fs/promises'
 import { tmpdir } from 'node:os'
 import path from 'node:path'
 import { promisify } from 'node:util'
+import { readFileSync } from 'node:fs'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import type { Agent } from 'supertest'
+import request, { type Agent } from 'supertest'
 import { toModelInput } from '../../shared/sizing/model-input'
 import { makeTestApp, type TestApp } from '../helpers/app'
 import { signedIn } from '../helpers/factories'
@@ -69,7 +70,93 @@ describe('models', () => {
   })
 })
 
+describe('model revisions', () => {
+  it('serves an older revision with its structure, so a sizing on it can reopen as saved', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const { model } = await siteAndModel(agent)
+    const stiffer = buildingDefinition()
+    stiffer.springs[0]!.stiffness = 300e6
+    await agent
+      .post(`/api/models/${model.id}/revisions`)
+      .send({ baseRevision: 1, definition: stiffer, reason: 'stiffer ground storey' })
+    const first = await agent.get(`/api/models/${model.id}/revisions/1`)
+    expect(first.status).toBe(200)
+    expect(first.body).toMatchObject({ modelId: model.id, revision: 1, reason: 'first version' })
+    expect(first.body.definition).toEqual(buildingDefinition())
+    const second = await agent.get(`/api/models/${model.id}/revisions/2`)
+    expect(second.body.definition.springs[0].stiffness).toBe(300e6)
+    expect(second.body.createdByName).not.toBe('')
+  })
+
+  it('answers 404 for a revision or a model that does not exist, 401 and 403 to others', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const { model } = await siteAndModel(agent)
+    expect((await agent.get(`/api/models/${model.id}/revisions/7`)).status).toBe(404)
+    expect((await agent.get('/api/models/999999/revisions/1')).status).toBe(404)
+    expect((await agent.get(`/api/models/${model.id}/revisions/0`)).status).toBe(400)
+    expect((await request(t.app).get(`/api/models/${model.id}/revisions/1`)).status).toBe(401)
+    const { agent: customer } = await signedIn(t, 'customer')
+    expect((await customer.get(`/api/models/${model.id}/revisions/1`)).status).toBe(403)
+  })
+})
+
+describe('answers that depend on the user', () => {
+  it('tells the browser never to keep an API answer, signed in or not', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const me = await agent.get('/api/auth/me')
+    expect(me.status).toBe(200)
+    expect(me.headers['cache-control']).toBe('no-store')
+    const anonymous = await request(t.app).get('/api/auth/me')
+    expect(anonymous.status).toBe(401)
+    expect(anonymous.headers['cache-control']).toBe('no-store')
+    expect((await agent.get('/api/nothing-here')).headers['cache-control']).toBe('no-store')
+  })
+})
+
 describe('sizings', () => {
+  it('reopens every input exactly as saved: given tuning, band, tolerance and linked records', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const { site, model } = await siteAndModel(agent)
+    const record = await agent
+      .post(`/api/sites/${site.id}/records`)
+      .attach('record', readFileSync('seed/records/heel-drop-office-floor.csv'), 'heel.csv')
+    expect(record.status).toBe(201)
+    const input = sizingInput(site.id, model.id, {
+      tuning: { frequencyRatio: 0.95, dampingRatio: 0.08 },
+      band: { minHz: 0.5, maxHz: 2 },
+      detuningTolerance: 0.07,
+      records: [
+        { recordId: record.body.id, peaks: [{ mode: 1, frequencyHz: 1.02, dampingRatio: null }] },
+      ],
+    })
+    const saved = await agent.post('/api/sizings').send({ input })
+    expect(saved.status).toBe(201)
+    const reopened = (await agent.get(`/api/sizings/${saved.body.id}`)).body
+    expect(reopened.input).toEqual(input)
+    // the given tuning is the one solved: f = ω_a/ω_target and ζ_a as entered
+    expect(reopened.evaluation.result.absorber.frequencyRatio).toBeCloseTo(0.95, 12)
+    expect(reopened.evaluation.result.absorber.dampingRatio).toBeCloseTo(0.08, 12)
+    expect(reopened.evaluation.result.band).toEqual({ minHz: 0.5, maxHz: 2 })
+  })
+
+  it('refuses a linked record of another site, naming the field', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const { site, model } = await siteAndModel(agent)
+    const { site: other } = await siteAndModel(agent)
+    const record = await agent
+      .post(`/api/sites/${other.id}/records`)
+      .attach('record', readFileSync('seed/records/heel-drop-office-floor.csv'), 'heel.csv')
+    const input = sizingInput(site.id, model.id, {
+      records: [{ recordId: record.body.id, peaks: [] }],
+    })
+    const res = await agent.post('/api/sizings').send({ input })
+    expect(res.status).toBe(400)
+    expect(res.body.error.details[0]).toEqual({
+      path: 'body.input.records.0.recordId',
+      message: 'not a record of this site',
+    })
+  })
+
   it('solves on the server and stores the result with the reduction and the checks', async () => {
     const { agent } = await signedIn(t, 'engineer')
     const { site, model } = await siteAndModel(agent)

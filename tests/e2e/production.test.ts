@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, expect, it } from 'vitest'
 import type { Browser, Page } from 'puppeteer-core'
 import { PASSWORD, makeUser } from '../helpers/factories'
-import { launchBrowser, newPage, shot, signInAs } from '../helpers/browser'
+import { enter, launchBrowser, newPage, shot, signInAs } from '../helpers/browser'
 import { makePaymentRig, type PaymentRig } from '../api/payments-rig'
 
 let rig: PaymentRig
@@ -45,11 +45,15 @@ it('takes a paid order through build and tuning to shipping, and the customer se
   const once = (await rig.t.services.production.get(wo.id)).events
   expect(once.map((e) => e.toState)).toEqual(['in-build'])
   await move(page, 'tuning')
+  // the measured frequency typed as on the workshop floor: a decimal comma and its unit
   const target = wo.specification.targetFrequencyHz
-  await page.locator('#measured-hz').fill(target.toFixed(3))
-  await page.keyboard.press('Tab')
+  const typed = Number(target.toFixed(2))
+  await enter(page, '#measured-hz', `${String(typed).replace('.', ',')} Hz`)
+  await page.waitForSelector(`::-p-text(= ${typed} Hz)`)
   await page.locator('button:not([disabled]) ::-p-text(Record measurement)').click()
   await page.waitForSelector('::-p-text(within tolerance)')
+  const tuned = await rig.t.services.production.get(wo.id)
+  expect(tuned.latestTuning?.measuredHz).toBe(typed)
   await shot(page, 'production-2-tuned')
   await move(page, 'ready')
   await move(page, 'shipped')

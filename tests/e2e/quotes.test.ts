@@ -6,6 +6,7 @@ import { DEMO_OFFICE_SIZING, seedSizings } from '../../seed/seed-sizings'
 import { seedCatalogue } from '../../seed/seed-catalogue'
 import { DEMO_USERS } from '../../seed/demo-people'
 import {
+  enter,
   LANDSCAPE,
   newPage,
   shot,
@@ -16,6 +17,7 @@ import {
 
 let rig: BrowserRig
 let sizingId: number
+let salesUser: ReturnType<typeof toAuthUser>
 beforeAll(async () => {
   rig = await startBrowserRig()
   const s = rig.t.services
@@ -25,6 +27,7 @@ beforeAll(async () => {
   const admin = toAuthUser((await s.users.findByEmail('admin@quellnode.test'))!)
   const [demo] = await s.sizings.list(admin, { search: DEMO_OFFICE_SIZING })
   sizingId = demo!.id
+  salesUser = toAuthUser((await s.users.findByEmail('sales@quellnode.test'))!)
 })
 afterAll(async () => {
   await closePdfRenderers()
@@ -60,15 +63,31 @@ describe('sales quote the demo sizing in Chromium on a tablet', () => {
     await page.locator('li[role="option"] ::-p-text(Site tuning visit)').click()
     await clickButton(page, 'Add option')
     await page.waitForSelector('section[aria-label="Quote lines"] li:nth-child(2)')
+    // a bare number in a percentage field is a percentage: "0,05" is 0.05 %, 5 basis points
+    await enter(page, '#q-discount', '0,05')
+    await page.waitForSelector('::-p-text(= 0.05 %)')
     await shot(page, 'quotes-1-builder')
-    await clickButton(page, 'Save draft')
+    // a double tap on save makes one quote and no error
+    const save = await page.waitForSelector('::-p-xpath(//button[normalize-space(.)="Save draft"])')
+    await save!.click({ count: 2 })
     await page.waitForSelector('[data-state="draft"]')
+    const drafts = (await rig.t.services.quotes.list(salesUser, {})).filter(
+      (q) => q.sizingId === sizingId,
+    )
+    expect(drafts).toHaveLength(1)
+    expect((await rig.t.services.quotes.get(salesUser, drafts[0]!.id)).discountBp).toBe(5)
     const heading = await page.$eval('h1', (h) => h.textContent ?? '')
     const number = /TDW-\d{4}-\d{4}/.exec(heading)?.[0]
     expect(number).toBeDefined()
     expect(await page.$$eval('[aria-label="Quote lines"] tbody tr', (r) => r.length)).toBe(2)
-    await clickButton(page, 'Send to customer')
+    const send = await page.waitForSelector(
+      '::-p-xpath(//button[normalize-space(.)="Send to customer"])',
+    )
+    await send!.click({ count: 2 })
     await page.waitForSelector('[data-state="sent"]')
+    expect(await page.$$('.p-toast-message-error')).toHaveLength(0)
+    const sent = await rig.t.services.quotes.internal(drafts[0]!.id)
+    expect(sent.events.filter((e) => e.toState === 'sent')).toHaveLength(1)
     await shot(page, 'quotes-2-sent')
 
     const box = await newPage(rig, LANDSCAPE)
@@ -81,5 +100,27 @@ describe('sales quote the demo sizing in Chromium on a tablet', () => {
     await shot(box, 'quotes-3-mailbox')
     await page.browserContext().close()
     await box.browserContext().close()
+  })
+
+  it('reads a price per kg typed with a decimal comma as the amount, never ten times it', async () => {
+    const admin = DEMO_USERS.find((u) => u.role === 'admin')!
+    const page = await newPage(rig)
+    await signInAs(page, rig.url, admin.email, admin.password)
+    await page.goto(`${rig.url}/admin/catalogue`)
+    const edit = await page.waitForSelector('button[aria-label^="Edit "]')
+    const code = (await edit!.evaluate((b) => b.getAttribute('aria-label') ?? '')).slice(5)
+    await edit!.click()
+    // the dialog puts the focus in itself once it has opened; type after that
+    await page.waitForFunction(() => document.activeElement?.closest('[role="dialog"]'))
+    await enter(page, '#pl-eur-perKg', '12,5')
+    await page.waitForSelector('::-p-text(= €12.50)')
+    await shot(page, 'quotes-4-catalogue-price')
+    await clickButton(page, 'Save')
+    await page.waitForSelector('::-p-text(€12.50/kg)')
+    const line = (await rig.t.services.catalogue.listLines('admin', true)).find(
+      (l) => l.code === code,
+    )
+    expect(line?.prices?.EUR.perKg).toBe(1250)
+    await page.browserContext().close()
   })
 })

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import request from 'supertest'
 import type { Page } from 'puppeteer-core'
 import { seedPeople } from '../../seed/seed-people'
 import { seedCatalogue } from '../../seed/seed-catalogue'
@@ -9,7 +10,23 @@ import {
   DEMO_OFFICE_SIZING,
   seedSizings,
 } from '../../seed/seed-sizings'
-import { newPage, shot, signInAs, startBrowserRig, type BrowserRig } from '../helpers/browser'
+import { spanModel } from '../../shared/dynamics'
+import type { SizingInput } from '../../shared/schemas/sizing'
+import { toAuthUser } from '../../server/modules/auth/auth.service'
+import {
+  choose,
+  enter,
+  newPage,
+  openStep,
+  shot,
+  signInAs,
+  startBrowserRig,
+  valueOf,
+  waitForText,
+  type BrowserRig,
+} from '../helpers/browser'
+import { makeUser, PASSWORD } from '../helpers/factories'
+import { makeCompany } from '../helpers/records'
 
 let rig: BrowserRig
 beforeAll(async () => {
@@ -23,19 +40,47 @@ afterAll(() => rig?.close())
 
 const demo = (role: string) => DEMO_USERS.find((u) => u.role === role)!
 
-async function waitForText(page: Page, needle: string) {
-  await page.waitForFunction(
-    (n) => document.querySelector('main')?.textContent?.includes(n),
-    {},
-    needle,
-  )
-}
-
-async function openStep(page: Page, name: string) {
-  for (const t of await page.$$('button[role="tab"]')) {
-    if ((await t.evaluate((e) => e.textContent ?? '')).includes(name)) return t.click()
+/** A fresh engineer with a three-mass floor span (5.8 Hz) and a draft sizing on it. */
+async function engineerWithSizing() {
+  const s = rig.t.services
+  const engineer = await makeUser(rig.t, 'engineer')
+  const user = toAuthUser((await s.users.findByEmail(engineer.email))!)
+  const company = await makeCompany(rig.t)
+  const site = await s.sites.create(user, {
+    name: `Round-trip floor ${engineer.id}`,
+    companyId: company.id,
+    structureKind: 'floor',
+    address: '',
+    contactName: '',
+    contactPhone: '',
+    notes: '',
+  })
+  const m = spanModel(3, 30_000, 5.8)
+  const definition = { nodes: m.nodes, springs: m.springs, hostDampingRatio: 0.02 }
+  const model = await s.models.create(user, {
+    siteId: site.id,
+    name: 'Bay span',
+    definition,
+    reason: 'first version',
+  })
+  const input: SizingInput = {
+    title: 'Bay absorber',
+    siteId: site.id,
+    modelId: model.id,
+    modelRevision: 1,
+    targetMode: 1,
+    absorberNode: 'node-2',
+    excitationNode: 'node-2',
+    responseNode: 'node-2',
+    forceAmplitude: 280,
+    massRatio: 0.02,
+    tuning: 'optimize',
+    orientation: 'vertical',
+    acceptance: { label: 'custom', quantity: 'acceleration', limit: 0.05 },
+    detuningTolerance: 0.1,
   }
-  throw new Error(`no step ${name}`)
+  const sizing = await s.sizings.create(user, input)
+  return { engineer, user, sizing, input, modelId: model.id }
 }
 
 async function openSizing(page: Page, title: string) {
@@ -68,20 +113,26 @@ describe('demo sizings, drafts and hand-over in Chromium', () => {
     await page.browserContext().close()
   })
 
-  it('keeps an edit through a reload and syncs a save made offline when back online', async () => {
+  it('opens the workspace without signal after one visit, keeps the offline save, and asks before overwriting a newer server version', async () => {
     const page = await newPage(rig)
     await signInAs(page, rig.url, demo('engineer').email, demo('engineer').password)
     await openSizing(page, 'Millrace footbridge vertical absorber')
-    const id = Number(/\/sizings\/(\d+)$/.exec(page.url())?.[1])
+    const id = Number(/\/sizings\/(\d+)/.exec(page.url())?.[1])
+    // the service worker has cached the app shell once it controls the page (slow on a busy
+    // machine: it downloads the whole client once)
+    await page.waitForFunction(() => navigator.serviceWorker.controller !== null, {
+      timeout: 90_000,
+    })
     await page.locator('#sizing-title').fill('Millrace footbridge, mid-span absorber')
     await waitForText(page, 'Unsaved changes')
+
+    await page.setOfflineMode(true)
     await page.reload()
     await page.waitForSelector('#sizing-title')
     expect(await page.$eval('#sizing-title', (e) => (e as HTMLInputElement).value)).toBe(
       'Millrace footbridge, mid-span absorber',
     )
-
-    await page.setOfflineMode(true)
+    await waitForText(page, 'No connection: this is the copy kept on this tablet')
     await waitForText(page, 'Offline — will sync')
     await openStep(page, 'Hand over')
     await page.locator('::-p-aria([name="Save sizing"][role="button"])').click()
@@ -89,11 +140,103 @@ describe('demo sizings, drafts and hand-over in Chromium', () => {
     await shot(page, 'sizing-offline')
     expect((await rig.t.services.sizings.summary(id)).revision).toBe(1)
 
+    // Meanwhile someone saves a newer revision on the server.
+    const s = rig.t.services
+    const owner = toAuthUser((await s.users.findByEmail(demo('engineer').email))!)
+    const server = await s.sizings.view(owner, id)
+    await s.sizings.save(owner, id, {
+      baseRevision: 1,
+      input: { ...server.input, massRatio: 0.035 },
+    })
+
     await page.setOfflineMode(false)
-    await waitForText(page, 'Saved as revision 2, computed on the server')
-    const stored = await rig.t.services.sizings.summary(id)
+    const dialog = await page.waitForSelector('[role="dialog"] ::-p-text(newer version)')
+    expect(await dialog!.evaluate((e) => e.closest('[role="dialog"]')?.textContent)).toContain(
+      'Your version differs in: Title, Mass ratio',
+    )
+    await shot(page, 'sizing-sync-conflict')
+    expect((await s.sizings.summary(id)).revision).toBe(2)
+    await page.locator('::-p-aria([name="Keep my version"][role="button"])').click()
+    await waitForText(page, 'Saved as revision 3, computed on the server')
+    const stored = await s.sizings.view(owner, id)
     expect(stored.title).toBe('Millrace footbridge, mid-span absorber')
-    expect(stored.revision).toBe(2)
+    expect(stored.input.massRatio).toBe(0.03)
+    expect((await s.sizings.view(owner, id, 2)).input.massRatio).toBe(0.035)
+    await page.browserContext().close()
+  }, 150_000)
+
+  it('reads every kind of numeric field as typed, saves once on a double tap and reopens each input as entered', async () => {
+    const { engineer, sizing, modelId } = await engineerWithSizing()
+    const page = await newPage(rig)
+    await signInAs(page, rig.url, engineer.email, PASSWORD)
+    const base = `${rig.url}/sizings/${sizing.id}`
+    await page.goto(`${base}/structure`)
+    await page.waitForSelector('#sizing-title')
+
+    // Host damping one per mode: a bare number in a % field is a percentage; "0,05" is 0.05 %.
+    await page.locator('::-p-text(One per mode)').click()
+    await enter(page, '#host-damping-1', '5')
+    await enter(page, '#host-damping-2', '0,05')
+    await waitForText(page, '= 0.05 %')
+    await page.locator('#model-reason').fill('damping per mode from the heel-drop tests')
+
+    await openStep(page, 'Target')
+    await page.waitForFunction(() => location.pathname.endsWith('/target'))
+    await page.locator('::-p-text(Set the band)').click()
+    await enter(page, '#band-min', '1')
+    await enter(page, '#band-max', '6,3 Hz')
+    await choose(page, 'limit-preset', 'Custom limit')
+    await enter(page, '#limit-value', '1,5 %g')
+    await waitForText(page, '= 0.14709975 m/s²')
+
+    await openStep(page, 'Absorber')
+    await enter(page, '#mass-ratio', '5 %')
+    await choose(page, 'tuning', 'Given by the engineer')
+    await enter(page, '#tuning-ratio', '0,95')
+    await enter(page, '#tuning-damping', '8')
+    await enter(page, '#detuning-tolerance', '7,5')
+    await waitForText(page, 'Mass ratio: 5 %')
+    await shot(page, 'inputs-1-absorber')
+
+    // A double tap on save makes one request: one new revision and no error.
+    await openStep(page, 'Hand over')
+    const save = await page.waitForSelector('::-p-aria([name="Save sizing"][role="button"])')
+    await save!.click({ count: 2 })
+    await waitForText(page, 'Saved as revision 2, computed on the server')
+    expect(await page.$$('.p-toast-message-error')).toHaveLength(0)
+
+    const agent = request.agent(rig.t.app)
+    await agent.post('/api/auth/sign-in').send({ email: engineer.email, password: PASSWORD })
+    const stored = (await agent.get(`/api/sizings/${sizing.id}`)).body
+    expect(stored.currentRevision).toBe(2)
+    expect(stored.input).toMatchObject({
+      modelRevision: 2,
+      massRatio: 0.05,
+      tuning: { frequencyRatio: 0.95, dampingRatio: 0.08 },
+      detuningTolerance: 0.075,
+      band: { minHz: 1, maxHz: 6.3 },
+    })
+    // 1.5 %g = 0.015 × 9.80665 m/s² (standard gravity, CGPM 1901)
+    expect(stored.input.acceptance.limit).toBeCloseTo(0.015 * 9.80665, 12)
+    const model = (await agent.get(`/api/models/${modelId}/revisions/2`)).body
+    expect(model.definition.hostDampingRatio).toEqual([0.05, 0.0005, 0.02])
+
+    // Reopened from the server alone, every field shows what was entered.
+    await page.evaluate(() => localStorage.clear())
+    await page.goto(`${base}/absorber`)
+    await page.waitForSelector('#mass-ratio')
+    const entered = {
+      '#mass-ratio': '5 %',
+      '#tuning-ratio': '0.95',
+      '#tuning-damping': '8 %',
+      '#detuning-tolerance': '7.5 %',
+      '#band-max': '6.3 Hz',
+      '#limit-value': '0.14709975 m/s²',
+      '#host-damping-1': '5 %',
+      '#host-damping-2': '0.05 %',
+    }
+    for (const [field, text] of Object.entries(entered))
+      expect(await valueOf(page, field)).toBe(text)
     await page.browserContext().close()
   })
 })

@@ -89,3 +89,67 @@ export async function navLabels(page: Page) {
     links.map((a) => a.textContent?.trim() ?? ''),
   )
 }
+
+/** Longer than the app's longest debounce (the live preview waits 150 ms after a change). */
+export const KEY_PAUSE_MS = 200
+
+/**
+ * Types into a field one key at a time with a pause between keys, as a person on a tablet does,
+ * and checks after every key that the field holds exactly what was typed so far: a field that
+ * rewrites its text while someone types fails here. Leaves the field focused and uncommitted.
+ */
+export async function typeSlowly(page: Page, selector: string, text: string) {
+  const field = await page.waitForSelector(selector, { visible: true })
+  await field!.focus()
+  await field!.evaluate((e) => (e as HTMLInputElement).select())
+  let typed = ''
+  for (const ch of text) {
+    await page.keyboard.type(ch)
+    typed += ch
+    await new Promise((r) => setTimeout(r, KEY_PAUSE_MS))
+    const now = await field!.evaluate((e) => (e as HTMLInputElement).value)
+    if (now !== typed) {
+      await shot(page, 'typing-failure')
+      throw new Error(`${selector}: typed "${typed}" but the field shows "${now}"`)
+    }
+  }
+}
+
+/** Types slowly, then commits the text as a person does by leaving the field. */
+export async function enter(page: Page, selector: string, text: string) {
+  await typeSlowly(page, selector, text)
+  await page.keyboard.press('Tab')
+}
+
+/** The current text of an input. */
+export function valueOf(page: Page, selector: string) {
+  return page.$eval(selector, (e) => (e as HTMLInputElement).value)
+}
+
+/** The visible text of the page's main area. */
+export function mainText(page: Page) {
+  return page.$eval('main', (m) => m.textContent ?? '')
+}
+
+/** Waits until the page's main area shows the text. */
+export async function waitForText(page: Page, needle: string) {
+  await page.waitForFunction(
+    (n) => document.querySelector('main')?.textContent?.includes(n),
+    {},
+    needle,
+  )
+}
+
+/** Clicks the sizing workspace's step button (role tab) whose text names the step. */
+export async function openStep(page: Page, name: string) {
+  for (const t of await page.$$('button[role="tab"]')) {
+    if ((await t.evaluate((e) => e.textContent ?? '')).includes(name)) return t.click()
+  }
+  throw new Error(`no step ${name}`)
+}
+
+/** Opens a PrimeVue Select by its input id and picks the option that starts with the text. */
+export async function choose(page: Page, inputId: string, option: string) {
+  await page.locator(`#${inputId}`).click()
+  await page.locator(`li[role="option"][aria-label^="${option}"]`).click()
+}

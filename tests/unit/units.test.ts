@@ -24,9 +24,15 @@ describe('typed quantities become SI numbers', () => {
     expect(value('2e6', 'stiffness')).toBe(2e6)
   })
 
-  it('reads percent as a fraction and %g as a fraction of standard gravity', () => {
-    expect(value('1.5 %', 'ratio')).toBeCloseTo(0.015, 15)
-    expect(value('0.02', 'ratio')).toBe(0.02)
+  it('reads a percentage field the one way: a bare number is a percentage, stored as a fraction', () => {
+    expect(value('1.5 %', 'percent')).toBeCloseTo(0.015, 15)
+    expect(value('5', 'percent')).toBeCloseTo(0.05, 15)
+    expect(value('5%', 'percent')).toBeCloseTo(0.05, 15)
+    expect(value('0,05', 'percent')).toBeCloseTo(0.0005, 15)
+    expect(value('2.6', 'percent')).toBeCloseTo(0.026, 15)
+  })
+
+  it('reads %g as a fraction of standard gravity', () => {
     // g = 9.80665 m/s² (CGPM 1901): 0.5 %g = 0.0490333 m/s²
     expect(value('0.5 %g', 'acceleration')).toBeCloseTo(0.0490333, 6)
   })
@@ -42,13 +48,23 @@ describe('typed quantities become SI numbers', () => {
       [0.049, 'acceleration'],
       [1.2e5, 'damping'],
       [3.5e7, 'stiffness'],
-      [0.015, 'ratio'],
+      [0.015, 'percent'],
+      [6.3, 'frequency'],
     ] as const)
       expect(value(formatSi(v, kind), kind)).toBeCloseTo(v, 9)
   })
 
-  it('accepts a decimal comma where no point is typed', () => {
+  it('reads a decimal comma as a point, never as a thousands separator', () => {
     expect(value('2,5 t', 'mass')).toBe(2500)
+    expect(value('6,3 Hz', 'frequency')).toBe(6.3)
+    expect(value('6,3', 'frequency')).toBe(6.3)
+    expect(value('0,125 m', 'displacement')).toBe(0.125)
+  })
+
+  it('reads whole numbers in count fields and refuses fractions there', () => {
+    expect(value('12', 'count')).toBe(12)
+    expect(parseQuantity('2,5', 'count')).toEqual({ ok: false, message: 'a whole number' })
+    expect(parseQuantity('3 kg', 'count').ok).toBe(false)
   })
 
   it('refuses a unit of the wrong kind and says which kind was expected', () => {
@@ -56,7 +72,7 @@ describe('typed quantities become SI numbers', () => {
     expect(p.ok).toBe(false)
     if (!p.ok) expect(p.message).toContain('stiffness')
     expect(parseQuantity('1.5 %', 'mass').ok).toBe(false)
-    expect(parseQuantity('3 kg', 'ratio').ok).toBe(false)
+    expect(parseQuantity('3 kg', 'percent').ok).toBe(false)
   })
 
   it('refuses empty and unreadable text', () => {
@@ -64,9 +80,9 @@ describe('typed quantities become SI numbers', () => {
     expect(parseQuantity('heavy', 'mass').ok).toBe(false)
   })
 
-  it('formats SI values with their unit and ratios in percent', () => {
+  it('formats SI values with their unit and fractions in percent', () => {
     expect(formatSi(2500, 'mass')).toBe('2500 kg')
-    expect(formatSi(3.5e7, 'stiffness')).toBe('3.500e+7 N/m')
-    expect(formatSi(0.015, 'ratio')).toBe('1.5 %')
+    expect(formatSi(3.5e7, 'stiffness')).toBe('3.5e+7 N/m')
+    expect(formatSi(0.015, 'percent')).toBe('1.5 %')
   })
 })

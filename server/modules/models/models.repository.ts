@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm'
-import type { HostModel } from '../../../shared/schemas/host-model'
+import type { HostModel, ModelRevision } from '../../../shared/schemas/host-model'
 import type { ModelDefinition } from '../../../shared/schemas/sizing'
 import { UserEntity } from '../users/user.entity'
 import { HostModelEntity } from './host-model.entity'
@@ -53,6 +53,25 @@ export function modelsRepository(ds: DataSource) {
     async definitionAt(modelId: number, revision: number) {
       const r = await revisions.findOneBy({ modelId, revision })
       return r?.definition ?? null
+    },
+    /** One revision with who made it and why; null when the model has no such revision. */
+    async revisionAt(modelId: number, revision: number): Promise<ModelRevision | null> {
+      const { entities, raw } = await revisions
+        .createQueryBuilder('r')
+        .leftJoin(UserEntity, 'u', 'u.id = r.createdById')
+        .addSelect('u.name', 'createdByName')
+        .where('r.modelId = :modelId AND r.revision = :revision', { modelId, revision })
+        .getRawAndEntities()
+      const r = entities[0]
+      if (!r) return null
+      return {
+        modelId,
+        revision: r.revision,
+        reason: r.reason,
+        createdAt: r.createdAt.toISOString(),
+        createdByName: String((raw[0] as { createdByName?: string }).createdByName ?? ''),
+        definition: r.definition,
+      }
     },
     async create(data: {
       siteId: number

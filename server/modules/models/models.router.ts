@@ -4,6 +4,7 @@ import {
   ModelCreateSchema,
   ModelListQuerySchema,
   ModelReviseSchema,
+  ModelRevisionParamsSchema,
 } from '../../../shared/schemas/host-model'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
@@ -54,6 +55,19 @@ export function modelsRouter(api: ApiRegistry, models: ModelsService) {
       params: IdParamSchema,
     },
     ({ params }) => models.get(params.id),
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/models/:id/revisions/:revision',
+      tag,
+      summary: 'One revision of a model with its structure (a sizing may use an older one)',
+      access: READERS,
+      params: ModelRevisionParamsSchema,
+    },
+    ({ params }) => models.revision(params.id, params.revision),
   )
   route(
     router,

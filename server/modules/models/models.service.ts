@@ -1,5 +1,10 @@
 import { isDeepStrictEqual } from 'node:util'
-import type { HostModel, ModelCreate, ModelRevise } from '../../../shared/schemas/host-model'
+import type {
+  HostModel,
+  ModelCreate,
+  ModelRevise,
+  ModelRevision,
+} from '../../../shared/schemas/host-model'
 import type { ModelDefinition } from '../../../shared/schemas/sizing'
 import { AppError, forbidden, notFound } from '../../http/app-error'
 import type { AuthUser } from '../../middleware/authenticate'
@@ -57,6 +62,14 @@ export function modelsService(deps: { models: ModelsRepository; sites: SitesServ
           currentRevision: latest.currentRevision,
         },
       )
+    },
+
+    /** A revision as it was stored, for a sizing that still uses it; 404 when there is none. */
+    async revision(modelId: number, revision: number): Promise<ModelRevision> {
+      await get(modelId)
+      const r = await deps.models.revisionAt(modelId, revision)
+      if (!r) throw notFound('model-revision')
+      return r
     },
 
     async definitionAt(modelId: number, revision: number): Promise<ModelDefinition> {

@@ -19,6 +19,8 @@ import type { SizingRecord } from './sizings.repository'
 export interface SizingsDeps extends HandoverDeps {
   models: ModelsService
   sites: SitesService
+  /** ids of the measurement records of a site, to check the records a sizing links */
+  siteRecordIds: (siteId: number) => Promise<number[]>
   pool: SizingPool
 }
 
@@ -41,9 +43,21 @@ export function sizingsService(deps: SizingsDeps) {
       throw forbidden('Only the engineer who made this sizing may change it.')
   }
 
+  /** Linked records must be records of the sizing's own site. */
+  async function checkRecords(siteId: number, links: SizingInput['records']) {
+    if (!links?.length) return
+    const onSite = new Set(await deps.siteRecordIds(siteId))
+    const i = links.findIndex((l) => !onSite.has(l.recordId))
+    if (i >= 0)
+      throw new AppError('record-not-of-site', 'A linked record was not taken on this site.', 400, [
+        { path: `body.input.records.${i}.recordId`, message: 'not a record of this site' },
+      ])
+  }
+
   /** The authoritative solve, in the worker pool; a model error becomes a 400 naming the field. */
   async function evaluate(input: SizingInput) {
     const site = await deps.sites.get(input.siteId)
+    await checkRecords(site.id, input.records)
     const model = await deps.models.get(input.modelId)
     if (model.siteId !== site.id)
       throw new AppError('model-not-of-site', 'The model belongs to another site.', 400, [
