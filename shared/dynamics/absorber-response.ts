@@ -1,6 +1,7 @@
 import type { HostReceptance } from './host-receptance'
+import { measured, measuredStroke, type Measure } from './measure'
 
-/** Receptance with the absorber and the absorber stroke at one frequency (m/N). */
+/** Response with the absorber and the absorber stroke at one frequency, per unit load. */
 export interface AbsorberPoint {
   re: number
   im: number
@@ -9,17 +10,21 @@ export interface AbsorberPoint {
 }
 
 /**
- * Exact response with an absorber (m_a, k_a, c_a) on host node j, from host receptances, by the
- * Sherman–Morrison identity: the absorber adds z(ω) = −ω² m_a k̃/(k̃ − ω² m_a), k̃ = k_a + iωc_a,
- * to node j, so H'_rf = H_rf − z H_rj H_jf / (1 + z H_jj); stroke = ω² m_a/(k̃ − ω² m_a) · H'_jf
- * (Sherman & Morrison 1950; design.md "Fast path").
- * @param h host receptances (m/N), laid out as Receptance4 from index `at`
+ * Exact response with an absorber (m_a, k_a, c_a) acting on the coordinate uᵀx, from host
+ * receptances, by the Sherman–Morrison identity (Sherman & Morrison, Ann. Math. Stat. 21, 1950).
+ * The absorber adds z(ω) = −ω² m_a k̃/(k̃ − ω² m_a), k̃ = k_a + iωc_a, along u; a load p_a on its
+ * mass (−m_a a_g under base acceleration) reaches the host through the spring as q·p_a, with
+ * q = k̃/(k̃ − ω² m_a). So (D + z uuᵀ)x = p + q p_a u gives
+ *   x_u = (H_up + q p_a H_uu)/(1 + z H_uu),   H' = H_rp + H_ru (q p_a − z x_u),
+ * and the absorber's own equation gives its stroke y − x_u = (ω² m_a x_u + p_a)/(k̃ − ω² m_a).
+ * @param h host receptances [rp, ru, up, uu] (m per unit load), from index `at`
  * @param at offset of the 8 values in h
  * @param w ω, rad/s
  * @param ma absorber mass, kg
  * @param ka absorber spring rate, N/m
  * @param ca absorber damper coefficient, N·s/m
- * @param out receives H'_rf and the stroke per unit force
+ * @param pa load on the absorber mass per unit load (N): −m_a under unit base acceleration
+ * @param out receives H' and the stroke per unit load
  */
 export function absorberAt(
   h: Float64Array,
@@ -28,6 +33,7 @@ export function absorberAt(
   ma: number,
   ka: number,
   ca: number,
+  pa: number,
   out: AbsorberPoint,
 ): AbsorberPoint {
   const w2m = w * w * ma
@@ -39,54 +45,61 @@ export function absorberAt(
   const zr = -w2m * qr
   const zi = -w2m * qi
   // Indexed reads: destructuring a typed array goes through the iterator and is slow here.
-  const rfr = h[at] ?? 0
-  const rfi = h[at + 1] ?? 0
-  const rjr = h[at + 2] ?? 0
-  const rji = h[at + 3] ?? 0
-  const jfr = h[at + 4] ?? 0
-  const jfi = h[at + 5] ?? 0
-  const jjr = h[at + 6] ?? 0
-  const jji = h[at + 7] ?? 0
-  const gr = 1 + zr * jjr - zi * jji
-  const gi = zr * jji + zi * jjr
+  const rpr = h[at] ?? 0
+  const rpi = h[at + 1] ?? 0
+  const rur = h[at + 2] ?? 0
+  const rui = h[at + 3] ?? 0
+  const upr = h[at + 4] ?? 0
+  const upi = h[at + 5] ?? 0
+  const uur = h[at + 6] ?? 0
+  const uui = h[at + 7] ?? 0
+  const gr = 1 + zr * uur - zi * uui
+  const gi = zr * uui + zi * uur
   const g = gr * gr + gi * gi
-  // x_j / F = H_jf / g
-  const xr = (jfr * gr + jfi * gi) / g
-  const xi = (jfi * gr - jfr * gi) / g
-  // H' = H_rf − z H_rj x_j
-  const zhr = zr * rjr - zi * rji
-  const zhi = zr * rji + zi * rjr
-  out.re = rfr - (zhr * xr - zhi * xi)
-  out.im = rfi - (zhr * xi + zhi * xr)
-  const sr = (w2m * dr) / d
-  const si = (-w2m * ki) / d
-  out.strokeRe = sr * xr - si * xi
-  out.strokeIm = sr * xi + si * xr
+  const nr = upr + pa * (qr * uur - qi * uui)
+  const ni = upi + pa * (qr * uui + qi * uur)
+  const xr = (nr * gr + ni * gi) / g
+  const xi = (ni * gr - nr * gi) / g
+  const tr = pa * qr - (zr * xr - zi * xi)
+  const ti = pa * qi - (zr * xi + zi * xr)
+  out.re = rpr + (rur * tr - rui * ti)
+  out.im = rpi + (rur * ti + rui * tr)
+  const sr = w2m * xr + pa
+  const si = w2m * xi
+  out.strokeRe = (sr * dr + si * ki) / d
+  out.strokeIm = (si * dr - sr * ki) / d
   return out
 }
 
+/** An absorber in SI units: kg, N/m, N·s/m. */
+export interface AbsorberValues {
+  mass: number
+  stiffness: number
+  damping: number
+}
+
 /**
- * |H'_rf| over the host grid for one absorber, O(grid).
+ * The measured response with the absorber over the host grid, O(grid).
  * @param rec host receptances on the grid
- * @param ma kg
- * @param ka N/m
- * @param ca N·s/m
- * @param mag receives |H'_rf| (m/N) per grid point
- * @param stroke optional, receives |stroke|/F (m/N) per grid point
+ * @param a the absorber
+ * @param m what is measured (quantity, unbalance, base motion)
+ * @param mag receives |Q| per grid point
+ * @param stroke optional, receives |stroke| per unit load per grid point
  */
 export function absorberOnGrid(
   rec: HostReceptance,
-  ma: number,
-  ka: number,
-  ca: number,
+  a: AbsorberValues,
+  m: Measure,
   mag: Float64Array,
   stroke?: Float64Array,
 ): void {
   const p: AbsorberPoint = { re: 0, im: 0, strokeRe: 0, strokeIm: 0 }
   const { omega, values } = rec
+  const pa = m.absorberLoad * a.mass
   for (let k = 0; k < omega.length; k++) {
-    absorberAt(values, 8 * k, omega[k] ?? 0, ma, ka, ca, p)
-    mag[k] = Math.sqrt(p.re * p.re + p.im * p.im)
-    if (stroke) stroke[k] = Math.sqrt(p.strokeRe * p.strokeRe + p.strokeIm * p.strokeIm)
+    const w = omega[k] ?? 0
+    absorberAt(values, 8 * k, w, a.mass, a.stiffness, a.damping, pa, p)
+    mag[k] = measured(m, w, p.re, p.im)
+    if (stroke) stroke[k] = measuredStroke(m, w, p.strokeRe, p.strokeIm)
   }
 }

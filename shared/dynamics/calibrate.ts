@@ -30,7 +30,7 @@ export function calibrateStiffness(
     throw new ModelError('measuredHz', `must be a positive finite number of Hz, got ${measuredHz}`)
   }
   const { host } = validateHost(model)
-  const n = host.ids.length
+  const n = host.ids.length - host.massless.length
   if (!Number.isInteger(mode) || mode < 1 || mode > n) {
     throw new ModelError('mode', `mode ${mode} does not exist: the host has ${n} mode(s)`)
   }

@@ -30,14 +30,17 @@ export function staticDeflection(omegaA: number): number {
  * @param a absorber (kg, N/m, N·s/m)
  * @param ev its evaluation over the band
  * @param peak the peak report (for the reduction)
+ * @param load the design load amplitude (excitation.amplitude) and the stroke limit (m) or null
  */
 export function designReport(
   a: AbsorberValues,
   ev: AbsorberEvaluation,
   peak: PeakReport,
+  load: { amplitude: number; strokeLimit: number | null },
 ): DesignReport {
   const wa = Math.sqrt(a.stiffness / a.mass)
   const finite = (x: number): number | null => (Number.isFinite(x) ? x : null)
+  const maxStroke = finite(ev.maxStroke.value * load.amplitude)
   return {
     mass: a.mass,
     springRate: a.stiffness,
@@ -50,5 +53,8 @@ export function designReport(
       ? ev.maxStroke.omega / (2 * Math.PI)
       : null,
     peakReduction: peak.reduction,
+    maxStroke,
+    strokeWithinLimit:
+      load.strokeLimit === null ? null : maxStroke !== null && maxStroke <= load.strokeLimit,
   }
 }

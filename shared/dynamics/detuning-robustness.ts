@@ -2,7 +2,7 @@ import type { ModelInput } from '../schemas/model'
 import { ModelError } from './errors'
 import { evaluateAbsorber } from './evaluate-absorber'
 import { sizingContext } from './sizing-context'
-import { sizeAbsorber } from './solve-sizing'
+import { prepareSizing, type PreparedSizing } from './size-absorber'
 
 /** Options of `detuningRobustness`. */
 export interface RobustnessOptions {
@@ -34,10 +34,12 @@ export interface DetuningPoint {
  * tolerance (design.md "Robustness").
  * @param model a model with an absorber
  * @param options see RobustnessOptions
+ * @param prepared the model's context and sized absorber when already computed
  */
 export function detuningRobustness(
   model: ModelInput,
   options: RobustnessOptions = {},
+  prepared?: PreparedSizing,
 ): { curve: DetuningPoint[]; worst: DetuningPoint } {
   const { range = 0.1, points = 21, tolerance = 0.05 } = options
   if (!(range > 0 && range < 0.9))
@@ -46,8 +48,7 @@ export function detuningRobustness(
     throw new ModelError('tolerance', `must be in [0, range], got ${tolerance}`)
   if (!Number.isInteger(points) || points < 3)
     throw new ModelError('points', `must be a whole number ≥ 3, got ${points}`)
-  const nominal = sizingContext(model)
-  const sized = sizeAbsorber(nominal)
+  const { ctx: nominal, sized } = prepared ?? prepareSizing(model)
   if (!sized) throw new ModelError('absorber', 'a detuning study needs an absorber')
   const offsets = Array.from({ length: points }, (_, i) => -range + (2 * range * i) / (points - 1))
   if (!offsets.includes(0) && points % 2 === 0) offsets.push(0)

@@ -3,28 +3,37 @@ import type { PreparedHost } from './host'
 import type { NodeTriple } from './host-receptance'
 import type { AbsorberParams, ComplexArray } from './types'
 
-/** Direct-path response per frequency: receptance X_r/F_f and absorber stroke per unit force. */
+/** Direct-path response per frequency: response per unit load and absorber stroke. */
 export interface DirectResponse {
-  /** m/N */
+  /** m per unit load */
   receptance: ComplexArray
-  /** m/N; zero without an absorber */
+  /** m per unit load; zero without an absorber */
   stroke: ComplexArray
 }
 
+/** What the direct path reads and applies: node indices, or a response vector and a load vector. */
+export type DirectTargets = Pick<NodeTriple, 'r' | 'f'> | { r: Float64Array; p: Float64Array }
+
 /**
- * Reference path: solves (K − ω²M + iωC) X = F e_f on the host plus absorber (n+1 degrees of
+ * Reference path: solves (K − ω²M + iωC) X = P on the host plus absorber (n+1 degrees of
  * freedom) at every frequency, C being dashpots + host modal damping + the absorber's damper
- * (design.md "Reference path"). O(n³) per frequency: for checks and charts, not optimisation.
+ * (the reference for the rank-one path). O(n³) per frequency: for checks and charts, not optimisation.
+ * The absorber's spring and damper join host node `node` to its own degree of freedom y; its mass
+ * sits on y, or, with `relativeTo`, its inertance acts between y and that node (the exact reading
+ * of an absorber acting on the relative coordinate x_node − x_relativeTo).
  * @param prep prepared host
- * @param absorber absorber on a host node (kg, N/m, N·s/m), or null
- * @param t response r and excitation f (j is taken from the absorber)
+ * @param absorber absorber (kg, N/m, N·s/m), or null
+ * @param t response and load: node indices or vectors over the free nodes
  * @param omega frequencies, rad/s
+ * @param absorberLoad load on the absorber's degree of freedom per unit load (N): −m_a under
+ *   unit base acceleration, else 0
  */
 export function directResponse(
   prep: PreparedHost,
   absorber: AbsorberParams | null,
-  t: Pick<NodeTriple, 'r' | 'f'>,
+  t: DirectTargets,
   omega: ArrayLike<number>,
+  absorberLoad = 0,
 ): DirectResponse {
   const n = prep.n
   const size = absorber ? n + 1 : n
@@ -45,10 +54,12 @@ export function directResponse(
     }
     if (absorber) addAbsorber(a, size, absorber, w)
     const b: ComplexArray = { re: new Float64Array(size), im: new Float64Array(size) }
-    b.re[t.f] = 1
+    if (typeof t.r === 'number' && 'f' in t) b.re[t.f] = 1
+    else if ('p' in t) b.re.set(t.p)
+    if (absorber) b.re[n] = absorberLoad
     const x = solveComplex(a, b, size, 1)
-    out.receptance.re[k] = x.re[t.r] ?? 0
-    out.receptance.im[k] = x.im[t.r] ?? 0
+    out.receptance.re[k] = readResponse(t.r, x.re)
+    out.receptance.im[k] = readResponse(t.r, x.im)
     if (absorber) {
       out.stroke.re[k] = (x.re[n] ?? 0) - (x.re[absorber.node] ?? 0)
       out.stroke.im[k] = (x.im[n] ?? 0) - (x.im[absorber.node] ?? 0)
@@ -57,18 +68,28 @@ export function directResponse(
   return out
 }
 
+/** The response: one entry of the solution, or its dot product with a response vector. */
+function readResponse(r: number | Float64Array, x: Float64Array): number {
+  if (typeof r === 'number') return x[r] ?? 0
+  let s = 0
+  r.forEach((v, i) => (s += v * (x[i] ?? 0)))
+  return s
+}
+
 function addAbsorber(a: ComplexArray, size: number, ab: AbsorberParams, w: number): void {
-  const j = ab.node
-  const s = size - 1
-  const kr = ab.stiffness
-  const ki = w * ab.damping
-  const add = (row: number, col: number, sign: number): void => {
-    a.re[row * size + col] = (a.re[row * size + col] ?? 0) + sign * kr
-    a.im[row * size + col] = (a.im[row * size + col] ?? 0) + sign * ki
+  const y = size - 1
+  const add = (row: number, col: number, re: number, im: number): void => {
+    a.re[row * size + col] = (a.re[row * size + col] ?? 0) + re
+    a.im[row * size + col] = (a.im[row * size + col] ?? 0) + im
   }
-  add(j, j, 1)
-  add(s, s, 1)
-  add(j, s, -1)
-  add(s, j, -1)
-  a.re[s * size + s] = (a.re[s * size + s] ?? 0) - w * w * ab.mass
+  // Spring and damper between the node and y: the usual two-node element.
+  const pair = (i: number, j: number, re: number, im: number): void => {
+    add(i, i, re, im)
+    add(j, j, re, im)
+    add(i, j, -re, -im)
+    add(j, i, -re, -im)
+  }
+  pair(ab.node, y, ab.stiffness, w * ab.damping)
+  if (ab.relativeTo === undefined) add(y, y, -w * w * ab.mass, 0)
+  else pair(y, ab.relativeTo, -w * w * ab.mass, 0)
 }

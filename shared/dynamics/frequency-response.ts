@@ -2,18 +2,23 @@ import type { ModelInput } from '../schemas/model'
 import { absorberAt, type AbsorberPoint } from './absorber-response'
 import { ModelError } from './errors'
 import { hostReceptance } from './host-receptance'
-import { sizingContext } from './sizing-context'
-import { sizeAbsorber } from './solve-sizing'
+import { measured, measuredStroke, RECEPTANCE, type Measure } from './measure'
+import type { SizingContext } from './sizing-context'
+import { prepareSizing, type PreparedSizing } from './size-absorber'
 
-/** Magnitudes of one response curve: receptance, mobility (×ω), accelerance (×ω²). */
+/**
+ * Magnitudes of one response curve per unit load (1 N, 1 m/s² of base acceleration, or 1 kg·m of
+ * unbalance): displacement, velocity (×ω) and acceleration (×ω²). Under base motion displacement
+ * and velocity are relative to the supports and acceleration is absolute (transmissibility).
+ */
 export interface ResponseCurve {
-  /** |X/F|, m/N */
+  /** displacement per unit load, m/N for a force */
   receptance: number[]
-  /** |V/F| = ω|X/F|, m/(N·s) */
+  /** velocity per unit load, m/(N·s) for a force */
   mobility: number[]
-  /** |A/F| = ω²|X/F|, m/(N·s²) = 1/kg */
+  /** acceleration per unit load, 1/kg for a force */
   accelerance: number[]
-  /** phase of X/F, degrees */
+  /** phase of the displacement against the load, degrees */
   phaseDeg: number[]
 }
 
@@ -32,7 +37,7 @@ export interface FrequencyResponse {
   without: ResponseCurve
   /** null when the model has no absorber */
   with: ResponseCurve | null
-  /** |absorber stroke|/F, m/N; null without an absorber */
+  /** absorber stroke per unit load (m/N for a force); null without an absorber */
   strokePerForce: number[] | null
 }
 
@@ -45,12 +50,29 @@ function curve(n: number): ResponseCurve {
   }
 }
 
-function put(c: ResponseCurve, k: number, w: number, re: number, im: number): void {
-  const m = Math.hypot(re, im)
-  c.receptance[k] = m
-  c.mobility[k] = w * m
-  c.accelerance[k] = w * w * m
+/** The three measures of a request's load, one per quantity. */
+function measures(m: Measure, base: boolean): [Measure, Measure, Measure] {
+  return [0, 1, 2].map((power) => ({
+    ...m,
+    power,
+    absolute: base && power === 2,
+  })) as [Measure, Measure, Measure]
+}
+
+function put(c: ResponseCurve, ms: Measure[], k: number, w: number, re: number, im: number): void {
+  c.receptance[k] = measured(ms[0] ?? RECEPTANCE, w, re, im)
+  c.mobility[k] = measured(ms[1] ?? RECEPTANCE, w, re, im)
+  c.accelerance[k] = measured(ms[2] ?? RECEPTANCE, w, re, im)
   c.phaseDeg[k] = (Math.atan2(im, re) * 180) / Math.PI
+}
+
+/** The chart's default range: the band, or around a running speed and the target mode. */
+function chartRange(ctx: SizingContext): [number, number] {
+  if (ctx.bandSource !== 'speed') return [ctx.band.min, ctx.band.max]
+  return [
+    Math.min(ctx.band.min, ctx.omegaTarget) / 1.5,
+    Math.max(ctx.band.max, ctx.omegaTarget) * 1.5,
+  ]
 }
 
 /**
@@ -59,15 +81,18 @@ function put(c: ResponseCurve, k: number, w: number, re: number, im: number): vo
  * receptance (standard definitions, e.g. Ewins, Modal Testing).
  * @param model the model
  * @param options grid, see ResponseOptions
+ * @param prepared the model's context and sized absorber when already computed
  */
 export function frequencyResponse(
   model: ModelInput,
   options: ResponseOptions = {},
+  prepared: PreparedSizing = prepareSizing(model),
 ): FrequencyResponse {
-  const ctx = sizingContext(model)
+  const { ctx, sized } = prepared
   const { points = 400 } = options
-  const lo = 2 * Math.PI * (options.minHz ?? ctx.band.min / (2 * Math.PI))
-  const hi = 2 * Math.PI * (options.maxHz ?? ctx.band.max / (2 * Math.PI))
+  const [min, max] = chartRange(ctx)
+  const lo = options.minHz === undefined ? min : 2 * Math.PI * options.minHz
+  const hi = options.maxHz === undefined ? max : 2 * Math.PI * options.maxHz
   if (!(lo > 0 && hi > lo && Number.isInteger(points) && points >= 2)) {
     throw new ModelError('options', 'need 0 < minHz < maxHz and a whole number of points ≥ 2')
   }
@@ -75,20 +100,22 @@ export function frequencyResponse(
     { length: points },
     (_, i) => lo * (hi / lo) ** (i / (points - 1)),
   )
-  const rec = hostReceptance(ctx.prep, ctx.nodes, omega)
-  const sized = sizeAbsorber(ctx)
+  const rec = hostReceptance(ctx.prep, ctx.vectors, omega)
   const without = curve(points)
   const withAbsorber = sized ? curve(points) : null
   const stroke: number[] | null = sized ? new Array(points) : null
   const h = new Float64Array(8)
   const p: AbsorberPoint = { re: 0, im: 0, strokeRe: 0, strokeIm: 0 }
+  const ms = measures(ctx.measure, ctx.req.excitation.kind === 'base')
+  const pa = ctx.measure.absorberLoad * (sized?.values.mass ?? 0)
   omega.forEach((w, k) => {
     h.set(rec.values.subarray(8 * k, 8 * k + 8))
-    put(without, k, w, h[0] ?? 0, h[1] ?? 0)
+    put(without, ms, k, w, h[0] ?? 0, h[1] ?? 0)
     if (!sized || !withAbsorber || !stroke) return
-    absorberAt(h, 0, w, sized.values.mass, sized.values.stiffness, sized.values.damping, p)
-    put(withAbsorber, k, w, p.re, p.im)
-    stroke[k] = Math.hypot(p.strokeRe, p.strokeIm)
+    const a = sized.values
+    absorberAt(h, 0, w, a.mass, a.stiffness, a.damping, pa, p)
+    put(withAbsorber, ms, k, w, p.re, p.im)
+    stroke[k] = measuredStroke(ctx.measure, w, p.strokeRe, p.strokeIm)
   })
   return {
     frequencyHz: Array.from(omega, (w) => w / (2 * Math.PI)),

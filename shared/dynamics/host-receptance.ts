@@ -1,8 +1,9 @@
 import { solveComplex } from './complex-solve'
 import type { PreparedHost } from './host'
+import { participation } from './participation'
 import type { ComplexArray } from './types'
 
-/** The three host nodes a sizing needs: absorber j, response r, excitation f. */
+/** Host nodes a sizing reads: absorber j, response r, excitation f (free-node indices). */
 export interface NodeTriple {
   j: number
   r: number
@@ -10,8 +11,19 @@ export interface NodeTriple {
 }
 
 /**
- * Host receptances H_rf, H_rj, H_jf, H_jj (m/N) at one frequency, as
- * [rf.re, rf.im, rj.re, rj.im, jf.re, jf.im, jj.re, jj.im].
+ * The generalised vectors a sizing reads, each of length n over the free nodes: the response is
+ * rᵀx, the load is the force vector p, and the absorber acts on the coordinate uᵀx (u = e_j for an
+ * absorber on node j, e_i − e_j for one acting between two nodes).
+ */
+export interface ReceptanceVectors {
+  r: Float64Array
+  p: Float64Array
+  u: Float64Array
+}
+
+/**
+ * Host receptances H_rp, H_ru, H_up, H_uu (m/N) at one frequency, as
+ * [rp.re, rp.im, ru.re, ru.im, up.re, up.im, uu.re, uu.im].
  */
 export type Receptance4 = Float64Array
 
@@ -25,16 +37,40 @@ export interface HostReceptance {
   at(w: number, out: Receptance4): void
   /** true when `at` is O(n) (modal superposition), false when it is a dense solve */
   cheap: boolean
+  /** modal participations per mode i: [rᵀφ_i, pᵀφ_i, uᵀφ_i], 3 numbers per mode */
+  participation: Float64Array
+  /** host eigenvalues ω_i², rad²/s², ascending */
+  lambda: Float64Array
 }
 
-function modalAt(prep: PreparedHost, prod: Float64Array, w: number, out: Receptance4): void {
+/**
+ * Unit vectors of a node triple.
+ * @param n number of free nodes
+ * @param t node indices
+ */
+export function nodeVectors(n: number, t: NodeTriple): ReceptanceVectors {
+  const unit = (k: number): Float64Array => {
+    const v = new Float64Array(n)
+    v[k] = 1
+    return v
+  }
+  return { r: unit(t.r), p: unit(t.f), u: unit(t.j) }
+}
+
+/** Relative distance to an undamped natural frequency below which the sum steps aside. */
+const POLE_GAP = 1e-8
+
+function modalAt(prep: PreparedHost, prod: Float64Array, w: number, out: Receptance4): boolean {
   const { omega } = prep.modes
   out.fill(0)
   for (let i = 0; i < prep.n; i++) {
     const wi = omega[i] ?? 0
-    // H_ab = Σ φ_a φ_b / (ω_i² − ω² + 2iζ_iω_iω) (modal superposition, e.g. Ewins, Modal Testing §2.6)
+    // H_ab = Σ (aᵀφ_i)(bᵀφ_i) / (ω_i² − ω² + 2iζ_iω_iω) (modal superposition, e.g. Ewins, Modal
+    // Testing §2.6)
     const dr = wi * wi - w * w
     const di = 2 * (prep.zeta[i] ?? 0) * wi * w
+    // An undamped mode is singular at its own frequency: the caller steps aside.
+    if (di === 0 && Math.abs(dr) <= 2 * POLE_GAP * wi * wi) return false
     const d = dr * dr + di * di
     const ur = dr / d
     const ui = -di / d
@@ -44,49 +80,81 @@ function modalAt(prep: PreparedHost, prod: Float64Array, w: number, out: Recepta
       out[2 * q + 1] = (out[2 * q + 1] ?? 0) + p * ui
     }
   }
+  return true
 }
 
-function directAt(prep: PreparedHost, t: NodeTriple, w: number, out: Receptance4): void {
+function dot(a: Float64Array, x: Float64Array, xi: Float64Array, col: number): [number, number] {
+  let re = 0
+  let im = 0
+  a.forEach((v, k) => {
+    if (v === 0) return
+    re += v * (x[k * 2 + col] ?? 0)
+    im += v * (xi[k * 2 + col] ?? 0)
+  })
+  return [re, im]
+}
+
+function directAt(prep: PreparedHost, v: ReceptanceVectors, w: number, out: Receptance4): boolean {
   const { n, stiffness, mass } = prep
   const c = prep.damping()
   const a: ComplexArray = { re: stiffness.slice(), im: c.map((x) => w * x) }
   for (let i = 0; i < n; i++) a.re[i * n + i] = (a.re[i * n + i] ?? 0) - w * w * (mass[i] ?? 0)
   const b: ComplexArray = { re: new Float64Array(2 * n), im: new Float64Array(2 * n) }
-  b.re[t.f * 2] = 1
-  b.re[t.j * 2 + 1] = 1
-  const x = solveComplex(a, b, n, 2)
-  const get = (row: number, col: number): [number, number] => [
-    x.re[row * 2 + col] ?? 0,
-    x.im[row * 2 + col] ?? 0,
-  ]
-  out.set([...get(t.r, 0), ...get(t.r, 1), ...get(t.j, 0), ...get(t.j, 1)])
+  for (let k = 0; k < n; k++) {
+    b.re[k * 2] = v.p[k] ?? 0
+    b.re[k * 2 + 1] = v.u[k] ?? 0
+  }
+  try {
+    solveComplex(a, b, n, 2)
+  } catch {
+    return false
+  }
+  out.set([...dot(v.r, b.re, b.im, 0), ...dot(v.r, b.re, b.im, 1)])
+  out.set([...dot(v.u, b.re, b.im, 0), ...dot(v.u, b.re, b.im, 1)], 4)
+  return out.every(Number.isFinite)
 }
 
 /**
- * Host receptances at the absorber, response and excitation nodes over a grid, computed once
- * per model: by modal superposition when damping is classical (exact then), otherwise by a
- * dense complex solve of (K − ω²M + iωC) per frequency.
+ * Host receptances between the response, load and attachment vectors over a grid, computed once
+ * per model: by modal superposition when damping is classical (exact then), otherwise by a dense
+ * complex solve of (K − ω²M + iωC) per frequency.
  * @param prep prepared host
- * @param t node indices j (absorber), r (response), f (excitation)
+ * @param vectors response r, load p and attachment u (or a node triple for unit vectors)
  * @param omega grid, rad/s
  */
 export function hostReceptance(
   prep: PreparedHost,
-  t: NodeTriple,
+  vectors: ReceptanceVectors | NodeTriple,
   omega: Float64Array,
 ): HostReceptance {
-  const { n, phi } = prep.modes
+  const full = 'j' in vectors ? nodeVectors(prep.fullN, vectors) : vectors
+  // Massless nodes: condensed vectors for the dynamics, plus a static term (condense.ts).
+  const v = { r: prep.condense(full.r), p: prep.condense(full.p), u: prep.condense(full.u) }
+  const fixed = [
+    prep.staticTerm(full.r, full.p),
+    prep.staticTerm(full.r, full.u),
+    prep.staticTerm(full.u, full.p),
+    prep.staticTerm(full.u, full.u),
+  ]
+  const n = prep.n
+  const [cr, cp, cu] = [v.r, v.p, v.u].map((a) => participation(prep.modes, a))
   const prod = new Float64Array(4 * n)
+  const parts = new Float64Array(3 * n)
   for (let i = 0; i < n; i++) {
-    const p = (a: number): number => phi[a * n + i] ?? 0
-    prod.set([p(t.r) * p(t.f), p(t.r) * p(t.j), p(t.j) * p(t.f), p(t.j) * p(t.j)], 4 * i)
+    const [a, b, c] = [cr?.[i] ?? 0, cp?.[i] ?? 0, cu?.[i] ?? 0]
+    prod.set([a * b, a * c, c * b, c * c], 4 * i)
+    parts.set([a, b, c], 3 * i)
   }
   const exact = (w: number, out: Receptance4): void => {
-    if (prep.classical) modalAt(prep, prod, w, out)
-    else directAt(prep, t, w, out)
-    // An undamped host is singular exactly at a natural frequency: step off it.
-    if (!Number.isFinite(out[0] ?? NaN) || !Number.isFinite(out[6] ?? NaN))
-      exact(w * (1 + 1e-9), out)
+    let at = w
+    // Step aside from a singular point (an undamped mode's own frequency) until the sum is finite.
+    for (let tries = 0; tries < 4; tries++) {
+      if (prep.classical ? modalAt(prep, prod, at, out) : directAt(prep, v, at, out)) {
+        for (let q = 0; q < 4; q++) out[2 * q] = (out[2 * q] ?? 0) + (fixed[q] ?? 0)
+        return
+      }
+      at = w * (1 + 2 * POLE_GAP * 2 ** tries)
+    }
   }
   const values = new Float64Array(8 * omega.length)
   const tmp: Receptance4 = new Float64Array(8)
@@ -94,5 +162,6 @@ export function hostReceptance(
     exact(w, tmp)
     values.set(tmp, 8 * k)
   })
-  return { omega, values, at: exact, cheap: prep.classical }
+  const lambda = prep.modes.omega.map((w) => w * w)
+  return { omega, values, at: exact, cheap: prep.classical, participation: parts, lambda }
 }

@@ -4,6 +4,7 @@
  */
 export { ModelError } from './errors'
 export { solveSizing } from './solve-sizing'
+export { prepareSizing, type PreparedSizing, type SizedAbsorber } from './size-absorber'
 export type * from './sizing-result'
 export { massRatioSweep, type SweepPoint } from './mass-ratio-sweep'
 export {
@@ -27,7 +28,7 @@ export {
   type Tuning,
 } from './closed-forms'
 export { staticDeflection, STANDARD_GRAVITY, SIZING_CAUTIONS } from './design-values'
-export { targetBand, frequencyGrid, type Band } from './grid'
+export { targetBand, frequencyGrid, CLOSE_MODE_RATIO, type Band, type TargetBand } from './grid'
 export { solveModes, effectiveMass } from './modes'
 export { validateHost } from './validate-host'
 export { validateRequest } from './validate-request'

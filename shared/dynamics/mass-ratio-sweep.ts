@@ -2,7 +2,7 @@ import type { ModelInput } from '../schemas/model'
 import { ModelError } from './errors'
 import { evaluateAbsorber, hostPeak } from './evaluate-absorber'
 import { resolveTuning } from './resolve-tuning'
-import { sizingContext } from './sizing-context'
+import { sizingContext, type SizingContext } from './sizing-context'
 import { absorberValues } from './tuning-objective'
 
 /** One mass ratio of a sweep. */
@@ -27,17 +27,21 @@ export interface SweepPoint {
  * limits (design.md "Mass ratio").
  * @param model a model with an absorber node
  * @param massRatios μ values (m_a/m_eff), each positive
+ * @param context the model's sizing context when already computed (its absorber mass is not used)
  * @throws ModelError for an invalid model, a missing absorber or a bad mass ratio
  */
 export function massRatioSweep(
   model: ModelInput,
   massRatios: number[],
+  context?: SizingContext,
 ): { peakWithout: number | null; points: SweepPoint[] } {
   if (!model.absorber) throw new ModelError('absorber', 'a mass-ratio sweep needs an absorber node')
-  const ctx = sizingContext({
-    ...model,
-    absorber: { ...model.absorber, massRatio: massRatios[0] ?? 0.01, mass: undefined },
-  })
+  const ctx =
+    context ??
+    sizingContext({
+      ...model,
+      absorber: { ...model.absorber, massRatio: massRatios[0] ?? 0.01, mass: undefined },
+    })
   const m = ctx.effectiveMass ?? 0
   const method = typeof model.absorber.tuning === 'string' ? model.absorber.tuning : 'optimize'
   const without = hostPeak(ctx).value

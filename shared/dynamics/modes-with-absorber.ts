@@ -1,26 +1,23 @@
 import type { PreparedHost } from './host'
-import { solveModes } from './modes'
-import type { AbsorberParams, Modes } from './types'
+import { participation } from './participation'
+import { coupledEigenvalues, secularPoles } from './secular'
 
 /**
- * Undamped modes of the host with the absorber as one more node (n+1 degrees of freedom).
+ * Undamped natural frequencies of the host with the absorber (n+1 of them, rad/s, ascending),
+ * from the host modes through the secular equation of the rank-one update: no new eigen solve.
  * @param prep prepared host
- * @param a absorber on host node a.node (kg, N/m)
+ * @param u the coordinate the absorber acts on (e_j for node j), length n
+ * @param mass absorber mass, kg
+ * @param stiffness absorber spring rate, N/m
  */
-export function modesWithAbsorber(prep: PreparedHost, a: AbsorberParams): Modes {
-  const n = prep.n
-  const size = n + 1
-  const k = new Float64Array(size * size)
-  for (let i = 0; i < n; i++) {
-    for (let q = 0; q < n; q++) k[i * size + q] = prep.stiffness[i * n + q] ?? 0
-  }
-  const j = a.node
-  k[j * size + j] = (k[j * size + j] ?? 0) + a.stiffness
-  k[n * size + n] = a.stiffness
-  k[j * size + n] = -a.stiffness
-  k[n * size + j] = -a.stiffness
-  const mass = new Float64Array(size)
-  mass.set(prep.mass)
-  mass[n] = a.mass
-  return solveModes(k, mass)
+export function modesWithAbsorber(
+  prep: PreparedHost,
+  u: Float64Array,
+  mass: number,
+  stiffness: number,
+): Float64Array {
+  const lambda = prep.modes.omega.map((w) => w * w)
+  const weight = participation(prep.modes, prep.condense(u)).map((c) => c * c)
+  const roots = coupledEigenvalues(secularPoles(lambda, weight), mass, stiffness)
+  return Float64Array.from(roots, (x) => Math.sqrt(x))
 }

@@ -8,95 +8,141 @@ export interface Peak {
 
 /** Options of `findPeak`. */
 export interface PeakOptions {
-  /** how many of the highest local maxima on the grid to refine (default 3) */
-  refineTop?: number
-  /** golden-section steps per refinement (default 26: the bracket shrinks 270 000×, enough for a
-   * resonance with ζ = 1e-4 on a grid of 0.25 % steps) */
-  iterations?: number
+  /** more frequencies (rad/s, any order) to evaluate exactly and treat as grid points, e.g. the
+   * natural frequencies of the system, so that no sharp resonance falls between grid points */
+  extra?: ArrayLike<number>
+  /** relative accuracy of each refined frequency (default 3e-9, about √ of the double precision:
+   * below it the curve's values no longer differ) */
+  tolerance?: number
 }
 
-const GOLD = (Math.sqrt(5) - 1) / 2
+const GOLDEN = (3 - Math.sqrt(5)) / 2
 
-function golden(f: (w: number) => number, lo: number, hi: number, steps: number): Peak {
+/**
+ * Local maximum of f on [lo, hi] by Brent's method, started from a known point inside: parabolic
+ * steps where the curve is smooth, golden-section steps otherwise (Brent, Algorithms for
+ * Minimization without Derivatives, 1973, ch. 5). Returns the best point evaluated, so the value
+ * is always one the curve takes.
+ */
+function brentMax(
+  f: (w: number) => number,
+  lo: number,
+  hi: number,
+  start: Peak,
+  tol: number,
+): Peak {
   let a = lo
   let b = hi
-  let c = b - GOLD * (b - a)
-  let d = a + GOLD * (b - a)
-  let fc = f(c)
-  let fd = f(d)
-  for (let s = 0; s < steps; s++) {
-    if (fc > fd) {
-      b = d
-      d = c
-      fd = fc
-      c = b - GOLD * (b - a)
-      fc = f(c)
+  let x = start.omega
+  let w = x
+  let v = x
+  let fx = -start.value
+  let fw = fx
+  let fv = fx
+  let d = 0
+  let e = 0
+  for (let it = 0; it < 100; it++) {
+    const m = 0.5 * (a + b)
+    const tol1 = tol * Math.abs(x) + 1e-300
+    if (Math.abs(x - m) <= 2 * tol1 - 0.5 * (b - a)) break
+    let golden = true
+    if (Math.abs(e) > tol1) {
+      const r = (x - w) * (fx - fv)
+      let q = (x - v) * (fx - fw)
+      let p = (x - v) * q - (x - w) * r
+      q = 2 * (q - r)
+      if (q > 0) p = -p
+      else q = -q
+      const last = e
+      e = d
+      if (Math.abs(p) < Math.abs(0.5 * q * last) && p > q * (a - x) && p < q * (b - x)) {
+        d = p / q
+        const u = x + d
+        if (u - a < 2 * tol1 || b - u < 2 * tol1) d = x < m ? tol1 : -tol1
+        golden = false
+      }
+    }
+    if (golden) {
+      e = (x < m ? b : a) - x
+      d = GOLDEN * e
+    }
+    const u = Math.abs(d) >= tol1 ? x + d : x + (d > 0 ? tol1 : -tol1)
+    const fu = -f(u)
+    if (fu <= fx) {
+      if (u < x) b = x
+      else a = x
+      ;[v, fv, w, fw, x, fx] = [w, fw, x, fx, u, fu]
     } else {
-      a = c
-      c = d
-      fc = fd
-      d = a + GOLD * (b - a)
-      fd = f(d)
+      if (u < x) a = u
+      else b = u
+      if (fu <= fw || w === x) [v, fv, w, fw] = [w, fw, u, fu]
+      else if (fu <= fv || v === x || v === w) [v, fv] = [u, fu]
     }
   }
-  return fc > fd ? { value: fc, omega: c } : { value: fd, omega: d }
-}
-
-function parabolic(omega: Float64Array, mag: Float64Array, i: number): Peak {
-  const x0 = omega[i - 1] ?? 0
-  const x1 = omega[i] ?? 0
-  const x2 = omega[i + 1] ?? 0
-  const y0 = mag[i - 1] ?? 0
-  const y1 = mag[i] ?? 0
-  const y2 = mag[i + 1] ?? 0
-  const den = (x0 - x1) * (x0 - x2) * (x1 - x2)
-  const a = (x2 * (y1 - y0) + x1 * (y0 - y2) + x0 * (y2 - y1)) / den
-  const b = (x2 * x2 * (y0 - y1) + x1 * x1 * (y2 - y0) + x0 * x0 * (y1 - y2)) / den
-  if (!(a < 0)) return { value: y1, omega: x1 }
-  const xv = -b / (2 * a)
-  if (xv <= x0 || xv >= x2) return { value: y1, omega: x1 }
-  const c = y1 - a * x1 * x1 - b * x1
-  return { value: Math.max(y1, a * xv * xv + b * xv + c), omega: xv }
+  return { value: -fx, omega: x }
 }
 
 /**
- * Largest value of a curve known on a grid, refined between grid points so that a sharp
- * resonance is not missed: golden-section search on the exact curve around the highest local
- * maxima (Kiefer 1953), or a parabola through three grid points when no exact curve is given.
+ * Largest value of a curve over its band: every local maximum of the samples (grid and extra
+ * points merged in order) is refined between its neighbours with the exact curve, so a sharp
+ * resonance is not missed between samples as long as each resonance has a sample near it (the
+ * grid carries the natural frequencies for that). The band is [omega[0], omega[last]]; the peak
+ * returned is a value the curve takes inside it.
  * @param omega grid, rad/s, ascending
  * @param mag curve values on the grid
- * @param exact the curve at any frequency (rad/s), or null
+ * @param exact the curve at any frequency (rad/s)
  * @param options see PeakOptions
  */
 export function findPeak(
   omega: Float64Array,
   mag: Float64Array,
-  exact: ((w: number) => number) | null,
+  exact: (w: number) => number,
   options: PeakOptions = {},
 ): Peak {
-  const { refineTop = 3, iterations = 26 } = options
+  const { tolerance = 3e-9, extra = [] } = options
   const n = omega.length
-  // The highest local maxima, kept in order without sorting the whole grid.
-  const maxima: number[] = []
-  for (let i = 0; i < n; i++) {
-    const y = mag[i] ?? 0
-    if ((i > 0 && y < (mag[i - 1] ?? 0)) || (i < n - 1 && y < (mag[i + 1] ?? 0))) continue
-    let at = maxima.length
-    while (at > 0 && (mag[maxima[at - 1] ?? 0] ?? 0) < y) at--
-    if (at < refineTop) maxima.splice(at, 0, i)
-    if (maxima.length > refineTop) maxima.pop()
+  const first = omega[0] ?? 0
+  const last = omega[n - 1] ?? 0
+  const ew: number[] = []
+  for (let k = 0; k < extra.length; k++) {
+    const w = extra[k] ?? 0
+    if (w > first && w < last) ew.push(w)
   }
-  let best: Peak = { value: mag[maxima[0] ?? 0] ?? 0, omega: omega[maxima[0] ?? 0] ?? 0 }
-  for (const i of maxima) {
-    if ((mag[i] ?? 0) < 0.5 * best.value) break
-    const lo = omega[Math.max(i - 1, 0)] ?? 0
-    const hi = omega[Math.min(i + 1, n - 1)] ?? 0
-    const p = exact
-      ? golden(exact, lo, hi, iterations)
-      : i > 0 && i < n - 1
-        ? parabolic(omega, mag, i)
-        : best
-    if (p.value > best.value) best = p
+  ew.sort((a, b) => a - b)
+  const ey = ew.map(exact)
+  const total = n + ew.length
+  let best: Peak = { value: -Infinity, omega: first }
+  // One pass over grid and extra points merged in order, with a window of three samples
+  // (previous p, current c, next); plain variables, as this runs for every candidate tuning.
+  let gi = 0
+  let ei = 0
+  let pw = first
+  let py = -Infinity
+  let cw = 0
+  let cy = 0
+  for (let k = 0; k <= total; k++) {
+    let nw = NaN
+    let ny = -Infinity
+    if (ei < ew.length && (gi >= n || (ew[ei] ?? 0) < (omega[gi] ?? 0))) {
+      nw = ew[ei] ?? 0
+      ny = ey[ei] ?? 0
+      ei++
+    } else if (gi < n) {
+      nw = omega[gi] ?? 0
+      ny = mag[gi] ?? 0
+      gi++
+    }
+    if (k > 0 && cy > py && cy >= ny) {
+      const here: Peak = { value: cy, omega: cw }
+      const hi = k < total ? nw : cw
+      const lo = k > 1 ? pw : cw
+      const p = hi > lo ? brentMax(exact, lo, hi, here, tolerance) : here
+      if (p.value > best.value) best = p
+    }
+    pw = cw
+    py = k > 0 ? cy : -Infinity
+    cw = nw
+    cy = ny
   }
   return best
 }

@@ -1,17 +1,16 @@
-import { absorberAt, absorberOnGrid, type AbsorberPoint } from './absorber-response'
+import {
+  absorberAt,
+  absorberOnGrid,
+  type AbsorberPoint,
+  type AbsorberValues,
+} from './absorber-response'
 import type { Tuning } from './closed-forms'
 import type { HostReceptance } from './host-receptance'
+import { measured, measuredStroke, RECEPTANCE, type Measure } from './measure'
 import { findPeak, type Peak } from './peak'
+import { coupledEigenvalues, secularPoles, type Poles } from './secular'
 
-/** Absorber spring rate and damper of a tuning. */
-export interface AbsorberValues {
-  /** kg */
-  mass: number
-  /** N/m */
-  stiffness: number
-  /** N·s/m */
-  damping: number
-}
+export type { AbsorberValues }
 
 /**
  * k_a = m_a ω_a², c_a = 2 ζ_a m_a ω_a with ω_a = f ω_target (design.md "Absorber").
@@ -33,70 +32,112 @@ export interface TuningProblem {
   mass: number
   /** scratch, one value per grid point */
   mag: Float64Array
+  /** scratch for strokes, one value per grid point */
+  stroke: Float64Array
+  /** secular poles of the host at the attachment, for the natural frequencies with the absorber */
+  poles: Poles
+  /** what is read and minimised */
+  measure: Measure
 }
 
 /**
  * @param rec host receptances over the band
  * @param omegaTarget rad/s
  * @param mass absorber mass, kg
+ * @param measure what is read and minimised (default the receptance)
  */
 export function tuningProblem(
   rec: HostReceptance,
   omegaTarget: number,
   mass: number,
+  measure: Measure = RECEPTANCE,
 ): TuningProblem {
-  return { rec, omegaTarget, mass, mag: new Float64Array(rec.omega.length) }
-}
-
-/** |H'_rf(ω)| at any frequency (rad/s), exact, for the peak refinement. */
-export function exactMagnitude(rec: HostReceptance, a: AbsorberValues): (w: number) => number {
-  const h = new Float64Array(8)
-  const p: AbsorberPoint = { re: 0, im: 0, strokeRe: 0, strokeIm: 0 }
-  return (w) => {
-    rec.at(w, h)
-    absorberAt(h, 0, w, a.mass, a.stiffness, a.damping, p)
-    return Math.sqrt(p.re * p.re + p.im * p.im)
-  }
-}
-
-/** How `peakWith` refines. */
-export interface PeakWithOptions {
-  /** refine exactly even when the host evaluation is a dense solve (non-classical damping) */
-  exact?: boolean
-  /** inside the optimiser: refine the 2 split peaks with 14 golden steps, enough for the broad
-   * peaks of a damped absorber; otherwise 3 peaks and 26 steps */
-  search?: boolean
+  const weight = rec.lambda.map((_, i) => (rec.participation[3 * i + 2] ?? 0) ** 2)
+  const poles = secularPoles(rec.lambda, weight)
+  const mag = new Float64Array(rec.omega.length)
+  return { rec, omegaTarget, mass, mag, stroke: new Float64Array(mag.length), poles, measure }
 }
 
 /**
- * Largest receptance |X_r/F_f| (m/N) over the band with the absorber, refined between grid
- * points. On a non-classical host the refinement is parabolic on the grid unless `exact`.
+ * The measured response with the absorber at any frequency (rad/s), exact, or its stroke.
+ * @param rec host receptances
+ * @param a the absorber
+ * @param measure what is read (default the receptance)
+ * @param stroke read the absorber's stroke per unit load instead of the response
+ */
+export function exactMagnitude(
+  rec: HostReceptance,
+  a: AbsorberValues,
+  measure: Measure = RECEPTANCE,
+  stroke = false,
+): (w: number) => number {
+  const h = new Float64Array(8)
+  const p: AbsorberPoint = { re: 0, im: 0, strokeRe: 0, strokeIm: 0 }
+  const pa = measure.absorberLoad * a.mass
+  return (w) => {
+    rec.at(w, h)
+    absorberAt(h, 0, w, a.mass, a.stiffness, a.damping, pa, p)
+    return stroke
+      ? measuredStroke(measure, w, p.strokeRe, p.strokeIm)
+      : measured(measure, w, p.re, p.im)
+  }
+}
+
+/**
+ * Natural frequencies (rad/s) inside the grid's band of the host with the absorber, undamped in
+ * the two limits of its damper, free (c_a = 0) and locked (c_a → ∞): every lightly damped mode of
+ * the damped system lies near one of them, so these points keep a sharp resonance from falling
+ * between grid points.
  * @param pb the problem
  * @param a absorber values
- * @param options see PeakWithOptions
  */
-export function peakWith(
-  pb: TuningProblem,
-  a: AbsorberValues,
-  options: PeakWithOptions = {},
-): Peak {
-  absorberOnGrid(pb.rec, a.mass, a.stiffness, a.damping, pb.mag)
-  const refine = pb.rec.cheap || options.exact ? exactMagnitude(pb.rec, a) : null
-  const search = options.search === true
-  return findPeak(pb.rec.omega, pb.mag, refine, {
-    refineTop: search ? 2 : 3,
-    iterations: search ? 14 : 26,
+export function coupledFrequencies(pb: TuningProblem, a: AbsorberValues): number[] {
+  const { omega } = pb.rec
+  const min = (omega[0] ?? 0) ** 2
+  const max = (omega[omega.length - 1] ?? 0) ** 2
+  // A point within 1e-8 of a natural frequency is as good a sample as the frequency itself.
+  const options = { min, max, tolerance: 1e-8, unchanged: false }
+  return [
+    ...coupledEigenvalues(pb.poles, a.mass, a.stiffness, options),
+    ...coupledEigenvalues(pb.poles, a.mass, Infinity, options),
+  ].map(Math.sqrt)
+}
+
+/**
+ * Largest measured response over the band with the absorber (m/N for the receptance): every local
+ * maximum over the grid and the natural frequencies refined with the exact rank-one formula. The same number
+ * is the optimiser's objective and the reported peak. The caller checks first that the response
+ * is bounded (undamped-modes.ts).
+ * @param pb the problem
+ * @param a absorber values
+ */
+export function peakWith(pb: TuningProblem, a: AbsorberValues): Peak {
+  absorberOnGrid(pb.rec, a, pb.measure, pb.mag)
+  return findPeak(pb.rec.omega, pb.mag, exactMagnitude(pb.rec, a, pb.measure), {
+    extra: coupledFrequencies(pb, a),
   })
 }
 
 /**
- * ∫ |H'_rf(ω)|² dω over the band (m²/N² · rad/s), trapezoidal on the grid: the mean-square
- * response to a band-limited white-noise force, up to the constant spectral density (H₂).
+ * Largest absorber stroke per unit load over the band with the absorber, refined like the peak.
+ * @param pb the problem
+ * @param a absorber values
+ */
+export function strokeWith(pb: TuningProblem, a: AbsorberValues): Peak {
+  absorberOnGrid(pb.rec, a, pb.measure, pb.mag, pb.stroke)
+  return findPeak(pb.rec.omega, pb.stroke, exactMagnitude(pb.rec, a, pb.measure, true), {
+    extra: coupledFrequencies(pb, a),
+  })
+}
+
+/**
+ * ∫ |Q(ω)|² dω over the band (for the receptance m²/N² · rad/s), trapezoidal on the grid: the
+ * mean-square response to band-limited white noise, up to the constant spectral density (H₂).
  * @param pb the problem
  * @param a absorber values
  */
 export function meanSquareWith(pb: TuningProblem, a: AbsorberValues): number {
-  absorberOnGrid(pb.rec, a.mass, a.stiffness, a.damping, pb.mag)
+  absorberOnGrid(pb.rec, a, pb.measure, pb.mag)
   const { omega } = pb.rec
   let sum = 0
   for (let k = 1; k < omega.length; k++) {

@@ -21,8 +21,10 @@ export interface ValidSpring {
 export interface ValidHost {
   /** ids of the free nodes, in degree-of-freedom order */
   ids: string[]
-  /** kg, one per free node */
+  /** kg, one per free node (0 for a massless node) */
   mass: Float64Array
+  /** indices of the massless free nodes, condensed statically */
+  massless: number[]
   springs: ValidSpring[]
   /** true when some spring has a dashpot (damping is then non-classical) */
   hasDashpots: boolean
@@ -41,6 +43,8 @@ export interface Modes {
 export interface AbsorberParams {
   /** index of the host degree of freedom it sits on */
   node: number
+  /** for an absorber acting between two nodes: the second one (its inertance reacts on it) */
+  relativeTo?: number
   /** kg */
   mass: number
   /** N/m */

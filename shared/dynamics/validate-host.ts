@@ -5,19 +5,12 @@ import type { ValidHost, ValidSpring } from './types'
 /** Node ids mapped to their free-node index, or −1 for a grounded node. */
 export type NodeIndex = Map<string, number>
 
+/** kg; 0 for a massless node (no mass given, or 0), which is condensed statically. */
 function checkNodeMass(node: NodeInput, i: number): number {
   const field = `nodes[${i}].mass`
-  const m = node.mass
-  // Static condensation would hide a modelling slip and breaks with dashpots; refuse instead.
-  if (m === undefined || m === 0) {
-    throw new ModelError(
-      field,
-      `free node '${node.id}' has no mass; massless free nodes are refused, not condensed: ` +
-        'give it a mass (kg) or mark it fixed',
-    )
-  }
+  const m = node.mass ?? 0
   if (!Number.isFinite(m)) throw new ModelError(field, `must be a finite number of kg, got ${m}`)
-  if (m < 0) throw new ModelError(field, `must be positive (kg), got ${m}`)
+  if (m < 0) throw new ModelError(field, `must not be negative (kg), got ${m}`)
   return m
 }
 
@@ -63,15 +56,23 @@ function checkSpring(s: SpringInput, i: number, index: NodeIndex): ValidSpring {
   const k = s.stiffness
   if (!Number.isFinite(k))
     throw new ModelError(`${f}.stiffness`, `must be a finite number of N/m, got ${k}`)
-  if (k <= 0) throw new ModelError(`${f}.stiffness`, `must be positive (N/m), got ${k}`)
+  if (k < 0) throw new ModelError(`${f}.stiffness`, `must not be negative (N/m), got ${k}`)
   const c = s.damping ?? 0
   if (!Number.isFinite(c))
     throw new ModelError(`${f}.damping`, `must be a finite number of N·s/m, got ${c}`)
   if (c < 0) throw new ModelError(`${f}.damping`, `must not be negative (N·s/m), got ${c}`)
+  if (k === 0 && c === 0) {
+    throw new ModelError(
+      `${f}.stiffness`,
+      'a spring with stiffness 0 and no damping does nothing: give a stiffness (N/m), or a ' +
+        'damping (N·s/m) for a pure dashpot',
+    )
+  }
   return { a, b, stiffness: k, damping: c }
 }
 
-/** Free nodes that no chain of springs ties to a support (K̂ would be singular). */
+/** Free nodes that no chain of springs with stiffness ties to a support (K̂ would be singular);
+ * a pure dashpot holds nothing still. */
 function floatingNodes(n: number, springs: ValidSpring[]): number[] {
   const adjacent: number[][] = Array.from({ length: n }, () => [])
   const grounded = new Uint8Array(n)
@@ -83,6 +84,7 @@ function floatingNodes(n: number, springs: ValidSpring[]): number[] {
     }
   }
   for (const s of springs) {
+    if (s.stiffness === 0) continue
     if (s.a < 0) reach(s.b)
     else if (s.b < 0) reach(s.a)
     else {
@@ -94,6 +96,35 @@ function floatingNodes(n: number, springs: ValidSpring[]): number[] {
   const floating: number[] = []
   grounded.forEach((g, k) => g === 0 && floating.push(k))
   return floating
+}
+
+/**
+ * The massless free nodes, condensed statically. Refused where condensation would not be exact:
+ * a dashpot on a massless node (its force then depends on frequency), and a model with no mass.
+ */
+function masslessNodes(
+  model: ModelInput,
+  ids: string[],
+  mass: number[],
+  springs: ValidSpring[],
+): number[] {
+  const massless = ids.flatMap((_, k) => (mass[k] === 0 ? [k] : []))
+  if (massless.length === ids.length) {
+    throw new ModelError('nodes', 'every free node is massless: give the masses (kg) that move')
+  }
+  const bad = springs.findIndex(
+    (s) => s.damping > 0 && ((s.a >= 0 && mass[s.a] === 0) || (s.b >= 0 && mass[s.b] === 0)),
+  )
+  const spring = model.springs[bad]
+  if (spring) {
+    const id = [spring.from, spring.to].find((x) => ids.includes(x) && mass[ids.indexOf(x)] === 0)
+    throw new ModelError(
+      `springs[${bad}].damping`,
+      `a dashpot on massless node '${id}' cannot be condensed exactly (its force would depend ` +
+        'on frequency): give the node a mass (kg) or move the dashpot',
+    )
+  }
+  return massless
 }
 
 /**
@@ -117,6 +148,7 @@ export function validateHost(model: ModelInput): { host: ValidHost; index: NodeI
         'the group would move as a rigid body; connect it to a support',
     )
   }
+  const massless = masslessNodes(model, ids, mass, springs)
   const hasDashpots = springs.some((s) => s.damping > 0)
-  return { host: { ids, mass: Float64Array.from(mass), springs, hasDashpots }, index }
+  return { host: { ids, mass: Float64Array.from(mass), massless, springs, hasDashpots }, index }
 }

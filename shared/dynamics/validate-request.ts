@@ -1,34 +1,40 @@
 import type { AbsorberInput, ModelInput, TuningName, ExplicitTuning } from '../schemas/model'
 import { ModelError } from './errors'
 import type { NodeIndex } from './validate-host'
+import {
+  freeNode,
+  validateLoad,
+  validateResponse,
+  validateSpeed,
+  type ValidLoad,
+  type ValidResponse,
+} from './validate-load'
 
 /** The sizing request after validation; node numbers are free-node indices. */
 export interface ValidRequest {
   /** per host mode, ascending frequency */
   dampingRatios: Float64Array
   targetMode: number
-  excitation: number
-  response: number
+  excitation: ValidLoad
+  response: ValidResponse
   absorber: ValidAbsorber | null
   /** rad/s, or null for the default band of the target mode */
   band: { min: number; max: number } | null
+  /** rad/s, a running speed (min = max) or speed range, or null */
+  speed: { min: number; max: number } | null
 }
 
 export interface ValidAbsorber {
   node: number
+  /** the second node when the absorber acts between two nodes, else null */
+  relativeTo: number | null
   /** exactly one of the two is set */
   massRatio: number | null
   /** kg */
   mass: number | null
   tuning: TuningName | ExplicitTuning
-}
-
-function freeNode(index: NodeIndex, id: string, field: string, role: string): number {
-  const k = index.get(id)
-  if (k === undefined) throw new ModelError(field, `unknown node id '${id}'`)
-  if (k < 0)
-    throw new ModelError(field, `node '${id}' is fixed (grounded); ${role} must be a free node`)
-  return k
+  /** m at the design load, or null */
+  strokeLimit: number | null
 }
 
 function positive(value: number, field: string, unit: string): number {
@@ -57,6 +63,12 @@ function dampingRatios(value: ModelInput['hostDampingRatio'], n: number): Float6
 
 function validAbsorber(a: AbsorberInput, index: NodeIndex): ValidAbsorber {
   const node = freeNode(index, a.node, 'absorber.node', 'an absorber')
+  const relativeTo =
+    a.relativeTo === undefined
+      ? null
+      : freeNode(index, a.relativeTo, 'absorber.relativeTo', 'the second node of an absorber')
+  if (relativeTo === node)
+    throw new ModelError('absorber.relativeTo', 'must differ from absorber.node')
   if ((a.massRatio === undefined) === (a.mass === undefined)) {
     throw new ModelError(
       'absorber.massRatio',
@@ -74,7 +86,9 @@ function validAbsorber(a: AbsorberInput, index: NodeIndex): ValidAbsorber {
       throw new ModelError('absorber.tuning.dampingRatio', `must be a finite number ≥ 0, got ${z}`)
     }
   }
-  return { node, massRatio, mass, tuning }
+  const strokeLimit =
+    a.strokeLimit === undefined ? null : positive(a.strokeLimit, 'absorber.strokeLimit', ' of m')
+  return { node, relativeTo, massRatio, mass, tuning, strokeLimit }
 }
 
 function validBand(band: ModelInput['band']): ValidRequest['band'] {
@@ -94,14 +108,6 @@ function validBand(band: ModelInput['band']): ValidRequest['band'] {
  */
 export function validateRequest(model: ModelInput, index: NodeIndex, n: number): ValidRequest {
   const absorber = model.absorber === undefined ? null : validAbsorber(model.absorber, index)
-  // Each of excitation and response defaults to the other, then to the absorber node.
-  const pick = (key: 'excitation' | 'response'): number => {
-    const other = key === 'excitation' ? 'response' : 'excitation'
-    const id = model[key]?.node ?? model[other]?.node ?? model.absorber?.node
-    if (id === undefined)
-      throw new ModelError(`${key}.node`, 'is required when there is no absorber')
-    return freeNode(index, id, `${key}.node`, `the ${key}`)
-  }
   const targetMode = model.targetMode ?? 1
   if (!Number.isInteger(targetMode) || targetMode < 1 || targetMode > n) {
     throw new ModelError(
@@ -112,9 +118,11 @@ export function validateRequest(model: ModelInput, index: NodeIndex, n: number):
   return {
     dampingRatios: dampingRatios(model.hostDampingRatio, n),
     targetMode,
-    excitation: pick('excitation'),
-    response: pick('response'),
+    // A single force and the response each default to the other, then to the absorber node.
+    excitation: validateLoad(model, index, n),
+    response: validateResponse(model, index),
     absorber,
     band: validBand(model.band),
+    speed: validateSpeed(model),
   }
 }

@@ -162,6 +162,8 @@ export const CustomerSizingSchema = SizingSummarySchema.pick({
   orientation: true,
   absorber: true,
   stroke: true,
+  strokeLimit: true,
+  load: true,
   staticDeflection: true,
   reduction: true,
   acceptance: true,

@@ -4,11 +4,16 @@ import { IdSchema } from './ids'
 import {
   bandSchema,
   explicitTuningSchema,
+  loadKindSchema,
+  nodeForceSchema,
   nodeSchema,
+  speedSchema,
   springSchema,
   tuningNameSchema,
+  type LoadKind,
 } from './model'
 import { SizingRecordLinkSchema } from './measurement'
+import { strictObject } from './strict'
 
 /** The host structure as the engineer edits it: a revision of a model stores exactly this. */
 export const ModelDefinitionSchema = z.object({
@@ -26,7 +31,7 @@ export const ResponseQuantitySchema = z.enum(['displacement', 'velocity', 'accel
 export type ResponseQuantity = z.infer<typeof ResponseQuantitySchema>
 
 /** An acceptance limit on the peak response at the response node, in SI units. */
-export const AcceptanceSchema = z.object({
+export const AcceptanceSchema = strictObject({
   presetId: z.string().max(60).optional(),
   label: z.string().max(160),
   quantity: ResponseQuantitySchema,
@@ -35,7 +40,7 @@ export const AcceptanceSchema = z.object({
 })
 export type Acceptance = z.infer<typeof AcceptanceSchema>
 
-export const SizingInputSchema = z.object({
+const SizingInputFields = strictObject({
   title: z.string().trim().min(1, 'required').max(160),
   siteId: z.number().int().positive(),
   modelId: z.number().int().positive(),
@@ -44,18 +49,80 @@ export const SizingInputSchema = z.object({
   records: z.array(SizingRecordLinkSchema).max(20).optional(),
   targetMode: z.number().int().min(1, 'modes are numbered from 1 (the lowest)'),
   absorberNode: z.string().min(1, 'required'),
+  /** where a single force acts (loadKind 'force') */
   excitationNode: z.string().min(1, 'required'),
   responseNode: z.string().min(1, 'required'),
-  /** N, amplitude of the harmonic design force, up to 1e9 N */
+  /** N, amplitude of the harmonic design force ('force'; the total for 'mode-shaped'), up to
+   * 1e9 N */
   forceAmplitude: z.number().positive('must be above zero').max(1e9, 'at most 1e9 N'),
   loadPresetId: z.string().max(60).optional(),
   massRatio: z.number().min(0.001, 'at least 0.1 %').max(0.5, 'at most 50 %'),
   tuning: z.union([tuningNameSchema, explicitTuningSchema]).default('optimize'),
   orientation: OrientationSchema.default('vertical'),
+  /** the limit on the peak response; its quantity is also what the optimiser minimises */
   acceptance: AcceptanceSchema,
   /** ± fraction of the host frequency for the robustness check */
   detuningTolerance: z.number().min(0).max(0.2).default(0.1),
   band: bandSchema.optional(),
+  /** what loads the structure: one force (default), a force vector, a load shaped like a mode
+   * (walking on a span), or base (support) acceleration; absent means 'force' */
+  loadKind: loadKindSchema.optional(),
+  /** for loadKind 'forces': N each, in phase (forceAmplitude is not used) */
+  forces: z
+    .array(nodeForceSchema)
+    .min(1, 'give at least one force')
+    .max(1000, 'at most 1000 forces')
+    .optional(),
+  /** for loadKind 'mode-shaped': the mode the load follows (default the target mode) */
+  loadMode: z.number().int().min(1, 'modes are numbered from 1 (the lowest)').optional(),
+  /** for loadKind 'base': amplitude of the support acceleration, m/s² */
+  baseAcceleration: z
+    .number()
+    .positive('must be above zero')
+    .max(1e4, 'at most 1e4 m/s²')
+    .optional(),
+  /** a machine's running speed { hz } or speed range { minHz, maxHz }: the band to tune over */
+  speed: speedSchema.optional(),
+  /** kg·m, a rotating unbalance m·e at excitationNode: the force is unbalance × ω²
+   * (forceAmplitude is not used) */
+  unbalance: z.number().positive('must be above zero').max(1e6, 'at most 1e6 kg·m').optional(),
+  /** m, the largest absorber stroke allowed at the design load: a constraint of the optimiser */
+  strokeLimit: z.number().positive('must be above zero').max(10, 'at most 10 m').optional(),
+  /** a second node: the absorber acts on the relative motion of absorberNode against it */
+  relativeToNode: z.string().min(1, 'required').optional(),
+})
+
+/** Which sizing fields each load kind uses; a field given for another kind is refused. */
+const ONLY_FOR: [
+  key: 'forces' | 'loadMode' | 'baseAcceleration' | 'unbalance',
+  kinds: LoadKind[],
+][] = [
+  ['forces', ['forces']],
+  ['loadMode', ['mode-shaped']],
+  ['baseAcceleration', ['base']],
+  ['unbalance', ['force']],
+]
+
+export const SizingInputSchema = SizingInputFields.superRefine((s, ctx) => {
+  const kind = s.loadKind ?? 'force'
+  for (const [key, kinds] of ONLY_FOR) {
+    if (s[key] !== undefined && !kinds.includes(kind))
+      ctx.addIssue({ code: 'custom', path: [key], message: `only for loadKind '${kinds[0]}'` })
+  }
+  if (kind === 'forces' && !s.forces)
+    ctx.addIssue({ code: 'custom', path: ['forces'], message: "required for loadKind 'forces'" })
+  if (kind === 'base' && s.baseAcceleration === undefined)
+    ctx.addIssue({
+      code: 'custom',
+      path: ['baseAcceleration'],
+      message: "required for loadKind 'base'",
+    })
+  if (s.speed && s.band)
+    ctx.addIssue({
+      code: 'custom',
+      path: ['speed'],
+      message: 'give either a band or a running speed',
+    })
 })
 export type SizingInput = z.infer<typeof SizingInputSchema>
 
@@ -90,6 +157,10 @@ export const SizingSummarySchema = z.object({
   }),
   /** m, peak relative displacement of the absorber mass at the design load */
   stroke: z.number(),
+  /** m, the stroke limit the sizing was made to; absent on older sizings */
+  strokeLimit: z.number().nullable().optional(),
+  /** the design load in words; absent on older sizings */
+  load: z.string().optional(),
   /** m, static deflection of a vertical unit, g/ω_a² */
   staticDeflection: z.number(),
   /** peak without ÷ peak with; null when the host has no damping (unbounded without) */

@@ -2,6 +2,7 @@ import {
   detuningRobustness,
   frequencyResponse,
   massRatioSweep,
+  prepareSizing,
   solveSizing,
   type DetuningPoint,
   type FrequencyResponse,
@@ -9,22 +10,28 @@ import {
   type SweepPoint,
 } from '../dynamics'
 import type { ModelDefinition, ResponseQuantity, SizingInput } from '../schemas/sizing'
-import { toModelInput } from './model-input'
+import { loadAmplitude, toModelInput } from './model-input'
 
 /** Mass ratios of the achievable-reduction curve (common practice spans 0.5–10 %). */
 export const SWEEP_MASS_RATIOS = [0.005, 0.01, 0.015, 0.02, 0.03, 0.04, 0.05, 0.07, 0.1]
 
 export interface SizingChecks {
-  /** N */
+  /** the design load amplitude: N, m/s² of base acceleration or kg·m of unbalance (loadUnit) */
   forceAmplitude: number
+  /** 'N', 'm/s²' or 'kg·m' */
+  loadUnit: string
   quantity: ResponseQuantity
-  /** peak response at the response node without / with the absorber (m, m/s or m/s²) */
+  /** peak response at the response node without / with the absorber (m, m/s or m/s²; under base
+   * motion displacement is relative and acceleration absolute); without is null when unbounded,
+   * with is Infinity when unbounded */
   responseWithout: number | null
   responseWith: number
   limit: number
   passes: boolean
   /** m, largest absorber stroke at the design load */
   stroke: number
+  /** m, the stroke limit asked for, or null */
+  strokeLimit: number | null
 }
 
 export interface SizingEvaluation {
@@ -35,79 +42,42 @@ export interface SizingEvaluation {
   checks: SizingChecks
 }
 
-const POWER: Record<ResponseQuantity, number> = { displacement: 0, velocity: 1, acceleration: 2 }
-
-/**
- * The peak of |X/F|·ωᵖ at the design force. The grid maximum of the curve can sit just below a
- * sharp peak, so the engine's refined receptance peak (times ωᵖ at its frequency) bounds it too.
- */
-function peakResponse(
-  curve: number[],
-  refined: number | null,
-  refinedHz: number | null,
-  p: number,
-  force: number,
-) {
-  let best = 0
-  for (const v of curve) if (v > best) best = v
-  if (refined !== null && refinedHz !== null)
-    best = Math.max(best, refined * (2 * Math.PI * refinedHz) ** p)
-  return best * force
-}
-
-function curveOf(c: FrequencyResponse['without'], q: ResponseQuantity) {
-  return q === 'displacement' ? c.receptance : q === 'velocity' ? c.mobility : c.accelerance
-}
-
 /**
  * The whole sizing of one model revision: engine result, before/after response, achievable
- * reduction against absorber mass, detuning robustness and the checks at the design load.
+ * reduction against absorber mass, detuning robustness and the checks at the design load. The
+ * engine reads and minimises the acceptance limit's quantity, so its peaks are the checked ones.
  * Pure: the browser previews with it and the server's worker pool stores its answer.
  * @throws ModelError naming the field when the model or the choices are invalid
  */
 export function evaluateSizing(model: ModelDefinition, input: SizingInput): SizingEvaluation {
   const request = toModelInput(model, input)
-  const result = solveSizing(request)
-  const response = frequencyResponse(request, { points: 300 })
-  const sweep = massRatioSweep(request, SWEEP_MASS_RATIOS).points
-  const robustness = detuningRobustness(request, {
-    range: 0.1,
-    points: 21,
-    tolerance: input.detuningTolerance,
-  })
-  const q = input.acceptance.quantity
-  const p = POWER[q]
-  const F = input.forceAmplitude
-  const responseWith = peakResponse(
-    response.with ? curveOf(response.with, q) : [],
-    result.peak.with,
-    result.peak.withFrequencyHz,
-    p,
-    F,
+  // One host preparation and one sizing, shared by every part of the study.
+  const prepared = prepareSizing(request)
+  const result = solveSizing(request, prepared)
+  const response = frequencyResponse(request, { points: 300 }, prepared)
+  const sweep = massRatioSweep(request, SWEEP_MASS_RATIOS, prepared.ctx).points
+  const robustness = detuningRobustness(
+    request,
+    { range: 0.1, points: 21, tolerance: input.detuningTolerance },
+    prepared,
   )
-  const responseWithout =
-    result.peak.without === null
-      ? null
-      : peakResponse(
-          curveOf(response.without, q),
-          result.peak.without,
-          result.peak.withoutFrequencyHz,
-          p,
-          F,
-        )
+  const amplitude = loadAmplitude(input)
+  const responseWith = (result.peak.with ?? Infinity) * amplitude
   return {
     result,
     response,
     sweep,
     robustness,
     checks: {
-      forceAmplitude: F,
-      quantity: q,
-      responseWithout,
+      forceAmplitude: amplitude,
+      loadUnit: result.excitation.unit,
+      quantity: input.acceptance.quantity,
+      responseWithout: result.peak.without === null ? null : result.peak.without * amplitude,
       responseWith,
       limit: input.acceptance.limit,
       passes: responseWith <= input.acceptance.limit,
-      stroke: (result.design?.maxStrokePerForce ?? 0) * F,
+      stroke: result.design?.maxStroke ?? Infinity,
+      strokeLimit: input.strokeLimit ?? null,
     },
   }
 }

@@ -58,6 +58,8 @@ describe('the quote PDF', () => {
     expect(text).toContain('are for a licensed engineer under the local codes')
     expect(text).toContain('fall restraint')
     expect(text).toContain('Floorline S, 220 kg moving mass')
+    expect(text).toContain('Design load Harmonic force 280 N at node-3')
+    expect(text).toContain('9 mm (limit 20 mm)')
   })
 })
 

@@ -83,6 +83,8 @@ export function sizingSummary(companyId: number, overrides: Partial<SizingSummar
       dampingRatio: 0.09,
     },
     stroke: 0.009,
+    strokeLimit: 0.02,
+    load: 'Harmonic force 280 N at node-3',
     staticDeflection: 9.81 / (omega * omega),
     reduction: 6.2,
     acceptance: {

@@ -68,8 +68,10 @@ describe('handing over a design that fails its checks', () => {
       'acceptance',
       'catalogue',
     ])
+    // The optimiser minimises the quantity the acceptance limit is stated in (acceleration
+    // here), so the peak is the acceleration-optimal one: 0.075 m/s² on this model.
     expect(res.body.error.details[0].message).toMatch(
-      /^With the absorber the peak acceleration is 0\.08\d* m\/s², above the limit of 0\.01 m\/s²/,
+      /^With the absorber the peak acceleration is 0\.07\d* m\/s², above the limit of 0\.01 m\/s²/,
     )
     expect((await agent.get(`/api/sizings/${sizing.id}`)).body.state).toBe('draft')
     expect(await acknowledgementRows(sizing.id)).toBe(0)

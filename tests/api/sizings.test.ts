@@ -136,7 +136,7 @@ describe('sizings', () => {
     // the given tuning is the one solved: f = ω_a/ω_target and ζ_a as entered
     expect(reopened.evaluation.result.absorber.frequencyRatio).toBeCloseTo(0.95, 12)
     expect(reopened.evaluation.result.absorber.dampingRatio).toBeCloseTo(0.08, 12)
-    expect(reopened.evaluation.result.band).toEqual({ minHz: 0.5, maxHz: 2 })
+    expect(reopened.evaluation.result.band).toMatchObject({ minHz: 0.5, maxHz: 2, source: 'user' })
   })
 
   it('refuses a linked record of another site, naming the field', async () => {
@@ -196,6 +196,85 @@ describe('sizings', () => {
     expect(res.status).toBe(400)
     expect(res.body.error.details[0].path).toBe('body.input.absorberNode')
     expect((await agent.get('/api/sizings').query({ siteId: site.id })).body).toEqual([])
+  })
+
+  it('accepts and stores base excitation between storeys with a stroke limit, and shows the load in the summary', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const { site, model } = await siteAndModel(agent)
+    const input = sizingInput(site.id, model.id, {
+      loadKind: 'base',
+      baseAcceleration: 0.4,
+      relativeToNode: 'storey-4',
+      strokeLimit: 0.3,
+    })
+    const res = await agent.post('/api/sizings').send({ input })
+    expect(res.status).toBe(201)
+    const r = res.body.evaluation.result
+    expect(r.excitation).toMatchObject({ kind: 'base', amplitude: 0.4, unit: 'm/s²' })
+    expect(r.absorber).toMatchObject({ node: 'storey-5', relativeTo: 'storey-4', strokeLimit: 0.3 })
+    expect(res.body.evaluation.checks).toMatchObject({ forceAmplitude: 0.4, loadUnit: 'm/s²' })
+    expect(res.body.summary).toMatchObject({
+      load: 'Support (base) acceleration 0.4 m/s²',
+      strokeLimit: 0.3,
+    })
+    const back = await agent.get(`/api/sizings/${res.body.id}`)
+    expect(back.body.input).toMatchObject({
+      loadKind: 'base',
+      baseAcceleration: 0.4,
+      relativeToNode: 'storey-4',
+      strokeLimit: 0.3,
+    })
+  })
+
+  it('refuses a field of another load kind and an engine error on a new field, naming each', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const { site, model } = await siteAndModel(agent)
+    const wrongKind = await agent.post('/api/sizings').send({
+      input: sizingInput(site.id, model.id, {
+        unbalance: 0.1,
+        loadKind: 'base',
+        baseAcceleration: 1,
+      }),
+    })
+    expect(wrongKind.status).toBe(400)
+    expect(wrongKind.body.error.details[0]).toEqual({
+      path: 'body.input.unbalance',
+      message: "only for loadKind 'force'",
+    })
+    const sameNode = await agent
+      .post('/api/sizings')
+      .send({ input: sizingInput(site.id, model.id, { relativeToNode: 'storey-5' }) })
+    expect(sameNode.status).toBe(400)
+    expect(sameNode.body.error.details[0].path).toBe('body.input.relativeToNode')
+  })
+
+  // Common practice: a misspelt option is refused instead of silently running with a default.
+  it('refuses a sizing input with a misspelt key, naming it and the likely key, and saves nothing', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const { site, model } = await siteAndModel(agent)
+    const input = { ...sizingInput(site.id, model.id), massRatios: 0.05 }
+    const res = await agent.post('/api/sizings').send({ input })
+    expect(res.status).toBe(400)
+    expect(res.body.error.details[0]).toEqual({
+      path: 'body.input',
+      message: "unknown key 'massRatios' — did you mean 'massRatio'?",
+    })
+    expect((await agent.get('/api/sizings').query({ siteId: site.id })).body).toEqual([])
+  })
+
+  it('refuses a model node with a misspelt key, naming it', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const site = (await agent.post('/api/sites').send(siteBody((await makeCompany(t)).id))).body
+    const definition = buildingDefinition()
+    const nodes = definition.nodes.map((n, i) => (i === 1 ? { ...n, fixd: true } : n))
+    const res = await agent
+      .post('/api/models')
+      .send({ siteId: site.id, name: 'Typo', definition: { ...definition, nodes } })
+    expect(res.status).toBe(400)
+    expect(res.body.error.details[0]).toEqual({
+      path: 'body.definition.nodes.1',
+      message: "unknown key 'fixd' — did you mean 'fixed'?",
+    })
   })
 
   it('does not let an engineer change another engineer’s sizing', async () => {

@@ -4,6 +4,7 @@ import { tmpdir } from 'node:os'
 import { join } from 'node:path'
 import { promisify } from 'node:util'
 import { describe, expect, it } from 'vitest'
+import { cliCases } from './cli-cases'
 import { invalidCases, validModel } from './invalid-models'
 
 const run = promisify(execFile)
@@ -64,4 +65,16 @@ describe('the solve command line', () => {
     expect(broken.code).toBe(2)
     expect(broken.stderr.trim()).toMatch(/^solve: .*broken\.json is not valid JSON: /)
   }, 60000)
+
+  it('solves every kind of load, response quantity, speed and element, as the tables describe', async () => {
+    const results = await Promise.all(
+      cliCases.map((c, i) => solve(write(`case-${i}.json`, JSON.stringify(c.model)))),
+    )
+    results.forEach((r, i) => {
+      const c = cliCases[i]
+      expect(r.stderr, c?.name).toBe('')
+      expect(r.code, c?.name).toBe(0)
+      c?.check(JSON.parse(r.stdout))
+    })
+  }, 180000)
 })

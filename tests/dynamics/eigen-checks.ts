@@ -1,14 +1,20 @@
 import { EigenvalueDecomposition, Matrix } from 'ml-matrix'
 import { validateHost } from '../../shared/dynamics'
 import { assembleLaplacian } from '../../shared/dynamics/assemble'
+import { condense } from '../../shared/dynamics/condense'
 import type { Modes } from '../../shared/dynamics/types'
 import type { ModelInput } from '../../shared/schemas/model'
 
-/** K̂ (N/m, row-major) and the diagonal of M (kg) of a model, as the engine assembles them. */
+/** K̂ (N/m, row-major) and the diagonal of M (kg) of a model, as the engine assembles them
+ * (massless nodes condensed statically). */
 export function matricesOf(model: ModelInput): { n: number; k: Float64Array; m: Float64Array } {
   const { host } = validateHost(model)
   const n = host.ids.length
-  return { n, k: assembleLaplacian(n, host.springs, (s) => s.stiffness), m: host.mass }
+  const k = assembleLaplacian(n, host.springs, (s) => s.stiffness)
+  if (host.massless.length === 0) return { n, k, m: host.mass }
+  const c = condense(k, host.massless, n)
+  const m = Float64Array.from(c.keep, (i) => host.mass[i] ?? 0)
+  return { n: m.length, k: c.stiffness, m }
 }
 
 /**

@@ -67,3 +67,27 @@ export function unitOscillator(
     absorber: { node: 'host', massRatio: mu, tuning },
   }
 }
+
+/**
+ * A two-way floor lumped into nx × ny equal masses on a grid of springs, fixed on all four edges,
+ * with the spring rates chosen so that mode 2 lies 10 % above mode 1 (f1 Hz): for the lumped
+ * membrane λ_pq = (4k_x/m) sin²(pπ/(2(nx+1))) + (4k_y/m) sin²(qπ/(2(ny+1))) (separable
+ * fixed–fixed chains), so λ_21/λ_11 = 1.21 fixes k_y/k_x. Node ids "p<i>-<j>", support "edge".
+ */
+export function closeModeFloor(nx = 20, ny = 10, m = 500, f1 = 5): ModelInput {
+  const s = (p: number, count: number): number => Math.sin((p * Math.PI) / (2 * (count + 1))) ** 2
+  const ratio = (s(2, nx) - 1.21 * s(1, nx)) / (0.21 * s(1, ny))
+  const kx = (m * (2 * Math.PI * f1) ** 2) / (4 * (s(1, nx) + ratio * s(1, ny)))
+  const id = (i: number, j: number): string =>
+    i < 1 || i > nx || j < 1 || j > ny ? 'edge' : `p${i}-${j}`
+  const nodes: ModelInput['nodes'] = [{ id: 'edge', fixed: true }]
+  const springs: ModelInput['springs'] = []
+  for (let j = 1; j <= ny; j++) {
+    for (let i = 1; i <= nx; i++) nodes.push({ id: id(i, j), mass: m })
+    for (let i = 0; i <= nx; i++) springs.push({ from: id(i, j), to: id(i + 1, j), stiffness: kx })
+  }
+  for (let i = 1; i <= nx; i++)
+    for (let j = 0; j <= ny; j++)
+      springs.push({ from: id(i, j), to: id(i, j + 1), stiffness: ratio * kx })
+  return { nodes, springs }
+}

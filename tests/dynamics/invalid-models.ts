@@ -30,6 +30,8 @@ export interface InvalidCase {
   /** the CLI line when it differs (zod reports non-finite numbers before the engine sees them) */
   cli?: RegExp
   json?: string
+  /** refused by the schema, before the engine (the engine itself ignores extra keys) */
+  schemaOnly?: boolean
 }
 
 const edit = (f: (m: ModelInput) => void): ModelInput => {
@@ -61,10 +63,10 @@ export const invalidCases: InvalidCase[] = [
     cli: /nodes\[2\]\.mass: expected a finite number/,
   },
   {
-    name: 'a non-positive mass',
+    name: 'a negative mass',
     model: edit((m) => (at(m.nodes, 2).mass = -200)),
     field: 'nodes[2].mass',
-    message: /^nodes\[2\]\.mass: must be positive \(kg\), got -200$/,
+    message: /^nodes\[2\]\.mass: must not be negative \(kg\), got -200$/,
   },
   {
     name: 'a non-finite stiffness',
@@ -75,10 +77,25 @@ export const invalidCases: InvalidCase[] = [
     cli: /springs\[0\]\.stiffness: expected a finite number/,
   },
   {
-    name: 'a non-positive stiffness',
+    name: 'a spring with neither stiffness nor damping',
     model: edit((m) => (at(m.springs, 1).stiffness = 0)),
     field: 'springs[1].stiffness',
-    message: /^springs\[1\]\.stiffness: must be positive \(N\/m\), got 0$/,
+    message: /^springs\[1\]\.stiffness: a spring with stiffness 0 and no damping does nothing/,
+  },
+  {
+    name: 'a negative stiffness',
+    model: edit((m) => (at(m.springs, 1).stiffness = -5)),
+    field: 'springs[1].stiffness',
+    message: /^springs\[1\]\.stiffness: must not be negative \(N\/m\), got -5$/,
+  },
+  {
+    name: 'a node held only by a dashpot',
+    model: edit((m) => {
+      m.nodes.push({ id: 'cart', mass: 10 })
+      m.springs.push({ from: 'ground', to: 'cart', stiffness: 0, damping: 50 })
+    }),
+    field: 'nodes[3]',
+    message: /^nodes\[3\]: node 'cart' has no path through springs to a fixed node/,
   },
   {
     name: 'a negative damping',
@@ -109,11 +126,20 @@ export const invalidCases: InvalidCase[] = [
       /^absorber\.node: node 'ground' is fixed \(grounded\); an absorber must be a free node$/,
   },
   {
-    name: 'a massless free node',
-    model: edit((m) => delete at(m.nodes, 2).mass),
-    field: 'nodes[2].mass',
+    name: 'a dashpot on a massless node',
+    model: edit((m) => {
+      delete at(m.nodes, 2).mass
+      at(m.springs, 1).damping = 40
+    }),
+    field: 'springs[1].damping',
     message:
-      /^nodes\[2\]\.mass: free node 'rail' has no mass; massless free nodes are refused, not condensed/,
+      /^springs\[1\]\.damping: a dashpot on massless node 'rail' cannot be condensed exactly/,
+  },
+  {
+    name: 'a model without mass',
+    model: edit((m) => m.nodes.forEach((x) => delete x.mass)),
+    field: 'nodes',
+    message: /^nodes: every free node is massless/,
   },
   {
     name: 'a target mode that does not exist',
@@ -132,5 +158,55 @@ export const invalidCases: InvalidCase[] = [
     model: edit((m) => m.absorber && (m.absorber.massRatio = 0)),
     field: 'absorber.massRatio',
     message: /^absorber\.massRatio: must be a positive finite number, got 0$/,
+  },
+  {
+    name: 'a force vector without forces',
+    model: edit((m) => (m.excitation = { kind: 'forces' })),
+    field: 'excitation.forces',
+    message: /^excitation\.forces: is required for kind 'forces'$/,
+  },
+  {
+    name: 'a node given with base motion',
+    model: edit((m) => (m.excitation = { kind: 'base', node: 'deck' })),
+    field: 'excitation.node',
+    message: /^excitation\.node: applies to kind 'force', not 'base'$/,
+  },
+  {
+    name: 'an unbalance under base motion',
+    model: edit((m) => (m.excitation = { kind: 'base', unbalance: true })),
+    field: 'excitation.unbalance',
+    message: /^excitation\.unbalance: applies to kind 'force' or 'forces', not 'base'$/,
+  },
+  {
+    name: 'a mode-shaped load on a mode that does not exist',
+    model: edit((m) => (m.excitation = { kind: 'mode-shaped', mode: 3 })),
+    field: 'excitation.mode',
+    message: /^excitation\.mode: mode 3 does not exist: the host has 2 mode\(s\)$/,
+  },
+  {
+    name: 'a zero load amplitude',
+    model: edit((m) => (m.excitation = { node: 'deck', amplitude: 0 })),
+    field: 'excitation.amplitude',
+    message: /^excitation\.amplitude: must be a positive finite number, got 0$/,
+  },
+  {
+    name: 'both a band and a running speed',
+    model: edit((m) => Object.assign(m, { band: { minHz: 1, maxHz: 9 }, speed: { hz: 4 } })),
+    field: 'speed',
+    message: /^speed: give either a band or a running speed, not both$/,
+  },
+  {
+    name: 'a speed range upside down',
+    model: edit((m) => (m.speed = { minHz: 5, maxHz: 4 })),
+    field: 'speed.maxHz',
+    message: /^speed\.maxHz: must be above speed\.minHz$/,
+  },
+  {
+    name: 'a misspelt key',
+    model: edit((m) => Object.assign(m, { hostDampingRatios: 0.02 })),
+    field: '(top level)',
+    message: /^$/,
+    cli: /^solve: invalid model: \(top level\): unknown key 'hostDampingRatios' — did you mean 'hostDampingRatio'\?$/,
+    schemaOnly: true,
   },
 ]

@@ -162,3 +162,44 @@ describe('numerical H₂ optimisation', () => {
     })
   })
 })
+
+describe('closed forms keep their stated scope', () => {
+  // Source: the scopes stated with each formula (closed-forms.ts): Den Hartog (1956) and Asami &
+  // Nishihara (2002) for an undamped single-mode host under a harmonic force with the
+  // displacement read at the absorber; Warburton (1982) base forms for base motion.
+  it('flags nothing inside the scope', () => {
+    expect(solveSizing(unitOscillator(0, 0.02, 'den-hartog')).absorber?.outsideScope).toEqual([])
+    expect(solveSizing(unitOscillator(0.02, 0.02, 'ioi-ikeda')).absorber?.outsideScope).toEqual([])
+    const base = solveSizing({
+      ...unitOscillator(0, 0.02, 'warburton-base-harmonic'),
+      excitation: { kind: 'base' },
+    })
+    expect(base.absorber?.outsideScope).toEqual([])
+  })
+
+  it('names every choice outside the scope and says so in a note, the optimiser flagging none', () => {
+    const model = {
+      ...unitOscillator(0.02, 0.02, 'den-hartog' as const),
+      excitation: { kind: 'base' as const },
+      response: { node: 'host', quantity: 'acceleration' as const },
+    }
+    const r = solveSizing(model)
+    expect(r.absorber?.outsideScope).toEqual([
+      'a damped host (ζ = 0.02 on the target mode)',
+      'base excitation',
+      'an acceleration response',
+    ])
+    expect(r.notes.join(' ')).toMatch(
+      /'den-hartog' is used outside its stated scope: a damped host/,
+    )
+    const force = solveSizing({ ...model, excitation: { node: 'host' }, response: undefined })
+    expect(force.absorber?.outsideScope).toEqual(['a damped host (ζ = 0.02 on the target mode)'])
+    const speed = solveSizing({ ...unitOscillator(0, 0.02, 'warburton-base'), speed: { hz: 0.2 } })
+    expect(speed.absorber?.outsideScope).toEqual([
+      'a running-speed band (the closed forms tune to the mode, not to a forcing frequency)',
+      'a force on the structure',
+    ])
+    const optimised = solveSizing({ ...model, absorber: { node: 'host', massRatio: 0.02 } })
+    expect(optimised.absorber?.outsideScope).toEqual([])
+  })
+})

@@ -1,6 +1,7 @@
 import type { Site } from '../../../shared/schemas/site'
 import type { SizingInput, SizingSummary } from '../../../shared/schemas/sizing'
 import type { SizingEvaluation } from '../../../shared/sizing/evaluate-sizing'
+import { describeLoad } from '../../../shared/sizing/load-description'
 
 export type StoredSummary = Omit<
   SizingSummary,
@@ -38,6 +39,8 @@ export function summarise(site: Site, input: SizingInput, ev: SizingEvaluation):
       dampingRatio: a.dampingRatio,
     },
     stroke: checks.stroke,
+    strokeLimit: input.strokeLimit ?? null,
+    load: describeLoad(input),
     staticDeflection: result.design.staticDeflection,
     reduction: result.peak.reductionFactor,
     acceptance: { ...input.acceptance, responseWith: checks.responseWith, passes: checks.passes },

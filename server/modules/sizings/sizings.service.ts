@@ -74,7 +74,11 @@ export function sizingsService(deps: SizingsDeps) {
     if (!out.ok) {
       const path = `body.input.${dotted(out.field)
         .replace(/^absorber\.node$/, 'absorberNode')
+        .replace(/^absorber\.relativeTo$/, 'relativeToNode')
+        .replace(/^absorber\.strokeLimit$/, 'strokeLimit')
         .replace(/^excitation\.node$/, 'excitationNode')
+        .replace(/^excitation\.forces/, 'forces')
+        .replace(/^excitation\.mode$/, 'loadMode')
         .replace(/^response\.node$/, 'responseNode')}`
       throw new AppError('invalid-model', out.message, 400, [{ path, message: out.message }])
     }

@@ -18,8 +18,9 @@ async function demoUser(s: Services, email: string) {
 
 export async function seedBench(s: Services, quotes: number, modelNodes: number) {
   const { companyIds } = await seedPeople(s)
-  await seedSizings(s, { companyIds })
+  // The catalogue first: handing a demo sizing over checks it against the catalogue's units.
   await seedCatalogue(s)
+  await seedSizings(s, { companyIds })
   const sales = await demoUser(s, 'sales@quellnode.test')
   const engineer = await demoUser(s, 'engineer@quellnode.test')
   const [sizing] = await s.sizings.list(sales, {})

@@ -31,7 +31,11 @@ function sizingSection(q: Quote) {
     ['Absorber tuning', `${sig(a.frequencyHz)} Hz, frequency ratio ${sig(a.frequencyRatio)}`],
     ['Damping ratio', sig(a.dampingRatio)],
     ['Spring rate / damper', `${sig(a.stiffness)} N/m / ${sig(a.damping)} N·s/m`],
-    ['Stroke at design load', `${sig(s.stroke * 1000)} mm`],
+    ...(s.load ? [['Design load', s.load] as [string, string]] : []),
+    [
+      'Stroke at design load',
+      `${sig(s.stroke * 1000)} mm${s.strokeLimit ? ` (limit ${sig(s.strokeLimit * 1000)} mm)` : ''}`,
+    ],
     ...(s.orientation === 'vertical'
       ? [['Static deflection', `${sig(s.staticDeflection * 1000)} mm`] as [string, string]]
       : []),

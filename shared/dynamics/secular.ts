@@ -1,0 +1,136 @@
+/**
+ * Undamped natural frequencies of a host with an absorber, without a new eigen solve.
+ *
+ * An absorber of mass m_a on a spring k_a acting on the coordinate uᵀx adds the dynamic stiffness
+ * z(λ) = −λ m_a k_a/(k_a − λ m_a) (λ = ω²) along u, a rank-one change. With mass-normalised host
+ * modes, det(K − λM + z u uᵀ) = 0 away from the host eigenvalues exactly when 1 + z uᵀH(λ)u = 0,
+ * H(λ) = Σ φ_i φ_iᵀ/(λ_i − λ), that is when the secular function
+ *   g(λ) = 1/k_a − 1/(λ m_a) + Σ_i c_i/(λ_i − λ),   c_i = (uᵀφ_i)²,
+ * vanishes (Golub, "Some modified matrix eigenvalue problems", SIAM Review 15, 1973). g increases
+ * strictly between its poles 0, λ_1, λ_2, …, so each gap holds exactly one root and one more lies
+ * above the last pole; with the spring locked (k_a → ∞, 1/k_a = 0) the last root goes away. A host
+ * mode that u does not see (c_i = 0) is a mode of the coupled system unchanged.
+ */
+
+/** Host poles after merging repeated eigenvalues: λ (rad²/s²) and summed weight c. */
+export interface Poles {
+  lambda: number[]
+  weight: number[]
+  /** host eigenvalues kept unchanged: unseen modes and the extra copies of repeated ones */
+  unchanged: number[]
+  /** Σ weight */
+  total: number
+}
+
+/** Relative gap under which two host eigenvalues count as one repeated eigenvalue. */
+const REPEATED = 1e-10
+/** Weight, relative to the total, under which a mode counts as unseen (round-off of a node line). */
+const UNSEEN = 1e-24
+
+/**
+ * The poles of the secular function: host eigenvalues seen by the absorber, repeated ones merged.
+ * @param lambda host eigenvalues ω_i², ascending
+ * @param c (uᵀφ_i)² per host mode, for mass-normalised φ (1/kg)
+ */
+export function secularPoles(lambda: ArrayLike<number>, c: ArrayLike<number>): Poles {
+  let total = 0
+  for (let i = 0; i < lambda.length; i++) total += c[i] ?? 0
+  const out: Poles = { lambda: [], weight: [], unchanged: [], total: 0 }
+  let i = 0
+  while (i < lambda.length) {
+    const start = lambda[i] ?? 0
+    let sum = 0
+    let count = 0
+    while (i < lambda.length && (lambda[i] ?? 0) <= start * (1 + REPEATED) + 1e-300) {
+      sum += c[i] ?? 0
+      count++
+      i++
+    }
+    const seen = sum > UNSEEN * total
+    for (let k = seen ? 1 : 0; k < count; k++) out.unchanged.push(start)
+    if (seen) {
+      out.lambda.push(start)
+      out.weight.push(sum)
+      out.total += sum
+    }
+  }
+  return out
+}
+
+/** g and g′ at λ. */
+function secular(p: Poles, invK: number, mass: number, x: number): [number, number] {
+  let g = invK - 1 / (x * mass)
+  let d = 1 / (x * x * mass)
+  for (let i = 0; i < p.lambda.length; i++) {
+    const t = 1 / ((p.lambda[i] ?? 0) - x)
+    const w = p.weight[i] ?? 0
+    g += w * t
+    d += w * t * t
+  }
+  return [g, d]
+}
+
+/** The root of the increasing g in (a, b), g(a⁺) < 0 < g(b⁻): Newton kept inside the bracket,
+ * bisection when it leaves it (safeguarded Newton, e.g. Press et al., Numerical Recipes §9.4). */
+function root(p: Poles, invK: number, mass: number, a: number, b: number, tol: number): number {
+  let lo = a
+  let hi = b
+  let x = 0.5 * (lo + hi)
+  for (let it = 0; it < 200; it++) {
+    const [g, d] = secular(p, invK, mass, x)
+    if (g === 0) return x
+    if (g < 0) lo = x
+    else hi = x
+    if (hi - lo <= tol * hi) break
+    const next = x - g / d
+    x = next > lo && next < hi ? next : 0.5 * (lo + hi)
+  }
+  return 0.5 * (lo + hi)
+}
+
+/** Options of `coupledEigenvalues`. */
+export interface CoupledOptions {
+  /** only roots in [min, max] (rad²/s²) are wanted (default: all) */
+  min?: number
+  max?: number
+  /** relative accuracy of each root (default 1e-14) */
+  tolerance?: number
+  /** include the unchanged host eigenvalues (default true) */
+  unchanged?: boolean
+}
+
+/**
+ * Eigenvalues λ = ω² (rad²/s², ascending) of the undamped host with the absorber, from the host's.
+ * @param p the secular poles of the host and attachment, from `secularPoles`
+ * @param mass absorber mass (or inertance), kg
+ * @param stiffness absorber spring rate, N/m; Infinity for the locked limit (mass rigidly attached)
+ * @param options see CoupledOptions
+ */
+export function coupledEigenvalues(
+  p: Poles,
+  mass: number,
+  stiffness: number,
+  options: CoupledOptions = {},
+): number[] {
+  const { min = 0, max = Infinity, tolerance = 1e-14, unchanged = true } = options
+  const invK = 1 / stiffness
+  const edges = [0, ...p.lambda]
+  const out: number[] = unchanged ? p.unchanged.filter((x) => x >= min && x <= max) : []
+  for (let k = 0; k < edges.length; k++) {
+    const a = edges[k] ?? 0
+    let b = edges[k + 1] ?? Infinity
+    if (b === Infinity) {
+      if (invK === 0) break
+      // Above the last pole g rises from −∞ to 1/k_a > 0: double until g > 0.
+      b = Math.max(2 * a, (2 * stiffness) / mass, 1e-300)
+      while (secular(p, invK, mass, b)[0] <= 0 && b < 1e300) b *= 2
+    }
+    const lo = Math.max(a, min)
+    const hi = Math.min(b, max)
+    if (!(hi > lo)) continue
+    if (lo > a && secular(p, invK, mass, lo)[0] > 0) continue
+    if (hi < b && secular(p, invK, mass, hi)[0] < 0) continue
+    out.push(root(p, invK, mass, lo, hi, tolerance))
+  }
+  return out.sort((x, y) => x - y)
+}
