@@ -28,6 +28,8 @@ export const NAV_ITEMS: NavItem[] = [
   { name: 'catalogue', label: 'Catalogue', icon: 'pi pi-box', roles: ['admin'] },
   { name: 'admin-users', label: 'Users', icon: 'pi pi-users', roles: ['admin'] },
   { name: 'admin-refunds', label: 'Refunds', icon: 'pi pi-replay', roles: ['admin'] },
+  { name: 'admin-tax', label: 'Tax rates', icon: 'pi pi-percentage', roles: ['admin'] },
+  { name: 'admin-audit', label: 'Audit trail', icon: 'pi pi-history', roles: ['admin'] },
   { name: 'portal', label: 'My quotes', icon: 'pi pi-file', roles: ['customer'] },
   {
     name: 'work-orders',

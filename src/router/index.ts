@@ -10,6 +10,8 @@ export type RouteName =
   | 'forgot-password'
   | 'admin-users'
   | 'admin-refunds'
+  | 'admin-tax'
+  | 'admin-audit'
   | 'not-found'
   | 'sites'
   | 'site'
@@ -76,6 +78,18 @@ const routes: (RouteRecordRaw & { name: RouteName })[] = [
     name: 'admin-refunds',
     component: () => import('@/views/PaymentRefundsView.vue'),
     meta: { roles: ['admin'], title: 'Second payments' },
+  },
+  {
+    path: '/admin/tax',
+    name: 'admin-tax',
+    component: () => import('@/views/AdminTaxView.vue'),
+    meta: { roles: ['admin'], title: 'Tax rates' },
+  },
+  {
+    path: '/admin/audit',
+    name: 'admin-audit',
+    component: () => import('@/views/AdminAuditView.vue'),
+    meta: { roles: ['admin'], title: 'Audit trail' },
   },
   {
     path: '/portal',

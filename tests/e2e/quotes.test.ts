@@ -8,6 +8,7 @@ import { DEMO_USERS } from '../../seed/demo-people'
 import {
   enter,
   LANDSCAPE,
+  navigate,
   newPage,
   shot,
   signInAs,
@@ -46,7 +47,7 @@ describe('sales quote the demo sizing in Chromium on a tablet', () => {
   it('builds a quote with one unit and one option, sends it, and the mail reaches the mailbox', async () => {
     const page = await newPage(rig)
     await signInAs(page, rig.url, sales.email, sales.password)
-    await page.locator('nav[aria-label="Main"] a ::-p-text(Quotes)').click()
+    await navigate(page, 'Quotes')
     await page.waitForSelector('h1 ::-p-text(Quotes)')
     await clickButton(page, 'New quote')
     await page.locator('#sizing-no').fill(String(sizingId))

@@ -4,6 +4,7 @@ import { DEMO_USERS } from '../../seed/demo-people'
 import { NAV_ITEMS } from '../../src/navigation'
 import {
   navLabels,
+  navigate,
   newPage,
   shot,
   signInAs,
@@ -62,7 +63,7 @@ describe('navigation by role, in Chromium on a portrait tablet', () => {
     const engineer = DEMO_USERS.find((u) => u.role === 'engineer')!
     await signInAs(page, rig.url, engineer.email, engineer.password)
     const name = await page.$eval('header .name', (e) => e.textContent ?? '')
-    await page.locator('nav[aria-label="Main"] a ::-p-text(Sizings)').click()
+    await navigate(page, 'Sizings')
     await page.waitForSelector('#sizings-search')
     await page.locator('button ::-p-text(Sign out)').click()
     await page.waitForSelector('#email')

@@ -83,6 +83,14 @@ export async function signInAs(page: Page, url: string, email: string, password:
   await page.waitForSelector('nav[aria-label="Main"]')
 }
 
+/** Follows a main-menu entry, opening the menu first where the bar is too narrow for the links. */
+export async function navigate(page: Page, label: string) {
+  const toggle = await page.$('header button[aria-controls="main-nav"]')
+  if (toggle && (await toggle.evaluate((b) => b.getAttribute('aria-expanded'))) !== 'true')
+    await toggle.click()
+  await page.locator(`nav[aria-label="Main"] a ::-p-text(${label})`).click()
+}
+
 /** The visible labels of the main navigation, in order. */
 export async function navLabels(page: Page) {
   return page.$$eval('nav[aria-label="Main"] a', (links) =>

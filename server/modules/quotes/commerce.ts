@@ -19,6 +19,9 @@ import { noSizings, type SizingSource } from './sizing-source'
 import { quotesRepository } from './quotes.repository'
 import { quotesRouter } from './quotes.router'
 import { quotesService, type QuotesService } from './quotes.service'
+import { taxRepository } from '../tax/tax.repository'
+import { taxRouter } from '../tax/tax.router'
+import { taxService, type TaxService } from '../tax/tax.service'
 
 export interface CommerceDeps {
   config: Config
@@ -33,6 +36,7 @@ export interface CommerceServices {
   catalogue: CatalogueService
   customers: CustomersService
   quotes: QuotesService
+  tax: TaxService
   sizingSource: SizingSource
   pdf: PdfRenderer
 }
@@ -57,7 +61,9 @@ export function buildCommerce(
     companies: shared.companies,
     usersAdmin: usersService(shared),
   })
+  const tax = taxService({ repo: taxRepository(ds), companies: shared.companies })
   const quotes = quotesService({
+    taxRate: tax.rateFor,
     quotes: quotesRepository(ds),
     catalogue,
     customers,
@@ -69,7 +75,7 @@ export function buildCommerce(
     publicUrl: () => deps.config.publicUrl,
     now: shared.now,
   })
-  return { catalogue, customers, quotes, sizingSource, pdf }
+  return { catalogue, customers, quotes, tax, sizingSource, pdf }
 }
 
 export function commerceRouters(api: ApiRegistry, s: CommerceServices) {
@@ -77,5 +83,6 @@ export function commerceRouters(api: ApiRegistry, s: CommerceServices) {
   router.use(catalogueRouter(api, s.catalogue, s.sizingSource))
   router.use(customersRouter(api, s.customers))
   router.use(quotesRouter(api, s.quotes))
+  router.use(taxRouter(api, s.tax))
   return router
 }
