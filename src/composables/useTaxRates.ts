@@ -3,6 +3,9 @@ import type { TaxRate, TaxSettings } from '@shared/schemas/tax'
 import { formatBasisPoints } from '@shared/money'
 import { taxApi } from '@/api/tax'
 
+/** A select shows nothing for a null value: "the usual rate" is 0 on screen, null on the wire. */
+export const USUAL_RATE = 0
+
 /** "Standard, 20 %" */
 export const rateLabel = (r: Pick<TaxRate, 'name' | 'rateBp'>) =>
   `${r.name}, ${formatBasisPoints(r.rateBp)}`
@@ -33,11 +36,11 @@ export function useTaxRates(companyId: () => number | null) {
       label: usual.value
         ? `Customer's usual: ${rateLabel(usual.value)}`
         : 'No tax rate set up (0 %)',
-      value: null as number | null,
+      value: USUAL_RATE,
     },
     ...(settings.value?.rates ?? []).map((r) => ({
       label: rateLabel(r),
-      value: r.id as number | null,
+      value: r.id,
     })),
   ])
   function bpFor(chosenId: number | null) {
