@@ -12,7 +12,7 @@ export interface NormalMode {
 /**
  * Modes of n equal masses m between two supports joined by n+1 equal springs k:
  * ω_r² = (4k/m) sin²(rπ/(2(n+1))), φ_jr = sin(j r π/(n+1)) (textbook closed form for the
- * uniform fixed–fixed chain; engineering-references "Chains"), scaled so φᵀMφ = 1
+ * uniform fixed–fixed chain; docs/engineering/host-model.md#chain-check-values), scaled so φᵀMφ = 1
  * (Σ_j sin²(j r π/(n+1)) = (n+1)/2).
  * @param n masses
  * @param m kg
