@@ -5,7 +5,7 @@ const LABELS: Record<TuningName, string> = {
   optimize: 'Optimised on the model: least peak (H∞)',
   'optimize-h2': 'Optimised on the model: least mean square (H₂)',
   'den-hartog': 'Den Hartog (closed form)',
-  'asami-nishihara': 'Asami & Nishihara exact H∞ (closed form)',
+  'asami-nishihara': 'Nishihara & Asami exact H∞ (closed form)',
   'warburton-force': 'Warburton, white-noise force (closed form)',
   'warburton-base': 'Warburton, white-noise base motion (closed form)',
   'warburton-base-harmonic': 'Warburton, harmonic base motion (closed form)',

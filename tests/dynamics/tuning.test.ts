@@ -34,7 +34,7 @@ describe('closed-form tunings', () => {
     })
   })
 
-  // Source: Asami & Nishihara, J. Vib. Acoust. 124 (2002) — formula and values (from memory, as
+  // Source: Nishihara & Asami, J. Vib. Acoust. 124 (2002) 576–582 — formula and values (from memory, as
   // marked in docs/engineering/tuning.md#exact-h-infinity-optimum, agreeing with a computed minimax
   // to 6 digits).
   it('asami-nishihara reproduces the tabulated exact H∞ tuning', () => {
