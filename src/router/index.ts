@@ -1,7 +1,7 @@
 import { createRouter, createWebHistory, type RouteRecordRaw } from 'vue-router'
 import type { Role } from '@shared/schemas/auth'
 import { useAuthStore } from '@/stores/auth'
-import { STEP_PATTERN } from '@/views/sizing-steps'
+import { STEP_PATTERN } from '@/features/sizing/steps'
 
 export type RouteName =
   | 'home'
@@ -118,20 +118,20 @@ const routes: (RouteRecordRaw & { name: RouteName })[] = [
   {
     path: '/sizings',
     name: 'sizings',
-    component: () => import('@/views/SizingsView.vue'),
+    component: () => import('@/features/sizing/SizingsView.vue'),
     meta: { roles: ['engineer', 'sales', 'admin'], title: 'Sizings' },
   },
   {
     path: `/sizings/new/${STEP_PATTERN}`,
     name: 'sizing-new',
-    component: () => import('@/views/SizingWorkspaceView.vue'),
+    component: () => import('@/features/sizing/SizingWorkspaceView.vue'),
     props: true,
     meta: { roles: ['engineer', 'admin'], title: 'New sizing' },
   },
   {
     path: `/sizings/:id(\\d+)/${STEP_PATTERN}`,
     name: 'sizing',
-    component: () => import('@/views/SizingWorkspaceView.vue'),
+    component: () => import('@/features/sizing/SizingWorkspaceView.vue'),
     props: true,
     meta: { roles: ['engineer', 'sales', 'admin'], title: 'Sizing' },
   },

@@ -1,7 +1,7 @@
 import { defineStore } from 'pinia'
 import { computed, ref, watch } from 'vue'
-import { useAuthStore } from './auth'
-import type { SizingDraft } from './sizing-form'
+import { useAuthStore } from '@/stores/auth'
+import type { SizingDraft } from './draft'
 
 /** Drafts are kept per user, so a tablet passed to a colleague never shows the previous user's. */
 const storageKey = (userId: number | undefined) => `quellnode.sizingDrafts.${userId ?? 'none'}`

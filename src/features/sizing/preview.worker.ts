@@ -1,5 +1,5 @@
 import type { ModelDefinition, SizingInput } from '@shared/schemas/sizing'
-import { previewSizing } from '@/composables/sizing-preview'
+import { previewSizing } from '@/features/sizing/preview'
 
 // Off the main thread so typing stays smooth on a tablet while a larger model solves.
 self.onmessage = (e: MessageEvent<{ id: number; model: ModelDefinition; input: SizingInput }>) => {

@@ -2,7 +2,7 @@ import type { ModelDefinition, SizingInput } from '@shared/schemas/sizing'
 import { modelsApi } from '@/api/models'
 import { sizingsApi } from '@/api/sizings'
 import { pathWords } from '@/forms/messages'
-import type { SizingDraft } from '@/stores/sizing-form'
+import type { SizingDraft } from '@/features/sizing/draft'
 
 /** A save that would overwrite a newer revision on the server; the engineer decides. */
 export interface SyncConflict {

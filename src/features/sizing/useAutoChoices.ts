@@ -1,6 +1,6 @@
 import { watch, type Ref } from 'vue'
-import type { SizingDraft } from '@/stores/sizing-form'
-import type { SizingPreview } from './sizing-preview'
+import type { SizingDraft } from '@/features/sizing/draft'
+import type { SizingPreview } from './preview'
 
 /**
  * Keeps the node and mode choices valid as the structure changes: a node that no longer exists

@@ -1,12 +1,12 @@
 import { onBeforeUnmount, ref, toRaw, watch, type Ref } from 'vue'
 import type { ModelDefinition, SizingInput } from '@shared/schemas/sizing'
-import { previewSizing, type SizingPreview } from './sizing-preview'
+import { previewSizing, type SizingPreview } from './preview'
 
 const DEBOUNCE_MS = 150
 
 function startWorker(): Worker | null {
   try {
-    return new Worker(new URL('../workers/sizing-preview.worker.ts', import.meta.url), {
+    return new Worker(new URL('./preview.worker.ts', import.meta.url), {
       type: 'module',
     })
   } catch {

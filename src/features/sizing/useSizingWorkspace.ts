@@ -7,8 +7,8 @@ import { sitesApi } from '@/api/sites'
 import { sizingsApi, type SizingView } from '@/api/sizings'
 import { useErrorToast } from '@/composables/useErrorToast'
 import { useAuthStore } from '@/stores/auth'
-import { useSizingDraftStore } from '@/stores/sizingDraft'
-import { formOf, newDraft, type SizingDraft } from '@/stores/sizing-form'
+import { useSizingDraftStore } from '@/features/sizing/draft-store'
+import { formOf, newDraft, type SizingDraft } from '@/features/sizing/draft'
 
 const keyOf = (id: number | null, siteId: number | null) =>
   id ? `sizing-${id}` : `new-site-${siteId}`
