@@ -1,8 +1,10 @@
 /**
- * mulberry32, a small 32-bit seeded generator (Tommy Ettinger's public-domain design, from
- * memory): uniform numbers in [0, 1), the same sequence for the same seed.
+ * The one random generator of the tests: mulberry32, a small 32-bit seeded generator (Tommy
+ * Ettinger's public-domain design, from memory), uniform numbers in [0, 1), the same sequence for
+ * the same seed, so every failure repeats. Names that must differ between runs on a shared
+ * database use `randomBytes` instead; that is uniqueness, not test data.
  */
-export function mulberry32(seed: number): () => number {
+export function seeded(seed: number): () => number {
   let a = seed >>> 0
   return () => {
     a = (a + 0x6d2b79f5) >>> 0
