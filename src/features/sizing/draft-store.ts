@@ -1,17 +1,19 @@
 import { defineStore } from 'pinia'
 import { computed, ref, watch } from 'vue'
+import { useLocalStorage, useOnline } from '@vueuse/core'
 import { useAuthStore } from '@/stores/auth'
-import type { SizingDraft } from './draft'
+import type { SizingDraft, SizingForm } from './draft'
+import { draftActions } from './draft-actions'
 
 /** Drafts are kept per user, so a tablet passed to a colleague never shows the previous user's. */
 const storageKey = (userId: number | undefined) => `quellnode.sizingDrafts.${userId ?? 'none'}`
 
 export type SyncState = 'saved' | 'unsaved' | 'offline' | 'syncing'
 
-function load(key: string): Record<string, SizingDraft> {
+/** Reads the kept drafts; a copy that does not parse is left out rather than stop the page. */
+function readDrafts(raw: string): Record<string, SizingDraft> {
   try {
-    const raw = localStorage.getItem(key)
-    const all = raw ? (JSON.parse(raw) as Record<string, SizingDraft>) : {}
+    const all = JSON.parse(raw) as Record<string, SizingDraft>
     // drafts kept before records could be linked
     for (const d of Object.values(all)) d.form.records ??= []
     return all
@@ -23,38 +25,29 @@ function load(key: string): Record<string, SizingDraft> {
 /**
  * Sizings in progress, kept in localStorage so a dropped connection or a closed tab on site
  * loses nothing; the server copy is written when the engineer saves (or when back online).
+ * Edits go through the named actions of `draftActions`.
  */
 export const useSizingDraftStore = defineStore('sizingDraft', () => {
   const auth = useAuthStore()
-  const drafts = ref<Record<string, SizingDraft>>(load(storageKey(auth.user?.id)))
+  const drafts = useLocalStorage<Record<string, SizingDraft>>(
+    () => storageKey(auth.user?.id),
+    {},
+    {
+      writeDefaults: false,
+      serializer: { read: readDrafts, write: (v) => JSON.stringify(v) },
+      // storage full or blocked: the draft still lives in memory for this page
+      onError: () => undefined,
+    },
+  )
   const currentKey = ref<string | null>(null)
-  const online = ref(typeof navigator === 'undefined' ? true : navigator.onLine)
+  const online = useOnline()
   const syncing = ref(false)
-
-  if (typeof window !== 'undefined') {
-    window.addEventListener('online', () => (online.value = true))
-    window.addEventListener('offline', () => (online.value = false))
-  }
+  /** the sizing open is read-only (handed over, or opened by sales): edits are ignored */
+  const locked = ref(false)
 
   watch(
     () => auth.user?.id,
-    (id) => {
-      drafts.value = load(storageKey(id))
-      currentKey.value = null
-    },
-  )
-
-  watch(
-    drafts,
-    (all) => {
-      if (!auth.user) return
-      try {
-        localStorage.setItem(storageKey(auth.user.id), JSON.stringify(all))
-      } catch {
-        // storage full or blocked: the draft still lives in memory for this page
-      }
-    },
-    { deep: true },
+    () => (currentKey.value = null),
   )
 
   const current = computed(() => (currentKey.value ? drafts.value[currentKey.value] : undefined))
@@ -81,15 +74,6 @@ export const useSizingDraftStore = defineStore('sizingDraft', () => {
     return true
   }
 
-  /** Applies an edit to the current draft and marks it unsaved. */
-  function edit(change: (d: SizingDraft) => void) {
-    const d = current.value
-    if (!d) return
-    change(d)
-    d.changed = true
-    d.updatedAt = new Date().toISOString()
-  }
-
   /** Moves a draft to a new key (a new sizing got its id from the server). */
   function rekey(from: string, to: string) {
     const d = drafts.value[from]
@@ -109,11 +93,24 @@ export const useSizingDraftStore = defineStore('sizingDraft', () => {
     currentKey,
     online,
     syncing,
+    locked,
     state,
     open,
     openKept,
-    edit,
     rekey,
     discard,
+    ...draftActions(current, locked),
   }
 })
+
+/**
+ * One choice of the form, for `v-model` on a child that edits it: it reads the draft shown and
+ * writes through the store's `setChoices` (ignored on a read-only sizing).
+ */
+export function choiceModel<K extends keyof SizingForm>(draft: () => SizingDraft, key: K) {
+  const store = useSizingDraftStore()
+  return computed({
+    get: () => draft().form[key],
+    set: (value: SizingForm[K]) => store.setChoices({ [key]: value } as Partial<SizingForm>),
+  })
+}

@@ -1,21 +1,18 @@
 import { watch, type Ref } from 'vue'
-import type { SizingDraft } from '@/features/sizing/draft'
 import type { SizingPreview } from './preview'
+import { useSizingDraftStore } from './draft-store'
 
 /**
  * Keeps the node and mode choices valid as the structure changes: a node that no longer exists
  * is cleared, and an empty attachment node is filled with the node of largest |φ| of the target
  * mode (where the absorber's mass works hardest), as are empty excitation and response nodes.
  */
-export function useAutoChoices(
-  draft: Ref<SizingDraft | undefined>,
-  preview: Ref<SizingPreview | null>,
-  edit: (change: (d: SizingDraft) => void) => void,
-) {
+export function useAutoChoices(preview: Ref<SizingPreview | null>) {
+  const store = useSizingDraftStore()
   watch(
     () => preview.value?.nodeIds.join('|') + `#${preview.value?.modes.length}`,
     () => {
-      const d = draft.value
+      const d = store.current
       const p = preview.value
       if (!d || !p || p.modes.length === 0) return
       const f = d.form
@@ -28,12 +25,7 @@ export function useAutoChoices(
       mode.shape.forEach((v, i) => {
         if (Math.abs(v) > Math.abs(mode.shape[best] ?? 0)) best = i
       })
-      const id = p.nodeIds[best] ?? ''
-      edit((x) => {
-        if (x.form.targetMode > p.modes.length) x.form.targetMode = 1
-        for (const key of ['absorberNode', 'excitationNode', 'responseNode'] as const)
-          if (!x.form[key] || !ids.has(x.form[key])) x.form[key] = id
-      })
+      store.keepNodeChoices(p.nodeIds[best] ?? '', ids, p.modes.length)
     },
   )
 }

@@ -1,4 +1,5 @@
-import { onBeforeUnmount, ref, toRaw, watch, type Ref } from 'vue'
+import { onBeforeUnmount, ref, toRaw, type Ref } from 'vue'
+import { watchDebounced } from '@vueuse/core'
 import type { ModelDefinition, SizingInput } from '@shared/schemas/sizing'
 import { previewSizing, type SizingPreview } from './preview'
 
@@ -24,7 +25,6 @@ export function useLivePreview(source: Ref<{ model: ModelDefinition; input: Sizi
   const busy = ref(false)
   let worker = startWorker()
   let seq = 0
-  let timer: ReturnType<typeof setTimeout> | undefined
 
   if (worker) {
     worker.onerror = () => {
@@ -54,17 +54,10 @@ export function useLivePreview(source: Ref<{ model: ModelDefinition; input: Sizi
     }
   }
 
-  watch(
-    source,
-    () => {
-      clearTimeout(timer)
-      timer = setTimeout(run, DEBOUNCE_MS)
-    },
-    { deep: true, immediate: true },
-  )
+  const stop = watchDebounced(source, run, { debounce: DEBOUNCE_MS, deep: true, immediate: true })
 
   onBeforeUnmount(() => {
-    clearTimeout(timer)
+    stop()
     worker?.terminate()
     worker = null
   })

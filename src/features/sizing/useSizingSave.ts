@@ -2,10 +2,9 @@ import { ref, watch } from 'vue'
 import { ModelDefinitionSchema, SizingInputSchema } from '@shared/schemas/sizing'
 import { isApiError } from '@/api/client'
 import { modelsApi } from '@/api/models'
-import { sizingsApi, type HandoverRequest } from '@/api/sizings'
+import { sizingsApi } from '@/api/sizings'
 import { useAction } from '@/composables/useAction'
 import type { FormErrors } from '@/forms/form-errors'
-import { router } from '@/router'
 import { useSizingDraftStore } from '@/features/sizing/draft-store'
 import { toSizingInput, type SizingDraft } from '@/features/sizing/draft'
 import type { SizingWorkspace } from './useSizingWorkspace'
@@ -16,10 +15,11 @@ type Step = (d: SizingDraft) => Promise<boolean>
 const isConflict = (e: unknown) => isApiError(e) && e.code === 'revision-conflict'
 
 /**
- * Saving the structure and the sizing, handing over and reopening. One action at a time: a
- * double tap sends one request. A save that would overwrite a newer server revision is not
+ * Saving the structure and the sizing. One action at a time (`run`, shared with the hand-over):
+ * a double tap sends one request. A save that would overwrite a newer server revision is not
  * sent; the engineer is asked which version to keep (`conflict`). Without a connection the save
- * waits on the tablet and goes as soon as the browser is back online.
+ * waits on the tablet and goes as soon as the browser is back online. A new sizing gets its id
+ * here; the view moves to its address.
  */
 export function useSizingSave(ws: SizingWorkspace, form: FormErrors) {
   const store = useSizingDraftStore()
@@ -73,8 +73,6 @@ export function useSizingSave(ws: SizingWorkspace, form: FormErrors) {
       if (!d.sizingId) {
         d.sizingId = view.id
         store.rekey(d.key, `sizing-${view.id}`)
-        const step = router.currentRoute.value.params.step
-        await router.replace({ name: 'sizing', params: { id: view.id, step } })
       }
       return true
     } catch (e) {
@@ -111,24 +109,6 @@ export function useSizingSave(ws: SizingWorkspace, form: FormErrors) {
     asked = 'save'
     return action.run(saveSizing)
   }
-  const submit = (h: HandoverRequest) =>
-    action.run(async (d) => {
-      if (!d.sizingId || d.changed) return false
-      const id = d.sizingId
-      ws.saved.value = await sizingsApi.submit(id, d.sizingRevision ?? 1, h).catch(async (e) => {
-        // The checks changed on the server (the catalogue, say): show them as they are now.
-        if (isApiError(e) && e.code === 'design-checks-failed')
-          ws.saved.value = await sizingsApi.get(id)
-        throw e
-      })
-      return true
-    })
-  const reopen = () =>
-    action.run(async (d) => {
-      if (!d.sizingId) return false
-      ws.saved.value = await sizingsApi.reopen(d.sizingId)
-      return true
-    })
 
   /** Keeps the engineer's version: saved on top of the server's newer one, which stays in history. */
   async function keepMine() {
@@ -167,11 +147,11 @@ export function useSizingSave(ws: SizingWorkspace, form: FormErrors) {
     busy: action.pending,
     error: action.error,
     conflict,
+    run: action.run,
     save,
     saveModel,
-    submit,
-    reopen,
     keepMine,
     takeServer,
   }
 }
+export type SizingSave = ReturnType<typeof useSizingSave>

@@ -1,11 +1,11 @@
-import { computed, ref } from 'vue'
+import { computed, ref, watch } from 'vue'
 import type { HostModel } from '@shared/schemas/host-model'
 import type { Site } from '@shared/schemas/site'
 import { isApiError } from '@/api/client'
 import { modelsApi } from '@/api/models'
 import { sitesApi } from '@/api/sites'
 import { sizingsApi, type SizingView } from '@/api/sizings'
-import { useErrorToast } from '@/composables/useErrorToast'
+import { useAction } from '@/composables/useAction'
 import { useAuthStore } from '@/stores/auth'
 import { useSizingDraftStore } from '@/features/sizing/draft-store'
 import { formOf, newDraft, type SizingDraft } from '@/features/sizing/draft'
@@ -15,20 +15,20 @@ const keyOf = (id: number | null, siteId: number | null) =>
 
 /**
  * Opening one sizing: the server's copy, the exact model revision it was sized on, and the copy
- * kept on this tablet when there is no connection. The draft lives in the store.
+ * kept on this tablet when there is no connection. The draft lives in the store; saving is
+ * `useSizingSave`, handing over `useSizingHandover`.
  */
 export function useSizingWorkspace() {
   const store = useSizingDraftStore()
   const auth = useAuthStore()
-  const showError = useErrorToast()
   const site = ref<Site | null>(null)
   const saved = ref<SizingView | null>(null)
   /** the model as it is now on the server (its latest revision and the revision list) */
   const model = ref<HostModel | null>(null)
-  const loading = ref(false)
   const notice = ref('')
   const draft = computed(() => store.current)
   const readOnly = computed(() => auth.role === 'sales' || saved.value?.state === 'submitted')
+  watch(readOnly, (locked) => (store.locked = locked), { immediate: true })
 
   async function loadNew(siteId: number) {
     site.value = await sitesApi.get(siteId)
@@ -77,33 +77,28 @@ export function useSizingWorkspace() {
       notice.value = `Your unsaved edits started from revision ${local.sizingRevision}; the server now has revision ${view.currentRevision}. When you save you will be asked which to keep.`
   }
 
-  async function load(id: number | null, siteId: number | null) {
-    loading.value = true
-    notice.value = ''
-    try {
-      if (id) await loadSaved(id)
-      else if (siteId) await loadNew(siteId)
-    } catch (e) {
-      if (isApiError(e) && e.code === 'offline' && store.openKept(keyOf(id, siteId)))
+  const opening = useAction(
+    async (id: number | null, siteId: number | null) => {
+      notice.value = ''
+      try {
+        if (id) await loadSaved(id)
+        else if (siteId) await loadNew(siteId)
+      } catch (e) {
+        if (!isApiError(e) || e.code !== 'offline' || !store.openKept(keyOf(id, siteId))) throw e
         notice.value =
           'No connection: this is the copy kept on this tablet. Edits are kept here and sent when you are back online.'
-      else showError(e, 'Could not open the sizing')
-    } finally {
-      loading.value = false
-    }
-  }
+      }
+    },
+    { failure: 'Could not open the sizing', latest: true },
+  )
+  const load = (id: number | null, siteId: number | null) => opening.run(id, siteId)
 
   /** Moves the sizing onto another revision of its model (the engineer says so, never by itself). */
   async function useModelRevision(revision: number) {
     const d = draft.value
     if (!d?.modelId) return
     const r = await modelsApi.revision(d.modelId, revision)
-    store.edit((x) => {
-      x.definition = r.definition
-      x.modelRevision = r.revision
-      x.structureChanged = false
-      x.revisionReason = ''
-    })
+    store.moveToRevision(r.definition, r.revision)
   }
 
   /** Reads the model again (after a calibration or a structure save made a revision). */
@@ -117,7 +112,7 @@ export function useSizingWorkspace() {
     saved,
     model,
     draft,
-    loading,
+    loading: opening.pending,
     notice,
     readOnly,
     load,
