@@ -3,7 +3,12 @@ import { defineComponent, h, nextTick, ref } from 'vue'
 import { mount } from '@vue/test-utils'
 import { createPinia, setActivePinia } from 'pinia'
 import type { ModelDefinition, SizingInput } from '../../shared/schemas/sizing'
-import { defaultDefinition, newDraft, toSizingInput } from '../../src/features/sizing/draft'
+import {
+  defaultDefinition,
+  newDraft,
+  toSizingInput,
+  type SizingForm,
+} from '../../src/features/sizing/draft'
 import { useSizingDraftStore } from '../../src/features/sizing/draft-store'
 import { previewSizing, type SizingPreview } from '../../src/features/sizing/preview'
 import { useAutoChoices } from '../../src/features/sizing/useAutoChoices'
@@ -103,43 +108,41 @@ describe('the live preview of a sizing', () => {
   })
 })
 
+/**
+ * A new sizing with the given choices, watched by useAutoChoices while the two-storey frame's
+ * preview arrives; returns the node choices afterwards and the preview.
+ */
+async function choicesAfterPreview(choices: Partial<SizingForm>) {
+  setActivePinia(createPinia())
+  const store = useSizingDraftStore()
+  store.open(newDraft(3, '2026-01-05T08:00:00.000Z'))
+  store.setChoices(choices)
+  const preview = ref<SizingPreview | null>(null)
+  inComponent(() => useAutoChoices(preview))
+  preview.value = previewSizing(twoStoreys(), inputFor())
+  await nextTick()
+  const f = store.current!.form
+  return { nodes: [f.absorberNode, f.excitationNode, f.responseNode], preview: preview.value }
+}
+
 describe('the node choices kept valid as the structure changes', () => {
   beforeEach(() => localStorage.clear())
 
   it('attaches the absorber where the target mode moves most, the top of a two-storey frame', async () => {
-    setActivePinia(createPinia())
-    const store = useSizingDraftStore()
-    store.open(newDraft(3, '2026-01-05T08:00:00.000Z'))
-    const preview = ref<SizingPreview | null>(null)
-    inComponent(() => useAutoChoices(preview))
+    const { nodes, preview } = await choicesAfterPreview({})
+    expect(nodes).toEqual(['level-2', 'level-2', 'level-2'])
     // First mode of two equal storeys on equal springs: φ = [1, (1+√5)/2], largest at the top
     // (two-storey shear frame, Chopra, Dynamics of Structures, ch. 10 (memory)).
-    preview.value = previewSizing(twoStoreys(), inputFor())
-    await nextTick()
-    const f = store.current!.form
-    expect([f.absorberNode, f.excitationNode, f.responseNode]).toEqual([
-      'level-2',
-      'level-2',
-      'level-2',
-    ])
-    const shape = preview.value.modes[0]!.shape
+    const shape = preview.modes[0]!.shape
     expect(Math.abs(shape[1]! / shape[0]!)).toBeCloseTo((1 + Math.sqrt(5)) / 2, 9)
   })
 
   it('replaces a node that no longer exists and leaves valid choices alone', async () => {
-    setActivePinia(createPinia())
-    const store = useSizingDraftStore()
-    store.open(newDraft(3, '2026-01-05T08:00:00.000Z'))
-    store.setChoices({ absorberNode: 'level-1', excitationNode: 'gone', responseNode: 'level-1' })
-    const preview = ref<SizingPreview | null>(null)
-    inComponent(() => useAutoChoices(preview))
-    preview.value = previewSizing(twoStoreys(), inputFor())
-    await nextTick()
-    const f = store.current!.form
-    expect([f.absorberNode, f.excitationNode, f.responseNode]).toEqual([
-      'level-1',
-      'level-2',
-      'level-1',
-    ])
+    const { nodes } = await choicesAfterPreview({
+      absorberNode: 'level-1',
+      excitationNode: 'gone',
+      responseNode: 'level-1',
+    })
+    expect(nodes).toEqual(['level-1', 'level-2', 'level-1'])
   })
 })
