@@ -1,4 +1,4 @@
-import { gaussian, mulberry32 } from './random'
+import { gaussian, seeded } from '../../helpers/random'
 import { transition } from './synthesize'
 
 /** A classical normal mode: frequency, damping ratio and mass-normalised shape. */
@@ -83,7 +83,7 @@ export function ambientResponse(
 ): Float64Array[] {
   const n = Math.round(durationS * sampleRateHz)
   const dofs = modes[0]?.shape.length ?? 0
-  const normal = gaussian(mulberry32(seed))
+  const normal = gaussian(seeded(seed))
   const forces = Array.from({ length: dofs }, () => Float64Array.from({ length: n }, normal))
   const modalForce = (mode: NormalMode, j: number) =>
     mode.shape.reduce((u, phi, d) => u + phi * force * (forces[d]?.[j] ?? 0), 0)
@@ -108,7 +108,7 @@ export function impulseResponse(
   seed: number,
 ): Float64Array[] {
   const n = Math.round(durationS * sampleRateHz)
-  const normal = gaussian(mulberry32(seed))
+  const normal = gaussian(seeded(seed))
   const out = superpose(
     modes,
     sampleRateHz,
