@@ -25,8 +25,7 @@ function assemble(prep: PreparedHost, units: DirectUnit[], w: number): ComplexAr
     a.im[i * size + j] = (a.im[i * size + j] ?? 0) + im
   }
   for (let i = 0; i < n; i++) {
-    for (let j = 0; j < n; j++)
-      add(i, j, prep.stiffness[i * n + j] ?? 0, w * (c[i * n + j] ?? 0))
+    for (let j = 0; j < n; j++) add(i, j, prep.stiffness[i * n + j] ?? 0, w * (c[i * n + j] ?? 0))
     add(i, i, -w * w * (prep.mass[i] ?? 0), 0)
   }
   // Two-node elements: the spring and damper between a node and y_i, and an inertance between

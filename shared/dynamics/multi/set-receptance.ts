@@ -107,7 +107,8 @@ export function setReceptance(
   const prod = new Float64Array(prep.n * m * m)
   for (let i = 0; i < prep.n; i++)
     for (let a = 0; a < m; a++)
-      for (let b = 0; b < m; b++) prod[i * m * m + a * m + b] = (pr[a]?.[i] ?? 0) * (pc[b]?.[i] ?? 0)
+      for (let b = 0; b < m; b++)
+        prod[i * m * m + a * m + b] = (pr[a]?.[i] ?? 0) * (pc[b]?.[i] ?? 0)
   const exact = (w: number, out: SetBlock): void => {
     let at = w
     // Step aside from an undamped mode's own frequency, where the sum is singular.

@@ -46,55 +46,63 @@ export function setEvaluator(units: SetUnit[]): SetEvaluator {
   const zi = new Float64Array(k)
   const tr = new Float64Array(k)
   const ti = new Float64Array(k)
+  const dr = new Float64Array(k)
+  const di = new Float64Array(k)
   return (h, at, w, out) => {
-    const re = (i: number, j: number): number => h[at + 2 * (i * m + j)] ?? 0
-    const im = (i: number, j: number): number => h[at + 2 * (i * m + j) + 1] ?? 0
-    units.forEach((u, i) => {
+    // Indexed reads throughout: this runs for every grid point of every candidate tuning.
+    for (let i = 0; i < k; i++) {
+      const u = units[i]!
       const w2m = w * w * u.mass
       const ki = w * u.damping
-      const dr = u.stiffness - w2m
-      const d = dr * dr + ki * ki
-      const qr = (u.stiffness * dr + ki * ki) / d
-      const qi = (ki * dr - u.stiffness * ki) / d
+      const r = u.stiffness - w2m
+      const d = r * r + ki * ki
+      const qr = (u.stiffness * r + ki * ki) / d
+      const qi = (ki * r - u.stiffness * ki) / d
       zr[i] = -w2m * qr
       zi[i] = -w2m * qi
       // q_i p_i, the load the unit's mass passes to the host
       tr[i] = qr * u.load
       ti[i] = qi * u.load
-    })
+      dr[i] = r
+      di[i] = ki
+    }
     for (let i = 0; i < k; i++) {
-      let sr = re(1 + i, 0)
-      let si = im(1 + i, 0)
+      const row = at + 2 * (1 + i) * m
+      let sr = h[row]!
+      let si = h[row + 1]!
       for (let j = 0; j < k; j++) {
-        const hr = re(1 + i, 1 + j)
-        const hi = im(1 + i, 1 + j)
-        a.re[i * k + j] = (i === j ? 1 : 0) + hr * (zr[j] ?? 0) - hi * (zi[j] ?? 0)
-        a.im[i * k + j] = hr * (zi[j] ?? 0) + hi * (zr[j] ?? 0)
-        sr += hr * (tr[j] ?? 0) - hi * (ti[j] ?? 0)
-        si += hr * (ti[j] ?? 0) + hi * (tr[j] ?? 0)
+        const hr = h[row + 2 + 2 * j]!
+        const hi = h[row + 3 + 2 * j]!
+        a.re[i * k + j] = (i === j ? 1 : 0) + hr * zr[j]! - hi * zi[j]!
+        a.im[i * k + j] = hr * zi[j]! + hi * zr[j]!
+        sr += hr * tr[j]! - hi * ti[j]!
+        si += hr * ti[j]! + hi * tr[j]!
       }
       b.re[i] = sr
       b.im[i] = si
     }
     solveComplex(a, b, k, 1)
-    out.re = re(0, 0)
-    out.im = im(0, 0)
-    units.forEach((u, j) => {
-      const xr = b.re[j] ?? 0
-      const xi = b.im[j] ?? 0
-      const fr = (tr[j] ?? 0) - ((zr[j] ?? 0) * xr - (zi[j] ?? 0) * xi)
-      const fi = (ti[j] ?? 0) - ((zr[j] ?? 0) * xi + (zi[j] ?? 0) * xr)
-      out.re += re(0, 1 + j) * fr - im(0, 1 + j) * fi
-      out.im += re(0, 1 + j) * fi + im(0, 1 + j) * fr
-      const w2m = w * w * u.mass
-      const ki = w * u.damping
-      const dr = u.stiffness - w2m
-      const d = dr * dr + ki * ki
-      const sr = w2m * xr + u.load
-      const si = w2m * xi
-      out.strokeRe[j] = (sr * dr + si * ki) / d
-      out.strokeIm[j] = (si * dr - sr * ki) / d
-    })
+    let re = h[at]!
+    let im = h[at + 1]!
+    for (let j = 0; j < k; j++) {
+      const xr = b.re[j]!
+      const xi = b.im[j]!
+      const fr = tr[j]! - (zr[j]! * xr - zi[j]! * xi)
+      const fi = ti[j]! - (zr[j]! * xi + zi[j]! * xr)
+      const hr = h[at + 2 + 2 * j]!
+      const hi = h[at + 3 + 2 * j]!
+      re += hr * fr - hi * fi
+      im += hr * fi + hi * fr
+      const sr = w * w * units[j]!.mass * xr + units[j]!.load
+      const si = w * w * units[j]!.mass * xi
+      const r = dr[j]!
+      const ki = di[j]!
+      const d = r * r + ki * ki
+      out.strokeRe[j] = (sr * r + si * ki) / d
+      out.strokeIm[j] = (si * r - sr * ki) / d
+    }
+    out.re = re
+    out.im = im
     return out
   }
 }

@@ -1,0 +1,33 @@
+/**
+ * A model with several absorbers (the command-line contract): the model of model.ts with
+ * `absorbers`, each entry shaped like `absorber` plus the mode it aims at. SI units.
+ */
+import { z } from 'zod'
+import { absorberSchema, modelSchema } from './model'
+import { strictObject } from './strict'
+
+/** Most units in one set: a k × k complex solve per frequency stays cheap (common practice: sets
+ * of 2–10 units around one mode are the usual range). */
+export const MAX_SET_UNITS = 12
+
+export const setAbsorberSchema = strictObject({
+  ...absorberSchema.shape,
+  /** 1-based mode this unit aims at (default the model's targetMode, then 1); its mass ratio is
+   * stated against that mode's effective mass at its node */
+  targetMode: modelSchema.shape.targetMode,
+})
+
+export const setModelSchema = strictObject({
+  ...modelSchema.shape,
+  absorbers: z
+    .array(setAbsorberSchema)
+    .min(1, { error: 'give at least one absorber' })
+    .max(MAX_SET_UNITS, { error: `at most ${MAX_SET_UNITS} absorbers` })
+    .optional(),
+}).refine((m) => !(m.absorber && m.absorbers), {
+  message: 'give either absorber or absorbers, not both',
+  path: ['absorbers'],
+})
+
+export type SetAbsorberInput = z.infer<typeof setAbsorberSchema>
+export type SetModelInput = z.infer<typeof setModelSchema>
