@@ -24,6 +24,13 @@ export const setModelSchema = strictObject({
     .min(1, { error: 'give at least one absorber' })
     .max(MAX_SET_UNITS, { error: `at most ${MAX_SET_UNITS} absorbers` })
     .optional(),
+  /** ± fraction of the host frequency: when given, the units tuned together minimise the worst
+   * peak (or mean square) with the host frequency anywhere in that range, instead of at nominal */
+  detuningTolerance: z
+    .number({ error: 'expected a fraction, e.g. 0.1 for ±10 %' })
+    .min(0, { error: 'must be 0 or more' })
+    .max(0.3, { error: 'at most 0.3 (±30 %)' })
+    .optional(),
 }).refine((m) => !(m.absorber && m.absorbers), {
   message: 'give either absorber or absorbers, not both',
   path: ['absorbers'],

@@ -1,5 +1,6 @@
 import type { TuningName } from '../../schemas/model'
 import type { ExcitationReport, ModeReport, ResponseReport } from '../sizing-result'
+import type { SetRobustnessReport } from './set-robustness'
 import type { SetStartName } from './set-starts'
 
 /** One unit of a set, as built and as it behaves with the whole set in place. */
@@ -82,6 +83,8 @@ export interface SetSizingResult {
     value: number
     scope: string
   }
+  /** the peak with the set when the host frequency is off, beside one unit of the same mass */
+  robustness: SetRobustnessReport
   notes: string[]
   cautions: string[]
 }

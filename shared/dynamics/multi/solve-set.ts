@@ -7,6 +7,7 @@ import { excitationReport, loadUnit, modeReports, responseReport } from '../sizi
 import { hostSetPeak } from './host-set-peak'
 import { optimizeSet, setValues, type SetTuning } from './optimize-set'
 import { setContext, type SetContext } from './set-context'
+import { setRobustness } from './set-robustness'
 import { evaluateSet, setPeak, type SetEvaluation } from './set-peak'
 import type { SetPeakReport, SetSizingResult, SetUnitReport, TargetReport } from './set-result'
 import { massRatioOf, withoutSet } from './set-starts'
@@ -160,6 +161,7 @@ export function solveSet(model: SetModelInput): SetSizingResult {
       value: t.value,
       scope: SET_SCOPE,
     },
+    robustness: setRobustness(ctx, values),
     notes: notes(ctx, units, t),
     cautions: SIZING_CAUTIONS,
   }
