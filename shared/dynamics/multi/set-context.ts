@@ -6,9 +6,12 @@ import { attachmentVector, requestVectors } from '../load-vectors'
 import type { Measure } from '../measure'
 import { participation } from '../participation'
 import type { BandSource } from '../sizing-context'
+import type { UndampedResonance } from '../undamped-modes'
 import { validateHost } from '../validate-host'
 import { validateRequest, type ValidRequest } from '../validate-request'
 import { setReceptance, type SetReceptance, type SetVectors } from './set-receptance'
+import { residualSetResonance } from './host-set-peak'
+import { unionOf } from './set-bands'
 import { validateSet, type ValidUnit } from './validate-set'
 
 /** Everything a set of absorbers computes once per host before trying tunings. */
@@ -36,18 +39,9 @@ export interface SetContext {
   mass: number[]
   /** per unit, uᵀφ_i for every host mode (1/√kg) */
   psi: Float64Array[]
-}
-
-/** Merges overlapping or touching bands into disjoint intervals. */
-export function unionOf(bands: Band[]): Band[] {
-  const sorted = [...bands].sort((a, b) => a.min - b.min)
-  const out: Band[] = []
-  for (const b of sorted) {
-    const last = out[out.length - 1]
-    if (last && b.min <= last.max * (1 + 1e-12)) last.max = Math.max(last.max, b.max)
-    else out.push({ ...b })
-  }
-  return out
+  /** a host mode in the band no unit moves and no damping reaches (the response is unbounded
+   * whatever the tuning), or null */
+  residual: UndampedResonance | null
 }
 
 function bands(prep: PreparedHost, req: ValidRequest, targets: number[]): [Band[], BandSource] {
@@ -104,7 +98,7 @@ export function setContext(
   const psi = u.map((x) => participation(prep.modes, prep.condense(x)))
   const effectiveMass = effectiveMasses(prep, units, psi)
   const grid = unionGrid(intervals, omegaTargets, prep.modes.omega)
-  return {
+  const ctx: SetContext = {
     model,
     prep,
     req,
@@ -120,7 +114,10 @@ export function setContext(
     effectiveMass,
     mass: units.map((x, i) => x.mass ?? (x.massRatio ?? 0) * (effectiveMass[i] ?? 0)),
     psi,
+    residual: null,
   }
+  ctx.residual = residualSetResonance(ctx)
+  return ctx
 }
 
 /** The sizing grid of each target over each interval, merged: dense near every target mode. */
@@ -133,17 +130,4 @@ function unionGrid(intervals: Band[], targets: number[], include: Float64Array):
   }
   pts.sort((a, b) => a - b)
   return Float64Array.from(pts.filter((w, i) => i === 0 || w > (pts[i - 1] ?? 0) * (1 + 1e-12)))
-}
-
-/**
- * The grid points inside a band: indices [from, to) of the ascending grid.
- * @param omega grid, rad/s, ascending
- * @param band rad/s
- */
-export function gridRange(omega: Float64Array, band: Band): [number, number] {
-  let from = 0
-  while (from < omega.length && (omega[from] ?? 0) < band.min * (1 - 1e-12)) from++
-  let to = from
-  while (to < omega.length && (omega[to] ?? 0) <= band.max * (1 + 1e-12)) to++
-  return [from, to]
 }

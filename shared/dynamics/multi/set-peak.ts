@@ -1,7 +1,8 @@
 import { measured, measuredStroke } from '../measure'
 import { findPeak, type Peak } from '../peak'
 import type { AbsorberValues } from '../tuning-objective'
-import { gridRange, type SetContext } from './set-context'
+import { gridRange } from './set-bands'
+import type { SetContext } from './set-context'
 import { setFrequencies } from './set-frequencies'
 import { setEvaluator, setPoint, type SetUnit } from './woodbury'
 
@@ -88,6 +89,7 @@ export interface SetEvaluation {
  * @param values the units (kg, N/m, N·s/m), in the order of ctx.units
  */
 export function setPeak(ctx: SetContext, values: AbsorberValues[]): Peak {
+  if (ctx.residual) return { value: Infinity, omega: ctx.residual.omega }
   return curvePeak(ctx, curves(ctx, setUnits(ctx, values), false), 0)
 }
 
@@ -97,6 +99,14 @@ export function setPeak(ctx: SetContext, values: AbsorberValues[]): Peak {
  * @param values the units (kg, N/m, N·s/m)
  */
 export function evaluateSet(ctx: SetContext, values: AbsorberValues[]): SetEvaluation {
+  if (ctx.residual) {
+    const none = { value: Infinity, omega: ctx.residual.omega }
+    return {
+      peak: none,
+      maxStroke: values.map(() => none),
+      strokeAtPeak: values.map(() => Infinity),
+    }
+  }
   const c = curves(ctx, setUnits(ctx, values), true)
   const peak = curvePeak(ctx, c, 0)
   return {
