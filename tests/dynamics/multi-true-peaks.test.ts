@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest'
 import { setContext, type SetContext } from '../../shared/dynamics/multi/set-context'
 import { setValues } from '../../shared/dynamics/multi/optimize-set'
 import { evaluateSet } from '../../shared/dynamics/multi/set-peak'
+import { solveSet } from '../../shared/dynamics/multi/solve-set'
 import type { SetModelInput } from '../../shared/schemas/absorber-set'
 import { denseOver, setCurve } from './set-curves'
 import { randomNetwork, seeded } from './fixtures'
@@ -77,4 +78,53 @@ describe('property: with several absorbers the reported peak is the true maximum
       checked++
     }
   }, 300_000)
+})
+
+describe('a mode no unit can reach', () => {
+  // Source: a mode with no damping acting on it, seen by the load and the response, has a real
+  // pole in the receptance (Caughey & O'Kelly 1965): no unit on its node line can limit it.
+  const chain = {
+    nodes: [
+      { id: 'g0', fixed: true },
+      { id: 'm1', mass: 1000 },
+      { id: 'm2', mass: 1000 },
+      { id: 'm3', mass: 1000 },
+      { id: 'g1', fixed: true },
+    ],
+    springs: [
+      { from: 'g0', to: 'm1', stiffness: 1e6 },
+      { from: 'm1', to: 'm2', stiffness: 1e6 },
+      { from: 'm2', to: 'm3', stiffness: 1e6 },
+      { from: 'm3', to: 'g1', stiffness: 1e6 },
+    ],
+    hostDampingRatio: [0.02, 0, 0.02],
+    excitation: { node: 'm1' },
+    response: { node: 'm1' },
+    band: { minHz: 1, maxHz: 10 },
+  }
+
+  it('reports peak.with as null, naming the mode, when every unit sits on its node line', () => {
+    const r = solveSet({
+      ...chain,
+      absorbers: [
+        { node: 'm2', massRatio: 0.02, targetMode: 1, tuning: 'den-hartog' },
+        { node: 'm2', massRatio: 0.02, targetMode: 3, tuning: 'den-hartog' },
+      ],
+    })
+    expect(r.peak.with).toBeNull()
+    expect(r.peak.without).toBeNull()
+    expect(r.notes.join(' ')).toMatch(/peak\.with is null: host mode 2 \(/)
+  })
+
+  it('keeps the peak finite once one unit moves that mode', () => {
+    const r = solveSet({
+      ...chain,
+      absorbers: [
+        { node: 'm2', massRatio: 0.02, targetMode: 1, tuning: 'den-hartog' },
+        { node: 'm1', massRatio: 0.02, targetMode: 2, tuning: 'den-hartog' },
+      ],
+    })
+    expect(r.peak.with).toBeGreaterThan(0)
+    expect(Number.isFinite(r.peak.with)).toBe(true)
+  })
 })

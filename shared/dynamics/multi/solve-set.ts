@@ -101,6 +101,11 @@ function notes(ctx: SetContext, units: SetUnitReport[], t: SetTuning): string[] 
         .map((s) => `${s.name} ${s.value.toPrecision(4)}`)
         .join(', ')}) and reached ${t.value.toPrecision(4)}.`,
     )
+  if (ctx.residual)
+    out.push(
+      `peak.with is null: ${ctx.residual.label} has no damping acting on it and no unit moves it, ` +
+        'so the response there is unbounded whatever the tuning; move a unit or add damping.',
+    )
   if (ctx.units.some((u) => u.relativeTo !== null) && ctx.base)
     out.push('A unit acting between two nodes takes no load from the supports under base motion.')
   return out
