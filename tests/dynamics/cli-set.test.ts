@@ -1,23 +1,11 @@
-import { execFile } from 'node:child_process'
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
-import { promisify } from 'node:util'
 import { describe, expect, it } from 'vitest'
+import { solve } from './cli-run'
 
-const run = promisify(execFile)
 const dir = mkdtempSync(join(tmpdir(), 'quellnode-solve-set-'))
 const example = 'seed/sets/two-span-footbridge.json'
-
-async function solve(file: string): Promise<{ code: number; stdout: string; stderr: string }> {
-  try {
-    const r = await run('npx', ['tsx', 'server/scripts/solve.ts', file], { cwd: process.cwd() })
-    return { code: 0, stdout: r.stdout, stderr: r.stderr }
-  } catch (e) {
-    const x = e as { code: number; stdout: string; stderr: string }
-    return { code: x.code, stdout: x.stdout, stderr: x.stderr }
-  }
-}
 
 /** The example with a change, written to a file of its own. */
 function variant(name: string, change: (m: Record<string, unknown>) => void): string {

@@ -1,29 +1,27 @@
 import type { TuningName } from '../../schemas/model'
-import type { ExcitationReport, ModeReport, ResponseReport } from '../sizing-result'
+import type { AbsorberReport, ExcitationReport, ModeReport, ResponseReport } from '../sizing-result'
 import type { SetRobustnessReport } from './set-robustness'
 import type { SetStartName } from './set-starts'
 
-/** One unit of a set, as built and as it behaves with the whole set in place. */
-export interface SetUnitReport {
-  node: string
-  relativeTo: string | null
+/** One unit of a set, as built and as it behaves with the whole set in place; the fields shared
+ * with the single absorber mean the same, with its own target mode for the ratios. */
+export interface SetUnitReport extends Pick<
+  AbsorberReport,
+  | 'node'
+  | 'relativeTo'
+  | 'mass'
+  | 'massRatio'
+  | 'stiffness'
+  | 'damping'
+  | 'frequencyHz'
+  | 'frequencyRatio'
+  | 'dampingRatio'
+  | 'strokeLimit'
+> {
   /** 1-based mode the unit aims at */
   targetMode: number
   /** kg, of that mode on the unit's coordinate, 1/(uᵀφ_r)² */
   effectiveMass: number
-  /** kg */
-  mass: number
-  /** m_a / m_eff of its target mode */
-  massRatio: number
-  /** N/m */
-  stiffness: number
-  /** N·s/m */
-  damping: number
-  frequencyHz: number
-  /** ω_a / ω of its target mode */
-  frequencyRatio: number
-  /** c_a / (2 m_a ω_a) */
-  dampingRatio: number
   /** 'joint' when tuned together with other units, else the request's method */
   tuning: TuningName | 'given' | 'joint'
   /** sag of a vertical unit under its own weight, g/ω_a², m */
@@ -33,8 +31,6 @@ export interface SetUnitReport {
   maxStrokeFrequencyHz: number | null
   /** largest stroke at the design load (excitation.amplitude), m */
   maxStroke: number | null
-  /** m at the design load, as asked; null when none was given */
-  strokeLimit: number | null
   /** whether maxStroke stays within strokeLimit; null without a limit */
   strokeWithinLimit: boolean | null
 }

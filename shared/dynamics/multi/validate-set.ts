@@ -1,21 +1,11 @@
 import type { SetAbsorberInput, SetModelInput } from '../../schemas/absorber-set'
-import type { ExplicitTuning, TuningName } from '../../schemas/model'
 import { ModelError } from '../errors'
 import type { NodeIndex } from '../validate-host'
 import { freeNode } from '../validate-load'
+import type { ValidAbsorber } from '../validate-request'
 
 /** One absorber of a set after validation; nodes are free-node indices. */
-export interface ValidUnit {
-  node: number
-  /** the second node when the unit acts between two nodes, else null */
-  relativeTo: number | null
-  /** exactly one of the two is set */
-  massRatio: number | null
-  /** kg */
-  mass: number | null
-  tuning: TuningName | ExplicitTuning
-  /** m at the design load, or null */
-  strokeLimit: number | null
+export interface ValidUnit extends ValidAbsorber {
   /** 0-based mode the unit aims at */
   mode: number
 }
@@ -26,7 +16,13 @@ function positive(value: number, field: string, unit: string): number {
   return value
 }
 
-function validUnit(a: SetAbsorberInput, i: number, index: NodeIndex, n: number, fallback: number) {
+function validUnit(
+  a: SetAbsorberInput,
+  i: number,
+  index: NodeIndex,
+  n: number,
+  fallback: number,
+): ValidUnit {
   const at = `absorbers[${i}]`
   const node = freeNode(index, a.node, `${at}.node`, 'an absorber')
   const relativeTo =
