@@ -31,10 +31,15 @@ export const setModelSchema = strictObject({
     .min(0, { error: 'must be 0 or more' })
     .max(0.3, { error: 'at most 0.3 (±30 %)' })
     .optional(),
-}).refine((m) => !(m.absorber && m.absorbers), {
-  message: 'give either absorber or absorbers, not both',
-  path: ['absorbers'],
 })
+  .refine((m) => !(m.absorber && m.absorbers), {
+    message: 'give either absorber or absorbers, not both',
+    path: ['absorbers'],
+  })
+  .refine((m) => m.detuningTolerance === undefined || m.absorbers, {
+    message: 'applies to absorbers only (a single absorber is tuned at the nominal host)',
+    path: ['detuningTolerance'],
+  })
 
 export type SetAbsorberInput = z.infer<typeof setAbsorberSchema>
 export type SetModelInput = z.infer<typeof setModelSchema>

@@ -70,6 +70,16 @@ describe('the solve command line with several absorbers', () => {
         /^solve: invalid model: absorbers\[1\]\.tuning: units tuned together share one objective/,
       ],
       ['empty', (m) => (m.absorbers = []), /absorbers: give at least one absorber$/],
+      [
+        'tolerance',
+        (m) => {
+          m.absorber = units(m)[0]
+          delete (m.absorber as Record<string, unknown>).targetMode
+          delete m.absorbers
+          m.detuningTolerance = 0.1
+        },
+        /^solve: invalid model: detuningTolerance: applies to absorbers only/,
+      ],
     ]
     const results = await Promise.all(cases.map(([name, change]) => solve(variant(name, change))))
     results.forEach((r, i) => {

@@ -92,6 +92,12 @@ export function setContext(
   const targets = [...new Set(units.map((u) => u.mode))].sort((a, b) => a - b)
   const omegaTargets = targets.map((r) => prep.modes.omega[r] ?? 0)
   const [intervals, bandSource] = bands(prep, req, targets)
+  const h2 = units.findIndex((x) => x.tuning === 'optimize-h2')
+  if (h2 >= 0 && req.speed && req.speed.min === req.speed.max)
+    throw new ModelError(
+      `absorbers[${h2}].tuning`,
+      "optimize-h2 needs a band to integrate over, and a single running speed has none: use 'optimize' or give a speed range",
+    )
   const u = units.map((x) => attachmentVector(prep.fullN, x.node, x.relativeTo))
   const { vectors, measure } = requestVectors(prep, req.excitation, req.response, u[0]!, false)
   const set: SetVectors = { r: vectors.r, p: vectors.p, u }
