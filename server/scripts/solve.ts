@@ -5,7 +5,7 @@
  */
 import { readFileSync } from 'node:fs'
 import { ModelError, solveSizing } from '../../shared/dynamics'
-import { solveSet } from '../../shared/dynamics/multi/solve-set'
+import { solveSet } from '../../shared/dynamics/multi'
 import { setModelSchema } from '../../shared/schemas/absorber-set'
 import { issuePath } from '../../shared/schemas/model'
 
