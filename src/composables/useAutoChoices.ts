@@ -25,8 +25,9 @@ export function useAutoChoices(
       const needsPick = !f.absorberNode || stale || f.targetMode > p.modes.length
       if (!needsPick || !mode) return
       let best = 0
-      mode.shape.forEach((v, i) => {
-        if (Math.abs(v) > Math.abs(mode.shape[best] ?? 0)) best = i
+      const shape = mode.shape ?? []
+      shape.forEach((v, i) => {
+        if (Math.abs(v) > Math.abs(shape[best] ?? 0)) best = i
       })
       const id = p.nodeIds[best] ?? ''
       edit((x) => {
