@@ -18,7 +18,10 @@ async function main() {
   }
   const logger = pino({ level: config.LOG_LEVEL })
   const dataSource = await createDataSource(config).initialize()
-  const pool = createSizingPool(config.WORKER_THREADS)
+  const pool = createSizingPool(config.WORKER_THREADS, {
+    maxQueue: config.ENGINE_QUEUE_LIMIT,
+    budgetMs: config.ENGINE_BUDGET_MS,
+  })
   const deps = { config, dataSource, mailer: smtpMailer(config), logger, pool }
   const services = buildServices(deps)
   const app = createApp(deps, services)

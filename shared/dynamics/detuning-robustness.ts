@@ -1,7 +1,7 @@
 import type { ModelInput } from '../schemas/model'
 import { ModelError } from './errors'
 import { evaluateAbsorber } from './evaluate-absorber'
-import { sizingContext } from './sizing-context'
+import { scaledContext } from './scaled-context'
 import { prepareSizing, type PreparedSizing } from './size-absorber'
 
 /** Options of `detuningRobustness`. */
@@ -54,8 +54,7 @@ export function detuningRobustness(
   if (!offsets.includes(0) && points % 2 === 0) offsets.push(0)
   const h = new Float64Array(8)
   const at = (offset: number): { peak: number; amplification: number } => {
-    const ctx =
-      Math.abs(offset) < 1e-12 ? nominal : sizingContext(model, nominal.prep, (1 + offset) ** 2)
+    const ctx = Math.abs(offset) < 1e-12 ? nominal : scaledContext(nominal, (1 + offset) ** 2)
     const peak = evaluateAbsorber(ctx, sized.values).peak.value
     ctx.rec.at(0, h)
     return { peak, amplification: peak / Math.hypot(h[0] ?? 0, h[1] ?? 0) }

@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { IdSchema } from './ids'
+import { IdSchema, IndexSchema, PageSizeSchema } from './ids'
 import { CURRENCIES } from '../money'
 import { SizingSummarySchema } from './sizing'
 
@@ -55,6 +55,10 @@ export const QuoteListQuerySchema = z.object({
   /** created on or before, YYYY-MM-DD */
   to: isoDate.optional(),
   search: z.string().trim().max(100).optional(),
+  /** rows per page, 1–200 (default 50); the total is in the X-Total-Count header */
+  limit: PageSizeSchema.optional(),
+  /** rows skipped, newest first */
+  offset: IndexSchema.optional(),
 })
 export type QuoteListQuery = z.infer<typeof QuoteListQuerySchema>
 

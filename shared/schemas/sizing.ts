@@ -7,6 +7,7 @@ import {
   loadKindSchema,
   nodeForceSchema,
   nodeSchema,
+  OUT_OF_RANGE,
   speedSchema,
   springSchema,
   tuningNameSchema,
@@ -15,10 +16,28 @@ import {
 import { SizingRecordLinkSchema } from './measurement'
 import { strictObject } from './strict'
 
+/**
+ * The largest model the server solves: a whole study at 1000 nodes takes about a second of one
+ * worker thread on a small server, and a worker job is cancelled past its time budget anyway.
+ */
+export const MODEL_LIMITS = { nodes: 1000, springs: 5000 } as const
+const LIMIT_REASON =
+  'larger models are refused so that one sizing cannot hold the engine for minutes; lump ' +
+  'neighbouring masses together'
+
 /** The host structure as the engineer edits it: a revision of a model stores exactly this. */
 export const ModelDefinitionSchema = z.object({
-  nodes: z.array(nodeSchema).min(1, 'add at least one node').max(1000, 'at most 1000 nodes'),
-  springs: z.array(springSchema).max(5000, 'at most 5000 springs'),
+  nodes: z
+    .array(nodeSchema)
+    .min(1, 'add at least one node')
+    .refine((a) => a.length <= MODEL_LIMITS.nodes, {
+      message: `at most ${MODEL_LIMITS.nodes} nodes: ${LIMIT_REASON}`,
+      params: OUT_OF_RANGE,
+    }),
+  springs: z.array(springSchema).refine((a) => a.length <= MODEL_LIMITS.springs, {
+    message: `at most ${MODEL_LIMITS.springs} springs: ${LIMIT_REASON}`,
+    params: OUT_OF_RANGE,
+  }),
   hostDampingRatio: z.union([z.number(), z.array(z.number())]).default(0.02),
 })
 export type ModelDefinition = z.infer<typeof ModelDefinitionSchema>

@@ -11,6 +11,8 @@ import { api, queryString } from './client'
 
 export const quotesApi = {
   list: (q: QuoteListQuery = {}) => api.get<QuoteSummary[]>(`/api/quotes${queryString(q)}`),
+  /** one page, newest first, with the total matching the filters */
+  page: (q: QuoteListQuery) => api.page<QuoteSummary>(`/api/quotes${queryString(q)}`),
   get: (id: number) => api.get<Quote>(`/api/quotes/${id}`),
   create: (body: QuoteCreate) => api.post<Quote>('/api/quotes', body),
   update: (id: number, body: QuoteDraft) => api.put<Quote>(`/api/quotes/${id}`, body),

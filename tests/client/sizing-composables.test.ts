@@ -133,7 +133,7 @@ describe('the node choices kept valid as the structure changes', () => {
     expect(nodes).toEqual(['level-2', 'level-2', 'level-2'])
     // First mode of two equal storeys on equal springs: φ = [1, (1+√5)/2], largest at the top
     // (two-storey shear frame, Chopra, Dynamics of Structures, ch. 10 (memory)).
-    const shape = preview.modes[0]!.shape
+    const shape = preview.modes[0]!.shape ?? []
     expect(Math.abs(shape[1]! / shape[0]!)).toBeCloseTo((1 + Math.sqrt(5)) / 2, 9)
   })
 

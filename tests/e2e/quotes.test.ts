@@ -71,7 +71,7 @@ describe('sales quote the demo sizing in Chromium on a tablet', () => {
     const save = await page.waitForSelector('::-p-xpath(//button[normalize-space(.)="Save draft"])')
     await save!.click({ count: 2 })
     await page.waitForSelector('[data-state="draft"]')
-    const drafts = (await rig.t.services.quotes.list(salesUser, {})).filter(
+    const drafts = (await rig.t.services.quotes.list(salesUser, {})).items.filter(
       (q) => q.sizingId === sizingId,
     )
     expect(drafts).toHaveLength(1)

@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm'
 import type { FileStore } from '../../integrations/file-store'
+import type { SizingPool } from '../../workers/pool'
 import type { ModelsService } from '../models/models.service'
 import type { SitesService } from '../sites/sites.service'
 import { calibrationService } from './calibrate.service'
@@ -12,12 +13,14 @@ export function buildMeasurements(deps: {
   sites: SitesService
   models: ModelsService
   files: FileStore
+  pool: Pick<SizingPool, 'identify'>
 }) {
   const service = measurementsService({
     records: measurementsRepository(deps.dataSource),
     sites: deps.sites,
     models: deps.models,
     files: deps.files,
+    pool: deps.pool,
   })
   return {
     ...service,

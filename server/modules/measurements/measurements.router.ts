@@ -1,3 +1,4 @@
+import { closedSignal } from '../../http/closed-signal'
 import { Router } from 'express'
 import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
@@ -34,7 +35,8 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
       before: [singleUpload('record', MAX_RECORD_BYTES)],
       status: 201,
     },
-    ({ user, params, body, req }) => m.upload(user, params.id, body, req.file),
+    ({ user, params, body, req, res }) =>
+      m.upload(user, params.id, body, req.file, closedSignal(res)),
   )
   route(
     router,

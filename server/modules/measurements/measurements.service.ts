@@ -5,7 +5,8 @@ import type { AuthUser } from '../../middleware/authenticate'
 import type { ModelsService } from '../models/models.service'
 import type { SitesService } from '../sites/sites.service'
 import type { MeasurementsRepository, StoredRecord } from './measurements.repository'
-import { checkRecordFile, identify, peakAt, readRecord } from './record-file'
+import type { SizingPool } from '../../workers/pool'
+import { checkRecordFile, peakAt, readRecord } from './record-file'
 
 type UploadedFile = { originalname: string; buffer: Buffer } | undefined
 
@@ -14,6 +15,7 @@ export function measurementsService(deps: {
   sites: SitesService
   models: ModelsService
   files: FileStore
+  pool: Pick<SizingPool, 'identify'>
 }) {
   async function stored(id: number): Promise<StoredRecord> {
     const r = await deps.records.findById(id)
@@ -50,12 +52,23 @@ export function measurementsService(deps: {
     },
 
     /** Reads and identifies the whole file first, so a refused upload leaves nothing behind. */
-    async upload(user: AuthUser, siteId: number, input: RecordUpload, upload: UploadedFile) {
+    async upload(
+      user: AuthUser,
+      siteId: number,
+      input: RecordUpload,
+      upload: UploadedFile,
+      signal?: AbortSignal,
+    ) {
       await deps.sites.get(siteId)
       await assertModelOfSite(input.modelId, siteId)
       const file = checkRecordFile(upload)
-      const record = readRecord(file.buffer, input.sampleRateHz)
-      const result = identify(record, input.kind)
+      // Reading and identifying an 8 MB record takes seconds: in the worker pool, not here.
+      const read = await deps.pool.identify(
+        { bytes: file.buffer, sampleRateHz: input.sampleRateHz, kind: input.kind },
+        { signal },
+      )
+      if (!read.ok) throw new AppError(read.code, read.message, read.status, read.details)
+      const { result } = read
       const storedName = await deps.files.save(file.buffer, '.csv')
       try {
         const id = await deps.records.create({
@@ -66,8 +79,8 @@ export function measurementsService(deps: {
           filename: file.originalname.slice(0, 200),
           storedName,
           size: file.buffer.length,
-          sampleRateHz: record.sampleRateHz,
-          samples: record.acceleration.length,
+          sampleRateHz: read.sampleRateHz,
+          samples: read.samples,
           rateFromForm: input.sampleRateHz !== undefined,
           kind: result.kind,
           result,

@@ -9,6 +9,7 @@ import {
 import type { BuildSpecification, WorkOrderState } from '../../../shared/schemas/work-order'
 import { jsonColumn } from '../../http/json-column'
 
+@Index('IDX_work_orders_due', ['dueDate', 'id'])
 @Entity('work_orders')
 export class WorkOrderEntity {
   @PrimaryGeneratedColumn('increment', { type: 'int' })

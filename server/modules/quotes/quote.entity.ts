@@ -21,6 +21,8 @@ import { QuoteLineEntity } from './quote-line.entity'
 
 /** One revision of a numbered quote; a sent revision is never changed, only superseded. */
 @Entity('quotes')
+@Index('IDX_quotes_created', ['createdAt', 'id'])
+@Index('IDX_quotes_expiry', ['state', 'validUntil'])
 @Index('UQ_quotes_number_revision', ['number', 'revision'], { unique: true })
 @Index('UQ_quotes_year_seq_revision', ['year', 'seq', 'revision'], { unique: true })
 export class QuoteEntity {

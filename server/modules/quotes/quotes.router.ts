@@ -28,11 +28,16 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       tag,
       method: 'get',
       path: '/api/quotes',
-      summary: 'Quotes, filtered by state, customer, date and text',
+      summary:
+        'One page of quotes (limit, offset; newest first), filtered by state, customer, date and text; the total matching is in X-Total-Count',
       access: READERS,
       query: QuoteListQuerySchema,
     },
-    ({ user, query }) => quotes.list(user, query),
+    async ({ user, query, res }) => {
+      const page = await quotes.list(user, query)
+      res.set('x-total-count', String(page.total))
+      return page.items
+    },
   )
   route(
     router,

@@ -16,7 +16,7 @@ import { insertNumbered } from './quote-numbers'
 import type { QuoteRow } from './quote-rows'
 import type { Tx } from '../outbox/outbox.repository'
 import { REVISABLE, sourcesOf } from './quote-states'
-import { referenceOf, summaryOf } from './quote-view'
+import { listSummary, referenceOf, summaryOf } from './quote-view'
 
 export interface QuotesServiceDeps extends QuotesDeps {
   companies: CompaniesRepository
@@ -57,17 +57,15 @@ export function quotesService(deps: QuotesServiceDeps) {
   }
 
   return {
+    /** One page of the list, newest first, and the total matching the filters. */
     list: async (user: AuthUser, q: QuoteListQuery) => {
       await expireDue(repo, deps.now())
-      const rows = await repo.list(
+      const page = await repo.listPage(
         isCustomer(user)
           ? { ...q, companyId: user.companyId ?? -1, states: CUSTOMER_VISIBLE_STATES }
           : q,
       )
-      const latest = new Map<string, number>()
-      for (const n of new Set(rows.map((r) => r.number)))
-        latest.set(n, await repo.latestRevision(n))
-      return rows.map((r) => summaryOf(r, latest.get(r.number) === r.revision))
+      return { total: page.total, items: page.rows.map(listSummary) }
     },
 
     /** A sizing as a new quote would freeze it; another engineer's draft is a 404. */

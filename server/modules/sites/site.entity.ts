@@ -1,4 +1,5 @@
 import {
+  Index,
   Column,
   CreateDateColumn,
   Entity,
@@ -14,6 +15,7 @@ import { CompanyEntity } from '../companies/company.entity'
 import { UserEntity } from '../users/user.entity'
 import { SitePhotoEntity } from './site-photo.entity'
 
+@Index('IDX_sites_updated', ['updatedAt'])
 @Entity('sites')
 export class SiteEntity {
   @PrimaryGeneratedColumn('increment', { type: 'int' })

@@ -1,4 +1,5 @@
 import {
+  Index,
   Column,
   CreateDateColumn,
   Entity,
@@ -14,6 +15,7 @@ import { HostModelEntity } from '../models/host-model.entity'
 import { SiteEntity } from '../sites/site.entity'
 import { UserEntity } from '../users/user.entity'
 
+@Index('IDX_sizings_updated', ['updatedAt'])
 @Entity('sizings')
 export class SizingEntity {
   @PrimaryGeneratedColumn('increment', { type: 'int' })

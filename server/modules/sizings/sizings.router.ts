@@ -1,3 +1,4 @@
+import { closedSignal } from '../../http/closed-signal'
 import { Router } from 'express'
 import { z } from 'zod'
 import { ACCESS } from '../../../shared/access'
@@ -44,7 +45,7 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
       body: SizingCreateSchema,
       status: 201,
     },
-    ({ user, body }) => sizings.create(user, body.input),
+    ({ user, body, res }) => sizings.create(user, body.input, { signal: closedSignal(res) }),
   )
   route(
     router,
@@ -72,7 +73,8 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
       params: IdParamSchema,
       body: SizingSaveSchema,
     },
-    ({ user, params, body }) => sizings.save(user, params.id, body),
+    ({ user, params, body, res }) =>
+      sizings.save(user, params.id, body, { signal: closedSignal(res) }),
   )
   route(
     router,

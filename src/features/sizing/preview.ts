@@ -23,14 +23,23 @@ function problem(e: unknown) {
  */
 export function previewSizing(model: ModelDefinition, input: SizingInput): SizingPreview {
   const free = model.nodes.find((n) => !n.fixed)
-  let host
-  try {
-    host = solveSizing({
+  const hostOnly = (targetMode?: number) =>
+    solveSizing({
       nodes: model.nodes,
       springs: model.springs,
       hostDampingRatio: model.hostDampingRatio,
       ...(free && { excitation: { node: free.id } }),
+      ...(targetMode && { targetMode }),
     })
+  let host
+  try {
+    // Results carry the shapes of the target mode and its band: ask for the chosen target's.
+    try {
+      host = hostOnly(input.targetMode)
+    } catch (e) {
+      if (!(e instanceof ModelError && e.field === 'targetMode')) throw e
+      host = hostOnly()
+    }
   } catch (e) {
     return { nodeIds: [], modes: [], evaluation: null, error: problem(e) }
   }

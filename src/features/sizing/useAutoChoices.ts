@@ -22,8 +22,9 @@ export function useAutoChoices(preview: Ref<SizingPreview | null>) {
       const needsPick = !f.absorberNode || stale || f.targetMode > p.modes.length
       if (!needsPick || !mode) return
       let best = 0
-      mode.shape.forEach((v, i) => {
-        if (Math.abs(v) > Math.abs(mode.shape[best] ?? 0)) best = i
+      const shape = mode.shape ?? []
+      shape.forEach((v, i) => {
+        if (Math.abs(v) > Math.abs(shape[best] ?? 0)) best = i
       })
       store.keepNodeChoices(p.nodeIds[best] ?? '', ids, p.modes.length)
     },

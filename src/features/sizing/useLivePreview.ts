@@ -17,32 +17,41 @@ function startWorker(): Worker | null {
 
 /**
  * Recomputes the sizing in the browser 150 ms after the last change, in a Web Worker when the
- * browser has one; only the answer to the latest request is kept.
+ * browser has one; only the answer to the latest request is kept, and a newer request stops the
+ * worker still computing an older one.
  * @param source the model and the choices, or null while nothing is loaded
  */
 export function useLivePreview(source: Ref<{ model: ModelDefinition; input: SizingInput } | null>) {
   const preview = ref<SizingPreview | null>(null)
   const busy = ref(false)
-  let worker = startWorker()
+  let worker: Worker | null = null
   let seq = 0
 
-  if (worker) {
-    worker.onerror = () => {
+  function attach(w: Worker | null): Worker | null {
+    if (!w) return null
+    w.onerror = () => {
       // the worker could not start (old browser, blocked script): compute here instead
-      worker?.terminate()
+      w.terminate()
       worker = null
       run()
     }
-    worker.onmessage = (e: MessageEvent<{ id: number; preview: SizingPreview }>) => {
+    w.onmessage = (e: MessageEvent<{ id: number; preview: SizingPreview }>) => {
       if (e.data.id !== seq) return
       preview.value = e.data.preview
       busy.value = false
     }
+    return w
   }
+  worker = attach(startWorker())
 
   function run() {
     const s = source.value
     if (!s) return
+    // A newer preview supersedes one still computing: stop that worker rather than wait for it.
+    if (busy.value && worker) {
+      worker.terminate()
+      worker = attach(startWorker())
+    }
     const id = ++seq
     busy.value = true
     // A deep plain copy: reactive proxies cannot be posted to a worker.
