@@ -64,7 +64,7 @@ describe('the sizing study reads the new choices', () => {
     expect(ev.checks.stroke).toBeLessThanOrEqual(0.01)
     expect(ev.result).toEqual(solveSizing(req))
     expect(describeLoad(i)).toBe(
-      'Rotating unbalance 0.05 kg·m at node-3 over running speeds 3.4–3.8 Hz',
+      'Rotating machine at node-3: running speeds 204–228 rpm (3.4–3.8 Hz), unbalance 0.05 kg·m',
     )
   })
 
