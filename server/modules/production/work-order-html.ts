@@ -16,7 +16,7 @@ function loadRows(s: BuildSpecification): [string, string][] {
   return [
     ...(s.designLoad ? [['Design load', s.designLoad] as [string, string]] : []),
     ...(s.stroke !== undefined
-      ? [['Stroke at design load', `${sig(s.stroke * 1000, 3)} mm${limit}`] as [string, string]]
+      ? [['Stroke', `${sig(s.stroke * 1000, 3)} mm at the design load${limit}`] as [string, string]]
       : []),
   ]
 }
