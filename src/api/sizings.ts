@@ -11,8 +11,7 @@ import type {
   DesignAcknowledgement,
   DesignCheck,
 } from '@shared/schemas/design-checks'
-import { api } from './client'
-import { queryString } from './sites'
+import { api, queryString } from './client'
 
 /** A sizing as the server stores it: the input, its authoritative evaluation and summary. */
 export interface SizingView {

@@ -1,12 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { SizingInputSchema } from '../../shared/schemas/sizing'
-import {
-  chooseLoad,
-  loadChoiceOf,
-  setSpeed,
-  type KeptLoad,
-} from '../../src/components/sizing-loads'
-import { defaultForm, toSizingInput, type SizingDraft } from '../../src/stores/sizing-form'
+import { chooseLoad, loadChoiceOf, setSpeed, type KeptLoad } from '../../src/features/sizing/loads'
+import { defaultForm, toSizingInput, type SizingDraft } from '../../src/features/sizing/draft'
 
 function draft(): SizingDraft {
   const form = { ...defaultForm(), absorberNode: 'n2', excitationNode: 'n2', responseNode: 'n2' }

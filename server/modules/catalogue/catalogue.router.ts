@@ -1,5 +1,6 @@
 import { Router } from 'express'
 import { z } from 'zod'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
   CatalogueOptionInputSchema,
@@ -11,9 +12,9 @@ import { route } from '../../http/route'
 import type { SizingSource } from '../quotes/sizing-source'
 import type { CatalogueService } from './catalogue.service'
 
-const LINE_READERS = ['engineer', 'sales', 'production', 'admin'] as const
-const SELLERS = ['sales', 'admin'] as const
-const ADMIN = ['admin'] as const
+const LINE_READERS = ACCESS.catalogue.read
+const SELLERS = ACCESS.catalogue.prices
+const ADMIN = ACCESS.catalogue.write
 const ListQuery = z.object({ includeInactive: z.enum(['true', 'false']).optional() })
 
 export function catalogueRouter(
@@ -127,7 +128,7 @@ export function catalogueRouter(
       path: '/api/catalogue/matches',
       tag,
       summary: 'Which product lines can carry a sizing, and why the others cannot',
-      access: ['engineer', ...SELLERS],
+      access: ACCESS.catalogue.match,
       query: MatchQuerySchema,
     },
     async ({ user, query }) => catalogue.match(await sizings.visibleSummary(user, query.sizingId)),

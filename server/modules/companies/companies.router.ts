@@ -1,5 +1,6 @@
 import { Router } from 'express'
 import { z } from 'zod'
+import { ACCESS } from '../../../shared/access'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import type { CompaniesRepository } from './companies.repository'
@@ -16,7 +17,7 @@ export function companiesRouter(api: ApiRegistry, companies: CompaniesRepository
       path: '/api/companies',
       tag: 'Companies',
       summary: 'Companies, optionally of one kind',
-      access: ['admin', 'sales', 'engineer'],
+      access: ACCESS.companies.read,
       query: CompanyQuerySchema,
     },
     ({ query }) => companies.list(query.kind),

@@ -1,4 +1,5 @@
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
   ContactInputSchema,
@@ -10,7 +11,7 @@ import { route } from '../../http/route'
 import { clientAddress } from '../../http/client-address'
 import type { CustomersService } from './customers.service'
 
-const SELLERS = ['sales', 'admin'] as const
+const SELLERS = ACCESS.customers.write
 
 export function customersRouter(api: ApiRegistry, customers: CustomersService) {
   const router = Router()

@@ -1,4 +1,5 @@
 import express, { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import { PaymentReturnSchema } from '../../../shared/schemas/payment'
 import type { ApiRegistry } from '../../http/api-registry'
@@ -40,7 +41,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
       tag,
       summary:
         'Start paying an accepted quote; answers the hosted payment page URL (201), the still open one on a repeat, or a paid quote as paid (200)',
-      access: ['customer'],
+      access: ACCESS.quotes.accept,
       params: IdParamSchema,
       status: 201,
     },
@@ -58,7 +59,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
       path: '/api/quotes/:id/payment-return',
       tag,
       summary: 'Back from the payment page: confirm the session with the payment service',
-      access: ['customer'],
+      access: ACCESS.quotes.accept,
       params: IdParamSchema,
       body: PaymentReturnSchema,
     },
@@ -72,7 +73,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
       path: '/api/payments/refunds',
       tag,
       summary: 'Second payments of paid quotes and their refunds',
-      access: ['admin'],
+      access: ACCESS.refunds.read,
     },
     () => payments.refunds(),
   )
@@ -84,7 +85,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
       path: '/api/quotes/:id/order',
       tag,
       summary: 'The order of a paid quote, or null',
-      access: ['customer', 'sales', 'production', 'admin'],
+      access: ACCESS.orders.read,
       params: IdParamSchema,
     },
     ({ user, params }) => payments.orderFor(user, params.id),
@@ -97,7 +98,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
       path: '/api/orders',
       tag,
       summary: 'Orders (a customer sees their company’s)',
-      access: ['customer', 'sales', 'production', 'admin'],
+      access: ACCESS.orders.read,
     },
     ({ user }) => payments.orders(user),
   )

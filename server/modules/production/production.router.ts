@@ -1,11 +1,12 @@
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import { StatusChangeSchema, TuningRecordInputSchema } from '../../../shared/schemas/work-order'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import type { ProductionService } from './production.service'
 
-const BUILDERS = ['production', 'admin'] as const
+const BUILDERS = ACCESS.workOrders.write
 
 export function productionRouter(api: ApiRegistry, production: ProductionService) {
   const router = Router()
@@ -93,7 +94,7 @@ export function productionRouter(api: ApiRegistry, production: ProductionService
       path: '/api/audit',
       tag: 'Audit',
       summary: 'Every work-order change and measurement',
-      access: ['admin'],
+      access: ACCESS.audit.read,
     },
     () => production.audit(),
   )

@@ -1,4 +1,5 @@
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
   QuoteAcceptSchema,
@@ -12,8 +13,8 @@ import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import type { QuotesService } from './quotes.service'
 
-const SELLERS = ['sales', 'admin'] as const
-const READERS = ['sales', 'admin', 'customer'] as const
+const SELLERS = ACCESS.quotes.write
+const READERS = ACCESS.quotes.read
 
 /** Engineers and production may not read quotes at all (403); customers only their own. */
 export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
@@ -126,7 +127,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       method: 'post',
       path: '/api/quotes/:id/accept',
       summary: 'The customer accepts a sent quote with a name and a purchase order',
-      access: ['customer'],
+      access: ACCESS.quotes.accept,
       body: QuoteAcceptSchema,
     },
     ({ user, params, body }) => quotes.accept(user, params.id, body),

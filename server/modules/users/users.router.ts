@@ -1,4 +1,5 @@
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { InviteSchema, UserPatchSchema } from '../../../shared/schemas/auth'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import type { ApiRegistry } from '../../http/api-registry'
@@ -12,7 +13,7 @@ export function usersRouter(api: ApiRegistry, users: ReturnType<typeof usersServ
   route(
     router,
     api,
-    { method: 'get', path: '/api/users', tag, summary: 'All users', access: ['admin'] },
+    { method: 'get', path: '/api/users', tag, summary: 'All users', access: ACCESS.users.read },
     () => users.list(),
   )
   route(
@@ -23,7 +24,7 @@ export function usersRouter(api: ApiRegistry, users: ReturnType<typeof usersServ
       path: '/api/users',
       tag,
       summary: 'Invite a user by e-mail',
-      access: ['admin'],
+      access: ACCESS.users.write,
       body: InviteSchema,
       status: 201,
     },
@@ -37,7 +38,7 @@ export function usersRouter(api: ApiRegistry, users: ReturnType<typeof usersServ
       path: '/api/users/:id',
       tag,
       summary: 'Change role or deactivate',
-      access: ['admin'],
+      access: ACCESS.users.write,
       params: IdParamSchema,
       body: UserPatchSchema,
     },
