@@ -44,6 +44,12 @@ export interface BuildSpecification {
   /** ± fraction */
   frequencyTolerance: number
   options: string[]
+  /** the design load in words, its kind and amplitude; absent on older work orders */
+  designLoad?: string
+  /** m, the absorber's peak stroke at the design load (for the end stops); absent on older ones */
+  stroke?: number
+  /** m, the stroke limit the sizing was made to, or null */
+  strokeLimit?: number | null
   /** the failed design checks the sizing was handed over with; absent on older work orders */
   designAcknowledgement?: DesignAcknowledgement | null
   /** sales' confirmation of those checks when the quote was sent */

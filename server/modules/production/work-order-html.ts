@@ -10,6 +10,17 @@ interface Printable {
   specification: BuildSpecification
 }
 
+/** The design load and the stroke the end stops must allow; older work orders have neither. */
+function loadRows(s: BuildSpecification): [string, string][] {
+  const limit = s.strokeLimit ? ` (limit ${sig(s.strokeLimit * 1000, 3)} mm)` : ''
+  return [
+    ...(s.designLoad ? [['Design load', s.designLoad] as [string, string]] : []),
+    ...(s.stroke !== undefined
+      ? [['Stroke', `${sig(s.stroke * 1000, 3)} mm at the design load${limit}`] as [string, string]]
+      : []),
+  ]
+}
+
 /** The workshop sheet: the frozen build values, the tuning target and the safety notes. */
 export function workOrderHtml(w: Printable, fontCss: string) {
   const s = w.specification
@@ -26,6 +37,7 @@ export function workOrderHtml(w: Printable, fontCss: string) {
       'Target frequency',
       `${sig(s.targetFrequencyHz, 4)} Hz ± ${sig(s.frequencyTolerance * 100, 2)} %`,
     ],
+    ...loadRows(s),
     ['Options', s.options.join('; ') || '—'],
   ]
   return `<!doctype html><html><head><meta charset="utf-8"><style>${fontCss}

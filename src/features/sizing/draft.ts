@@ -5,8 +5,19 @@ import { acceptancePreset } from '@shared/acceptance-presets'
 import { LOAD_PRESETS } from '@shared/load-presets'
 import { singleModeModel } from '@shared/dynamics'
 
+/** The load kind and its amplitudes, stroke limit and second absorber node, as in the API. */
+type LoadFields =
+  | 'loadKind'
+  | 'forces'
+  | 'loadMode'
+  | 'baseAcceleration'
+  | 'speed'
+  | 'unbalance'
+  | 'strokeLimit'
+  | 'relativeToNode'
+
 /** The engineer's choices, without the server's ids. SI units. */
-export interface SizingForm {
+export interface SizingForm extends Pick<SizingInput, LoadFields> {
   title: string
   targetMode: number
   absorberNode: string
