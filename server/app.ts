@@ -47,7 +47,7 @@ import { productionService } from './modules/production/production.service'
 import { outboxRepository } from './modules/outbox/outbox.repository'
 import { outboxService } from './modules/outbox/outbox.service'
 import type { SizingSource } from './modules/quotes/sizing-source'
-import type { PdfRenderer } from './integrations/pdf'
+import type { PdfRenderer } from './integrations/pdf/renderer'
 import { buildLimits, buildPayments } from './wiring'
 
 export const VERSION = '0.1.0'

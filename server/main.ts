@@ -6,7 +6,7 @@ import { loadConfig } from './config'
 import { createDataSource } from './data-source'
 import { smtpMailer } from './integrations/mail'
 import { createSizingPool } from './workers/pool'
-import { closePdfRenderers } from './integrations/pdf'
+import { closePdfRenderers } from './integrations/pdf/renderer'
 
 async function main() {
   let config

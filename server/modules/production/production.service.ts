@@ -7,7 +7,7 @@ import type { QuotesService } from '../quotes/quotes.service'
 import type { UsersRepository } from '../users/users.repository'
 import type { ProductionRepository } from './production.repository'
 import { buildSpecification, specificationHash } from './specification'
-import { inlineFontCss, type PdfRenderer } from '../../integrations/pdf'
+import { inlineFontCss, type PdfRenderer } from '../../integrations/pdf/renderer'
 import { workOrderHtml } from './work-order-html'
 import type { Tx } from '../outbox/outbox.repository'
 

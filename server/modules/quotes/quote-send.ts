@@ -5,7 +5,7 @@ import {
   type QuoteSend,
 } from '../../../shared/schemas/quote'
 import { AppError, notFound } from '../../http/app-error'
-import { inlineFontCss } from '../../integrations/pdf'
+import { inlineFontCss } from '../../integrations/pdf/renderer'
 import type { AuthUser } from '../../middleware/authenticate'
 import { quoteFooter, quoteHtml, type Supplier } from './pdf/quote-html'
 import type { QuotesCore } from './quote-core'

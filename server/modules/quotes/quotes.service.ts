@@ -7,7 +7,7 @@ import type {
 import { CUSTOMER_VISIBLE_STATES } from '../../../shared/schemas/quote'
 import { AppError } from '../../http/app-error'
 import type { Mailer } from '../../integrations/mail'
-import type { PdfRenderer } from '../../integrations/pdf'
+import type { PdfRenderer } from '../../integrations/pdf/renderer'
 import type { AuthUser } from '../../middleware/authenticate'
 import type { CompaniesRepository } from '../companies/companies.repository'
 import { expireDue, isCustomer, quotesCore, type QuotesDeps } from './quote-core'
