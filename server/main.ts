@@ -1,6 +1,6 @@
 import 'reflect-metadata'
 import { pino } from 'pino'
-import { buildServices, createApp } from './app'
+import { createApp } from './app'
 import { startBackgroundJobs } from './jobs'
 import { loadConfig } from './config'
 import { createDataSource } from './data-source'
@@ -20,8 +20,7 @@ async function main() {
   const dataSource = await createDataSource(config).initialize()
   const pool = createSizingPool(config.WORKER_THREADS)
   const deps = { config, dataSource, mailer: smtpMailer(config), logger, pool }
-  const services = buildServices(deps)
-  const app = createApp(deps, services)
+  const { app, services } = createApp(deps)
   const jobs = startBackgroundJobs(services, config, logger)
   const server = app.listen(config.PORT, config.HOST, () => {
     logger.info({ url: config.publicUrl }, 'Quellnode is listening')

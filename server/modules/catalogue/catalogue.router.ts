@@ -8,7 +8,7 @@ import {
 } from '../../../shared/schemas/catalogue'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
-import type { SizingSource } from '../quotes/sizing-source'
+import type { SizingSource } from '../sizings/sizing-source'
 import type { CatalogueService } from './catalogue.service'
 
 const LINE_READERS = ['engineer', 'sales', 'production', 'admin'] as const

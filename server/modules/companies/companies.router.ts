@@ -2,11 +2,11 @@ import { Router } from 'express'
 import { z } from 'zod'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
-import type { CompaniesRepository } from './companies.repository'
+import type { CompaniesService } from './companies.service'
 
 const CompanyQuerySchema = z.object({ kind: z.enum(['supplier', 'customer']).optional() })
 
-export function companiesRouter(api: ApiRegistry, companies: CompaniesRepository) {
+export function companiesRouter(api: ApiRegistry, companies: CompaniesService) {
   const router = Router()
   route(
     router,

@@ -10,7 +10,7 @@ import {
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import { singleUpload } from '../../http/upload'
-import type { Measurements } from './build-measurements'
+import type { Measurements } from './calibrate.service'
 
 const READERS = ['engineer', 'sales', 'admin'] as const
 const WRITERS = ['engineer', 'admin'] as const

@@ -85,17 +85,5 @@ export function productionRouter(api: ApiRegistry, production: ProductionService
       return undefined
     },
   )
-  route(
-    router,
-    api,
-    {
-      method: 'get',
-      path: '/api/audit',
-      tag: 'Audit',
-      summary: 'Every work-order change and measurement',
-      access: ['admin'],
-    },
-    () => production.audit(),
-  )
   return router
 }

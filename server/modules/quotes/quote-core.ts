@@ -15,7 +15,7 @@ import type { QuoteRow } from './quote-rows'
 import { dayOf, hasLapsed } from './quote-states'
 import { quoteOf } from './quote-view'
 import type { QuotesRepository } from './quotes.repository'
-import type { SizingSource } from './sizing-source'
+import type { SizingSource } from '../sizings/sizing-source'
 
 export interface QuotesDeps {
   quotes: QuotesRepository

@@ -9,17 +9,17 @@ import { AppError } from '../../http/app-error'
 import type { Mailer } from '../../integrations/mail'
 import type { PdfRenderer } from '../../integrations/pdf/renderer'
 import type { AuthUser } from '../../middleware/authenticate'
-import type { CompaniesRepository } from '../companies/companies.repository'
+import type { CompaniesService } from '../companies/companies.service'
 import { expireDue, isCustomer, quotesCore, type QuotesDeps } from './quote-core'
 import { quoteSending } from './quote-send'
 import { insertNumbered } from './quote-numbers'
 import type { QuoteRow } from './quote-rows'
-import type { Tx } from '../outbox/outbox.repository'
+import type { Tx } from '../../db/tx'
 import { REVISABLE, sourcesOf } from './quote-states'
 import { referenceOf, summaryOf } from './quote-view'
 
 export interface QuotesServiceDeps extends QuotesDeps {
-  companies: CompaniesRepository
+  companies: CompaniesService
   mailer: Mailer
   pdf: PdfRenderer
   publicUrl: () => string
@@ -234,6 +234,8 @@ export function quotesService(deps: QuotesServiceDeps) {
     lockIn: (tx: Tx, quoteId: number) => repo.lockIn(tx, quoteId),
 
     expireDue: (now: Date) => expireDue(repo, now),
+    /** Every quote's state changes, for the audit trail. */
+    stateChanges: () => repo.allEvents(),
   }
 }
 export type QuotesService = ReturnType<typeof quotesService>

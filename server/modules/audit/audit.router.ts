@@ -1,0 +1,21 @@
+import { Router } from 'express'
+import type { ApiRegistry } from '../../http/api-registry'
+import { route } from '../../http/route'
+import type { AuditService } from './audit.service'
+
+export function auditRouter(api: ApiRegistry, audit: AuditService) {
+  const router = Router()
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/audit',
+      tag: 'Audit',
+      summary: 'Every work-order change and measurement',
+      access: ['admin'],
+    },
+    () => audit.list(),
+  )
+  return router
+}
