@@ -12,7 +12,7 @@ import type { QuotesCore } from './quote-core'
 import { portalLink, quoteMail } from './quote-mail'
 import type { QuoteRow } from './quote-rows'
 import { dayOf } from './quote-states'
-import type { QuotesServiceDeps } from './quotes.service'
+import type { QuotesServiceDeps } from './quote-core'
 
 const conflict = (code: string, message: string) => new AppError(code, message, 409)
 

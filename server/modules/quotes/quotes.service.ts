@@ -6,24 +6,14 @@ import type {
 } from '../../../shared/schemas/quote'
 import { CUSTOMER_VISIBLE_STATES } from '../../../shared/schemas/quote'
 import { AppError } from '../../http/app-error'
-import type { Mailer } from '../../integrations/mail'
-import type { PdfRenderer } from '../../integrations/pdf/renderer'
 import type { AuthUser } from '../../middleware/authenticate'
-import type { CompaniesService } from '../companies/companies.service'
-import { expireDue, isCustomer, quotesCore, type QuotesDeps } from './quote-core'
+import { expireDue, isCustomer, quotesCore, type QuotesServiceDeps } from './quote-core'
 import { quoteSending } from './quote-send'
 import { insertNumbered } from './quote-numbers'
 import type { QuoteRow } from './quote-rows'
 import type { Tx } from '../../db/tx'
 import { REVISABLE, sourcesOf } from './quote-states'
 import { referenceOf, summaryOf } from './quote-view'
-
-export interface QuotesServiceDeps extends QuotesDeps {
-  companies: CompaniesService
-  mailer: Mailer
-  pdf: PdfRenderer
-  publicUrl: () => string
-}
 
 const conflict = (code: string, message: string) => new AppError(code, message, 409)
 
