@@ -43,7 +43,7 @@ export function createApp(deps: AppDeps): { app: Express; services: Services } {
 
 function expressApp(deps: AppDeps, services: Services): Express {
   const { config } = deps
-  const api = new ApiRegistry()
+  const api = new ApiRegistry(deps.checkResponses)
   const app = express()
   app.set('trust proxy', config.TRUST_PROXY)
   app.disable('x-powered-by')

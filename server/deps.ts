@@ -23,4 +23,6 @@ export interface AppDeps {
   sizingSource?: SizingSource
   /** HTML→PDF; else the shared Chromium renderer of config.CHROMIUM_PATH. */
   pdf?: PdfRenderer
+  /** Check every JSON answer against its route's response schema (the API tests do). */
+  checkResponses?: boolean
 }

@@ -43,6 +43,7 @@ export async function makeQuoteApp(
     now: () => new Date(Date.now() + t.clock.offsetMs),
     pool: noSolving,
     sizingSource: sizings,
+    checkResponses: true,
   }
   const rebuilt = createApp(deps)
   t.services = rebuilt.services

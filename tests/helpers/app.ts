@@ -40,6 +40,7 @@ export async function makeTestApp(extraEnv: Record<string, string> = {}): Promis
     logger: pino({ level: 'silent' }),
     now,
     pool,
+    checkResponses: true,
   }
   const { app, services } = createApp(deps)
   return {
@@ -69,6 +70,7 @@ export async function anotherInstance(t: TestApp, extra: Pick<AppDeps, 'pool'> &
     mailer: smtpMailer(t.config),
     logger: pino({ level: 'silent' }),
     now: () => new Date(Date.now() + t.clock.offsetMs),
+    checkResponses: true,
     ...extra,
   }
   const { app, services } = createApp(deps)

@@ -1,3 +1,5 @@
+import { z } from 'zod'
+import { AuditEntrySchema } from '../../../shared/schemas/audit'
 import { Router } from 'express'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
@@ -11,6 +13,7 @@ export function auditRouter(api: ApiRegistry, audit: AuditService) {
     {
       method: 'get',
       path: '/api/audit',
+      response: z.array(AuditEntrySchema),
       tag: 'Audit',
       summary: 'Every work-order change and measurement',
       access: ['admin'],

@@ -1,3 +1,8 @@
+import {
+  CatalogueOptionSchema,
+  ProductLineSchema,
+  UnitMatchSchema,
+} from '../../../shared/schemas/catalogue'
 import { Router } from 'express'
 import { z } from 'zod'
 import { IdParamSchema } from '../../../shared/schemas/ids'
@@ -29,6 +34,7 @@ export function catalogueRouter(
     {
       method: 'get',
       path: '/api/catalogue/lines',
+      response: z.array(ProductLineSchema),
       tag,
       summary: 'Absorber product lines (prices for sales and admin only)',
       access: LINE_READERS,
@@ -42,6 +48,7 @@ export function catalogueRouter(
     {
       method: 'get',
       path: '/api/catalogue/lines/:id',
+      response: ProductLineSchema,
       tag,
       summary: 'One product line',
       access: LINE_READERS,
@@ -55,6 +62,7 @@ export function catalogueRouter(
     {
       method: 'post',
       path: '/api/catalogue/lines',
+      response: ProductLineSchema,
       tag,
       summary: 'Add a product line',
       access: ADMIN,
@@ -69,6 +77,7 @@ export function catalogueRouter(
     {
       method: 'put',
       path: '/api/catalogue/lines/:id',
+      response: ProductLineSchema,
       tag,
       summary: 'Change a product line (quotes already made keep their prices)',
       access: ADMIN,
@@ -83,6 +92,7 @@ export function catalogueRouter(
     {
       method: 'get',
       path: '/api/catalogue/options',
+      response: z.array(CatalogueOptionSchema),
       tag,
       summary: 'Options and services with their prices',
       access: SELLERS,
@@ -97,6 +107,7 @@ export function catalogueRouter(
     {
       method: 'post',
       path: '/api/catalogue/options',
+      response: CatalogueOptionSchema,
       tag,
       summary: 'Add an option or service',
       access: ADMIN,
@@ -111,6 +122,7 @@ export function catalogueRouter(
     {
       method: 'put',
       path: '/api/catalogue/options/:id',
+      response: CatalogueOptionSchema,
       tag,
       summary: 'Change an option or service',
       access: ADMIN,
@@ -125,6 +137,7 @@ export function catalogueRouter(
     {
       method: 'get',
       path: '/api/catalogue/matches',
+      response: z.array(UnitMatchSchema),
       tag,
       summary: 'Which product lines can carry a sizing, and why the others cannot',
       access: ['engineer', ...SELLERS],

@@ -1,3 +1,4 @@
+import { CompanyDetailsSchema } from '../../../shared/schemas/auth'
 import { Router } from 'express'
 import { z } from 'zod'
 import type { ApiRegistry } from '../../http/api-registry'
@@ -14,6 +15,7 @@ export function companiesRouter(api: ApiRegistry, companies: CompaniesService) {
     {
       method: 'get',
       path: '/api/companies',
+      response: z.array(CompanyDetailsSchema),
       tag: 'Companies',
       summary: 'Companies, optionally of one kind',
       access: ['admin', 'sales', 'engineer'],

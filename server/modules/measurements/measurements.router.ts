@@ -1,3 +1,10 @@
+import { z } from 'zod'
+import { HostModelSchema } from '../../../shared/schemas/host-model'
+import {
+  AddedPeakSchema,
+  MeasurementRecordSchema,
+  MeasurementRecordSummarySchema,
+} from '../../../shared/schemas/measurement'
 import { Router } from 'express'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
@@ -24,6 +31,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     {
       method: 'post',
       path: '/api/sites/:id/records',
+      response: MeasurementRecordSchema,
       tag,
       summary: 'Upload an acceleration record (multipart field "record") and identify its modes',
       access: WRITERS,
@@ -41,6 +49,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     {
       method: 'get',
       path: '/api/sites/:id/records',
+      response: z.array(MeasurementRecordSummarySchema),
       tag,
       summary: 'Records of a site',
       access: READERS,
@@ -54,6 +63,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     {
       method: 'get',
       path: '/api/records/:id',
+      response: MeasurementRecordSchema,
       tag,
       summary: 'One record with its spectrum and peaks',
       access: READERS,
@@ -80,6 +90,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     {
       method: 'post',
       path: '/api/records/:id/peaks',
+      response: AddedPeakSchema,
       tag,
       summary: 'Identify a peak near a frequency and add it',
       access: WRITERS,
@@ -95,6 +106,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     {
       method: 'delete',
       path: '/api/records/:id/peaks/:index',
+      response: MeasurementRecordSchema,
       tag,
       summary: 'Drop a false peak (0-based index in the list)',
       access: WRITERS,
@@ -108,6 +120,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     {
       method: 'post',
       path: '/api/models/:id/calibrate',
+      response: HostModelSchema,
       tag,
       summary: 'Scale a model’s springs to a measured frequency; saves a new revision',
       access: WRITERS,

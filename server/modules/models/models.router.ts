@@ -1,3 +1,5 @@
+import { z } from 'zod'
+import { HostModelSchema, ModelRevisionSchema } from '../../../shared/schemas/host-model'
 import { Router } from 'express'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
@@ -22,6 +24,7 @@ export function modelsRouter(api: ApiRegistry, models: ModelsService) {
     {
       method: 'get',
       path: '/api/models',
+      response: z.array(HostModelSchema),
       tag,
       summary: 'Host models, optionally of one site',
       access: READERS,
@@ -35,6 +38,7 @@ export function modelsRouter(api: ApiRegistry, models: ModelsService) {
     {
       method: 'post',
       path: '/api/models',
+      response: HostModelSchema,
       tag,
       summary: 'Create a host model (revision 1)',
       access: WRITERS,
@@ -49,6 +53,7 @@ export function modelsRouter(api: ApiRegistry, models: ModelsService) {
     {
       method: 'get',
       path: '/api/models/:id',
+      response: HostModelSchema,
       tag,
       summary: 'A model at its current revision, with the revision list',
       access: READERS,
@@ -62,6 +67,7 @@ export function modelsRouter(api: ApiRegistry, models: ModelsService) {
     {
       method: 'get',
       path: '/api/models/:id/revisions/:revision',
+      response: ModelRevisionSchema,
       tag,
       summary: 'One revision of a model with its structure (a sizing may use an older one)',
       access: READERS,
@@ -75,6 +81,7 @@ export function modelsRouter(api: ApiRegistry, models: ModelsService) {
     {
       method: 'post',
       path: '/api/models/:id/revisions',
+      response: HostModelSchema,
       tag,
       summary: 'Save a new revision',
       access: WRITERS,

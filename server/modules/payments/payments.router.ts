@@ -1,3 +1,11 @@
+import { z } from 'zod'
+import {
+  CheckoutAnswerSchema,
+  OrderInfoSchema,
+  QuoteOrderSchema,
+  RefundInfoSchema,
+} from '../../../shared/schemas/payment'
+import { WebhookOutcomeSchema } from '../../../shared/schemas/service'
 import express, { Router } from 'express'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import { PaymentReturnSchema } from '../../../shared/schemas/payment'
@@ -14,6 +22,7 @@ export function paymentsWebhookRouter(api: ApiRegistry, payments: PaymentsServic
     {
       method: 'post',
       path: '/api/payments/webhook',
+      response: WebhookOutcomeSchema,
       tag: 'Payments',
       summary: 'Signed payment events (checkout completed, expired, payment failed)',
       access: 'public',
@@ -37,6 +46,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
     {
       method: 'post',
       path: '/api/quotes/:id/checkout',
+      response: CheckoutAnswerSchema,
       tag,
       summary:
         'Start paying an accepted quote; answers the hosted payment page URL (201), the still open one on a repeat, or a paid quote as paid (200)',
@@ -56,6 +66,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
     {
       method: 'post',
       path: '/api/quotes/:id/payment-return',
+      response: QuoteOrderSchema,
       tag,
       summary: 'Back from the payment page: confirm the session with the payment service',
       access: ['customer'],
@@ -70,6 +81,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
     {
       method: 'get',
       path: '/api/payments/refunds',
+      response: z.array(RefundInfoSchema),
       tag,
       summary: 'Second payments of paid quotes and their refunds',
       access: ['admin'],
@@ -82,6 +94,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
     {
       method: 'get',
       path: '/api/quotes/:id/order',
+      response: QuoteOrderSchema,
       tag,
       summary: 'The order of a paid quote, or null',
       access: ['customer', 'sales', 'production', 'admin'],
@@ -95,6 +108,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
     {
       method: 'get',
       path: '/api/orders',
+      response: z.array(OrderInfoSchema),
       tag,
       summary: 'Orders (a customer sees their company’s)',
       access: ['customer', 'sales', 'production', 'admin'],

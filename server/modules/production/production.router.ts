@@ -1,3 +1,5 @@
+import { z } from 'zod'
+import { WorkOrderRowSchema, WorkOrderSchema } from '../../../shared/schemas/work-order'
 import { Router } from 'express'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import { StatusChangeSchema, TuningRecordInputSchema } from '../../../shared/schemas/work-order'
@@ -16,6 +18,7 @@ export function productionRouter(api: ApiRegistry, production: ProductionService
     {
       method: 'get',
       path: '/api/work-orders',
+      response: z.array(WorkOrderRowSchema),
       tag,
       summary: 'The production queue',
       access: BUILDERS,
@@ -28,6 +31,7 @@ export function productionRouter(api: ApiRegistry, production: ProductionService
     {
       method: 'get',
       path: '/api/work-orders/:id',
+      response: WorkOrderSchema,
       tag,
       summary: 'A work order with its frozen specification and history',
       access: BUILDERS,
@@ -41,6 +45,7 @@ export function productionRouter(api: ApiRegistry, production: ProductionService
     {
       method: 'post',
       path: '/api/work-orders/:id/state',
+      response: WorkOrderSchema,
       tag,
       summary: 'Move a work order one step',
       access: BUILDERS,
@@ -55,6 +60,7 @@ export function productionRouter(api: ApiRegistry, production: ProductionService
     {
       method: 'post',
       path: '/api/work-orders/:id/tuning',
+      response: WorkOrderSchema,
       tag,
       summary: 'Record the measured frequency of the built unit',
       access: BUILDERS,

@@ -1,3 +1,6 @@
+import { z } from 'zod'
+import { AnyQuoteSchema, QuoteSummarySchema } from '../../../shared/schemas/quote'
+import { SizingSummarySchema } from '../../../shared/schemas/sizing'
 import { Router } from 'express'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
@@ -27,6 +30,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       tag,
       method: 'get',
       path: '/api/quotes',
+      response: z.array(QuoteSummarySchema),
       summary: 'Quotes, filtered by state, customer, date and text',
       access: READERS,
       query: QuoteListQuerySchema,
@@ -40,6 +44,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       tag,
       method: 'post',
       path: '/api/quotes',
+      response: AnyQuoteSchema,
       summary: 'Make a draft quote from a submitted sizing (priced on the server)',
       access: SELLERS,
       body: QuoteCreateSchema,
@@ -54,6 +59,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       ...one,
       method: 'get',
       path: '/api/quotes/from-sizing/:id',
+      response: SizingSummarySchema,
       summary: 'The summary of a sizing to quote from, as the quote will freeze it',
       access: SELLERS,
     },
@@ -62,7 +68,14 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
   route(
     router,
     api,
-    { ...one, method: 'get', path: '/api/quotes/:id', summary: 'One quote', access: READERS },
+    {
+      ...one,
+      method: 'get',
+      path: '/api/quotes/:id',
+      response: AnyQuoteSchema,
+      summary: 'One quote',
+      access: READERS,
+    },
     ({ user, params }) => quotes.get(user, params.id),
   )
   route(
@@ -72,6 +85,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       ...one,
       method: 'put',
       path: '/api/quotes/:id',
+      response: AnyQuoteSchema,
       summary: 'Change a draft (re-priced); a sent quote answers 409',
       access: SELLERS,
       body: QuoteDraftSchema,
@@ -85,6 +99,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       ...one,
       method: 'post',
       path: '/api/quotes/:id/send',
+      response: AnyQuoteSchema,
       summary:
         'Mail the PDF and the portal link to the contact; the quote becomes sent (a repeat answers it as sent). A sizing handed over with failed checks needs confirmDesignChecks (422 design-checks-unconfirmed)',
       access: SELLERS,
@@ -99,6 +114,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       ...one,
       method: 'post',
       path: '/api/quotes/:id/revise',
+      response: AnyQuoteSchema,
       summary: 'Make the next revision as a draft; the old one is kept',
       access: SELLERS,
       status: 201,
@@ -112,6 +128,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       ...one,
       method: 'post',
       path: '/api/quotes/:id/withdraw',
+      response: AnyQuoteSchema,
       summary: 'Withdraw a draft or sent quote',
       access: SELLERS,
       body: QuoteNoteSchema,
@@ -125,6 +142,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       ...one,
       method: 'post',
       path: '/api/quotes/:id/accept',
+      response: AnyQuoteSchema,
       summary: 'The customer accepts a sent quote with a name and a purchase order',
       access: ['customer'],
       body: QuoteAcceptSchema,

@@ -1,3 +1,5 @@
+import { z } from 'zod'
+import { SiteSchema } from '../../../shared/schemas/site'
 import { Router } from 'express'
 import { IdParamSchema, IdSchema } from '../../../shared/schemas/ids'
 import { SiteInputSchema, SiteListQuerySchema } from '../../../shared/schemas/site'
@@ -19,6 +21,7 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     {
       method: 'get',
       path: '/api/sites',
+      response: z.array(SiteSchema),
       tag,
       summary: 'Sites, with search and filters',
       access: READERS,
@@ -32,6 +35,7 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     {
       method: 'post',
       path: '/api/sites',
+      response: SiteSchema,
       tag,
       summary: 'Create a site',
       access: WRITERS,
@@ -46,6 +50,7 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     {
       method: 'get',
       path: '/api/sites/:id',
+      response: SiteSchema,
       tag,
       summary: 'One site',
       access: READERS,
@@ -59,6 +64,7 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     {
       method: 'put',
       path: '/api/sites/:id',
+      response: SiteSchema,
       tag,
       summary: 'Change a site',
       access: WRITERS,
@@ -73,6 +79,7 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     {
       method: 'post',
       path: '/api/sites/:id/photos',
+      response: SiteSchema,
       tag,
       summary: 'Add a photo (multipart field "photo")',
       access: WRITERS,

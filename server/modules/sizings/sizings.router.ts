@@ -1,3 +1,4 @@
+import { SizingListItemSchema, SizingViewSchema } from '../../../shared/schemas/sizing'
 import { Router } from 'express'
 import { z } from 'zod'
 import { IdParamSchema, IdSchema } from '../../../shared/schemas/ids'
@@ -24,6 +25,7 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     {
       method: 'get',
       path: '/api/sizings',
+      response: z.array(SizingListItemSchema),
       tag,
       summary: 'Sizings visible to the caller',
       access: READERS,
@@ -37,6 +39,7 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     {
       method: 'post',
       path: '/api/sizings',
+      response: SizingViewSchema,
       tag,
       summary: 'Create a sizing; the server solves it in the worker pool',
       access: WRITERS,
@@ -51,6 +54,7 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     {
       method: 'get',
       path: '/api/sizings/:id',
+      response: SizingViewSchema,
       tag,
       summary: 'A sizing with its stored result (current or a given revision)',
       access: READERS,
@@ -65,6 +69,7 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     {
       method: 'put',
       path: '/api/sizings/:id',
+      response: SizingViewSchema,
       tag,
       summary: 'Save a new revision from a base revision',
       access: WRITERS,
@@ -79,6 +84,7 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     {
       method: 'post',
       path: '/api/sizings/:id/submit',
+      response: SizingViewSchema,
       tag,
       summary:
         'Hand the sizing over to sales; a design that fails its checks needs them acknowledged with a reason (422 design-checks-failed)',
@@ -94,6 +100,7 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     {
       method: 'post',
       path: '/api/sizings/:id/reopen',
+      response: SizingViewSchema,
       tag,
       summary: 'Reopen a handed-over sizing to revise it',
       access: WRITERS,

@@ -1,3 +1,5 @@
+import { z } from 'zod'
+import { UserSummarySchema } from '../../../shared/schemas/auth'
 import { Router } from 'express'
 import { InviteSchema, UserPatchSchema } from '../../../shared/schemas/auth'
 import { IdParamSchema } from '../../../shared/schemas/ids'
@@ -12,7 +14,14 @@ export function usersRouter(api: ApiRegistry, users: ReturnType<typeof usersServ
   route(
     router,
     api,
-    { method: 'get', path: '/api/users', tag, summary: 'All users', access: ['admin'] },
+    {
+      method: 'get',
+      path: '/api/users',
+      response: z.array(UserSummarySchema),
+      tag,
+      summary: 'All users',
+      access: ['admin'],
+    },
     () => users.list(),
   )
   route(
@@ -21,6 +30,7 @@ export function usersRouter(api: ApiRegistry, users: ReturnType<typeof usersServ
     {
       method: 'post',
       path: '/api/users',
+      response: UserSummarySchema,
       tag,
       summary: 'Invite a user by e-mail',
       access: ['admin'],
@@ -35,6 +45,7 @@ export function usersRouter(api: ApiRegistry, users: ReturnType<typeof usersServ
     {
       method: 'patch',
       path: '/api/users/:id',
+      response: UserSummarySchema,
       tag,
       summary: 'Change role or deactivate',
       access: ['admin'],
