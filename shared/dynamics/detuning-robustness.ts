@@ -31,7 +31,7 @@ export interface DetuningPoint {
  * Robustness to detuning: the absorber is sized for the nominal host, then every host spring rate
  * is scaled by (1 + offset)² so all host frequencies move by the offset (the default band moves
  * with the target mode; a user band stays). Reports the curve and the worst case within the
- * tolerance (design.md "Robustness").
+ * tolerance (docs/engineering/tuning.md#detuning-robustness).
  * @param model a model with an absorber
  * @param options see RobustnessOptions
  * @param prepared the model's context and sized absorber when already computed

@@ -36,6 +36,14 @@ function readable(message: string, details: unknown): string {
   return `${pathWords(d.path)}: ${peopleWords(d.message ?? message)}`
 }
 
+/** "?a=1&b=x" from the defined, non-empty fields of a query object. */
+export function queryString(q: Record<string, string | number | undefined>) {
+  const p = new URLSearchParams()
+  for (const [k, v] of Object.entries(q)) if (v !== undefined && v !== '') p.set(k, String(v))
+  const s = p.toString()
+  return s ? `?${s}` : ''
+}
+
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE'
 
 /** One typed fetch: JSON in, JSON out, the session rides in its HttpOnly cookie. */

@@ -5,8 +5,7 @@ import type {
   SizingSubmit,
   SizingView,
 } from '@shared/schemas/sizing'
-import { api } from './client'
-import { queryString } from './sites'
+import { api, queryString } from './client'
 
 export type { SizingView } from '@shared/schemas/sizing'
 

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest'
 import { solveSizing } from '../../shared/dynamics'
 import { chainModel } from './fixtures'
 
-// Source: engineering-references.md, "Absorber on a multi-mass host" worked example (computed):
+// Source: docs/engineering/tuning.md#worked-example-five-masses (computed):
 // 5 masses of 1000 kg, 6 springs of 1e6 N/m, fixed both ends, absorber at node 3, μ = 0.02.
 const model = {
   ...chainModel(5, 1000, 1e6, true),

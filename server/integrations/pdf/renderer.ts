@@ -8,7 +8,8 @@ export interface PdfRenderer {
   close(): Promise<void>
 }
 
-const ARGS = [
+/** Headless Chromium without the background calls a closed network refuses (tests use it too). */
+export const CHROMIUM_ARGS = [
   '--no-sandbox',
   '--disable-gpu',
   '--disable-dev-shm-usage',
@@ -50,7 +51,7 @@ export function chromiumPdf(executablePath: string): PdfRenderer {
     puppeteer.launch({
       executablePath,
       headless: true,
-      args: ARGS,
+      args: CHROMIUM_ARGS,
       handleSIGINT: false,
       handleSIGTERM: false,
       handleSIGHUP: false,

@@ -1,6 +1,7 @@
 import { z } from 'zod'
 import { AuditEntrySchema } from '../../../shared/schemas/audit'
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import type { AuditService } from './audit.service'
@@ -16,7 +17,7 @@ export function auditRouter(api: ApiRegistry, audit: AuditService) {
       response: z.array(AuditEntrySchema),
       tag: 'Audit',
       summary: 'Every work-order change and measurement',
-      access: ['admin'],
+      access: ACCESS.audit.read,
     },
     () => audit.list(),
   )

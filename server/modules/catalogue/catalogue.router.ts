@@ -5,6 +5,7 @@ import {
 } from '../../../shared/schemas/catalogue'
 import { Router } from 'express'
 import { z } from 'zod'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
   CatalogueOptionInputSchema,
@@ -16,9 +17,9 @@ import { route } from '../../http/route'
 import type { SizingSource } from '../sizings/sizing-source'
 import type { CatalogueService } from './catalogue.service'
 
-const LINE_READERS = ['engineer', 'sales', 'production', 'admin'] as const
-const SELLERS = ['sales', 'admin'] as const
-const ADMIN = ['admin'] as const
+const LINE_READERS = ACCESS.catalogue.read
+const SELLERS = ACCESS.catalogue.prices
+const ADMIN = ACCESS.catalogue.write
 const ListQuery = z.object({ includeInactive: z.enum(['true', 'false']).optional() })
 
 export function catalogueRouter(
@@ -140,7 +141,7 @@ export function catalogueRouter(
       response: z.array(UnitMatchSchema),
       tag,
       summary: 'Which product lines can carry a sizing, and why the others cannot',
-      access: ['engineer', ...SELLERS],
+      access: ACCESS.catalogue.match,
       query: MatchQuerySchema,
     },
     async ({ user, query }) => catalogue.match(await sizings.visibleSummary(user, query.sizingId)),

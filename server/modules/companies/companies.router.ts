@@ -1,6 +1,7 @@
 import { CompanyDetailsSchema } from '../../../shared/schemas/auth'
 import { Router } from 'express'
 import { z } from 'zod'
+import { ACCESS } from '../../../shared/access'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import type { CompaniesService } from './companies.service'
@@ -18,7 +19,7 @@ export function companiesRouter(api: ApiRegistry, companies: CompaniesService) {
       response: z.array(CompanyDetailsSchema),
       tag: 'Companies',
       summary: 'Companies, optionally of one kind',
-      access: ['admin', 'sales', 'engineer'],
+      access: ACCESS.companies.read,
       query: CompanyQuerySchema,
     },
     ({ query }) => companies.list(query.kind),

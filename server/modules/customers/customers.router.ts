@@ -2,6 +2,7 @@ import { z } from 'zod'
 import { UserSummarySchema } from '../../../shared/schemas/auth'
 import { ContactSchema, CustomerSchema } from '../../../shared/schemas/customer'
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
   ContactInputSchema,
@@ -13,7 +14,7 @@ import { route } from '../../http/route'
 import { clientAddress } from '../../http/client-address'
 import type { CustomersService } from './customers.service'
 
-const SELLERS = ['sales', 'admin'] as const
+const SELLERS = ACCESS.customers.write
 
 export function customersRouter(api: ApiRegistry, customers: CustomersService) {
   const router = Router()

@@ -6,6 +6,7 @@ import {
   MeasurementRecordSummarySchema,
 } from '../../../shared/schemas/measurement'
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
   CalibrateSchema,
@@ -19,8 +20,8 @@ import { route } from '../../http/route'
 import { singleUpload } from '../../http/upload'
 import type { Measurements } from './calibrate.service'
 
-const READERS = ['engineer', 'sales', 'admin'] as const
-const WRITERS = ['engineer', 'admin'] as const
+const READERS = ACCESS.measurements.read
+const WRITERS = ACCESS.measurements.write
 
 export function measurementsRouter(api: ApiRegistry, m: Measurements) {
   const router = Router()

@@ -1,6 +1,7 @@
 import { z } from 'zod'
 import { HostModelSchema, ModelRevisionSchema } from '../../../shared/schemas/host-model'
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
   ModelCreateSchema,
@@ -12,8 +13,8 @@ import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import type { ModelsService } from './models.service'
 
-const READERS = ['engineer', 'sales', 'admin'] as const
-const WRITERS = ['engineer', 'admin'] as const
+const READERS = ACCESS.models.read
+const WRITERS = ACCESS.models.write
 
 export function modelsRouter(api: ApiRegistry, models: ModelsService) {
   const router = Router()

@@ -7,6 +7,7 @@ import {
 } from '../../../shared/schemas/payment'
 import { WebhookOutcomeSchema } from '../../../shared/schemas/service'
 import express, { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import { PaymentReturnSchema } from '../../../shared/schemas/payment'
 import type { ApiRegistry } from '../../http/api-registry'
@@ -50,7 +51,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
       tag,
       summary:
         'Start paying an accepted quote; answers the hosted payment page URL (201), the still open one on a repeat, or a paid quote as paid (200)',
-      access: ['customer'],
+      access: ACCESS.quotes.accept,
       params: IdParamSchema,
       status: 201,
     },
@@ -69,7 +70,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
       response: QuoteOrderSchema,
       tag,
       summary: 'Back from the payment page: confirm the session with the payment service',
-      access: ['customer'],
+      access: ACCESS.quotes.accept,
       params: IdParamSchema,
       body: PaymentReturnSchema,
     },
@@ -84,7 +85,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
       response: z.array(RefundInfoSchema),
       tag,
       summary: 'Second payments of paid quotes and their refunds',
-      access: ['admin'],
+      access: ACCESS.refunds.read,
     },
     () => payments.refunds(),
   )
@@ -97,7 +98,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
       response: QuoteOrderSchema,
       tag,
       summary: 'The order of a paid quote, or null',
-      access: ['customer', 'sales', 'production', 'admin'],
+      access: ACCESS.orders.read,
       params: IdParamSchema,
     },
     ({ user, params }) => payments.orderFor(user, params.id),
@@ -111,7 +112,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
       response: z.array(OrderInfoSchema),
       tag,
       summary: 'Orders (a customer sees their company’s)',
-      access: ['customer', 'sales', 'production', 'admin'],
+      access: ACCESS.orders.read,
     },
     ({ user }) => payments.orders(user),
   )

@@ -1,13 +1,14 @@
 import { z } from 'zod'
 import { WorkOrderRowSchema, WorkOrderSchema } from '../../../shared/schemas/work-order'
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import { StatusChangeSchema, TuningRecordInputSchema } from '../../../shared/schemas/work-order'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import type { ProductionService } from './production.service'
 
-const BUILDERS = ['production', 'admin'] as const
+const BUILDERS = ACCESS.workOrders.write
 
 export function productionRouter(api: ApiRegistry, production: ProductionService) {
   const router = Router()

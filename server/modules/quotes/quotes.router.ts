@@ -2,6 +2,7 @@ import { z } from 'zod'
 import { AnyQuoteSchema, QuoteSummarySchema } from '../../../shared/schemas/quote'
 import { SizingSummarySchema } from '../../../shared/schemas/sizing'
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
   QuoteAcceptSchema,
@@ -15,8 +16,8 @@ import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import type { QuotesService } from './quotes.service'
 
-const SELLERS = ['sales', 'admin'] as const
-const READERS = ['sales', 'admin', 'customer'] as const
+const SELLERS = ACCESS.quotes.write
+const READERS = ACCESS.quotes.read
 
 /** Engineers and production may not read quotes at all (403); customers only their own. */
 export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
@@ -144,7 +145,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       path: '/api/quotes/:id/accept',
       response: AnyQuoteSchema,
       summary: 'The customer accepts a sent quote with a name and a purchase order',
-      access: ['customer'],
+      access: ACCESS.quotes.accept,
       body: QuoteAcceptSchema,
     },
     ({ user, params, body }) => quotes.accept(user, params.id, body),

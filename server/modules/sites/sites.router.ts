@@ -1,6 +1,7 @@
 import { z } from 'zod'
 import { SiteSchema } from '../../../shared/schemas/site'
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema, IdSchema } from '../../../shared/schemas/ids'
 import { SiteInputSchema, SiteListQuerySchema } from '../../../shared/schemas/site'
 import type { ApiRegistry } from '../../http/api-registry'
@@ -9,8 +10,8 @@ import { singleUpload } from '../../http/upload'
 import { MAX_PHOTO_BYTES, type SitesService } from './sites.service'
 
 const PhotoParams = IdParamSchema.extend({ photoId: IdSchema })
-const READERS = ['engineer', 'sales', 'admin'] as const
-const WRITERS = ['engineer', 'admin'] as const
+const READERS = ACCESS.sites.read
+const WRITERS = ACCESS.sites.write
 
 export function sitesRouter(api: ApiRegistry, sites: SitesService) {
   const router = Router()

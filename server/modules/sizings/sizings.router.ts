@@ -1,6 +1,7 @@
 import { SizingListItemSchema, SizingViewSchema } from '../../../shared/schemas/sizing'
 import { Router } from 'express'
 import { z } from 'zod'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema, IdSchema } from '../../../shared/schemas/ids'
 import {
   SizingCreateSchema,
@@ -12,8 +13,8 @@ import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import type { SizingsService } from './sizings.service'
 
-const READERS = ['engineer', 'sales', 'admin'] as const
-const WRITERS = ['engineer', 'admin'] as const
+const READERS = ACCESS.sizings.read
+const WRITERS = ACCESS.sizings.write
 const RevisionQuery = z.object({ revision: IdSchema.optional() })
 
 export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {

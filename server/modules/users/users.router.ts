@@ -1,6 +1,7 @@
 import { z } from 'zod'
 import { UserSummarySchema } from '../../../shared/schemas/auth'
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { InviteSchema, UserPatchSchema } from '../../../shared/schemas/auth'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import type { ApiRegistry } from '../../http/api-registry'
@@ -20,7 +21,7 @@ export function usersRouter(api: ApiRegistry, users: ReturnType<typeof usersServ
       response: z.array(UserSummarySchema),
       tag,
       summary: 'All users',
-      access: ['admin'],
+      access: ACCESS.users.read,
     },
     () => users.list(),
   )
@@ -33,7 +34,7 @@ export function usersRouter(api: ApiRegistry, users: ReturnType<typeof usersServ
       response: UserSummarySchema,
       tag,
       summary: 'Invite a user by e-mail',
-      access: ['admin'],
+      access: ACCESS.users.write,
       body: InviteSchema,
       status: 201,
     },
@@ -48,7 +49,7 @@ export function usersRouter(api: ApiRegistry, users: ReturnType<typeof usersServ
       response: UserSummarySchema,
       tag,
       summary: 'Change role or deactivate',
-      access: ['admin'],
+      access: ACCESS.users.write,
       params: IdParamSchema,
       body: UserPatchSchema,
     },
