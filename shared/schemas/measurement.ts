@@ -64,24 +64,42 @@ export const SizingRecordLinkSchema = z.object({
 export type SizingRecordLink = z.infer<typeof SizingRecordLinkSchema>
 
 /** A stored record as listed. */
-export interface MeasurementRecordSummary {
-  id: number
-  siteId: number
-  modelId: number | null
-  nodeId: string | null
-  ownerId: number
-  ownerName: string
-  filename: string
-  size: number
+export const MeasurementRecordSummarySchema = z.object({
+  id: z.number().int(),
+  siteId: z.number().int(),
+  modelId: z.number().int().nullable(),
+  nodeId: z.string().nullable(),
+  ownerId: z.number().int(),
+  ownerName: z.string(),
+  filename: z.string(),
+  size: z.number().int(),
   /** Hz */
-  sampleRateHz: number
-  samples: number
-  kind: string
-  peakCount: number
-  createdAt: string
-}
+  sampleRateHz: z.number(),
+  samples: z.number().int(),
+  kind: z.string(),
+  peakCount: z.number().int(),
+  createdAt: z.string(),
+})
+export type MeasurementRecordSummary = z.infer<typeof MeasurementRecordSummarySchema>
+
+/** The identification of a record (shared/measurements): an object here, typed by the engine. */
+export const IdentificationResultSchema = z.custom<IdentificationResult>(
+  (v) => typeof v === 'object' && v !== null,
+  'an identification result',
+)
 
 /** One record with its identification. */
-export interface MeasurementRecord extends MeasurementRecordSummary {
-  result: IdentificationResult
-}
+export const MeasurementRecordSchema = MeasurementRecordSummarySchema.extend({
+  result: IdentificationResultSchema,
+})
+export type MeasurementRecord = z.infer<typeof MeasurementRecordSchema>
+
+/** A peak added by hand, and the record with it. */
+export const AddedPeakSchema = z.object({
+  peak: z.custom<IdentificationResult['peaks'][number]>(
+    (v) => typeof v === 'object' && v !== null && 'frequencyHz' in v,
+    'an identified peak',
+  ),
+  record: MeasurementRecordSchema,
+})
+export type AddedPeak = z.infer<typeof AddedPeakSchema>

@@ -225,3 +225,7 @@ export function toCustomerQuote(q: Quote): CustomerQuote {
   const failed = ack.failed.map((f) => ({ ...f, details: [] }))
   return { ...c, sizing: { ...c.sizing, designAcknowledgement: { ...ack, byName: null, failed } } }
 }
+
+/** A quote as the caller may see it: the supplier's full view, or a customer's projection. */
+export const AnyQuoteSchema = z.union([QuoteSchema, CustomerQuoteSchema])
+export type AnyQuote = z.infer<typeof AnyQuoteSchema>

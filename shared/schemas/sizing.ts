@@ -1,5 +1,10 @@
 import { z } from 'zod'
-import { AcknowledgeInputSchema, DesignAcknowledgementSchema } from './design-checks'
+import type { SizingEvaluation } from '../sizing/evaluate-sizing'
+import {
+  AcknowledgeInputSchema,
+  DesignAcknowledgementSchema,
+  DesignCheckSchema,
+} from './design-checks'
 import { IdSchema } from './ids'
 import {
   bandSchema,
@@ -223,19 +228,63 @@ export const SizingListQuerySchema = z.object({
 export type SizingListQuery = z.infer<typeof SizingListQuerySchema>
 
 /** A row of the sizings list. */
-export interface SizingListItem {
-  id: number
-  title: string
-  state: SizingState
-  revision: number
-  siteId: number
-  siteName: string
-  companyName: string
-  ownerId: number
-  ownerName: string
-  absorberMass: number | null
-  hostFrequencyHz: number | null
-  reduction: number | null
-  passes: boolean | null
-  updatedAt: string
-}
+export const SizingListItemSchema = z.object({
+  id: z.number().int(),
+  title: z.string(),
+  state: z.enum(SIZING_STATES),
+  revision: z.number().int(),
+  siteId: z.number().int(),
+  siteName: z.string(),
+  companyName: z.string(),
+  ownerId: z.number().int(),
+  ownerName: z.string(),
+  /** kg */
+  absorberMass: z.number().nullable(),
+  hostFrequencyHz: z.number().nullable(),
+  reduction: z.number().nullable(),
+  passes: z.boolean().nullable(),
+  updatedAt: z.string(),
+})
+export type SizingListItem = z.infer<typeof SizingListItemSchema>
+
+/**
+ * The engine's evaluation of a sizing as stored (shared/sizing/evaluate-sizing): an object here,
+ * typed in full by the engine's own types.
+ */
+export const SizingEvaluationSchema = z.custom<SizingEvaluation>(
+  (v) => typeof v === 'object' && v !== null && 'result' in v,
+  'an evaluation of the sizing',
+)
+
+/** A sizing as the server stores it: the input, its authoritative evaluation and summary. */
+export const SizingViewSchema = z.object({
+  id: z.number().int(),
+  siteId: z.number().int(),
+  modelId: z.number().int(),
+  ownerId: z.number().int(),
+  ownerName: z.string(),
+  title: z.string(),
+  state: z.enum(SIZING_STATES),
+  currentRevision: z.number().int(),
+  /** the revision shown (the current one unless another was asked for) */
+  revision: z.number().int(),
+  submittedAt: z.string().nullable(),
+  handoverNote: z.string(),
+  acknowledgementId: z.number().int().nullable(),
+  updatedAt: z.string(),
+  input: SizingInputSchema,
+  evaluation: SizingEvaluationSchema,
+  summary: SizingSummarySchema.omit({
+    id: true,
+    revision: true,
+    state: true,
+    submittedAt: true,
+    handoverNote: true,
+    ownerName: true,
+  }),
+  /** the server's checks of this revision against its limit and the active catalogue */
+  designChecks: z.array(DesignCheckSchema),
+  /** the failed checks accepted at the current handover, if any */
+  acknowledgement: DesignAcknowledgementSchema.nullable(),
+})
+export type SizingView = z.infer<typeof SizingViewSchema>

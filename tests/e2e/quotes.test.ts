@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { toAuthUser } from '../../server/modules/auth/auth.service'
-import { closePdfRenderers } from '../../server/integrations/pdf'
+import { closePdfRenderers } from '../../server/integrations/pdf/renderer'
 import { seedPeople } from '../../seed/seed-people'
 import { DEMO_OFFICE_SIZING, seedSizings } from '../../seed/seed-sizings'
 import { seedCatalogue } from '../../seed/seed-catalogue'

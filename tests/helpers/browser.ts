@@ -3,7 +3,7 @@ import type { AddressInfo } from 'node:net'
 import type { Server } from 'node:http'
 import path from 'node:path'
 import puppeteer, { type Browser, type Page } from 'puppeteer-core'
-import { CHROMIUM_ARGS } from '../../server/integrations/pdf'
+import { CHROMIUM_ARGS } from '../../server/integrations/pdf/renderer'
 import { makeTestApp, type TestApp } from './app'
 
 export const SHOTS_DIR = path.resolve('.local/screenshots')

@@ -1,3 +1,8 @@
+import {
+  CatalogueOptionSchema,
+  ProductLineSchema,
+  UnitMatchSchema,
+} from '../../../shared/schemas/catalogue'
 import { Router } from 'express'
 import { z } from 'zod'
 import { ACCESS } from '../../../shared/access'
@@ -9,7 +14,7 @@ import {
 } from '../../../shared/schemas/catalogue'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
-import type { SizingSource } from '../quotes/sizing-source'
+import type { SizingSource } from '../sizings/sizing-source'
 import type { CatalogueService } from './catalogue.service'
 
 const LINE_READERS = ACCESS.catalogue.read
@@ -30,6 +35,7 @@ export function catalogueRouter(
     {
       method: 'get',
       path: '/api/catalogue/lines',
+      response: z.array(ProductLineSchema),
       tag,
       summary: 'Absorber product lines (prices for sales and admin only)',
       access: LINE_READERS,
@@ -43,6 +49,7 @@ export function catalogueRouter(
     {
       method: 'get',
       path: '/api/catalogue/lines/:id',
+      response: ProductLineSchema,
       tag,
       summary: 'One product line',
       access: LINE_READERS,
@@ -56,6 +63,7 @@ export function catalogueRouter(
     {
       method: 'post',
       path: '/api/catalogue/lines',
+      response: ProductLineSchema,
       tag,
       summary: 'Add a product line',
       access: ADMIN,
@@ -70,6 +78,7 @@ export function catalogueRouter(
     {
       method: 'put',
       path: '/api/catalogue/lines/:id',
+      response: ProductLineSchema,
       tag,
       summary: 'Change a product line (quotes already made keep their prices)',
       access: ADMIN,
@@ -84,6 +93,7 @@ export function catalogueRouter(
     {
       method: 'get',
       path: '/api/catalogue/options',
+      response: z.array(CatalogueOptionSchema),
       tag,
       summary: 'Options and services with their prices',
       access: SELLERS,
@@ -98,6 +108,7 @@ export function catalogueRouter(
     {
       method: 'post',
       path: '/api/catalogue/options',
+      response: CatalogueOptionSchema,
       tag,
       summary: 'Add an option or service',
       access: ADMIN,
@@ -112,6 +123,7 @@ export function catalogueRouter(
     {
       method: 'put',
       path: '/api/catalogue/options/:id',
+      response: CatalogueOptionSchema,
       tag,
       summary: 'Change an option or service',
       access: ADMIN,
@@ -126,6 +138,7 @@ export function catalogueRouter(
     {
       method: 'get',
       path: '/api/catalogue/matches',
+      response: z.array(UnitMatchSchema),
       tag,
       summary: 'Which product lines can carry a sizing, and why the others cannot',
       access: ACCESS.catalogue.match,

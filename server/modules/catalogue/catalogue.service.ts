@@ -50,6 +50,8 @@ export function catalogueService(deps: { catalogue: CatalogueRepository }) {
   return {
     line,
     option,
+    /** The active product lines in full, for the server's own design checks. */
+    activeUnits: () => repo.listLines(true),
     async listLines(role: Role, includeInactive = false) {
       const all = await repo.listLines(!(includeInactive && role === 'admin'))
       return all.map((l) => forRole(l, role))

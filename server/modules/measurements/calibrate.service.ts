@@ -54,3 +54,6 @@ export function calibrationService(deps: {
   }
 }
 export type CalibrationService = ReturnType<typeof calibrationService>
+
+/** The records and model calibration from them: what the measurements router calls. */
+export type Measurements = MeasurementsService & { calibrate: CalibrationService }

@@ -1,27 +1,27 @@
 import {
   Column,
-  CreateDateColumn,
   Entity,
   JoinColumn,
   ManyToOne,
   PrimaryGeneratedColumn,
   type Relation,
 } from 'typeorm'
+import { CreatedRecord } from '../../db/record-columns'
 import type { IdentificationResult } from '../../../shared/measurements'
 import { jsonColumn } from '../../http/json-column'
-import { SiteEntity } from '../sites/site.entity'
-import { UserEntity } from '../users/user.entity'
+import type { SiteEntity } from '../sites/site.entity'
+import type { UserEntity } from '../users/user.entity'
 
 /** An acceleration record measured at a site; the file lives on disk, its identification here. */
 @Entity('measurement_records')
-export class MeasurementRecordEntity {
+export class MeasurementRecordEntity extends CreatedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
   @Column('int')
   siteId: number
 
-  @ManyToOne(() => SiteEntity, { onDelete: 'CASCADE' })
+  @ManyToOne('SiteEntity', { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'siteId' })
   site: Relation<SiteEntity>
 
@@ -36,7 +36,7 @@ export class MeasurementRecordEntity {
   @Column('int')
   ownerId: number
 
-  @ManyToOne(() => UserEntity, { onDelete: 'RESTRICT' })
+  @ManyToOne('UserEntity', { onDelete: 'RESTRICT' })
   @JoinColumn({ name: 'ownerId' })
   owner: Relation<UserEntity>
 
@@ -64,7 +64,4 @@ export class MeasurementRecordEntity {
 
   @Column('longtext', { transformer: jsonColumn })
   result: IdentificationResult
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
-  createdAt: Date
 }

@@ -1,4 +1,11 @@
 import { closedSignal } from '../../http/closed-signal'
+import { z } from 'zod'
+import { HostModelSchema } from '../../../shared/schemas/host-model'
+import {
+  AddedPeakSchema,
+  MeasurementRecordSchema,
+  MeasurementRecordSummarySchema,
+} from '../../../shared/schemas/measurement'
 import { Router } from 'express'
 import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
@@ -12,7 +19,7 @@ import {
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import { singleUpload } from '../../http/upload'
-import type { Measurements } from './build-measurements'
+import type { Measurements } from './calibrate.service'
 
 const READERS = ACCESS.measurements.read
 const WRITERS = ACCESS.measurements.write
@@ -26,6 +33,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     {
       method: 'post',
       path: '/api/sites/:id/records',
+      response: MeasurementRecordSchema,
       tag,
       summary: 'Upload an acceleration record (multipart field "record") and identify its modes',
       access: WRITERS,
@@ -44,6 +52,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     {
       method: 'get',
       path: '/api/sites/:id/records',
+      response: z.array(MeasurementRecordSummarySchema),
       tag,
       summary: 'Records of a site',
       access: READERS,
@@ -57,6 +66,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     {
       method: 'get',
       path: '/api/records/:id',
+      response: MeasurementRecordSchema,
       tag,
       summary: 'One record with its spectrum and peaks',
       access: READERS,
@@ -83,6 +93,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     {
       method: 'post',
       path: '/api/records/:id/peaks',
+      response: AddedPeakSchema,
       tag,
       summary: 'Identify a peak near a frequency and add it',
       access: WRITERS,
@@ -98,6 +109,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     {
       method: 'delete',
       path: '/api/records/:id/peaks/:index',
+      response: MeasurementRecordSchema,
       tag,
       summary: 'Drop a false peak (0-based index in the list)',
       access: WRITERS,
@@ -111,6 +123,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     {
       method: 'post',
       path: '/api/models/:id/calibrate',
+      response: HostModelSchema,
       tag,
       summary: 'Scale a model’s springs to a measured frequency; saves a new revision',
       access: WRITERS,

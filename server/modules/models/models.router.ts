@@ -1,3 +1,5 @@
+import { z } from 'zod'
+import { HostModelSchema, ModelRevisionSchema } from '../../../shared/schemas/host-model'
 import { Router } from 'express'
 import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
@@ -23,6 +25,7 @@ export function modelsRouter(api: ApiRegistry, models: ModelsService) {
     {
       method: 'get',
       path: '/api/models',
+      response: z.array(HostModelSchema),
       tag,
       summary: 'Host models, optionally of one site',
       access: READERS,
@@ -36,6 +39,7 @@ export function modelsRouter(api: ApiRegistry, models: ModelsService) {
     {
       method: 'post',
       path: '/api/models',
+      response: HostModelSchema,
       tag,
       summary: 'Create a host model (revision 1)',
       access: WRITERS,
@@ -50,6 +54,7 @@ export function modelsRouter(api: ApiRegistry, models: ModelsService) {
     {
       method: 'get',
       path: '/api/models/:id',
+      response: HostModelSchema,
       tag,
       summary: 'A model at its current revision, with the revision list',
       access: READERS,
@@ -63,6 +68,7 @@ export function modelsRouter(api: ApiRegistry, models: ModelsService) {
     {
       method: 'get',
       path: '/api/models/:id/revisions/:revision',
+      response: ModelRevisionSchema,
       tag,
       summary: 'One revision of a model with its structure (a sizing may use an older one)',
       access: READERS,
@@ -76,6 +82,7 @@ export function modelsRouter(api: ApiRegistry, models: ModelsService) {
     {
       method: 'post',
       path: '/api/models/:id/revisions',
+      response: HostModelSchema,
       tag,
       summary: 'Save a new revision',
       access: WRITERS,

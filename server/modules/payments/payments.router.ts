@@ -1,3 +1,11 @@
+import { z } from 'zod'
+import {
+  CheckoutAnswerSchema,
+  OrderInfoSchema,
+  QuoteOrderSchema,
+  RefundInfoSchema,
+} from '../../../shared/schemas/payment'
+import { WebhookOutcomeSchema } from '../../../shared/schemas/service'
 import express, { Router } from 'express'
 import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
@@ -15,6 +23,7 @@ export function paymentsWebhookRouter(api: ApiRegistry, payments: PaymentsServic
     {
       method: 'post',
       path: '/api/payments/webhook',
+      response: WebhookOutcomeSchema,
       tag: 'Payments',
       summary: 'Signed payment events (checkout completed, expired, payment failed)',
       access: 'public',
@@ -38,6 +47,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
     {
       method: 'post',
       path: '/api/quotes/:id/checkout',
+      response: CheckoutAnswerSchema,
       tag,
       summary:
         'Start paying an accepted quote; answers the hosted payment page URL (201), the still open one on a repeat, or a paid quote as paid (200)',
@@ -57,6 +67,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
     {
       method: 'post',
       path: '/api/quotes/:id/payment-return',
+      response: QuoteOrderSchema,
       tag,
       summary: 'Back from the payment page: confirm the session with the payment service',
       access: ACCESS.quotes.accept,
@@ -71,6 +82,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
     {
       method: 'get',
       path: '/api/payments/refunds',
+      response: z.array(RefundInfoSchema),
       tag,
       summary: 'Second payments of paid quotes and their refunds',
       access: ACCESS.refunds.read,
@@ -83,6 +95,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
     {
       method: 'get',
       path: '/api/quotes/:id/order',
+      response: QuoteOrderSchema,
       tag,
       summary: 'The order of a paid quote, or null',
       access: ACCESS.orders.read,
@@ -96,6 +109,7 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
     {
       method: 'get',
       path: '/api/orders',
+      response: z.array(OrderInfoSchema),
       tag,
       summary: 'Orders (a customer sees their company’s)',
       access: ACCESS.orders.read,

@@ -1,5 +1,8 @@
-import { esc, sig } from '../quotes/pdf/html'
-import { ACKNOWLEDGEMENT_CSS, acknowledgementHtml } from '../quotes/pdf/acknowledgement-html'
+import { esc, sig } from '../../integrations/pdf/html'
+import {
+  ACKNOWLEDGEMENT_CSS,
+  acknowledgementHtml,
+} from '../../integrations/pdf/acknowledgement-html'
 import type { BuildSpecification } from '../../../shared/schemas/work-order'
 
 interface Printable {

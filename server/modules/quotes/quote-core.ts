@@ -8,14 +8,17 @@ import {
 import type { SizingSummary } from '../../../shared/schemas/sizing'
 import { AppError, notFound } from '../../http/app-error'
 import type { AuthUser } from '../../middleware/authenticate'
+import type { Mailer } from '../../integrations/mail'
+import type { PdfRenderer } from '../../integrations/pdf/renderer'
 import type { CatalogueService } from '../catalogue/catalogue.service'
+import type { CompaniesService } from '../companies/companies.service'
 import type { CustomersService } from '../customers/customers.service'
 import { priceLines, totalsOf } from './price-lines'
 import type { QuoteRow } from './quote-rows'
 import { dayOf, hasLapsed } from './quote-states'
 import { quoteOf } from './quote-view'
 import type { QuotesRepository } from './quotes.repository'
-import type { SizingSource } from './sizing-source'
+import type { SizingSource } from '../sizings/sizing-source'
 
 export interface QuotesDeps {
   quotes: QuotesRepository
@@ -23,6 +26,13 @@ export interface QuotesDeps {
   customers: CustomersService
   sizings: SizingSource
   now: () => Date
+}
+
+export interface QuotesServiceDeps extends QuotesDeps {
+  companies: CompaniesService
+  mailer: Mailer
+  pdf: PdfRenderer
+  publicUrl: () => string
 }
 
 export const isCustomer = (u: AuthUser) => u.role === 'customer'

@@ -224,6 +224,14 @@ export function quotesRepository(ds: DataSource) {
       })
       return rows.map(toEvent)
     },
+    /** Every quote's state changes, oldest first, for the audit trail. */
+    async allEvents() {
+      const rows = await events.find({
+        relations: { actor: true },
+        order: { at: 'ASC', id: 'ASC' },
+      })
+      return rows.map((e) => ({ quoteId: e.quoteId, ...toEvent(e) }))
+    },
     /** Ids of sent quotes whose last valid day is before `today` (YYYY-MM-DD). */
     async dueForExpiry(today: string) {
       const rows = await quotes

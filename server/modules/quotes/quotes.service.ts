@@ -6,24 +6,14 @@ import type {
 } from '../../../shared/schemas/quote'
 import { CUSTOMER_VISIBLE_STATES } from '../../../shared/schemas/quote'
 import { AppError } from '../../http/app-error'
-import type { Mailer } from '../../integrations/mail'
-import type { PdfRenderer } from '../../integrations/pdf'
 import type { AuthUser } from '../../middleware/authenticate'
-import type { CompaniesRepository } from '../companies/companies.repository'
-import { expireDue, isCustomer, quotesCore, type QuotesDeps } from './quote-core'
+import { expireDue, isCustomer, quotesCore, type QuotesServiceDeps } from './quote-core'
 import { quoteSending } from './quote-send'
 import { insertNumbered } from './quote-numbers'
 import type { QuoteRow } from './quote-rows'
-import type { Tx } from '../outbox/outbox.repository'
+import type { Tx } from '../../db/tx'
 import { REVISABLE, sourcesOf } from './quote-states'
 import { listSummary, referenceOf, summaryOf } from './quote-view'
-
-export interface QuotesServiceDeps extends QuotesDeps {
-  companies: CompaniesRepository
-  mailer: Mailer
-  pdf: PdfRenderer
-  publicUrl: () => string
-}
 
 const conflict = (code: string, message: string) => new AppError(code, message, 409)
 
@@ -232,6 +222,8 @@ export function quotesService(deps: QuotesServiceDeps) {
     lockIn: (tx: Tx, quoteId: number) => repo.lockIn(tx, quoteId),
 
     expireDue: (now: Date) => expireDue(repo, now),
+    /** Every quote's state changes, for the audit trail. */
+    stateChanges: () => repo.allEvents(),
   }
 }
 export type QuotesService = ReturnType<typeof quotesService>

@@ -1,3 +1,5 @@
+import { z } from 'zod'
+import { SiteSchema } from '../../../shared/schemas/site'
 import { Router } from 'express'
 import { ACCESS } from '../../../shared/access'
 import { IdParamSchema, IdSchema } from '../../../shared/schemas/ids'
@@ -20,6 +22,7 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     {
       method: 'get',
       path: '/api/sites',
+      response: z.array(SiteSchema),
       tag,
       summary: 'Sites, with search and filters',
       access: READERS,
@@ -33,6 +36,7 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     {
       method: 'post',
       path: '/api/sites',
+      response: SiteSchema,
       tag,
       summary: 'Create a site',
       access: WRITERS,
@@ -47,6 +51,7 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     {
       method: 'get',
       path: '/api/sites/:id',
+      response: SiteSchema,
       tag,
       summary: 'One site',
       access: READERS,
@@ -60,6 +65,7 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     {
       method: 'put',
       path: '/api/sites/:id',
+      response: SiteSchema,
       tag,
       summary: 'Change a site',
       access: WRITERS,
@@ -74,6 +80,7 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     {
       method: 'post',
       path: '/api/sites/:id/photos',
+      response: SiteSchema,
       tag,
       summary: 'Add a photo (multipart field "photo")',
       access: WRITERS,

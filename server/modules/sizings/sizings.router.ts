@@ -1,4 +1,5 @@
 import { closedSignal } from '../../http/closed-signal'
+import { SizingListItemSchema, SizingViewSchema } from '../../../shared/schemas/sizing'
 import { Router } from 'express'
 import { z } from 'zod'
 import { ACCESS } from '../../../shared/access'
@@ -26,6 +27,7 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     {
       method: 'get',
       path: '/api/sizings',
+      response: z.array(SizingListItemSchema),
       tag,
       summary: 'Sizings visible to the caller',
       access: READERS,
@@ -39,6 +41,7 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     {
       method: 'post',
       path: '/api/sizings',
+      response: SizingViewSchema,
       tag,
       summary: 'Create a sizing; the server solves it in the worker pool',
       access: WRITERS,
@@ -53,6 +56,7 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     {
       method: 'get',
       path: '/api/sizings/:id',
+      response: SizingViewSchema,
       tag,
       summary: 'A sizing with its stored result (current or a given revision)',
       access: READERS,
@@ -67,6 +71,7 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     {
       method: 'put',
       path: '/api/sizings/:id',
+      response: SizingViewSchema,
       tag,
       summary: 'Save a new revision from a base revision',
       access: WRITERS,
@@ -82,6 +87,7 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     {
       method: 'post',
       path: '/api/sizings/:id/submit',
+      response: SizingViewSchema,
       tag,
       summary:
         'Hand the sizing over to sales; a design that fails its checks needs them acknowledged with a reason (422 design-checks-failed)',
@@ -97,6 +103,7 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     {
       method: 'post',
       path: '/api/sizings/:id/reopen',
+      response: SizingViewSchema,
       tag,
       summary: 'Reopen a handed-over sizing to revise it',
       access: WRITERS,

@@ -1,3 +1,5 @@
+import { z } from 'zod'
+import { UserSummarySchema } from '../../../shared/schemas/auth'
 import { Router } from 'express'
 import { ACCESS } from '../../../shared/access'
 import { InviteSchema, UserPatchSchema } from '../../../shared/schemas/auth'
@@ -13,7 +15,14 @@ export function usersRouter(api: ApiRegistry, users: ReturnType<typeof usersServ
   route(
     router,
     api,
-    { method: 'get', path: '/api/users', tag, summary: 'All users', access: ACCESS.users.read },
+    {
+      method: 'get',
+      path: '/api/users',
+      response: z.array(UserSummarySchema),
+      tag,
+      summary: 'All users',
+      access: ACCESS.users.read,
+    },
     () => users.list(),
   )
   route(
@@ -22,6 +31,7 @@ export function usersRouter(api: ApiRegistry, users: ReturnType<typeof usersServ
     {
       method: 'post',
       path: '/api/users',
+      response: UserSummarySchema,
       tag,
       summary: 'Invite a user by e-mail',
       access: ACCESS.users.write,
@@ -36,6 +46,7 @@ export function usersRouter(api: ApiRegistry, users: ReturnType<typeof usersServ
     {
       method: 'patch',
       path: '/api/users/:id',
+      response: UserSummarySchema,
       tag,
       summary: 'Change role or deactivate',
       access: ACCESS.users.write,

@@ -1,4 +1,4 @@
-import type { DesignAcknowledgement } from '../../../../shared/schemas/design-checks'
+import type { DesignAcknowledgement } from '../../../shared/schemas/design-checks'
 import { esc } from './html'
 
 /** Print styles of the acknowledgement box, shared by the quote and the work order. */
