@@ -96,7 +96,7 @@ export function buildServices(deps: AppDeps) {
   const files = fileStore(deps.config.UPLOAD_DIR)
   const sites = sitesService({ sites: sitesRepository(deps.dataSource), companies, files })
   const models = modelsService({ models: modelsRepository(deps.dataSource), sites })
-  const measurements = buildMeasurements({ dataSource: deps.dataSource, sites, models, files })
+  const measurements = buildMeasurements({ ...deps, sites, models, files })
   const catalogueLines = catalogueRepository(deps.dataSource)
   const sizings = sizingsService({
     sizings: sizingsRepository(deps.dataSource),

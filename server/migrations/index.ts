@@ -7,6 +7,7 @@ import { Production1796202027823 } from './1796202027823-Production'
 import { Measurements1796202424685 } from './1796202424685-Measurements'
 import { DesignGates1796267311937 } from './1796267311937-DesignGates'
 import { Resilience1796300000000 } from './1796300000000-Resilience'
+import { RecordChannels1796400000000 } from './1796400000000-RecordChannels'
 
 /** Every migration class in order; a new migration is added here too. */
 export const migrations = [
@@ -19,4 +20,5 @@ export const migrations = [
   Measurements1796202424685,
   DesignGates1796267311937,
   Resilience1796300000000,
+  RecordChannels1796400000000,
 ]

@@ -2,6 +2,7 @@ import { fileURLToPath } from 'node:url'
 import { Piscina } from 'piscina'
 import type { SizingEvaluation } from '../../shared/sizing/evaluate-sizing'
 import type { SizingJob } from './sizing.worker'
+import type { MeasurementJob, MeasurementOutcome } from './measurements.worker'
 
 export type SizingOutcome =
   | { ok: true; evaluation: SizingEvaluation }
@@ -9,8 +10,12 @@ export type SizingOutcome =
 
 export interface SizingPool {
   run(job: SizingJob): Promise<SizingOutcome>
+  /** modal identification, a record's time history, model updating: same threads, own file */
+  measure(job: MeasurementJob): Promise<MeasurementOutcome>
   close(): Promise<void>
 }
+
+const MEASUREMENTS = fileURLToPath(new URL('./measurements.worker.ts', import.meta.url))
 
 /**
  * A pool of worker threads for the engine. The workers load the TypeScript worker through tsx, so
@@ -26,6 +31,7 @@ export function createSizingPool(threads: number): SizingPool {
   })
   return {
     run: (job) => pool.run(job) as Promise<SizingOutcome>,
+    measure: (job) => pool.run(job, { filename: MEASUREMENTS }) as Promise<MeasurementOutcome>,
     close: () => pool.destroy(),
   }
 }

@@ -1,6 +1,11 @@
 import { z } from 'zod'
 import { IdSchema, IndexSchema } from './ids'
-import type { IdentificationResult } from '../measurements'
+import type {
+  ChannelDirection,
+  IdentificationResult,
+  TimeUnit,
+  TimeUnitSource,
+} from '../measurements'
 
 /** The largest record file accepted, bytes (8 MiB; about 400 000 rows of time and acceleration). */
 export const MAX_RECORD_BYTES = 8 * 1024 * 1024
@@ -16,6 +21,8 @@ export const RecordUploadSchema = z.object({
   /** Hz, for a file without a time column */
   sampleRateHz: optionalNumber(z.coerce.number().positive('must be above zero').max(1e6)),
   kind: optionalNumber(z.enum(['decay', 'ambient'])),
+  /** unit of the time column; detected from its header or step when absent */
+  timeUnit: optionalNumber(z.enum(['s', 'ms'])),
   modelId: optionalNumber(IdSchema),
   nodeId: optionalText(60),
 })
@@ -78,7 +85,22 @@ export interface MeasurementRecordSummary {
   samples: number
   kind: string
   peakCount: number
+  /** every acceleration channel, in column order, with where it was measured */
+  channels: RecordChannelInfo[]
+  /** unit the time column was read in (null without one) and how it was decided */
+  timeUnit: TimeUnit | null
+  timeUnitSource: TimeUnitSource | null
+  analysisCount: number
   createdAt: string
+}
+
+/** One acceleration channel of a stored record. */
+export interface RecordChannelInfo {
+  name: string
+  /** 1-based file column */
+  column: number
+  nodeId: string | null
+  direction: ChannelDirection | null
 }
 
 /** One record with its identification. */

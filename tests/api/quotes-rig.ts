@@ -12,6 +12,7 @@ import { makeTestApp, type TestApp } from '../helpers/app'
 /** Quotes never solve a sizing; a call here would be a wiring mistake worth a loud failure. */
 export const noSolving: SizingPool = {
   run: () => Promise.reject(new Error('the quotes tests do not solve sizings')),
+  measure: () => Promise.reject(new Error('the quotes tests do not identify records')),
   close: async () => undefined,
 }
 

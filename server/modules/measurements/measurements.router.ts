@@ -11,6 +11,7 @@ import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import { singleUpload } from '../../http/upload'
 import type { Measurements } from './build-measurements'
+import { recordAnalysesRoutes } from './record-analyses.router'
 
 const READERS = ['engineer', 'sales', 'admin'] as const
 const WRITERS = ['engineer', 'admin'] as const
@@ -68,7 +69,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
       method: 'delete',
       path: '/api/records/:id',
       tag,
-      summary: 'Delete a record and its file',
+      summary: 'Delete a record, its file and its analyses',
       access: WRITERS,
       params: IdParamSchema,
     },
@@ -117,5 +118,6 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     },
     ({ user, params, body }) => m.calibrate(user, params.id, body),
   )
+  recordAnalysesRoutes(router, api, m)
   return router
 }

@@ -5,7 +5,7 @@ import type { AuthUser } from '../../middleware/authenticate'
 import type { ModelsService } from '../models/models.service'
 import type { SitesService } from '../sites/sites.service'
 import type { MeasurementsRepository, StoredRecord } from './measurements.repository'
-import { checkRecordFile, identify, peakAt, readRecord } from './record-file'
+import { checkRecordFile, identify, peakAt, readAsStored, readRecord } from './record-file'
 
 type UploadedFile = { originalname: string; buffer: Buffer } | undefined
 
@@ -44,6 +44,7 @@ export function measurementsService(deps: {
   return {
     get,
     stored,
+    assertCanEdit,
     async list(siteId: number) {
       await deps.sites.get(siteId)
       return deps.records.listBySite(siteId)
@@ -54,7 +55,10 @@ export function measurementsService(deps: {
       await deps.sites.get(siteId)
       await assertModelOfSite(input.modelId, siteId)
       const file = checkRecordFile(upload)
-      const record = readRecord(file.buffer, input.sampleRateHz)
+      const record = readRecord(file.buffer, {
+        ...(input.sampleRateHz !== undefined && { sampleRateHz: input.sampleRateHz }),
+        ...(input.timeUnit !== undefined && { timeUnit: input.timeUnit }),
+      })
       const result = identify(record, input.kind)
       const storedName = await deps.files.save(file.buffer, '.csv')
       try {
@@ -71,6 +75,14 @@ export function measurementsService(deps: {
           rateFromForm: input.sampleRateHz !== undefined,
           kind: result.kind,
           result,
+          channels: record.channels.map((c, i) => ({
+            name: c.name.slice(0, 60),
+            column: c.column,
+            nodeId: i === 0 ? (input.nodeId ?? null) : null,
+            direction: null,
+          })),
+          timeUnit: record.timeUnit,
+          timeUnitSource: record.timeUnitSource,
         })
         return get(id)
       } catch (e) {
@@ -101,7 +113,7 @@ export function measurementsService(deps: {
         )
       }
       const bytes = await deps.files.read(r.storedName)
-      const record = readRecord(bytes, r.rateFromForm ? r.sampleRateHz : undefined)
+      const record = readRecord(bytes, readAsStored(r))
       const others = r.result.peaks.map((p) => p.frequencyHz)
       const peak = peakAt(record, frequencyHz, r.result.kind, others)
       const result = { ...r.result, peaks: [...r.result.peaks, peak] }
