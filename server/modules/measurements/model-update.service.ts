@@ -12,9 +12,7 @@ import type { SizingPool } from '../../workers/pool'
 import type { MeasurementsService } from './measurements.service'
 import type { RecordAnalysesService } from './record-analyses.service'
 import { measureOnPool } from './record-analyses.service'
-
-const invalid = (path: string, message: string) =>
-  new AppError('invalid-input', `${path}: ${message}`, 400, [{ path, message }])
+import { invalid } from './record-channels.service'
 
 function sensorsOf(channels: { name: string; nodeId: string | null; direction: string | null }[]) {
   return channels.map((c, i): Sensor => {

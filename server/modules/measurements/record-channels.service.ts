@@ -5,7 +5,8 @@ import type { ModelsService } from '../models/models.service'
 import type { MeasurementsRepository } from './measurements.repository'
 import type { MeasurementsService } from './measurements.service'
 
-const invalid = (path: string, message: string) =>
+/** A 400 naming one field of the request (or of the record it rests on). */
+export const invalid = (path: string, message: string) =>
   new AppError('invalid-input', `${path}: ${message}`, 400, [{ path, message }])
 
 /** The node ids of a model that carry mass: where a sensor can sit. */
