@@ -10,9 +10,13 @@ import { companiesRepository } from './modules/companies/companies.repository'
 import { companiesService } from './modules/companies/companies.service'
 import { customersRepository } from './modules/customers/customers.repository'
 import { customersService } from './modules/customers/customers.service'
-import { calibrationService } from './modules/measurements/calibrate.service'
+import { analysesRepository } from './modules/measurements/analyses.repository'
+import { calibrationService, type Measurements } from './modules/measurements/calibrate.service'
 import { measurementsRepository } from './modules/measurements/measurements.repository'
 import { measurementsService } from './modules/measurements/measurements.service'
+import { modelUpdateService } from './modules/measurements/model-update.service'
+import { recordAnalysesService } from './modules/measurements/record-analyses.service'
+import { recordChannelsService } from './modules/measurements/record-channels.service'
 import { modelsRepository } from './modules/models/models.repository'
 import { modelsService } from './modules/models/models.service'
 import { outboxRepository } from './modules/outbox/outbox.repository'
@@ -64,16 +68,26 @@ export function buildServices(deps: AppDeps) {
   const files = fileStore(deps.config.UPLOAD_DIR)
   const sites = sitesService({ sites: sitesRepository(ds), companies, files })
   const models = modelsService({ models: modelsRepository(ds), sites })
+  const recordRows = measurementsRepository(ds)
   const records = measurementsService({
-    records: measurementsRepository(ds),
+    records: recordRows,
     sites,
     models,
     files,
     pool: deps.pool,
   })
-  const measurements = {
+  const analyses = recordAnalysesService({
+    measurements: records,
+    analyses: analysesRepository(ds),
+    files,
+    pool: deps.pool,
+  })
+  const measurements: Measurements = {
     ...records,
     calibrate: calibrationService({ models, measurements: records }),
+    mapChannels: recordChannelsService({ measurements: records, models, records: recordRows }),
+    analyses,
+    updates: modelUpdateService({ measurements: records, models, analyses, pool: deps.pool }),
   }
   const catalogue = catalogueService({ catalogue: catalogueRepository(ds) })
   const sizings = sizingsService({

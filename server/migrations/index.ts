@@ -8,6 +8,7 @@ import { Measurements1796202424685 } from './1796202424685-Measurements'
 import { DesignGates1796267311937 } from './1796267311937-DesignGates'
 import { Resilience1796300000000 } from './1796300000000-Resilience'
 import { ListIndexes1796400000000 } from './1796400000000-ListIndexes'
+import { RecordChannels1796400000001 } from './1796400000001-RecordChannels'
 
 /** Every migration class in order; a new migration is added here too. */
 export const migrations = [
@@ -21,4 +22,5 @@ export const migrations = [
   DesignGates1796267311937,
   Resilience1796300000000,
   ListIndexes1796400000000,
+  RecordChannels1796400000001,
 ]

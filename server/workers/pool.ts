@@ -4,6 +4,7 @@ import type { SizingEvaluation } from '../../shared/sizing/evaluate-sizing'
 import { AppError } from '../http/app-error'
 import type { RecordJob, RecordOutcome } from './record.worker'
 import type { SizingJob } from './sizing.worker'
+import type { MeasurementJob, MeasurementOutcome } from './measurements.worker'
 
 export type SizingOutcome =
   | { ok: true; evaluation: SizingEvaluation }
@@ -19,6 +20,8 @@ export interface SizingPool {
   run(job: SizingJob, options?: JobOptions): Promise<SizingOutcome>
   /** reads and identifies a measurement record off the event loop */
   identify(job: RecordJob, options?: JobOptions): Promise<RecordOutcome>
+  /** modal identification, a record's time history, model updating: same threads, own file */
+  measure(job: MeasurementJob, options?: JobOptions): Promise<MeasurementOutcome>
   close(): Promise<void>
 }
 
@@ -73,6 +76,7 @@ export function createSizingPool(threads: number, limits: PoolLimits = {}): Sizi
   return {
     run: (job, options = {}) => submit(job, worker('./sizing.worker.ts'), options),
     identify: (job, options = {}) => submit(job, worker('./record.worker.ts'), options),
+    measure: (job, options = {}) => submit(job, worker('./measurements.worker.ts'), options),
     close: () => pool.destroy(),
   }
 }

@@ -1,16 +1,35 @@
-import type { IdentificationResult, RecordKind } from '../../shared/measurements'
+import type {
+  IdentificationResult,
+  RecordKind,
+  TimeUnit,
+  TimeUnitSource,
+} from '../../shared/measurements'
 import { AppError } from '../http/app-error'
 import { identify, readRecord } from '../modules/measurements/record-file'
+import type { ReadAs } from './measurements.worker'
 
 export interface RecordJob {
   bytes: Uint8Array
-  /** Hz, only for a file without a time column */
-  sampleRateHz?: number
+  /** how to read the file: a sample rate for a file without a time column, the time unit */
+  readAs: ReadAs
   kind?: RecordKind
 }
 
+/** What an upload stores of a read record: its rate, length, channels and time unit. */
+export interface ReadSummary {
+  channels: { name: string; column: number }[]
+  timeUnit: TimeUnit | null
+  timeUnitSource: TimeUnitSource | null
+}
+
 export type RecordOutcome =
-  | { ok: true; sampleRateHz: number; samples: number; result: IdentificationResult }
+  | {
+      ok: true
+      sampleRateHz: number
+      samples: number
+      record: ReadSummary
+      result: IdentificationResult
+    }
   | { ok: false; code: string; message: string; status: number; details?: unknown }
 
 /**
@@ -19,12 +38,17 @@ export type RecordOutcome =
  */
 export default function run(job: RecordJob): RecordOutcome {
   try {
-    const record = readRecord(job.bytes, job.sampleRateHz)
+    const record = readRecord(job.bytes, job.readAs)
     const result = identify(record, job.kind)
     return {
       ok: true,
       sampleRateHz: record.sampleRateHz,
       samples: record.acceleration.length,
+      record: {
+        channels: record.channels.map((c) => ({ name: c.name, column: c.column })),
+        timeUnit: record.timeUnit,
+        timeUnitSource: record.timeUnitSource,
+      },
       result,
     }
   } catch (e) {

@@ -10,6 +10,7 @@ import { api } from './client'
 export interface RecordUploadFields {
   sampleRateHz?: number
   kind?: 'decay' | 'ambient'
+  timeUnit?: 's' | 'ms'
   modelId?: number
   nodeId?: string
 }

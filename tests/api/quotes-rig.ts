@@ -13,6 +13,7 @@ import { makeTestApp, type TestApp } from '../helpers/app'
 export const noSolving: SizingPool = {
   run: () => Promise.reject(new Error('the quotes tests do not solve sizings')),
   identify: () => Promise.reject(new Error('the quotes tests do not read records')),
+  measure: () => Promise.reject(new Error('the quotes tests do not identify records')),
   close: async () => undefined,
 }
 

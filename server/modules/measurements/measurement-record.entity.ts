@@ -7,7 +7,8 @@ import {
   type Relation,
 } from 'typeorm'
 import { CreatedRecord } from '../../db/record-columns'
-import type { IdentificationResult } from '../../../shared/measurements'
+import type { IdentificationResult, TimeUnit, TimeUnitSource } from '../../../shared/measurements'
+import type { RecordChannelInfo } from '../../../shared/schemas/measurement'
 import { jsonColumn } from '../../http/json-column'
 import type { SiteEntity } from '../sites/site.entity'
 import type { UserEntity } from '../users/user.entity'
@@ -61,6 +62,17 @@ export class MeasurementRecordEntity extends CreatedRecord {
 
   @Column('varchar', { length: 20 })
   kind: string
+
+  /** every acceleration channel with its node and axis; null on records stored before channels */
+  @Column('longtext', { nullable: true, transformer: jsonColumn })
+  channels: RecordChannelInfo[] | null
+
+  /** the unit the time column was read in, kept so the file is re-read the same way */
+  @Column('varchar', { length: 2, nullable: true })
+  timeUnit: TimeUnit | null
+
+  @Column('varchar', { length: 10, nullable: true })
+  timeUnitSource: TimeUnitSource | null
 
   @Column('longtext', { transformer: jsonColumn })
   result: IdentificationResult

@@ -20,6 +20,7 @@ import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import { singleUpload } from '../../http/upload'
 import type { Measurements } from './calibrate.service'
+import { recordAnalysesRoutes } from './record-analyses.router'
 
 const READERS = ACCESS.measurements.read
 const WRITERS = ACCESS.measurements.write
@@ -81,7 +82,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
       method: 'delete',
       path: '/api/records/:id',
       tag,
-      summary: 'Delete a record and its file',
+      summary: 'Delete a record, its file and its analyses',
       access: WRITERS,
       params: IdParamSchema,
     },
@@ -133,5 +134,6 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     },
     ({ user, params, body }) => m.calibrate(user, params.id, body),
   )
+  recordAnalysesRoutes(router, api, m)
   return router
 }

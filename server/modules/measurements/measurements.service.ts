@@ -6,7 +6,7 @@ import type { ModelsService } from '../models/models.service'
 import type { SitesService } from '../sites/sites.service'
 import type { MeasurementsRepository, StoredRecord } from './measurements.repository'
 import type { SizingPool } from '../../workers/pool'
-import { checkRecordFile, peakAt, readRecord } from './record-file'
+import { checkRecordFile, peakAt, readAsStored, readRecord } from './record-file'
 
 type UploadedFile = { originalname: string; buffer: Buffer } | undefined
 
@@ -46,6 +46,7 @@ export function measurementsService(deps: {
   return {
     get,
     stored,
+    assertCanEdit,
     async list(siteId: number) {
       await deps.sites.get(siteId)
       return deps.records.listBySite(siteId)
@@ -64,11 +65,18 @@ export function measurementsService(deps: {
       const file = checkRecordFile(upload)
       // Reading and identifying an 8 MB record takes seconds: in the worker pool, not here.
       const read = await deps.pool.identify(
-        { bytes: file.buffer, sampleRateHz: input.sampleRateHz, kind: input.kind },
+        {
+          bytes: file.buffer,
+          readAs: {
+            ...(input.sampleRateHz !== undefined && { sampleRateHz: input.sampleRateHz }),
+            ...(input.timeUnit !== undefined && { timeUnit: input.timeUnit }),
+          },
+          kind: input.kind,
+        },
         { signal },
       )
       if (!read.ok) throw new AppError(read.code, read.message, read.status, read.details)
-      const { result } = read
+      const { result, record } = read
       const storedName = await deps.files.save(file.buffer, '.csv')
       try {
         const id = await deps.records.create({
@@ -84,6 +92,14 @@ export function measurementsService(deps: {
           rateFromForm: input.sampleRateHz !== undefined,
           kind: result.kind,
           result,
+          channels: record.channels.map((c, i) => ({
+            name: c.name.slice(0, 60),
+            column: c.column,
+            nodeId: i === 0 ? (input.nodeId ?? null) : null,
+            direction: null,
+          })),
+          timeUnit: record.timeUnit,
+          timeUnitSource: record.timeUnitSource,
         })
         return get(id)
       } catch (e) {
@@ -114,7 +130,7 @@ export function measurementsService(deps: {
         )
       }
       const bytes = await deps.files.read(r.storedName)
-      const record = readRecord(bytes, r.rateFromForm ? r.sampleRateHz : undefined)
+      const record = readRecord(bytes, readAsStored(r))
       const others = r.result.peaks.map((p) => p.frequencyHz)
       const peak = peakAt(record, frequencyHz, r.result.kind, others)
       const result = { ...r.result, peaks: [...r.result.peaks, peak] }
