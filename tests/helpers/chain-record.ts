@@ -2,7 +2,7 @@ import { ambientResponse, chainModes } from '../measurements/helpers/chain'
 
 // Three equal masses between two supports joined by four equal springs (uniform fixed–fixed
 // chain): ω_r² = (4k/m) sin²(rπ/8), φ_jr = sin(jrπ/4), the textbook closed form
-// (engineering-references "Chains"). The site's true springs are 10 % stiffer than the model
+// (docs/engineering/host-model.md#chain-check-values). The site's true springs are 10 % stiffer than the model
 // the engineer drew, so updating the one stiffness group should find a factor of 1.1.
 export const CHAIN_MASS = 2000
 /** N/m of the model as drawn: a first mode at 4 Hz */
