@@ -1,6 +1,6 @@
 import 'reflect-metadata'
 import { pino } from 'pino'
-import { buildServices } from '../server/app'
+import { buildServices } from '../server/services'
 import { loadConfig } from '../server/config'
 import { createDataSource } from '../server/data-source'
 import { smtpMailer } from '../server/integrations/mail'

@@ -57,6 +57,10 @@ const EnvSchema = z.object({
   UPLOAD_DIR: z.string().default('.local/uploads'),
   CHROMIUM_PATH: z.string().default('/usr/bin/chromium'),
   WORKER_THREADS: z.coerce.number().int().min(1).max(16).default(2),
+  /** engine jobs waiting for a worker thread; one more is refused with 503 and Retry-After */
+  ENGINE_QUEUE_LIMIT: z.coerce.number().int().min(0).max(1000).default(8),
+  /** ms an engine job (a sizing, a record's identification) may take before it is cancelled */
+  ENGINE_BUDGET_MS: z.coerce.number().int().min(100).max(600_000).default(60_000),
   TRUST_PROXY: trustProxy,
   /** failed sign-ins per account, and per client address, within 15 minutes */
   SIGN_IN_LIMIT: count(5),

@@ -9,6 +9,7 @@ import { SizingEntity } from './modules/sizings/sizing.entity'
 import { SizingRevisionEntity } from './modules/sizings/sizing-revision.entity'
 import { SizingAcknowledgementEntity } from './modules/sizings/sizing-acknowledgement.entity'
 import { MeasurementRecordEntity } from './modules/measurements/measurement-record.entity'
+import { RecordAnalysisEntity } from './modules/measurements/record-analysis.entity'
 import { PaymentSessionEntity } from './modules/payments/payment-session.entity'
 import { PaymentEventEntity } from './modules/payments/payment-event.entity'
 import { OrderEntity } from './modules/payments/order.entity'
@@ -36,6 +37,7 @@ export const entities = [
   SizingRevisionEntity,
   SizingAcknowledgementEntity,
   MeasurementRecordEntity,
+  RecordAnalysisEntity,
   PaymentSessionEntity,
   PaymentEventEntity,
   OrderEntity,

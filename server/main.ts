@@ -1,12 +1,12 @@
 import 'reflect-metadata'
 import { pino } from 'pino'
-import { buildServices, createApp } from './app'
+import { createApp } from './app'
 import { startBackgroundJobs } from './jobs'
 import { loadConfig } from './config'
 import { createDataSource } from './data-source'
 import { smtpMailer } from './integrations/mail'
 import { createSizingPool } from './workers/pool'
-import { closePdfRenderers } from './integrations/pdf'
+import { closePdfRenderers } from './integrations/pdf/renderer'
 
 async function main() {
   let config
@@ -18,10 +18,12 @@ async function main() {
   }
   const logger = pino({ level: config.LOG_LEVEL })
   const dataSource = await createDataSource(config).initialize()
-  const pool = createSizingPool(config.WORKER_THREADS)
+  const pool = createSizingPool(config.WORKER_THREADS, {
+    maxQueue: config.ENGINE_QUEUE_LIMIT,
+    budgetMs: config.ENGINE_BUDGET_MS,
+  })
   const deps = { config, dataSource, mailer: smtpMailer(config), logger, pool }
-  const services = buildServices(deps)
-  const app = createApp(deps, services)
+  const { app, services } = createApp(deps)
   const jobs = startBackgroundJobs(services, config, logger)
   const server = app.listen(config.PORT, config.HOST, () => {
     logger.info({ url: config.publicUrl }, 'Quellnode is listening')

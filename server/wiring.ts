@@ -1,4 +1,4 @@
-import type { AppDeps } from './app'
+import type { AppDeps } from './deps'
 import { stripeGateway } from './integrations/payments'
 import { throttle } from './integrations/rate-limits'
 import { fulfilment, type FulfilmentDeps } from './modules/payments/fulfilment'

@@ -47,6 +47,8 @@ export function fieldText(value: number, spec: FieldSpec): string {
   if (spec.kind === 'money') return moneyText(value)
   if (spec.kind === 'percent') return `${Number((value * 100).toPrecision(12))} %`
   if (spec.kind === 'count') return String(value)
+  // machine speeds are read in rpm (common practice); "1480 rpm" reads back to the same rad/s
+  if (spec.kind === 'speed') return `${shortNumber((value * 60) / (2 * Math.PI), 12)} rpm`
   const si = QUANTITY_KINDS[spec.kind].si
   const n = shortNumber(value, 12)
   return si ? `${n} ${si}` : n
@@ -56,8 +58,7 @@ export function fieldText(value: number, spec: FieldSpec): string {
 export function understood(value: number, spec: FieldSpec): string {
   if (spec.kind === 'money') return `= ${formatMoney(value, spec.currency ?? 'EUR')}`
   const text = fieldText(value, spec)
-  if (spec.kind === 'speed')
-    return `= ${text} (${formatSi((value * 60) / (2 * Math.PI), 'number', 6)} rpm)`
+  if (spec.kind === 'speed') return `= ${text} (${formatSi(value, 'speed', 6)})`
   return `= ${text}`
 }
 

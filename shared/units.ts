@@ -28,7 +28,11 @@ export const QUANTITY_KINDS = {
   acceleration: { si: 'm/s²', base: 'm/s^2', plausible: [1e-5, 100] },
   unbalance: { si: 'kg·m', base: 'kg m', plausible: [1e-6, 100] },
   /** rotational speed; stored in rad/s, typed as rpm, Hz (rev/s) or rad/s; 10 to 20 000 rpm */
-  speed: { si: 'rad/s', base: 'rad/s', plausible: [1, 2100] },
+  speed: {
+    si: 'rad/s',
+    base: 'rad/s',
+    plausible: [(10 * 2 * Math.PI) / 60, (20_000 * 2 * Math.PI) / 60],
+  },
   /**
    * A fraction typed as a percentage. The one rule for every percentage field: a bare number is
    * a percentage, so "5", "5 %" and "5%" are all 5 % (stored 0.05), and "0,05" is 0.05 %.

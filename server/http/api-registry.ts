@@ -1,10 +1,25 @@
 import { z } from 'zod'
-import type { RouteSpec } from './route'
+import type { RouteSpec } from './route-spec'
 
 type AnySpec = RouteSpec<unknown, unknown, unknown>
 
-function jsonSchema(schema: z.ZodType) {
-  return z.toJSONSchema(schema, { io: 'input', unrepresentable: 'any' })
+function jsonSchema(schema: z.ZodType, io: 'input' | 'output' = 'input') {
+  return z.toJSONSchema(schema, { io, unrepresentable: 'any' })
+}
+
+/** The success answer: a file of its type, the JSON of the response schema, or no body. */
+function success(spec: AnySpec) {
+  if (spec.produces)
+    return {
+      description: 'OK',
+      content: { [spec.produces]: { schema: { type: 'string', format: 'binary' } } },
+    }
+  if (spec.response)
+    return {
+      description: 'OK',
+      content: { 'application/json': { schema: jsonSchema(spec.response, 'output') } },
+    }
+  return { description: 'No body' }
 }
 
 function parameters(spec: AnySpec) {
@@ -42,7 +57,10 @@ const errorSchema = {
 export class ApiRegistry {
   private readonly specs: AnySpec[] = []
 
-  add<B, Q, P>(spec: RouteSpec<B, Q, P>) {
+  /** @param checkResponses check every JSON answer against its route's schema (the API tests) */
+  constructor(readonly checkResponses = false) {}
+
+  add<B, Q, P, R>(spec: RouteSpec<B, Q, P, R>) {
     this.specs.push(spec as AnySpec)
   }
 
@@ -57,9 +75,6 @@ export class ApiRegistry {
       const access = Array.isArray(spec.access)
         ? `Roles: ${spec.access.join(', ')}.`
         : `Access: ${spec.access}.`
-      const ok = spec.produces
-        ? { description: 'OK', content: { [spec.produces]: {} } }
-        : { description: 'OK' }
       paths[path] ??= {}
       paths[path][spec.method] = {
         tags: [spec.tag],
@@ -86,7 +101,7 @@ export class ApiRegistry {
           },
         }),
         responses: {
-          [String(spec.status ?? 200)]: ok,
+          [String(spec.status ?? (spec.response || spec.produces ? 200 : 204))]: success(spec),
           '4XX': {
             description: 'Refused',
             content: { 'application/json': { schema: errorSchema } },

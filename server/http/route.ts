@@ -1,34 +1,13 @@
 import type { Request, RequestHandler, Response, Router } from 'express'
 import type { ZodType } from 'zod'
 import { z } from 'zod'
-import type { Role } from '../../shared/schemas/auth'
 import { AppError } from './app-error'
 import { OUT_OF_RANGE } from '../../shared/schemas/model'
 import type { AuthUser } from '../middleware/authenticate'
 import type { ApiRegistry } from './api-registry'
+import type { Access, Method, RouteSpec, Wire } from './route-spec'
 
-type Method = 'get' | 'post' | 'put' | 'patch' | 'delete'
-
-/** Who may call a route: a list of roles, any signed-in user, or anyone. */
-export type Access = readonly Role[] | 'signed-in' | 'public'
-
-export interface RouteSpec<B, Q, P> {
-  method: Method
-  path: string
-  summary: string
-  tag: string
-  access: Access
-  body?: ZodType<B>
-  query?: ZodType<Q>
-  params?: ZodType<P>
-  status?: number
-  /** Content type of a non-JSON answer (a PDF, say), for the API document. */
-  produces?: string
-  /** A multipart upload: the file field's name, for the API document; `before` parses it. */
-  upload?: string
-  /** Middleware run after the access check and before validation (an upload parser, say). */
-  before?: RequestHandler[]
-}
+export type { Access, RouteSpec } from './route-spec'
 
 export interface RouteInput<B, Q, P> {
   body: B
@@ -91,11 +70,34 @@ function checkAccess(access: Access, user: AuthUser | undefined): AuthUser {
  * schemas, and an entry in the API document. The handler returns the JSON answer, or undefined
  * when it wrote the response itself.
  */
-export function route<B = undefined, Q = undefined, P = undefined>(
+/**
+ * In the API tests (ApiRegistry.checkResponses): an answer outside the route's response schema
+ * is a 500 naming the route and the fields, so a test that sees it fails.
+ */
+function checkResponse(spec: RouteSpec<unknown, unknown, unknown>, result: unknown) {
+  const where = `${spec.method.toUpperCase()} ${spec.path}`
+  if (!spec.response)
+    throw new AppError('response-contract', `${where} answers JSON but declares no schema`, 500)
+  // What the client receives: dates as strings, undefined fields gone.
+  const parsed = spec.response.safeParse(JSON.parse(JSON.stringify(result)))
+  if (parsed.success) return
+  const details = issuesOf(parsed.error, 'response')
+  const first = details[0]
+  throw new AppError(
+    'response-contract',
+    `${where} answered outside its schema${first ? `: ${first.path}: ${first.message}` : ''}`,
+    500,
+    details,
+  )
+}
+
+export function route<B = undefined, Q = undefined, P = undefined, R = unknown>(
   router: Router,
   registry: ApiRegistry,
-  spec: RouteSpec<B, Q, P>,
-  handler: (input: RouteInput<B, Q, P>) => unknown,
+  spec: RouteSpec<B, Q, P, R>,
+  handler: (
+    input: RouteInput<B, Q, P>,
+  ) => Wire<NoInfer<R>> | undefined | Promise<Wire<NoInfer<R>> | undefined>,
 ): void {
   registry.add(spec)
   const guard: RequestHandler = (req, _res, next) => {
@@ -115,7 +117,11 @@ export function route<B = undefined, Q = undefined, P = undefined>(
       const result = await handler({ body, query, params, user, req, res })
       if (res.headersSent) return
       if (result === undefined) res.status(spec.status ?? 204).end()
-      else res.status(spec.status ?? 200).json(result)
+      else {
+        if (registry.checkResponses)
+          checkResponse(spec as RouteSpec<unknown, unknown, unknown>, result)
+        res.status(spec.status ?? 200).json(result)
+      }
     },
   )
 }

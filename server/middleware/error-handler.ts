@@ -95,7 +95,10 @@ export function errorHandler(err: unknown, req: Request, res: Response, _next: N
         fromRace(err))
   if (known) {
     if (known.status === 503) {
-      req.log?.warn({ err }, 'database unavailable')
+      req.log?.warn(
+        { err },
+        known.code === 'engine-busy' ? 'engine queue full' : 'database unavailable',
+      )
       res.set('retry-after', '5')
     }
     res.status(known.status).json({

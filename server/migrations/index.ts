@@ -7,7 +7,9 @@ import { Production1796202027823 } from './1796202027823-Production'
 import { Measurements1796202424685 } from './1796202424685-Measurements'
 import { DesignGates1796267311937 } from './1796267311937-DesignGates'
 import { Resilience1796300000000 } from './1796300000000-Resilience'
-import { TaxRates1796400000000 } from './1796400000000-TaxRates'
+import { ListIndexes1796400000000 } from './1796400000000-ListIndexes'
+import { RecordChannels1796400000001 } from './1796400000001-RecordChannels'
+import { TaxRates1796400000002 } from './1796400000002-TaxRates'
 
 /** Every migration class in order; a new migration is added here too. */
 export const migrations = [
@@ -20,5 +22,7 @@ export const migrations = [
   Measurements1796202424685,
   DesignGates1796267311937,
   Resilience1796300000000,
-  TaxRates1796400000000,
+  ListIndexes1796400000000,
+  RecordChannels1796400000001,
+  TaxRates1796400000002,
 ]

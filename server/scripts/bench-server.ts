@@ -11,7 +11,7 @@ import type { AddressInfo } from 'node:net'
 import { tmpdir } from 'node:os'
 import path from 'node:path'
 import { pino } from 'pino'
-import { buildServices, createApp } from '../app'
+import { createApp } from '../app'
 import { loadConfig } from '../config'
 import { createDataSource } from '../data-source'
 import { smtpMailer } from '../integrations/mail'
@@ -52,8 +52,9 @@ export async function benchServer(progress: (s: string) => void): Promise<Server
   }
   try {
     progress(`seeding ${QUOTES} quotes in ${db.name}`)
-    const ids = await seedBench(buildServices(deps), QUOTES, SIZING_NODES)
-    const server = createApp(deps).listen(0, '127.0.0.1')
+    const { app, services } = createApp(deps)
+    const ids = await seedBench(services, QUOTES, SIZING_NODES)
+    const server = app.listen(0, '127.0.0.1')
     await new Promise((r) => server.once('listening', r))
     const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`
     try {

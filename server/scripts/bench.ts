@@ -6,16 +6,10 @@
  * (a size that ran past its time budget has ms: null and a note). Progress goes to stderr.
  * Not part of `npm test`: speed targets are measured here, never asserted in tests.
  */
-import { benchServer, type ServerFigures } from './bench-server'
+import { benchServer } from './bench-server'
 import { benchBundle } from './bench/bundle'
-import { benchEigen, benchStudy, type EigenFigure, type StudyFigure } from './bench/engine'
-import { printReport } from './bench/report'
-
-export interface BenchResult extends ServerFigures {
-  study: StudyFigure[]
-  eigen: EigenFigure[]
-  bundle: { initialGzipBytes: number; largestRouteGzipBytes: number }
-}
+import { benchEigen, benchStudy } from './bench/engine'
+import { printReport, type BenchResult } from './bench/report'
 
 const json = process.argv.includes('--json')
 // `--only eigen,study` runs some parts (while working on one); the JSON then holds only those.

@@ -1,10 +1,13 @@
 /**
  * Command line: `npm run --silent solve -- FILE.json` prints the sizing of a model as JSON.
- * A thin I/O wrapper over solveSizing; exit code 2 with one line on stderr for any invalid input.
+ * A thin I/O wrapper over solveSizing (solveSet for a model with `absorbers`); exit code 2 with
+ * one line on stderr for any invalid input.
  */
 import { readFileSync } from 'node:fs'
 import { ModelError, solveSizing } from '../../shared/dynamics'
-import { issuePath, modelSchema } from '../../shared/schemas/model'
+import { solveSet } from '../../shared/dynamics/multi'
+import { setModelSchema } from '../../shared/schemas/absorber-set'
+import { issuePath } from '../../shared/schemas/model'
 
 function fail(message: string, code = 2): never {
   process.stderr.write(`solve: ${message.replace(/\s+/g, ' ').trim()}\n`)
@@ -26,14 +29,17 @@ function main(argv: string[]): void {
   } catch (e) {
     fail(`${file} is not valid JSON: ${(e as Error).message}`)
   }
-  const parsed = modelSchema.safeParse(json)
+  const parsed = setModelSchema.safeParse(json)
   if (!parsed.success) {
     const issue = parsed.error.issues[0]
     const path = issue ? issuePath(issue.path) : ''
     fail(`invalid model: ${path === '' ? '(top level)' : path}: ${issue?.message ?? 'invalid'}`)
   }
   try {
-    process.stdout.write(`${JSON.stringify(solveSizing(parsed.data), null, 2)}\n`)
+    // A model with `absorbers` is sized as a set; otherwise as before.
+    const { absorbers, ...single } = parsed.data
+    const result = absorbers ? solveSet(parsed.data) : solveSizing(single)
+    process.stdout.write(`${JSON.stringify(result, null, 2)}\n`)
   } catch (e) {
     if (e instanceof ModelError) fail(`invalid model: ${e.message}`)
     fail(`internal error: ${(e as Error).message}`, 1)

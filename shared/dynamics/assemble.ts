@@ -2,7 +2,7 @@ import type { Modes, ValidSpring } from './types'
 
 /**
  * Weighted graph Laplacian over the springs with grounded rows and columns removed:
- * L = Σₑ wₑ (eₐ − e_b)(eₐ − e_b)ᵀ (standard; design.md "Stiffness matrix").
+ * L = Σₑ wₑ (eₐ − e_b)(eₐ − e_b)ᵀ (standard; docs/engineering/host-model.md#reduced-stiffness).
  * @param n number of free nodes
  * @param springs springs with free-node indices (−1 = grounded end)
  * @param weight the edge weight: stiffness (N/m) for K̂, damping (N·s/m) for the dashpot matrix
@@ -29,7 +29,7 @@ export function assembleLaplacian(
 
 /**
  * Classical (modal) damping matrix C = M Φ diag(2 ζᵢ ωᵢ) Φᵀ M for mass-normalised Φ, so that
- * Φᵀ C Φ = diag(2 ζᵢ ωᵢ) (Caughey & O'Kelly 1965; design.md "Host damping").
+ * Φᵀ C Φ = diag(2 ζᵢ ωᵢ) (Caughey & O'Kelly 1965; docs/engineering/host-model.md#host-damping).
  * @param mass kg, diagonal of M
  * @param modes mass-normalised modes (ω in rad/s)
  * @param zeta damping ratio per mode (–)

@@ -46,7 +46,7 @@ const asamiNishihara: ClosedForm = {
   name: 'asami-nishihara',
   scope:
     'Undamped single-mode host, harmonic force, displacement response: the exact minimax (H∞) ' +
-    'optimum (Asami & Nishihara, J. Vib. Acoust. 124, 2002, 576–582).',
+    'optimum (Nishihara & Asami, J. Vib. Acoust. 124, 2002, 576–582).',
   tune: (mu) => {
     const r = Math.sqrt(4 + 3 * mu)
     const num = 2 * (16 + 23 * mu + 9 * mu * mu + 2 * (2 + mu) * r)

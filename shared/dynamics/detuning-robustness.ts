@@ -1,7 +1,7 @@
 import type { ModelInput } from '../schemas/model'
 import { ModelError } from './errors'
 import { evaluateAbsorber } from './evaluate-absorber'
-import { sizingContext } from './sizing-context'
+import { scaledContext } from './scaled-context'
 import { prepareSizing, type PreparedSizing } from './size-absorber'
 
 /** Options of `detuningRobustness`. */
@@ -31,7 +31,7 @@ export interface DetuningPoint {
  * Robustness to detuning: the absorber is sized for the nominal host, then every host spring rate
  * is scaled by (1 + offset)² so all host frequencies move by the offset (the default band moves
  * with the target mode; a user band stays). Reports the curve and the worst case within the
- * tolerance (design.md "Robustness").
+ * tolerance (docs/engineering/tuning.md#detuning-robustness).
  * @param model a model with an absorber
  * @param options see RobustnessOptions
  * @param prepared the model's context and sized absorber when already computed
@@ -54,8 +54,7 @@ export function detuningRobustness(
   if (!offsets.includes(0) && points % 2 === 0) offsets.push(0)
   const h = new Float64Array(8)
   const at = (offset: number): { peak: number; amplification: number } => {
-    const ctx =
-      Math.abs(offset) < 1e-12 ? nominal : sizingContext(model, nominal.prep, (1 + offset) ** 2)
+    const ctx = Math.abs(offset) < 1e-12 ? nominal : scaledContext(nominal, (1 + offset) ** 2)
     const peak = evaluateAbsorber(ctx, sized.values).peak.value
     ctx.rec.at(0, h)
     return { peak, amplification: peak / Math.hypot(h[0] ?? 0, h[1] ?? 0) }

@@ -1,4 +1,5 @@
 import { solveComplex } from './complex-solve'
+import { foldFarModes, type FoldedModes } from './far-modes'
 import type { PreparedHost } from './host'
 import { participation } from './participation'
 import type { ComplexArray } from './types'
@@ -60,10 +61,20 @@ export function nodeVectors(n: number, t: NodeTriple): ReceptanceVectors {
 /** Relative distance to an undamped natural frequency below which the sum steps aside. */
 const POLE_GAP = 1e-8
 
-function modalAt(prep: PreparedHost, prod: Float64Array, w: number, out: Receptance4): boolean {
+function modalAt(
+  prep: PreparedHost,
+  prod: Float64Array,
+  w: number,
+  out: Receptance4,
+  folded: FoldedModes | null,
+): boolean {
   const { omega } = prep.modes
   out.fill(0)
-  for (let i = 0; i < prep.n; i++) {
+  // Inside its band the far modes come folded into one correction (far-modes.ts).
+  const fold = folded && w >= folded.min && w <= folded.max ? folded : null
+  const count = fold ? fold.near.length : prep.n
+  for (let k = 0; k < count; k++) {
+    const i = fold ? (fold.near[k] ?? 0) : k
     const wi = omega[i] ?? 0
     // H_ab = Σ (aᵀφ_i)(bᵀφ_i) / (ω_i² − ω² + 2iζ_iω_iω) (modal superposition, e.g. Ewins, Modal
     // Testing §2.6)
@@ -80,6 +91,7 @@ function modalAt(prep: PreparedHost, prod: Float64Array, w: number, out: Recepta
       out[2 * q + 1] = (out[2 * q + 1] ?? 0) + p * ui
     }
   }
+  fold?.add(w, out)
   return true
 }
 
@@ -145,11 +157,15 @@ export function hostReceptance(
     prod.set([a * b, a * c, c * b, c * c], 4 * i)
     parts.set([a, b, c], 3 * i)
   }
+  const last = omega[omega.length - 1] ?? 0
+  const folded = prep.classical
+    ? foldFarModes(prep.modes.omega, prep.zeta, prod, omega[0] ?? 0, last)
+    : null
   const exact = (w: number, out: Receptance4): void => {
     let at = w
     // Step aside from a singular point (an undamped mode's own frequency) until the sum is finite.
     for (let tries = 0; tries < 4; tries++) {
-      if (prep.classical ? modalAt(prep, prod, at, out) : directAt(prep, v, at, out)) {
+      if (prep.classical ? modalAt(prep, prod, at, out, folded) : directAt(prep, v, at, out)) {
         for (let q = 0; q < 4; q++) out[2 * q] = (out[2 * q] ?? 0) + (fixed[q] ?? 0)
         return
       }

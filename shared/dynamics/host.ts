@@ -69,7 +69,17 @@ export function prepareHost(host: ValidHost, zeta: Float64Array): PreparedHost {
   const n = mass.length
   const dashpots = assembleLaplacian(n, springs, (s) => s.damping)
   const dampers = springs.filter((s) => s.damping > 0)
-  return build(host, zeta, mass, stiffness, dashpots, dampers, c, solveModes(stiffness, mass))
+  const modes = solveModes(stiffness, mass)
+  return build(
+    host,
+    zeta,
+    mass,
+    () => stiffness,
+    dashpots,
+    dampers,
+    () => c,
+    modes,
+  )
 }
 
 /**
@@ -81,49 +91,69 @@ export function prepareHost(host: ValidHost, zeta: Float64Array): PreparedHost {
 export function scaleHost(prep: PreparedHost, factor: number): PreparedHost {
   if (factor === 1) return prep
   const modes = { ...prep.modes, omega: prep.modes.omega.map((w) => w * Math.sqrt(factor)) }
-  const stiffness = prep.stiffness.map((k) => k * factor)
+  // The n×n matrices are scaled on first use only: a modal study never reads them.
+  const stiffness = lazy(() => prep.stiffness.map((k) => k * factor))
   const c = prep.condensation
-  const scaled = c && {
-    ...c,
-    stiffness: c.stiffness.map((k) => k * factor),
-    flexibility: c.flexibility.map((f) => f / factor),
-  }
+  const scaled = c
+    ? lazy(() => ({
+        ...c,
+        stiffness: c.stiffness.map((k) => k * factor),
+        flexibility: c.flexibility.map((f) => f / factor),
+      }))
+    : () => null
   const { host, zeta, mass, dashpots, dampers } = prep
   return build(host, zeta, mass, stiffness, dashpots, dampers, scaled, modes)
+}
+
+function lazy<T>(make: () => T): () => T {
+  let value: { v: T } | null = null
+  return () => (value ??= { v: make() }).v
 }
 
 function build(
   host: ValidHost,
   zeta: Float64Array,
   mass: Float64Array,
-  stiffness: Float64Array,
+  stiffness: () => Float64Array,
   dashpots: Float64Array,
   dampers: ValidSpring[],
-  c: Condensation | null,
+  condensation: () => Condensation | null,
   modes: Modes,
 ): PreparedHost {
   let total: Float64Array | null = null
   const n = mass.length
+  const massless = host.massless.length > 0
   return {
     host,
     n,
     fullN: host.ids.length,
     mass,
-    stiffness,
+    get stiffness() {
+      return stiffness()
+    },
     dashpots,
     dampers,
     modes,
     zeta,
     classical: !host.hasDashpots,
-    condensation: c,
+    get condensation() {
+      return condensation()
+    },
     damping() {
       total ??= modalDampingMatrix(mass, modes, zeta).map((x, i) => x + (dashpots[i] ?? 0))
       return total
     },
-    condense: (v) => (c ? condensedVector(c, v) : v),
-    staticTerm: (w, v) => (c ? staticPart(c, w, v) : 0),
+    condense(v) {
+      const c = massless ? condensation() : null
+      return c ? condensedVector(c, v) : v
+    },
+    staticTerm(w, v) {
+      const c = massless ? condensation() : null
+      return c ? staticPart(c, w, v) : 0
+    },
     shape(mode) {
       const phi = Float64Array.from({ length: n }, (_, a) => modes.phi[a * n + mode] ?? 0)
+      const c = massless ? condensation() : null
       return c ? fullShape(c, phi, host.ids.length) : phi
     },
   }

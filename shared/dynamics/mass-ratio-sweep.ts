@@ -24,7 +24,7 @@ export interface SweepPoint {
  * Achievable peak reduction against absorber mass: for each μ the absorber on the model's node is
  * tuned by the model's method ('optimize' when none or explicit ratios are given), reusing one set
  * of host receptances. So the engineer can pick the smallest mass meeting the acceptance and stroke
- * limits (design.md "Mass ratio").
+ * limits (docs/engineering/tuning.md#mass-ratio-sweep).
  * @param model a model with an absorber node
  * @param massRatios μ values (m_a/m_eff), each positive
  * @param context the model's sizing context when already computed (its absorber mass is not used)

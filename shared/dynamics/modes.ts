@@ -42,7 +42,7 @@ export function solveModes(stiffness: Float64Array, mass: Float64Array): Modes {
 
 /**
  * Effective (modal) mass of a mode at a node, m_eff = 1/φ_j² for mass-normalised φ
- * (Warburton & Ayorinde 1980; design.md "Modes").
+ * (Warburton & Ayorinde 1980; docs/engineering/host-model.md#effective-mass).
  * @param modes mass-normalised modes
  * @param node free-node index j
  * @param mode 0-based mode number

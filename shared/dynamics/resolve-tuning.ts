@@ -32,14 +32,35 @@ function speedStarts(ctx: SizingContext, mu: number): { name: 'running-speed'; t
   ]
 }
 
+/** Tunings already resolved per context: the sizing's own optimum is the sweep's at its mass. */
+const resolved = new WeakMap<SizingContext, Map<string, ResolvedTuning>>()
+
 /**
- * Turns a tuning request into a frequency ratio and damping ratio for the given absorber mass.
+ * Turns a tuning request into a frequency ratio and damping ratio for the given absorber mass,
+ * once per context, mass and method (an optimisation is the dearest part of a study).
  * @param ctx sizing context (host receptances over the band)
  * @param mass absorber mass, kg
  * @param mu mass ratio m_a/m_eff (–)
  * @param tuning a closed form, an optimiser, or explicit ratios
  */
 export function resolveTuning(
+  ctx: SizingContext,
+  mass: number,
+  mu: number,
+  tuning: TuningName | ExplicitTuning,
+): ResolvedTuning {
+  if (typeof tuning === 'object') return resolveOnce(ctx, mass, mu, tuning)
+  const memo = resolved.get(ctx) ?? new Map<string, ResolvedTuning>()
+  resolved.set(ctx, memo)
+  const key = `${mass}|${mu}|${tuning}`
+  const known = memo.get(key)
+  if (known) return { ...known }
+  const t = resolveOnce(ctx, mass, mu, tuning)
+  memo.set(key, t)
+  return { ...t }
+}
+
+function resolveOnce(
   ctx: SizingContext,
   mass: number,
   mu: number,

@@ -119,6 +119,7 @@ export function coupledEigenvalues(
   for (let k = 0; k < edges.length; k++) {
     const a = edges[k] ?? 0
     let b = edges[k + 1] ?? Infinity
+    if (a >= max) break // every later gap lies above the range
     if (b === Infinity) {
       if (invK === 0) break
       // Above the last pole g rises from −∞ to 1/k_a > 0: double until g > 0.

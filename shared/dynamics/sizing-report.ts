@@ -16,11 +16,12 @@ const QUANTITY_UNIT = { displacement: 'm', velocity: 'm/s', acceleration: 'm/s²
 
 /** @param ctx sizing context */
 export function modeReports(ctx: SizingContext): ModeReport[] {
+  const shown = new Set([ctx.r + 1, ...bandModes(ctx)])
   return Array.from(ctx.prep.modes.omega, (w, i) => ({
     number: i + 1,
     frequencyHz: w * HZ,
     dampingRatio: ctx.prep.zeta[i] ?? 0,
-    shape: Array.from(ctx.prep.shape(i)),
+    ...(shown.has(i + 1) && { shape: Array.from(ctx.prep.shape(i)) }),
   }))
 }
 

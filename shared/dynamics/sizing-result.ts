@@ -8,8 +8,9 @@ export interface ModeReport {
   frequencyHz: number
   /** host modal damping ratio used for this mode */
   dampingRatio: number
-  /** mass-normalised shape (1/√kg), one value per entry of `nodeIds` */
-  shape: number[]
+  /** mass-normalised shape (1/√kg), one value per entry of `nodeIds`; carried for the target
+   * mode and the modes in the band only (a large model's shapes would weigh megabytes) */
+  shape?: number[]
 }
 
 /** The frequency band over which peaks are taken. */

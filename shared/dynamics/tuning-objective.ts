@@ -13,7 +13,8 @@ import { coupledEigenvalues, secularPoles, type Poles } from './secular'
 export type { AbsorberValues }
 
 /**
- * k_a = m_a ω_a², c_a = 2 ζ_a m_a ω_a with ω_a = f ω_target (design.md "Absorber").
+ * k_a = m_a ω_a², c_a = 2 ζ_a m_a ω_a with ω_a = f ω_target
+ * (docs/engineering/tuning.md#absorber-values).
  * @param mass absorber mass, kg
  * @param omegaTarget host target frequency, rad/s
  * @param t frequency ratio and damping ratio (own frequency)

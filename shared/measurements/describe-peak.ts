@@ -6,7 +6,8 @@ import { peakBand } from './peak-band'
 import { dampingWarning, type ResultFlag } from './plausibility'
 import type { IdentifiedPeak } from './types'
 
-// Δf ≤ 2ζf_n/5: about five lines across the half-power band (engineering-references.md).
+// Δf ≤ 2ζf_n/5: about five lines across the half-power band
+// (docs/engineering/measurements.md#half-power-bandwidth).
 const MIN_LINES = 5
 
 const hz = (f: number) => `${f.toPrecision(4)} Hz`

@@ -6,7 +6,7 @@ import { chooseSegmentLength } from './spectrum-welch'
 import type { IdentifyOptions, RecordSamples } from './types'
 
 // Spectral lines wanted across a half-power band: comfortably above the five below which
-// the bandwidth is biased (Δf ≤ 2ζf_n/5, engineering-references.md).
+// the bandwidth is biased (Δf ≤ 2ζf_n/5, docs/engineering/measurements.md#half-power-bandwidth).
 const LINES_WANTED = 8
 
 /**

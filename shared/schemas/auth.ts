@@ -27,6 +27,10 @@ export const CurrentUserSchema = z.object({
 })
 export type CurrentUser = z.infer<typeof CurrentUserSchema>
 
+/** The signed-in user, as sign-in and /api/auth/me answer. */
+export const SessionSchema = z.object({ user: CurrentUserSchema })
+export type Session = z.infer<typeof SessionSchema>
+
 export const InviteSchema = z
   .object({
     email: EmailSchema,
@@ -68,3 +72,10 @@ export const CompanySchema = z.object({
   kind: z.enum(['supplier', 'customer']),
 })
 export type Company = z.infer<typeof CompanySchema>
+
+export const CompanyDetailsSchema = CompanySchema.extend({ address: z.string() })
+export type CompanyDetails = z.infer<typeof CompanyDetailsSchema>
+
+/** An acknowledgement with a message for people (a reset request, say). */
+export const NoticeSchema = z.object({ message: z.string() })
+export type Notice = z.infer<typeof NoticeSchema>

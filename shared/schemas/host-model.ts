@@ -27,28 +27,31 @@ export const ModelRevisionParamsSchema = z.object({
   revision: z.coerce.number().int().positive(),
 })
 
-export interface ModelRevisionInfo {
-  revision: number
-  reason: string
-  createdAt: string
-  createdByName: string
-}
+export const ModelRevisionInfoSchema = z.object({
+  revision: z.number().int(),
+  reason: z.string(),
+  createdAt: z.string(),
+  createdByName: z.string(),
+})
+export type ModelRevisionInfo = z.infer<typeof ModelRevisionInfoSchema>
 
 /** One stored revision of a model with its structure: what a sizing on that revision used. */
-export interface ModelRevision extends ModelRevisionInfo {
-  modelId: number
-  definition: z.infer<typeof ModelDefinitionSchema>
-}
+export const ModelRevisionSchema = ModelRevisionInfoSchema.extend({
+  modelId: z.number().int(),
+  definition: ModelDefinitionSchema,
+})
+export type ModelRevision = z.infer<typeof ModelRevisionSchema>
 
-export interface HostModel {
-  id: number
-  siteId: number
-  siteName: string
-  name: string
-  ownerId: number
-  ownerName: string
-  currentRevision: number
-  definition: z.infer<typeof ModelDefinitionSchema>
-  revisions: ModelRevisionInfo[]
-  updatedAt: string
-}
+export const HostModelSchema = z.object({
+  id: z.number().int(),
+  siteId: z.number().int(),
+  siteName: z.string(),
+  name: z.string(),
+  ownerId: z.number().int(),
+  ownerName: z.string(),
+  currentRevision: z.number().int(),
+  definition: ModelDefinitionSchema,
+  revisions: z.array(ModelRevisionInfoSchema),
+  updatedAt: z.string(),
+})
+export type HostModel = z.infer<typeof HostModelSchema>

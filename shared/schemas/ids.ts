@@ -19,6 +19,9 @@ export const IdSchema = canonical(/^[1-9][0-9]{0,9}$/, 'a positive whole number,
 /** A 0-based position in a list, written the same canonical way ("0", "7"; not "07"). */
 export const IndexSchema = canonical(/^(0|[1-9][0-9]{0,9})$/, 'a whole number ≥ 0, digits only')
 
+/** Rows per page of a list: "1" … "200". */
+export const PageSizeSchema = IdSchema.refine((n) => n <= 200, 'at most 200')
+
 /** `:id` in a path: every route with one uses this. */
 export const IdParamSchema = z.object({ id: IdSchema })
 

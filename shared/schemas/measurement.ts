@@ -1,6 +1,11 @@
 import { z } from 'zod'
 import { IdSchema, IndexSchema } from './ids'
-import type { IdentificationResult } from '../measurements'
+import type {
+  ChannelDirection,
+  IdentificationResult,
+  TimeUnit,
+  TimeUnitSource,
+} from '../measurements'
 
 /** The largest record file accepted, bytes (8 MiB; about 400 000 rows of time and acceleration). */
 export const MAX_RECORD_BYTES = 8 * 1024 * 1024
@@ -16,6 +21,8 @@ export const RecordUploadSchema = z.object({
   /** Hz, for a file without a time column */
   sampleRateHz: optionalNumber(z.coerce.number().positive('must be above zero').max(1e6)),
   kind: optionalNumber(z.enum(['decay', 'ambient'])),
+  /** unit of the time column; detected from its header or step when absent */
+  timeUnit: optionalNumber(z.enum(['s', 'ms'])),
   modelId: optionalNumber(IdSchema),
   nodeId: optionalText(60),
 })
@@ -63,25 +70,61 @@ export const SizingRecordLinkSchema = z.object({
 })
 export type SizingRecordLink = z.infer<typeof SizingRecordLinkSchema>
 
+/** One acceleration channel of a stored record. */
+export const RecordChannelInfoSchema = z.object({
+  name: z.string(),
+  /** 1-based file column */
+  column: z.number().int(),
+  nodeId: z.string().nullable(),
+  direction: z
+    .custom<ChannelDirection>((v) => typeof v === 'string' && /^[+-][xyz]$/.test(v))
+    .nullable(),
+})
+export type RecordChannelInfo = z.infer<typeof RecordChannelInfoSchema>
+
 /** A stored record as listed. */
-export interface MeasurementRecordSummary {
-  id: number
-  siteId: number
-  modelId: number | null
-  nodeId: string | null
-  ownerId: number
-  ownerName: string
-  filename: string
-  size: number
+export const MeasurementRecordSummarySchema = z.object({
+  id: z.number().int(),
+  siteId: z.number().int(),
+  modelId: z.number().int().nullable(),
+  nodeId: z.string().nullable(),
+  ownerId: z.number().int(),
+  ownerName: z.string(),
+  filename: z.string(),
+  size: z.number().int(),
   /** Hz */
-  sampleRateHz: number
-  samples: number
-  kind: string
-  peakCount: number
-  createdAt: string
-}
+  sampleRateHz: z.number(),
+  samples: z.number().int(),
+  kind: z.string(),
+  peakCount: z.number().int(),
+  /** every acceleration channel, in column order, with where it was measured */
+  channels: z.array(RecordChannelInfoSchema),
+  /** unit the time column was read in (null without one) and how it was decided */
+  timeUnit: z.custom<TimeUnit>((v) => v === 's' || v === 'ms').nullable(),
+  timeUnitSource: z.custom<TimeUnitSource>((v) => typeof v === 'string').nullable(),
+  analysisCount: z.number().int(),
+  createdAt: z.string(),
+})
+export type MeasurementRecordSummary = z.infer<typeof MeasurementRecordSummarySchema>
+
+/** The identification of a record (shared/measurements): an object here, typed by the engine. */
+export const IdentificationResultSchema = z.custom<IdentificationResult>(
+  (v) => typeof v === 'object' && v !== null,
+  'an identification result',
+)
 
 /** One record with its identification. */
-export interface MeasurementRecord extends MeasurementRecordSummary {
-  result: IdentificationResult
-}
+export const MeasurementRecordSchema = MeasurementRecordSummarySchema.extend({
+  result: IdentificationResultSchema,
+})
+export type MeasurementRecord = z.infer<typeof MeasurementRecordSchema>
+
+/** A peak added by hand, and the record with it. */
+export const AddedPeakSchema = z.object({
+  peak: z.custom<IdentificationResult['peaks'][number]>(
+    (v) => typeof v === 'object' && v !== null && 'frequencyHz' in v,
+    'an identified peak',
+  ),
+  record: MeasurementRecordSchema,
+})
+export type AddedPeak = z.infer<typeof AddedPeakSchema>

@@ -9,13 +9,42 @@ export const PaymentReturnSchema = z.object({ sessionId: CheckoutSessionIdSchema
 export type PaymentReturn = z.infer<typeof PaymentReturnSchema>
 
 /** A second payment of a quote that had its order already, and its refund. */
-export interface RefundInfo {
-  sessionId: string
-  quoteId: number
-  amount: number
-  currency: string
-  status: 'pending' | 'refunded'
-  refundId: string | null
-  refundedAt: string | null
-  paidTwiceAt: string
-}
+export const RefundInfoSchema = z.object({
+  sessionId: z.string(),
+  quoteId: z.number().int(),
+  /** minor units */
+  amount: z.number().int(),
+  currency: z.string(),
+  status: z.enum(['pending', 'refunded']),
+  refundId: z.string().nullable(),
+  refundedAt: z.string().nullable(),
+  paidTwiceAt: z.string(),
+})
+export type RefundInfo = z.infer<typeof RefundInfoSchema>
+
+/** A paid order as its customer, sales and the admin see it. */
+export const OrderInfoSchema = z.object({
+  id: z.number().int(),
+  number: z.string(),
+  quoteId: z.number().int(),
+  /** minor units */
+  amount: z.number().int(),
+  currency: z.string(),
+  status: z.string(),
+  paidAt: z.string(),
+  /** production's progress: queued, in-build, tuning, ready, shipped */
+  workOrderState: z.string().nullable().optional(),
+})
+export type OrderInfo = z.infer<typeof OrderInfoSchema>
+
+/** A quote's order, or null while it is unpaid. */
+export const QuoteOrderSchema = z.object({ order: OrderInfoSchema.nullable() })
+export type QuoteOrder = z.infer<typeof QuoteOrderSchema>
+
+/** Where the customer goes to pay; no session and no url once the quote is paid. */
+export const CheckoutAnswerSchema = z.object({
+  state: z.string(),
+  sessionId: z.string().nullable(),
+  url: z.string().nullable(),
+})
+export type CheckoutAnswer = z.infer<typeof CheckoutAnswerSchema>

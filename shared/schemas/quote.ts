@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { IdSchema } from './ids'
+import { IdSchema, IndexSchema, PageSizeSchema } from './ids'
 import { CURRENCIES } from '../money'
 import { SizingSummarySchema } from './sizing'
 
@@ -58,6 +58,10 @@ export const QuoteListQuerySchema = z.object({
   /** created on or before, YYYY-MM-DD */
   to: isoDate.optional(),
   search: z.string().trim().max(100).optional(),
+  /** rows per page, 1–200 (default 50); the total is in the X-Total-Count header */
+  limit: PageSizeSchema.optional(),
+  /** rows skipped, newest first */
+  offset: IndexSchema.optional(),
 })
 export type QuoteListQuery = z.infer<typeof QuoteListQuerySchema>
 
@@ -227,3 +231,7 @@ export function toCustomerQuote(q: Quote): CustomerQuote {
   const failed = ack.failed.map((f) => ({ ...f, details: [] }))
   return { ...c, sizing: { ...c.sizing, designAcknowledgement: { ...ack, byName: null, failed } } }
 }
+
+/** A quote as the caller may see it: the supplier's full view, or a customer's projection. */
+export const AnyQuoteSchema = z.union([QuoteSchema, CustomerQuoteSchema])
+export type AnyQuote = z.infer<typeof AnyQuoteSchema>

@@ -1,5 +1,10 @@
 import { z } from 'zod'
-import { AcknowledgeInputSchema, DesignAcknowledgementSchema } from './design-checks'
+import type { SizingEvaluation } from '../sizing/evaluate-sizing'
+import {
+  AcknowledgeInputSchema,
+  DesignAcknowledgementSchema,
+  DesignCheckSchema,
+} from './design-checks'
 import { IdSchema } from './ids'
 import {
   bandSchema,
@@ -7,6 +12,7 @@ import {
   loadKindSchema,
   nodeForceSchema,
   nodeSchema,
+  OUT_OF_RANGE,
   speedSchema,
   springSchema,
   tuningNameSchema,
@@ -15,10 +21,28 @@ import {
 import { SizingRecordLinkSchema } from './measurement'
 import { strictObject } from './strict'
 
+/**
+ * The largest model the server solves: a whole study at 1000 nodes takes about a second of one
+ * worker thread on a small server, and a worker job is cancelled past its time budget anyway.
+ */
+export const MODEL_LIMITS = { nodes: 1000, springs: 5000 } as const
+const LIMIT_REASON =
+  'larger models are refused so that one sizing cannot hold the engine for minutes; lump ' +
+  'neighbouring masses together'
+
 /** The host structure as the engineer edits it: a revision of a model stores exactly this. */
 export const ModelDefinitionSchema = z.object({
-  nodes: z.array(nodeSchema).min(1, 'add at least one node').max(1000, 'at most 1000 nodes'),
-  springs: z.array(springSchema).max(5000, 'at most 5000 springs'),
+  nodes: z
+    .array(nodeSchema)
+    .min(1, 'add at least one node')
+    .refine((a) => a.length <= MODEL_LIMITS.nodes, {
+      message: `at most ${MODEL_LIMITS.nodes} nodes: ${LIMIT_REASON}`,
+      params: OUT_OF_RANGE,
+    }),
+  springs: z.array(springSchema).refine((a) => a.length <= MODEL_LIMITS.springs, {
+    message: `at most ${MODEL_LIMITS.springs} springs: ${LIMIT_REASON}`,
+    params: OUT_OF_RANGE,
+  }),
   hostDampingRatio: z.union([z.number(), z.array(z.number())]).default(0.02),
 })
 export type ModelDefinition = z.infer<typeof ModelDefinitionSchema>
@@ -204,19 +228,63 @@ export const SizingListQuerySchema = z.object({
 export type SizingListQuery = z.infer<typeof SizingListQuerySchema>
 
 /** A row of the sizings list. */
-export interface SizingListItem {
-  id: number
-  title: string
-  state: SizingState
-  revision: number
-  siteId: number
-  siteName: string
-  companyName: string
-  ownerId: number
-  ownerName: string
-  absorberMass: number | null
-  hostFrequencyHz: number | null
-  reduction: number | null
-  passes: boolean | null
-  updatedAt: string
-}
+export const SizingListItemSchema = z.object({
+  id: z.number().int(),
+  title: z.string(),
+  state: z.enum(SIZING_STATES),
+  revision: z.number().int(),
+  siteId: z.number().int(),
+  siteName: z.string(),
+  companyName: z.string(),
+  ownerId: z.number().int(),
+  ownerName: z.string(),
+  /** kg */
+  absorberMass: z.number().nullable(),
+  hostFrequencyHz: z.number().nullable(),
+  reduction: z.number().nullable(),
+  passes: z.boolean().nullable(),
+  updatedAt: z.string(),
+})
+export type SizingListItem = z.infer<typeof SizingListItemSchema>
+
+/**
+ * The engine's evaluation of a sizing as stored (shared/sizing/evaluate-sizing): an object here,
+ * typed in full by the engine's own types.
+ */
+export const SizingEvaluationSchema = z.custom<SizingEvaluation>(
+  (v) => typeof v === 'object' && v !== null && 'result' in v,
+  'an evaluation of the sizing',
+)
+
+/** A sizing as the server stores it: the input, its authoritative evaluation and summary. */
+export const SizingViewSchema = z.object({
+  id: z.number().int(),
+  siteId: z.number().int(),
+  modelId: z.number().int(),
+  ownerId: z.number().int(),
+  ownerName: z.string(),
+  title: z.string(),
+  state: z.enum(SIZING_STATES),
+  currentRevision: z.number().int(),
+  /** the revision shown (the current one unless another was asked for) */
+  revision: z.number().int(),
+  submittedAt: z.string().nullable(),
+  handoverNote: z.string(),
+  acknowledgementId: z.number().int().nullable(),
+  updatedAt: z.string(),
+  input: SizingInputSchema,
+  evaluation: SizingEvaluationSchema,
+  summary: SizingSummarySchema.omit({
+    id: true,
+    revision: true,
+    state: true,
+    submittedAt: true,
+    handoverNote: true,
+    ownerName: true,
+  }),
+  /** the server's checks of this revision against its limit and the active catalogue */
+  designChecks: z.array(DesignCheckSchema),
+  /** the failed checks accepted at the current handover, if any */
+  acknowledgement: DesignAcknowledgementSchema.nullable(),
+})
+export type SizingView = z.infer<typeof SizingViewSchema>

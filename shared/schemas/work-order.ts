@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import type { DesignAcknowledgement } from './design-checks'
+import { DesignAcknowledgementSchema } from './design-checks'
 
 /** The build flow of a unit, in order; every step is recorded with who and when. */
 export const WORK_ORDER_STATES = ['queued', 'in-build', 'tuning', 'ready', 'shipped'] as const
@@ -24,28 +24,76 @@ export const TuningRecordInputSchema = z.object({
 export type TuningRecordInput = z.infer<typeof TuningRecordInputSchema>
 
 /** What production builds: copied when the quote is paid and never changed afterwards. */
-export interface BuildSpecification {
-  quoteReference: string
-  companyName: string
-  siteName: string
-  unitCode: string
-  unitDescription: string
-  quantity: number
-  orientation: 'vertical' | 'horizontal'
+export const BuildSpecificationSchema = z.object({
+  quoteReference: z.string(),
+  companyName: z.string(),
+  siteName: z.string(),
+  unitCode: z.string(),
+  unitDescription: z.string(),
+  quantity: z.number(),
+  orientation: z.enum(['vertical', 'horizontal']),
   /** kg, as built (rounded up to whole mass plates) */
-  movingMass: number
-  massPlates: number | null
+  movingMass: z.number(),
+  massPlates: z.number().nullable(),
   /** N/m */
-  springRate: number
+  springRate: z.number(),
   /** N·s/m */
-  damperCoefficient: number
-  dampingRatio: number
-  targetFrequencyHz: number
+  damperCoefficient: z.number(),
+  dampingRatio: z.number(),
+  targetFrequencyHz: z.number(),
   /** ± fraction */
-  frequencyTolerance: number
-  options: string[]
+  frequencyTolerance: z.number(),
+  options: z.array(z.string()),
+  /** the design load in words, its kind and amplitude; absent on older work orders */
+  designLoad: z.string().optional(),
+  /** m, the absorber's peak stroke at the design load (for the end stops); absent on older ones */
+  stroke: z.number().optional(),
+  /** m, the stroke limit the sizing was made to, or null */
+  strokeLimit: z.number().nullable().optional(),
   /** the failed design checks the sizing was handed over with; absent on older work orders */
-  designAcknowledgement?: DesignAcknowledgement | null
+  designAcknowledgement: DesignAcknowledgementSchema.nullable().optional(),
   /** sales' confirmation of those checks when the quote was sent */
-  designConfirmation?: { at: string; byName: string } | null
-}
+  designConfirmation: z.object({ at: z.string(), byName: z.string() }).nullable().optional(),
+})
+export type BuildSpecification = z.infer<typeof BuildSpecificationSchema>
+
+/** A work order in the production queue. */
+export const WorkOrderRowSchema = z.object({
+  id: z.number().int(),
+  orderId: z.number().int(),
+  quoteId: z.number().int(),
+  companyId: z.number().int(),
+  state: WorkOrderStateSchema,
+  dueDate: z.string(),
+  specification: BuildSpecificationSchema,
+  specHash: z.string(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+})
+export type WorkOrderRow = z.infer<typeof WorkOrderRowSchema>
+
+/** A state change or a tuning measurement of a work order, with who and when. */
+export const WorkOrderEventSchema = z.object({
+  id: z.number().int(),
+  workOrderId: z.number().int(),
+  kind: z.enum(['state', 'tuning']),
+  fromState: z.string().nullable(),
+  toState: z.string().nullable(),
+  /** Hz */
+  measuredHz: z.number().nullable(),
+  dampingRatio: z.number().nullable(),
+  passes: z.boolean().nullable(),
+  actorId: z.number().int().nullable(),
+  actorName: z.string().nullable(),
+  at: z.string(),
+  note: z.string(),
+})
+export type WorkOrderEvent = z.infer<typeof WorkOrderEventSchema>
+
+/** One work order with its number, latest tuning and history. */
+export const WorkOrderSchema = WorkOrderRowSchema.extend({
+  number: z.string(),
+  latestTuning: WorkOrderEventSchema.omit({ actorName: true }).nullable(),
+  events: z.array(WorkOrderEventSchema),
+})
+export type WorkOrder = z.infer<typeof WorkOrderSchema>

@@ -1,11 +1,11 @@
-import type { CurrentUser, SignIn } from '@shared/schemas/auth'
+import type { Notice, Session, SignIn } from '@shared/schemas/auth'
 import { api } from './client'
 
 export const authApi = {
-  me: () => api.get<{ user: CurrentUser }>('/api/auth/me'),
-  signIn: (body: SignIn) => api.post<{ user: CurrentUser }>('/api/auth/sign-in', body),
+  me: () => api.get<Session>('/api/auth/me'),
+  signIn: (body: SignIn) => api.post<Session>('/api/auth/sign-in', body),
   signOut: () => api.post<void>('/api/auth/sign-out'),
   setPassword: (token: string, password: string) =>
     api.post<void>('/api/auth/password', { token, password }),
-  requestReset: (email: string) => api.post<{ message: string }>('/api/auth/reset', { email }),
+  requestReset: (email: string) => api.post<Notice>('/api/auth/reset', { email }),
 }

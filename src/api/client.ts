@@ -36,10 +36,23 @@ function readable(message: string, details: unknown): string {
   return `${pathWords(d.path)}: ${peopleWords(d.message ?? message)}`
 }
 
+/** "?a=1&b=x" from the defined, non-empty fields of a query object. */
+export function queryString(q: Record<string, string | number | undefined>) {
+  const p = new URLSearchParams()
+  for (const [k, v] of Object.entries(q)) if (v !== undefined && v !== '') p.set(k, String(v))
+  const s = p.toString()
+  return s ? `?${s}` : ''
+}
+
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE'
 
 /** One typed fetch: JSON in, JSON out, the session rides in its HttpOnly cookie. */
-export async function request<T>(method: Method, path: string, body?: unknown): Promise<T> {
+export async function request<T>(
+  method: Method,
+  path: string,
+  body?: unknown,
+  onHeaders?: (h: Headers) => void,
+): Promise<T> {
   let res: Response
   try {
     res = await fetch(path, {
@@ -54,6 +67,7 @@ export async function request<T>(method: Method, path: string, body?: unknown): 
   } catch {
     throw new ApiError(0, 'offline', 'No connection to the server.')
   }
+  onHeaders?.(res.headers)
   if (res.status === 204) return undefined as T
   const data: unknown = await res.json().catch(() => null)
   if (!res.ok) {
@@ -70,8 +84,22 @@ export async function request<T>(method: Method, path: string, body?: unknown): 
   return data as T
 }
 
+/** One page of a list and the total matching its filters (the X-Total-Count header). */
+export interface Page<T> {
+  items: T[]
+  total: number
+}
+
 export const api = {
   get: <T>(path: string) => request<T>('GET', path),
+  async page<T>(path: string): Promise<Page<T>> {
+    let total: number | null = null
+    const items = await request<T[]>('GET', path, undefined, (h) => {
+      const n = Number(h.get('x-total-count') ?? NaN)
+      total = Number.isFinite(n) ? n : null
+    })
+    return { items, total: total ?? items.length }
+  },
   post: <T>(path: string, body?: unknown) => request<T>('POST', path, body ?? {}),
   put: <T>(path: string, body: unknown) => request<T>('PUT', path, body),
   patch: <T>(path: string, body: unknown) => request<T>('PATCH', path, body),

@@ -1,6 +1,6 @@
 import type { HostModel } from '@shared/schemas/host-model'
-import type { IdentifiedPeak } from '@shared/measurements'
 import type {
+  AddedPeak,
   CalibrateInput,
   MeasurementRecord,
   MeasurementRecordSummary,
@@ -10,6 +10,7 @@ import { api } from './client'
 export interface RecordUploadFields {
   sampleRateHz?: number
   kind?: 'decay' | 'ambient'
+  timeUnit?: 's' | 'ms'
   modelId?: number
   nodeId?: string
 }
@@ -25,9 +26,7 @@ export const measurementsApi = {
   },
   remove: (id: number) => api.delete<void>(`/api/records/${id}`),
   addPeak: (id: number, frequencyHz: number) =>
-    api.post<{ peak: IdentifiedPeak; record: MeasurementRecord }>(`/api/records/${id}/peaks`, {
-      frequencyHz,
-    }),
+    api.post<AddedPeak>(`/api/records/${id}/peaks`, { frequencyHz }),
   dropPeak: (id: number, index: number) =>
     api.delete<MeasurementRecord>(`/api/records/${id}/peaks/${index}`),
   calibrate: (modelId: number, body: CalibrateInput) =>

@@ -1,31 +1,18 @@
-import type { RefundInfo } from '@shared/schemas/payment'
+import type { CheckoutAnswer, OrderInfo, QuoteOrder, RefundInfo } from '@shared/schemas/payment'
 import { api } from './client'
 
-export interface OrderInfo {
-  id: number
-  number: string
-  quoteId: number
-  amount: number
-  currency: string
-  status: string
-  paidAt: string
-  /** production's progress: queued, in-build, tuning, ready, shipped */
-  workOrderState?: string | null
-}
+export type { OrderInfo } from '@shared/schemas/payment'
 
 export const paymentsApi = {
   /**
    * The server prices the session from the stored quote; no amount is sent. A paid quote
    * answers with no url.
    */
-  checkout: (quoteId: number) =>
-    api.post<{ sessionId: string | null; url: string | null; state: string }>(
-      `/api/quotes/${quoteId}/checkout`,
-    ),
-  order: (quoteId: number) => api.get<{ order: OrderInfo | null }>(`/api/quotes/${quoteId}/order`),
+  checkout: (quoteId: number) => api.post<CheckoutAnswer>(`/api/quotes/${quoteId}/checkout`),
+  order: (quoteId: number) => api.get<QuoteOrder>(`/api/quotes/${quoteId}/order`),
   /** Back from the payment page: the server asks the payment service about the session. */
   returned: (quoteId: number, sessionId: string) =>
-    api.post<{ order: OrderInfo | null }>(`/api/quotes/${quoteId}/payment-return`, { sessionId }),
+    api.post<QuoteOrder>(`/api/quotes/${quoteId}/payment-return`, { sessionId }),
   refunds: () => api.get<RefundInfo[]>('/api/payments/refunds'),
   orders: () => api.get<OrderInfo[]>('/api/orders'),
 }

@@ -1,32 +1,7 @@
-import type { BuildSpecification, WorkOrderState } from '@shared/schemas/work-order'
+import type { WorkOrder, WorkOrderRow, WorkOrderState } from '@shared/schemas/work-order'
 import { api } from './client'
 
-export interface WorkOrderRow {
-  id: number
-  quoteId: number
-  state: WorkOrderState
-  dueDate: string
-  specification: BuildSpecification
-  specHash: string
-}
-
-export interface WorkOrderEvent {
-  id: number
-  kind: 'state' | 'tuning'
-  fromState: string | null
-  toState: string | null
-  measuredHz: number | null
-  passes: boolean | null
-  actorName: string | null
-  at: string
-  note: string
-}
-
-export interface WorkOrder extends WorkOrderRow {
-  number: string
-  latestTuning: { measuredHz: number; passes: boolean } | null
-  events: WorkOrderEvent[]
-}
+export type { WorkOrder, WorkOrderEvent, WorkOrderRow } from '@shared/schemas/work-order'
 
 export const productionApi = {
   list: () => api.get<WorkOrderRow[]>('/api/work-orders'),

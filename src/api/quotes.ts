@@ -7,17 +7,12 @@ import type {
   QuoteSummary,
 } from '@shared/schemas/quote'
 import type { SizingSummary } from '@shared/schemas/sizing'
-import { api } from './client'
-
-function query(q: QuoteListQuery) {
-  const p = new URLSearchParams()
-  for (const [k, v] of Object.entries(q)) if (v !== undefined && v !== '') p.set(k, String(v))
-  const s = p.toString()
-  return s ? `?${s}` : ''
-}
+import { api, queryString } from './client'
 
 export const quotesApi = {
-  list: (q: QuoteListQuery = {}) => api.get<QuoteSummary[]>(`/api/quotes${query(q)}`),
+  list: (q: QuoteListQuery = {}) => api.get<QuoteSummary[]>(`/api/quotes${queryString(q)}`),
+  /** one page, newest first, with the total matching the filters */
+  page: (q: QuoteListQuery) => api.page<QuoteSummary>(`/api/quotes${queryString(q)}`),
   get: (id: number) => api.get<Quote>(`/api/quotes/${id}`),
   create: (body: QuoteCreate) => api.post<Quote>('/api/quotes', body),
   update: (id: number, body: QuoteDraft) => api.put<Quote>(`/api/quotes/${id}`, body),

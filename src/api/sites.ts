@@ -1,14 +1,6 @@
 import type { Site, SiteInput, SiteListQuery } from '@shared/schemas/site'
 import type { Company } from '@shared/schemas/auth'
-import { api } from './client'
-
-/** "?a=1&b=x" from the defined, non-empty fields of a query object. */
-export function queryString(q: Record<string, string | number | undefined>) {
-  const p = new URLSearchParams()
-  for (const [k, v] of Object.entries(q)) if (v !== undefined && v !== '') p.set(k, String(v))
-  const s = p.toString()
-  return s ? `?${s}` : ''
-}
+import { api, queryString } from './client'
 
 export const sitesApi = {
   list: (q: Partial<SiteListQuery> = {}) => api.get<Site[]>(`/api/sites${queryString(q)}`),

@@ -2,46 +2,15 @@ import type {
   SizingInput,
   SizingListItem,
   SizingListQuery,
-  SizingState,
-  SizingSummary,
+  SizingSubmit,
+  SizingView,
 } from '@shared/schemas/sizing'
-import type { SizingEvaluation } from '@shared/sizing/evaluate-sizing'
-import type {
-  AcknowledgeInput,
-  DesignAcknowledgement,
-  DesignCheck,
-} from '@shared/schemas/design-checks'
-import { api } from './client'
-import { queryString } from './sites'
+import { api, queryString } from './client'
 
-/** A sizing as the server stores it: the input, its authoritative evaluation and summary. */
-export interface SizingView {
-  id: number
-  siteId: number
-  modelId: number
-  ownerId: number
-  ownerName: string
-  title: string
-  state: SizingState
-  currentRevision: number
-  revision: number
-  submittedAt: string | null
-  handoverNote: string
-  updatedAt: string
-  input: SizingInput
-  evaluation: SizingEvaluation
-  summary: SizingSummary
-  /** the server's checks of this revision against its limit and the active catalogue */
-  designChecks: DesignCheck[]
-  /** the failed checks accepted at the current handover, if any */
-  acknowledgement: DesignAcknowledgement | null
-}
+export type { SizingView } from '@shared/schemas/sizing'
 
 /** What the handover step sends: the note for sales and, for a failing design, the reason. */
-export interface HandoverRequest {
-  note: string
-  acknowledge?: AcknowledgeInput
-}
+export type HandoverRequest = Omit<SizingSubmit, 'revision'>
 
 export const sizingsApi = {
   list: (q: Partial<SizingListQuery> = {}) =>

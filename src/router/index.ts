@@ -1,53 +1,23 @@
 import { createRouter, createWebHistory, type RouteRecordRaw } from 'vue-router'
-import type { Role } from '@shared/schemas/auth'
+import { isPublicPage, mayOpen, type PageName, type PublicPage } from '@shared/access'
 import { useAuthStore } from '@/stores/auth'
-import { STEP_PATTERN } from '@/views/sizing-steps'
+import { STEP_PATTERN } from '@/features/sizing/steps'
 
-export type RouteName =
-  | 'home'
-  | 'sign-in'
-  | 'set-password'
-  | 'forgot-password'
-  | 'admin-users'
-  | 'admin-refunds'
-  | 'admin-tax'
-  | 'admin-audit'
-  | 'not-found'
-  | 'sites'
-  | 'site'
-  | 'site-records'
-  | 'sizings'
-  | 'sizing-new'
-  | 'sizing'
-  | 'portal'
-  | 'portal-quote'
-  | 'portal-payment-done'
-  | 'work-orders'
-  | 'work-order'
-  | 'quotes'
-  | 'quote-new'
-  | 'quote'
-  | 'quote-edit'
-  | 'catalogue'
-  | 'customers'
-  | 'customer'
+/** Every page's name: behind sign-in (roles in `shared/access.ts`) or public. */
+export type RouteName = PageName | PublicPage
 
 declare module 'vue-router' {
   interface RouteMeta {
-    /** Roles that may open the view; absent means anyone, signed in or not. */
-    roles?: readonly Role[]
     title?: string
   }
 }
-
-const ALL: readonly Role[] = ['engineer', 'sales', 'customer', 'production', 'admin']
 
 const routes: (RouteRecordRaw & { name: RouteName })[] = [
   {
     path: '/',
     name: 'home',
     component: () => import('@/views/HomeView.vue'),
-    meta: { roles: ALL, title: 'Overview' },
+    meta: { title: 'Overview' },
   },
   {
     path: '/sign-in',
@@ -71,137 +41,137 @@ const routes: (RouteRecordRaw & { name: RouteName })[] = [
     path: '/admin/users',
     name: 'admin-users',
     component: () => import('@/views/AdminUsersView.vue'),
-    meta: { roles: ['admin'], title: 'Users' },
+    meta: { title: 'Users' },
   },
   {
     path: '/admin/refunds',
     name: 'admin-refunds',
     component: () => import('@/views/PaymentRefundsView.vue'),
-    meta: { roles: ['admin'], title: 'Second payments' },
+    meta: { title: 'Second payments' },
   },
   {
     path: '/admin/tax',
     name: 'admin-tax',
     component: () => import('@/views/AdminTaxView.vue'),
-    meta: { roles: ['admin'], title: 'Tax rates' },
+    meta: { title: 'Tax rates' },
   },
   {
     path: '/admin/audit',
     name: 'admin-audit',
     component: () => import('@/views/AdminAuditView.vue'),
-    meta: { roles: ['admin'], title: 'Audit trail' },
+    meta: { title: 'Audit trail' },
   },
   {
     path: '/portal',
     name: 'portal',
     component: () => import('@/views/PortalView.vue'),
-    meta: { roles: ['customer'], title: 'Your quotes' },
+    meta: { title: 'Your quotes' },
   },
   {
     path: '/portal/quotes/:id',
     name: 'portal-quote',
     component: () => import('@/views/PortalQuoteView.vue'),
-    meta: { roles: ['customer'], title: 'Quote' },
+    meta: { title: 'Quote' },
   },
   {
     path: '/portal/payment/done',
     name: 'portal-payment-done',
     component: () => import('@/views/PaymentDoneView.vue'),
-    meta: { roles: ['customer'], title: 'Payment' },
+    meta: { title: 'Payment' },
   },
   {
     path: '/sites',
     name: 'sites',
     component: () => import('@/views/SitesView.vue'),
-    meta: { roles: ['engineer', 'sales', 'admin'], title: 'Sites' },
+    meta: { title: 'Sites' },
   },
   {
     path: '/sites/:id(\\d+)',
     name: 'site',
     component: () => import('@/views/SiteView.vue'),
     props: true,
-    meta: { roles: ['engineer', 'sales', 'admin'], title: 'Site' },
+    meta: { title: 'Site' },
   },
   {
     path: '/sites/:id(\\d+)/records',
     name: 'site-records',
     component: () => import('@/views/SiteRecordsView.vue'),
     props: true,
-    meta: { roles: ['engineer', 'sales', 'admin'], title: 'Measurements' },
+    meta: { title: 'Measurements' },
   },
   {
     path: '/sizings',
     name: 'sizings',
-    component: () => import('@/views/SizingsView.vue'),
-    meta: { roles: ['engineer', 'sales', 'admin'], title: 'Sizings' },
+    component: () => import('@/features/sizing/SizingsView.vue'),
+    meta: { title: 'Sizings' },
   },
   {
     path: `/sizings/new/${STEP_PATTERN}`,
     name: 'sizing-new',
-    component: () => import('@/views/SizingWorkspaceView.vue'),
+    component: () => import('@/features/sizing/SizingWorkspaceView.vue'),
     props: true,
-    meta: { roles: ['engineer', 'admin'], title: 'New sizing' },
+    meta: { title: 'New sizing' },
   },
   {
     path: `/sizings/:id(\\d+)/${STEP_PATTERN}`,
     name: 'sizing',
-    component: () => import('@/views/SizingWorkspaceView.vue'),
+    component: () => import('@/features/sizing/SizingWorkspaceView.vue'),
     props: true,
-    meta: { roles: ['engineer', 'sales', 'admin'], title: 'Sizing' },
+    meta: { title: 'Sizing' },
   },
   {
     path: '/work-orders',
     name: 'work-orders',
     component: () => import('@/views/WorkOrdersView.vue'),
-    meta: { roles: ['production', 'admin'], title: 'Work orders' },
+    meta: { title: 'Work orders' },
   },
   {
     path: '/work-orders/:id',
     name: 'work-order',
     component: () => import('@/views/WorkOrderView.vue'),
-    meta: { roles: ['production', 'admin'], title: 'Work order' },
+    meta: { title: 'Work order' },
   },
   {
     path: '/quotes',
     name: 'quotes',
     component: () => import('@/views/QuoteListView.vue'),
-    meta: { roles: ['sales', 'admin'], title: 'Quotes' },
+    meta: { title: 'Quotes' },
   },
   {
     path: '/quotes/new',
     name: 'quote-new',
     component: () => import('@/views/QuoteBuilderView.vue'),
-    meta: { roles: ['sales', 'admin'], title: 'New quote' },
+    meta: { title: 'New quote' },
   },
   {
     path: '/quotes/:id(\\d+)',
     name: 'quote',
     component: () => import('@/views/QuoteDetailView.vue'),
-    meta: { roles: ['sales', 'admin'], title: 'Quote' },
+    meta: { title: 'Quote' },
   },
   {
     path: '/quotes/:id(\\d+)/edit',
     name: 'quote-edit',
     component: () => import('@/views/QuoteBuilderView.vue'),
-    meta: { roles: ['sales', 'admin'], title: 'Change quote' },
+    meta: { title: 'Change quote' },
   },
   {
     path: '/admin/catalogue',
     name: 'catalogue',
     component: () => import('@/views/CatalogueListView.vue'),
-    meta: { roles: ['admin'], title: 'Catalogue' },
+    meta: { title: 'Catalogue' },
   },
   {
     path: '/customers',
     name: 'customers',
     component: () => import('@/views/CustomerListView.vue'),
-    meta: { roles: ['sales', 'admin'], title: 'Customers' },
+    meta: { title: 'Customers' },
   },
   {
     path: '/customers/:id(\\d+)',
     name: 'customer',
     component: () => import('@/views/CustomerDetailView.vue'),
-    meta: { roles: ['sales', 'admin'], title: 'Customer' },
+    meta: { title: 'Customer' },
   },
   {
     path: '/:rest(.*)*',
@@ -226,10 +196,9 @@ export function go(
 router.beforeEach(async (to) => {
   const auth = useAuthStore()
   await auth.restore()
-  const roles = to.meta.roles
-  if (!roles) return true
+  if (typeof to.name === 'string' && isPublicPage(to.name)) return true
   if (!auth.user) return { name: 'sign-in', query: { next: to.fullPath } }
-  if (!roles.includes(auth.user.role))
+  if (!mayOpen(auth.user.role, String(to.name)))
     return { name: 'not-found', params: { rest: to.path.slice(1).split('/') } }
   return true
 })

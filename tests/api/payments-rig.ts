@@ -78,8 +78,8 @@ export async function makePaymentRig(
   }
 
   /** A sent quote accepted by a customer user of its company. */
-  async function acceptedQuote() {
-    const { quote, company } = await sentQuote()
+  async function acceptedQuote(sizingFields: Partial<SizingSummary> = {}) {
+    const { quote, company } = await sentQuote(sizingFields)
     const customer = await signedIn(t, 'customer', { companyId: company.id })
     await customer.agent
       .post(`/api/quotes/${quote.id}/accept`)

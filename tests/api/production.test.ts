@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { mailTo, signedIn } from '../helpers/factories'
 import { fetchPdf, pdfText } from '../helpers/pdf'
+import type { SizingSummary } from '../../shared/schemas/sizing'
 import { makePaymentRig, type PaymentRig } from './payments-rig'
 
 let rig: PaymentRig
@@ -10,8 +11,8 @@ beforeAll(async () => {
 afterAll(() => rig?.close())
 
 /** A paid quote and its work order, through the real checkout and webhook. */
-async function paidWorkOrder() {
-  const { quote, customer } = await rig.acceptedQuote()
+async function paidWorkOrder(sizingFields: Partial<SizingSummary> = {}) {
+  const { quote, customer } = await rig.acceptedQuote(sizingFields)
   const { body } = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)
   await rig.payOnPage(body.url)
   const { agent } = await signedIn(rig.t, 'production')
@@ -134,5 +135,14 @@ describe('work orders', () => {
     expect(text).toContain(wo.number)
     expect(text).toContain('6.75 Hz')
     expect(text).toMatch(/licensed engineer/)
+  })
+
+  it('states the design load and the stroke against its limit on the work order and its PDF', async () => {
+    const load = 'Rotating machine at node-3: running speed 1480 rpm (24.7 Hz), unbalance 0.02 kg·m'
+    const { agent, wo } = await paidWorkOrder({ load, stroke: 0.0124, strokeLimit: 0.025 })
+    expect(wo.specification).toMatchObject({ designLoad: load, stroke: 0.0124, strokeLimit: 0.025 })
+    const text = await pdfText((await fetchPdf(agent, `/api/work-orders/${wo.id}/pdf`)).body)
+    expect(text.replace(/\s+/g, ' ')).toContain(`Design load ${load}`)
+    expect(text).toContain('Stroke 12.4 mm at the design load (limit 25 mm)')
   })
 })

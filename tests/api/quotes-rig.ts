@@ -1,9 +1,9 @@
 import { randomBytes } from 'node:crypto'
 import { pino } from 'pino'
-import { buildServices, createApp } from '../../server/app'
+import { createApp } from '../../server/app'
 import { smtpMailer } from '../../server/integrations/mail'
-import { closePdfRenderers } from '../../server/integrations/pdf'
-import { memorySizingSource } from '../../server/modules/quotes/sizing-source'
+import { closePdfRenderers } from '../../server/integrations/pdf/renderer'
+import { memorySizingSource } from '../helpers/memory-sizing-source'
 import type { SizingPool } from '../../server/workers/pool'
 import type { SizingSummary } from '../../shared/schemas/sizing'
 import { seedCatalogue } from '../../seed/seed-catalogue'
@@ -12,6 +12,8 @@ import { makeTestApp, type TestApp } from '../helpers/app'
 /** Quotes never solve a sizing; a call here would be a wiring mistake worth a loud failure. */
 export const noSolving: SizingPool = {
   run: () => Promise.reject(new Error('the quotes tests do not solve sizings')),
+  identify: () => Promise.reject(new Error('the quotes tests do not read records')),
+  measure: () => Promise.reject(new Error('the quotes tests do not identify records')),
   close: async () => undefined,
 }
 
@@ -43,9 +45,11 @@ export async function makeQuoteApp(
     now: () => new Date(Date.now() + t.clock.offsetMs),
     pool: noSolving,
     sizingSource: sizings,
+    checkResponses: true,
   }
-  t.services = buildServices(deps)
-  t.app = createApp(deps, t.services)
+  const rebuilt = createApp(deps)
+  t.services = rebuilt.services
+  t.app = rebuilt.app
   await seedCatalogue(t.services)
   return { t, sizings }
 }

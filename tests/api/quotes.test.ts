@@ -446,4 +446,26 @@ describe('who may see and do what with quotes', () => {
     expect(bad.status).toBe(400)
     expect(bad.body.error.details[0].path).toBe('query.state')
   })
+
+  it('pages the list newest first with the total in X-Total-Count, each row as the quote shows it', async () => {
+    const a = await draftFor()
+    const body = { ...a.body, sizingId: a.sizing.id }
+    const b = await sales.post('/api/quotes').send(body)
+    const c = await sales.post('/api/quotes').send(body)
+    const ids = [c.body.id, b.body.id, a.res.body.id]
+    const first = await sales.get('/api/quotes').query({ companyId: a.company.id, limit: 2 })
+    expect(first.status).toBe(200)
+    expect(first.headers['x-total-count']).toBe('3')
+    expect(first.body.map((q: { id: number }) => q.id)).toEqual(ids.slice(0, 2))
+    const rest = await sales
+      .get('/api/quotes')
+      .query({ companyId: a.company.id, limit: 2, offset: 2 })
+    expect(rest.body.map((q: { id: number }) => q.id)).toEqual(ids.slice(2))
+    const full = (await sales.get(`/api/quotes/${a.res.body.id}`)).body
+    const row = rest.body[0]
+    for (const key of Object.keys(row)) expect(row[key], key).toEqual(full[key])
+    const tooMany = await sales.get('/api/quotes').query({ limit: 201 })
+    expect(tooMany.status).toBe(400)
+    expect(tooMany.body.error.details[0].path).toBe('query.limit')
+  })
 })

@@ -4,6 +4,7 @@ import request from 'supertest'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { makeTestApp, type TestApp } from '../helpers/app'
 import { makeUser, mailTo, PASSWORD, signedIn } from '../helpers/factories'
+import { seeded } from '../helpers/random'
 
 let t: TestApp
 beforeAll(async () => {
@@ -42,6 +43,7 @@ function postFrom(from: string, port: number, path: string, forwarded: string, b
 }
 
 let nextAddress = 1
+const pick = seeded(7121)
 /** A client address no other test uses (the counters live in the shared database). */
 const freshAddress = () => `203.0.113.${nextAddress++}`
 
@@ -121,7 +123,7 @@ describe('sign-in and reset limits', () => {
     await new Promise((r) => server.once('listening', r))
     try {
       const port = (server.address() as AddressInfo).port
-      const from = `127.${Math.floor(Math.random() * 200) + 20}.${nextAddress++}.9`
+      const from = `127.${Math.floor(pick() * 200) + 20}.${nextAddress++}.9`
       const statuses: number[] = []
       for (let i = 0; i < 5; i++)
         statuses.push(

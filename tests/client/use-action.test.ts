@@ -1,4 +1,4 @@
-import { describe, expect, it } from 'vitest'
+import { describe, expect, it, vi } from 'vitest'
 import { defineComponent, h } from 'vue'
 import { mount } from '@vue/test-utils'
 import { createPinia } from 'pinia'
@@ -6,7 +6,7 @@ import { createMemoryHistory, createRouter } from 'vue-router'
 import PrimeVue from 'primevue/config'
 import ToastService from 'primevue/toastservice'
 import { ApiError } from '../../src/api/client'
-import { useAction } from '../../src/composables/useAction'
+import { useAction, useLoad } from '../../src/composables/useAction'
 import { provideFormErrors, type FormErrors } from '../../src/forms/form-errors'
 
 /** Runs `setup` inside a component with the app's plugins and hands back what it returns. */
@@ -80,5 +80,51 @@ describe('the one way to run what a button asks the server for', () => {
     await action.run()
     expect(router.currentRoute.value.name).toBe('sign-in')
     expect(router.currentRoute.value.query.next).toBe('/?x=1')
+  })
+
+  it('keeps only the latest answer when a list is reloaded while an earlier load is running', async () => {
+    const answers: ((v: string) => void)[] = []
+    const { value: load } = withApp(() =>
+      useAction(() => new Promise<string>((r) => answers.push(r)), { latest: true }),
+    )
+    const older = load.run()
+    const newer = load.run()
+    expect(answers).toHaveLength(2)
+    answers[1]!('sites matching "bridge"')
+    answers[0]!('all sites')
+    expect(await newer).toBe('sites matching "bridge"')
+    expect(await older).toBeUndefined()
+    expect(load.pending.value).toBe(false)
+  })
+
+  it('shows a failed load as an error instead of an empty list', async () => {
+    const { value: load } = withApp(() =>
+      useLoad(
+        async (): Promise<string[]> => {
+          throw new ApiError(503, 'database-unavailable', 'The database is not answering.')
+        },
+        ['kept from before'],
+        'Could not load sites',
+      ),
+    )
+    await load.load()
+    expect(load.data.value).toEqual(['kept from before'])
+    expect(load.error.value).toBe('The database is not answering.')
+  })
+
+  it('stays pending for the settle time after an answer, so a double tap moves once', async () => {
+    vi.useFakeTimers()
+    try {
+      let calls = 0
+      const { value: move } = withApp(() => useAction(async () => void calls++, { settleMs: 600 }))
+      await move.run()
+      await move.run()
+      expect(calls).toBe(1)
+      await vi.advanceTimersByTimeAsync(600)
+      await move.run()
+      expect(calls).toBe(2)
+    } finally {
+      vi.useRealTimers()
+    }
   })
 })

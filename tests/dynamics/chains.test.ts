@@ -24,7 +24,8 @@ function shapeError(phi: Float64Array, n: number, r: number, s: (j: number) => n
 
 describe('chains of equal masses match the textbook eigenvalues and shapes', () => {
   // Source: fixed–fixed chain ω_r² = (4k/m) sin²(rπ/(2(n+1))), φ_j = sin(j r π/(n+1))
-  // (e.g. Meirovitch, Elements of Vibration Analysis; engineering-references.md "Chains").
+  // (e.g. Meirovitch, Elements of Vibration Analysis;
+  // docs/engineering/host-model.md#chain-check-values).
   it('a fixed–fixed chain of n = 1…50 masses has ω_r² = (4k/m) sin²(rπ/(2(n+1))) to 1e-9', () => {
     for (let n = 1; n <= 50; n++) {
       const modes = modesOf(n, true)
@@ -40,7 +41,7 @@ describe('chains of equal masses match the textbook eigenvalues and shapes', () 
   })
 
   // Source: fixed–free chain ω_r² = (4k/m) sin²((2r−1)π/(2(2n+1))), φ_j = sin(j(2r−1)π/(2n+1))
-  // (same textbook result; engineering-references.md "Chains").
+  // (same textbook result; docs/engineering/host-model.md#chain-check-values).
   it('a fixed–free chain of n = 1…50 masses has ω_r² = (4k/m) sin²((2r−1)π/(2(2n+1))) to 1e-9', () => {
     for (let n = 1; n <= 50; n++) {
       const modes = modesOf(n, false)
@@ -54,7 +55,7 @@ describe('chains of equal masses match the textbook eigenvalues and shapes', () 
     }
   })
 
-  // Source: engineering-references.md "Chains", tabulated ω²/(k/m).
+  // Source: docs/engineering/host-model.md#chain-check-values, tabulated ω²/(k/m).
   it('reproduces the tabulated ω²/(k/m) of short chains', () => {
     const ratios = (n: number, both: boolean): number[] =>
       Array.from(modesOf(n, both).omega, (w) => (w * w * m) / k)

@@ -1,24 +1,12 @@
-import { execFile } from 'node:child_process'
 import { mkdtempSync, writeFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
-import { promisify } from 'node:util'
 import { describe, expect, it } from 'vitest'
+import { solve } from './cli-run'
 import { cliCases } from './cli-cases'
 import { invalidCases, validModel } from './invalid-models'
 
-const run = promisify(execFile)
 const dir = mkdtempSync(join(tmpdir(), 'quellnode-solve-'))
-
-async function solve(file: string): Promise<{ code: number; stdout: string; stderr: string }> {
-  try {
-    const r = await run('npx', ['tsx', 'server/scripts/solve.ts', file], { cwd: process.cwd() })
-    return { code: 0, stdout: r.stdout, stderr: r.stderr }
-  } catch (e) {
-    const x = e as { code: number; stdout: string; stderr: string }
-    return { code: x.code, stdout: x.stdout, stderr: x.stderr }
-  }
-}
 
 function write(name: string, text: string): string {
   const file = join(dir, name)

@@ -69,11 +69,12 @@ describe('load vectors and base motion through the rank-one path', () => {
 
 describe('base excitation of an undamped primary', () => {
   // Source: Warburton (EESD 10, 1982), harmonic base acceleration, relative displacement:
-  // f = √(1−μ/2)/(1+μ), ζ_a = √(3μ/(8(1+μ)(1−μ/2))), peak ≈ (1+μ)√(2/μ) (engineering-
-  // references.md, from memory, "computed to 5 digits"). Tolerances: the closed form comes from
-  // the fixed-point method, exact in f but approximate in ζ_a and the peak — as Den Hartog's is
-  // for force (0.02–0.15 % in the peak, up to 0.5 % in ζ_a against the exact H∞ optimum,
-  // engineering-references.md): so f to 0.05 %, ζ_a to 1 %, the peak to 0.2 %.
+  // f = √(1−μ/2)/(1+μ), ζ_a = √(3μ/(8(1+μ)(1−μ/2))), peak ≈ (1+μ)√(2/μ) (from memory,
+  // computed to 5 digits; docs/engineering/tuning.md#warburton-tunings). Tolerances: the closed
+  // form comes from the fixed-point method, exact in f but approximate in ζ_a and the peak — as
+  // Den Hartog's is for force (0.02–0.15 % in the peak, up to 0.5 % in ζ_a against the exact H∞
+  // optimum, docs/engineering/tuning.md#den-hartog-tuning): so f to 0.05 %, ζ_a to 1 %, the peak
+  // to 0.2 %.
   it('the optimiser reproduces the Warburton harmonic base-acceleration optimum', () => {
     for (const mu of MUS) {
       const model: ModelInput = {

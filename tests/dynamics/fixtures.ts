@@ -1,4 +1,7 @@
 import type { ModelInput } from '../../shared/schemas/model'
+import { seeded } from '../helpers/random'
+
+export { seeded }
 
 /** n equal masses m on equal springs k; both ends fixed (n+1 springs) or the far end free. */
 export function chainModel(n: number, m: number, k: number, bothEnds: boolean): ModelInput {
@@ -10,18 +13,6 @@ export function chainModel(n: number, m: number, k: number, bothEnds: boolean): 
     springs.push({ from: `m${n}`, to: 'end', stiffness: k })
   }
   return { nodes, springs }
-}
-
-/** Deterministic generator in [0, 1) (mulberry32) for reproducible random networks. */
-export function seeded(seed: number): () => number {
-  let a = seed >>> 0
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0
-    let t = a
-    t = Math.imul(t ^ (t >>> 15), t | 1)
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61)
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
-  }
 }
 
 /** A random connected network: a spanning chain from the support plus random extra springs. */

@@ -14,7 +14,8 @@ function compare(dashpots: boolean, seed: number): number {
 
 describe('the rank-one path equals the direct path', () => {
   // Source: Sherman & Morrison (1950) identity, exact for a rank-one change of the dynamic
-  // stiffness; checked against a direct complex solve of the n+1 system (design.md).
+  // stiffness; checked against a direct complex solve of the n+1 system
+  // (docs/engineering/response.md#absorber-attachment).
   it('agrees to 1e-9 on damped multi-node models with dashpots (non-classical damping)', () => {
     for (let seed = 1; seed <= 8; seed++)
       expect(compare(true, seed), `seed ${seed}`).toBeLessThan(1e-9)

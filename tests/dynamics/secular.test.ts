@@ -68,8 +68,8 @@ describe('natural frequencies with the absorber from the secular equation', () =
     }
   })
 
-  // Source: engineering-references.md worked example — node 3 of a 5-mass chain is a node of
-  // modes 2 and 4, which the absorber leaves unchanged.
+  // Source: docs/engineering/tuning.md#worked-example-five-masses — node 3 of a 5-mass chain is
+  // a node of modes 2 and 4, which the absorber leaves unchanged.
   it('keeps the host modes the absorber does not see, and finds only the roots inside a range', () => {
     const host = modes(chainModel(5, 1000, 1e6, true))
     const u = Float64Array.of(0, 0, 1, 0, 0)

@@ -64,7 +64,29 @@ describe('the sizing study reads the new choices', () => {
     expect(ev.checks.stroke).toBeLessThanOrEqual(0.01)
     expect(ev.result).toEqual(solveSizing(req))
     expect(describeLoad(i)).toBe(
-      'Rotating unbalance 0.05 kg·m at node-3 over running speeds 3.4–3.8 Hz',
+      'Rotating machine at node-3: running speeds 204–228 rpm (3.4–3.8 Hz), unbalance 0.05 kg·m',
+    )
+  })
+
+  // 1480 rpm = 1480/60 rev/s = 24.67 Hz (definition of the revolution)
+  it('states each load kind with its amplitude, a machine speed in rpm as well as Hz', () => {
+    const speed = { hz: 1480 / 60 }
+    expect(describeLoad(input({ unbalance: 0.02, speed }))).toBe(
+      'Rotating machine at node-3: running speed 1480 rpm (24.7 Hz), unbalance 0.02 kg·m',
+    )
+    expect(describeLoad(input({ unbalance: 0.02 }))).toBe('Rotating unbalance 0.02 kg·m at node-3')
+    expect(describeLoad(input({ loadKind: 'base', baseAcceleration: 0.4, speed }))).toBe(
+      'Support (base) acceleration 0.4 m/s², running speed 1480 rpm (24.7 Hz)',
+    )
+    expect(describeLoad(input({ loadKind: 'mode-shaped', forceAmplitude: 700 }))).toBe(
+      '700 N in total, shaped like mode 1',
+    )
+    const forces = [
+      { node: 'node-2', amplitude: 150 },
+      { node: 'node-4', amplitude: 150 },
+    ]
+    expect(describeLoad(input({ loadKind: 'forces', forces }))).toBe(
+      'Force vector 150 N at node-2, 150 N at node-4',
     )
   })
 

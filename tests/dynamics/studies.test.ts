@@ -12,8 +12,8 @@ import {
 import { unitOscillator } from './fixtures'
 
 describe('detuning robustness', () => {
-  // Source: engineering-references.md "Detuning (computed)": peak ÷ optimal peak (each as a
-  // dynamic amplification of its own host) with the host frequency off by −10, −5, +5, +10 %.
+  // Source: docs/engineering/tuning.md#detuning-robustness (computed): peak ÷ optimal peak (each
+  // as a dynamic amplification of its own host) with the host frequency off by −10, −5, +5, +10 %.
   const table: Record<string, number[]> = {
     '0.01': [4.63, 2.15, 2.01, 3.61],
     '0.02': [3.08, 1.72, 1.64, 2.54],
@@ -55,14 +55,14 @@ describe('mass-ratio sweep', () => {
     peaks.slice(1).forEach((p, i) => expect(p).toBeLessThan(peaks[i] ?? 0))
     const strokes = s.points.map((p) => p.maxStrokePerForce)
     strokes.slice(1).forEach((p, i) => expect(p).toBeLessThan(strokes[i] ?? 0))
-    // Same optimum as a single sizing at μ = 0.02 (engineering-references.md damped table: 8.569).
+    // The single sizing's optimum at μ = 0.02: 8.569 (docs/engineering/tuning.md#damped-primary).
     expect(s.points[2]?.peak).toBeCloseTo(8.569, 2)
     expect(s.peakWithout).toBeCloseTo(50.0, 1)
   })
 })
 
 describe('design values', () => {
-  // Source: δ = g/ω_a² ≈ 248.4/f² mm (engineering-references.md "Practical checks").
+  // Source: δ = g/ω_a² ≈ 248.4/f² mm (docs/engineering/tuning.md#design-values).
   it('static deflection of a vertical unit is g/ω_a²', () => {
     for (const [f, mm] of [
       [1, 248],
@@ -74,7 +74,8 @@ describe('design values', () => {
     }
   })
 
-  // Source: engineering-references.md Den Hartog table, max stroke / x_st at the optimum (computed).
+  // Source: docs/engineering/tuning.md#den-hartog-tuning, max stroke / x_st at the optimum
+  // (computed).
   it('reports the tabulated maximum stroke of an H∞-optimal absorber', () => {
     for (const [mu, stroke] of [
       [0.01, 104.3],

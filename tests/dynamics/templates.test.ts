@@ -37,7 +37,8 @@ describe('model templates', () => {
     expect(model.nodes.at(-1)).toMatchObject({ id: 'storey-2', label: 'roof' })
   })
 
-  // Source: fixed–fixed and fixed–free chain formulas (engineering-references.md "Chains").
+  // Source: fixed–fixed and fixed–free chain formulas
+  // (docs/engineering/host-model.md#chain-check-values).
   it('a span and a cantilever hit the requested first frequency', () => {
     expect(hz(spanModel(7, 14000, 2.1))[0]).toBeCloseTo(2.1, 10)
     expect(hz(cantileverModel(6, 900, 3.3))[0]).toBeCloseTo(3.3, 10)

@@ -16,7 +16,8 @@ function problemFor(zetaHost: number, mu: number) {
 
 describe('closed-form tunings', () => {
   // Source: Den Hartog, Mechanical Vibrations (1956): f = 1/(1+μ), ζ_a = √(3μ/(8(1+μ))) with ζ_a
-  // referred to the absorber's own frequency; table values from engineering-references.md.
+  // referred to the absorber's own frequency; table values in
+  // docs/engineering/tuning.md#den-hartog-tuning.
   it('den-hartog gives f = 1/(1+μ) and ζ = √(3μ/(8(1+μ))) on an undamped single-mode host', () => {
     const table = [
       [0.990099, 0.060933],
@@ -33,8 +34,9 @@ describe('closed-form tunings', () => {
     })
   })
 
-  // Source: Asami & Nishihara, J. Vib. Acoust. 124 (2002) — formula and values (from memory, as
-  // marked in engineering-references.md, there agreeing with a computed minimax to 6 digits).
+  // Source: Nishihara & Asami, J. Vib. Acoust. 124 (2002) 576–582 — formula and values (from memory, as
+  // marked in docs/engineering/tuning.md#exact-h-infinity-optimum, agreeing with a computed minimax
+  // to 6 digits).
   it('asami-nishihara reproduces the tabulated exact H∞ tuning', () => {
     const f = [0.990099, 0.980391, 0.952372, 0.909058]
     const z = [0.060962, 0.085829, 0.133938, 0.18547]
@@ -46,7 +48,7 @@ describe('closed-form tunings', () => {
   })
 
   // Source: Warburton, EESD 10 (1982) — values (from memory; computed to 5 digits) in
-  // engineering-references.md.
+  // docs/engineering/tuning.md#warburton-tunings.
   it('warburton-force reproduces the tabulated white-noise optimum', () => {
     const f = [0.99257, 0.98528, 0.96421, 0.93154]
     const z = [0.04981, 0.07019, 0.10977, 0.15254]
@@ -63,7 +65,7 @@ describe('closed-form tunings', () => {
 })
 
 describe('numerical H∞ optimisation on an undamped single-mode host', () => {
-  // Source: exact optimal peaks / x_st (computed) in engineering-references.md, Den Hartog table.
+  // Source: exact optimal peaks / x_st (computed) in docs/engineering/tuning.md#den-hartog-tuning.
   const exactPeak = [14.1796, 10.053, 6.4079, 4.5892]
 
   it('optimisedTuning is within 0.2 % of the Asami–Nishihara optimum and never above Den Hartog', () => {
@@ -107,7 +109,7 @@ describe('numerical H∞ optimisation on an undamped single-mode host', () => {
 })
 
 describe('numerical optimisation on a damped single-mode host', () => {
-  // Source: engineering-references.md "Damped host", computed optima (harmonic force, peak / x_st).
+  // Source: docs/engineering/tuning.md#damped-primary: computed optima, harmonic force, peak/x_st.
   const rows = [
     [0.01, 0.01, 0.9886, 0.0625, 11.373, 50.0],
     [0.02, 0.01, 0.9783, 0.0874, 8.569, 50.0],
@@ -135,7 +137,7 @@ describe('numerical optimisation on a damped single-mode host', () => {
   })
 
   // Source: Ioi & Ikeda (1978) fit, stated within ~0.3 % of the optimal peak for μ ≥ 0.05
-  // (engineering-references.md, from memory).
+  // (docs/engineering/tuning.md#damped-primary, from memory).
   it('ioi-ikeda lands within 0.5 % of the optimal peak for μ = 0.05, ζ_s = 0.02', () => {
     const fit = solveSizing(unitOscillator(0.02, 0.05, 'ioi-ikeda')).peak.with ?? 0
     const best = solveSizing(unitOscillator(0.02, 0.05, 'optimize')).peak.with ?? 1
@@ -145,7 +147,7 @@ describe('numerical optimisation on a damped single-mode host', () => {
 
 describe('numerical H₂ optimisation', () => {
   // Source: Warburton (1982) white-noise force optimum, f = √(1+μ/2)/(1+μ),
-  // ζ_a = √(μ(1+3μ/4)/(4(1+μ)(1+μ/2))) (engineering-references.md, from memory).
+  // ζ_a = √(μ(1+3μ/4)/(4(1+μ)(1+μ/2))) (docs/engineering/tuning.md#warburton-tunings, memory).
   it('reproduces the Warburton white-noise-force optimum to 0.5 % from a Den Hartog start', () => {
     MUS.forEach((mu) => {
       // White noise covers all frequencies: a wide band stands in for 0…∞ (the tails are tiny).

@@ -1,7 +1,7 @@
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'puppeteer-core'
 import { toAuthUser } from '../../server/modules/auth/auth.service'
-import { closePdfRenderers } from '../../server/integrations/pdf'
+import { closePdfRenderers } from '../../server/integrations/pdf/renderer'
 import { seedPeople } from '../../seed/seed-people'
 import { DEMO_OFFICE_SIZING, seedSizings } from '../../seed/seed-sizings'
 import { seedCatalogue } from '../../seed/seed-catalogue'

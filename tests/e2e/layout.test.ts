@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Browser, Page } from 'puppeteer-core'
 import { DEMO_USERS } from '../../seed/demo-people'
 import type { Role } from '../../shared/schemas/auth'
-import { SIZING_STEPS } from '../../src/views/sizing-steps'
+import { SIZING_STEPS } from '../../src/features/sizing/steps'
 import { makePaymentRig, type PaymentRig } from '../api/payments-rig'
 import {
   launchBrowser,

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { toAuthUser } from '../../server/modules/auth/auth.service'
-import { closePdfRenderers } from '../../server/integrations/pdf'
+import { closePdfRenderers } from '../../server/integrations/pdf/renderer'
 import { seedPeople } from '../../seed/seed-people'
 import { DEMO_OFFICE_SIZING, seedSizings } from '../../seed/seed-sizings'
 import { seedCatalogue } from '../../seed/seed-catalogue'
@@ -72,7 +72,7 @@ describe('sales quote the demo sizing in Chromium on a tablet', () => {
     const save = await page.waitForSelector('::-p-xpath(//button[normalize-space(.)="Save draft"])')
     await save!.click({ count: 2 })
     await page.waitForSelector('[data-state="draft"]')
-    const drafts = (await rig.t.services.quotes.list(salesUser, {})).filter(
+    const drafts = (await rig.t.services.quotes.list(salesUser, {})).items.filter(
       (q) => q.sizingId === sizingId,
     )
     expect(drafts).toHaveLength(1)

@@ -10,8 +10,6 @@ import {
   DEMO_OFFICE_SIZING,
   seedSizings,
 } from '../../seed/seed-sizings'
-import { spanModel } from '../../shared/dynamics'
-import type { SizingInput } from '../../shared/schemas/sizing'
 import { toAuthUser } from '../../server/modules/auth/auth.service'
 import {
   choose,
@@ -25,8 +23,8 @@ import {
   waitForText,
   type BrowserRig,
 } from '../helpers/browser'
-import { makeUser, PASSWORD } from '../helpers/factories'
-import { makeCompany } from '../helpers/records'
+import { PASSWORD } from '../helpers/factories'
+import { engineerWithSizing } from '../helpers/sizing-on-span'
 
 let rig: BrowserRig
 beforeAll(async () => {
@@ -39,49 +37,6 @@ beforeAll(async () => {
 afterAll(() => rig?.close())
 
 const demo = (role: string) => DEMO_USERS.find((u) => u.role === role)!
-
-/** A fresh engineer with a three-mass floor span (5.8 Hz) and a draft sizing on it. */
-async function engineerWithSizing() {
-  const s = rig.t.services
-  const engineer = await makeUser(rig.t, 'engineer')
-  const user = toAuthUser((await s.users.findByEmail(engineer.email))!)
-  const company = await makeCompany(rig.t)
-  const site = await s.sites.create(user, {
-    name: `Round-trip floor ${engineer.id}`,
-    companyId: company.id,
-    structureKind: 'floor',
-    address: '',
-    contactName: '',
-    contactPhone: '',
-    notes: '',
-  })
-  const m = spanModel(3, 30_000, 5.8)
-  const definition = { nodes: m.nodes, springs: m.springs, hostDampingRatio: 0.02 }
-  const model = await s.models.create(user, {
-    siteId: site.id,
-    name: 'Bay span',
-    definition,
-    reason: 'first version',
-  })
-  const input: SizingInput = {
-    title: 'Bay absorber',
-    siteId: site.id,
-    modelId: model.id,
-    modelRevision: 1,
-    targetMode: 1,
-    absorberNode: 'node-2',
-    excitationNode: 'node-2',
-    responseNode: 'node-2',
-    forceAmplitude: 280,
-    massRatio: 0.02,
-    tuning: 'optimize',
-    orientation: 'vertical',
-    acceptance: { label: 'custom', quantity: 'acceleration', limit: 0.05 },
-    detuningTolerance: 0.1,
-  }
-  const sizing = await s.sizings.create(user, input)
-  return { engineer, user, sizing, input, modelId: model.id }
-}
 
 async function openSizing(page: Page, title: string) {
   await page.goto(`${rig.url}/sizings`)
@@ -166,7 +121,7 @@ describe('demo sizings, drafts and hand-over in Chromium', () => {
   }, 150_000)
 
   it('reads every kind of numeric field as typed, saves once on a double tap and reopens each input as entered', async () => {
-    const { engineer, sizing, modelId } = await engineerWithSizing()
+    const { engineer, sizing, modelId } = await engineerWithSizing(rig.t)
     const page = await newPage(rig)
     await signInAs(page, rig.url, engineer.email, PASSWORD)
     const base = `${rig.url}/sizings/${sizing.id}`

@@ -2,7 +2,7 @@ import 'reflect-metadata'
 import { pino } from 'pino'
 import { inject } from 'vitest'
 import type { DataSource } from 'typeorm'
-import { buildServices, createApp, type AppDeps } from '../../server/app'
+import { createApp, type AppDeps, type Services } from '../../server/app'
 import { loadConfig, type Config } from '../../server/config'
 import { createDataSource } from '../../server/data-source'
 import { smtpMailer } from '../../server/integrations/mail'
@@ -11,11 +11,11 @@ import { testEnv } from './test-env'
 import { createSizingPool } from '../../server/workers/pool'
 
 export interface TestApp {
-  app: ReturnType<typeof createApp>
+  app: ReturnType<typeof createApp>['app']
   config: Config
   ds: DataSource
   mail: RunningMailCatcher
-  services: ReturnType<typeof buildServices>
+  services: Services
   clock: { offsetMs: number }
   close: () => Promise<void>
 }
@@ -40,10 +40,11 @@ export async function makeTestApp(extraEnv: Record<string, string> = {}): Promis
     logger: pino({ level: 'silent' }),
     now,
     pool,
+    checkResponses: true,
   }
-  const services = buildServices(deps)
+  const { app, services } = createApp(deps)
   return {
-    app: createApp(deps, services),
+    app,
     config,
     ds,
     mail,
@@ -69,8 +70,9 @@ export async function anotherInstance(t: TestApp, extra: Pick<AppDeps, 'pool'> &
     mailer: smtpMailer(t.config),
     logger: pino({ level: 'silent' }),
     now: () => new Date(Date.now() + t.clock.offsetMs),
+    checkResponses: true,
     ...extra,
   }
-  const services = buildServices(deps)
-  return { app: createApp(deps, services), services, ds, close: () => ds.destroy() }
+  const { app, services } = createApp(deps)
+  return { app, services, ds, close: () => ds.destroy() }
 }

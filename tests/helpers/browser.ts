@@ -3,27 +3,22 @@ import type { AddressInfo } from 'node:net'
 import type { Server } from 'node:http'
 import path from 'node:path'
 import puppeteer, { type Browser, type Page } from 'puppeteer-core'
+import { CHROMIUM_ARGS } from '../../server/integrations/pdf/renderer'
 import { makeTestApp, type TestApp } from './app'
 
 export const SHOTS_DIR = path.resolve('.local/screenshots')
 export const PORTRAIT = { width: 820, height: 1180 }
 export const LANDSCAPE = { width: 1180, height: 820 }
 
-/** Debian's Chromium, headless, without the background calls a closed network refuses. */
+/**
+ * The one Chromium launcher of the browser tests: Debian's Chromium, headless, with the same
+ * switches as the server's PDF renderer.
+ */
 export function launchBrowser(): Promise<Browser> {
   return puppeteer.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-dev-shm-usage',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-      '--no-first-run',
-      '--mute-audio',
-    ],
+    args: CHROMIUM_ARGS,
   })
 }
 

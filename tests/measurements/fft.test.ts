@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest'
 import { inverseComplexDft, realDft } from '../../shared/measurements/fft'
-import { gaussian, mulberry32 } from './helpers/random'
+import { gaussian, seeded } from '../helpers/random'
 
 describe('fft wrapper', () => {
   it('realDft agrees with the defining sum X_k = Σ x_j e^(−2πi jk/n), zero-padded', () => {
-    const normal = gaussian(mulberry32(3))
+    const normal = gaussian(seeded(3))
     const x = Array.from({ length: 40 }, () => normal())
     const n = 64
     const X = realDft(x, n)

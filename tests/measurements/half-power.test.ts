@@ -28,7 +28,7 @@ describe('halfPowerBand on the analytic single-mode response', () => {
   })
 
   it('shows the known small bias on displacement and acceleration', () => {
-    // Values from engineering-references.md "Measurement" (computed): ζ measured from
+    // Values from docs/engineering/measurements.md#half-power-bandwidth (computed): ζ measured from
     // (f₂ − f₁)/(2 f_peak) on displacement / acceleration.
     const cases = [
       { zeta: 0.02, displacement: 0.02002, acceleration: 0.02003 },

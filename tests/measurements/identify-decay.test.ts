@@ -5,7 +5,7 @@ import { freeDecay } from './helpers/synthesize'
 
 // Synthesized heel-drop records with known modes; tolerances as the brief sets them for
 // identification from a record: frequency within 1 %, damping within 30 % (methods scatter
-// ±20–50 %, engineering-references.md "Measurement", common practice).
+// ±20–50 %, docs/engineering/measurements.md#logarithmic-decrement, common practice).
 const fs = 200
 const modes = [
   { mode: { frequencyHz: 4.2, dampingRatio: 0.015 }, velocity: 0.01 },

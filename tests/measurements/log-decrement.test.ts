@@ -4,7 +4,8 @@ import { logDecrementFit } from '../../shared/measurements/log-decrement'
 import { freeDecay } from './helpers/synthesize'
 
 // δ = 2πζ/√(1 − ζ²), ζ = δ/√(4π² + δ²) (Chopra, Dynamics of Structures, eq. 2.2.11–12;
-// Clough & Penzien §2-7; both from memory). Check values from engineering-references.md.
+// Clough & Penzien §2-7; both from memory). Check values:
+// docs/engineering/measurements.md#logarithmic-decrement.
 describe('logarithmic decrement', () => {
   it('matches the published decrements and the amplitude ratio after ten cycles', () => {
     expect(logDecrementFromDamping(0.01)).toBeCloseTo(0.06283, 5)

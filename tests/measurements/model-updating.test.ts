@@ -10,7 +10,7 @@ import { ambientResponse, type NormalMode } from './helpers/chain'
 //   antisymmetric [1, 0, −1]: λ = (k_e + k)/m;
 //   symmetric [1, a, 1]: μ k a² + (2k − μ(k_e + k)) a − 2k = 0, λ = (k_e + k − k a)/m.
 // Check: k_e = k, μ = 1 gives a = ±√2 and λ = (2 ∓ √2)k/m = 4 sin²(rπ/8)k/m, the uniform
-// chain's closed form (engineering-references "Chains").
+// chain's closed form (docs/engineering/host-model.md#chain-check-values).
 const m = 1000
 const k = ((2 * Math.PI * 3) ** 2 * m) / (4 * Math.sin(Math.PI / 8) ** 2)
 

@@ -14,7 +14,8 @@ describe('the text of a numeric field and the value it stands for', () => {
     expect(ok('0,05', { kind: 'percent' }).understood).toBe('= 0.05 %')
     expect(ok('12,5', { kind: 'money', currency: 'EUR' }).understood).toBe('= €12.50')
     // 1500 rpm = 1500 · 2π/60 rad/s = 157.0796… rad/s (definition of the revolution)
-    expect(ok('1500 rpm', { kind: 'speed' }).understood).toBe('= 157.079632679 rad/s (1500 rpm)')
+    expect(ok('1500 rpm', { kind: 'speed' }).understood).toBe('= 1500 rpm (157.08 rad/s)')
+    expect(ok('25 Hz', { kind: 'speed' }).understood).toBe('= 1500 rpm (157.08 rad/s)')
   })
 
   it('warns outside the plausible range and still keeps the value as typed', () => {
@@ -34,10 +35,13 @@ describe('the text of a numeric field and the value it stands for', () => {
       [0.9524, { kind: 'number' }],
       [1250, { kind: 'money', currency: 'EUR' }],
       [7, { kind: 'count' }],
+      [(1480 * 2 * Math.PI) / 60, { kind: 'speed' }],
     ]
     for (const [v, spec] of cases) expect(ok(fieldText(v, spec), spec).value).toBeCloseTo(v, 12)
     expect(fieldText(1250, { kind: 'money' })).toBe('12.50')
     expect(fieldText(0.05, { kind: 'percent' })).toBe('5 %')
+    // a speed is written back in rpm, as machines are rated: 1480 rpm stays "1480 rpm"
+    expect(fieldText((1480 * 2 * Math.PI) / 60, { kind: 'speed' })).toBe('1480 rpm')
   })
 
   it('passes on the reason a text cannot be read', () => {

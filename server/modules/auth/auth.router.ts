@@ -1,3 +1,4 @@
+import { NoticeSchema, SessionSchema } from '../../../shared/schemas/auth'
 import { Router, type Response } from 'express'
 import { ResetRequestSchema, SetPasswordSchema, SignInSchema } from '../../../shared/schemas/auth'
 import type { ApiRegistry } from '../../http/api-registry'
@@ -29,6 +30,7 @@ export function authRouter(
     {
       method: 'post',
       path: '/api/auth/sign-in',
+      response: SessionSchema,
       tag,
       summary: 'Sign in; sets the session cookie',
       access: 'public',
@@ -62,6 +64,7 @@ export function authRouter(
     {
       method: 'get',
       path: '/api/auth/me',
+      response: SessionSchema,
       tag,
       summary: 'The signed-in user',
       access: 'signed-in',
@@ -90,6 +93,7 @@ export function authRouter(
     {
       method: 'post',
       path: '/api/auth/reset',
+      response: NoticeSchema,
       tag,
       summary: 'Mail a password reset link',
       access: 'public',

@@ -2,14 +2,14 @@ import bcrypt from 'bcryptjs'
 import jwt from 'jsonwebtoken'
 import type { AuthUser } from '../../middleware/authenticate'
 import { AppError } from '../../http/app-error'
-import type { UsersRepository, UserRecord } from '../users/users.repository'
+import type { Account, AccountStore } from './accounts'
 import type { TokensRepository } from './tokens.repository'
 import { hashLinkToken, newLinkToken } from './link-tokens'
 import type { Mailer } from '../../integrations/mail'
 import type { Throttle } from '../../integrations/rate-limits'
 
 export interface AuthDeps {
-  users: UsersRepository
+  users: AccountStore
   tokens: TokensRepository
   mailer: Mailer
   jwtSecret: string
@@ -24,7 +24,7 @@ const BAD_CREDENTIALS = 'The e-mail address or the password is wrong.'
 const DUMMY_HASH = bcrypt.hashSync('not-a-real-password', 10)
 export const RESET_TTL_HOURS = 1
 
-export function toAuthUser(u: UserRecord): AuthUser {
+export function toAuthUser(u: Account): AuthUser {
   return {
     id: u.id,
     email: u.email,
@@ -40,7 +40,7 @@ export function hashPassword(password: string) {
 }
 
 export function authService(deps: AuthDeps) {
-  async function sendLink(user: UserRecord, purpose: 'invite' | 'reset', hours: number) {
+  async function sendLink(user: Account, purpose: 'invite' | 'reset', hours: number) {
     const { token, hash } = newLinkToken()
     const expiresAt = new Date(deps.now().getTime() + hours * 3600_000)
     await deps.tokens.create(user.id, purpose, hash, expiresAt)

@@ -1,8 +1,9 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm'
+import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm'
+import { CreatedRecord } from '../../db/record-columns'
 
 /** A single-use link token (invitation or password reset); only its SHA-256 is stored. */
 @Entity('user_tokens')
-export class UserTokenEntity {
+export class UserTokenEntity extends CreatedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
@@ -21,7 +22,4 @@ export class UserTokenEntity {
 
   @Column('datetime', { precision: 3, nullable: true })
   usedAt: Date | null
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
-  createdAt: Date
 }

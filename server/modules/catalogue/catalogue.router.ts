@@ -1,5 +1,11 @@
+import {
+  CatalogueOptionSchema,
+  ProductLineSchema,
+  UnitMatchSchema,
+} from '../../../shared/schemas/catalogue'
 import { Router } from 'express'
 import { z } from 'zod'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
   CatalogueOptionInputSchema,
@@ -8,12 +14,12 @@ import {
 } from '../../../shared/schemas/catalogue'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
-import type { SizingSource } from '../quotes/sizing-source'
+import type { SizingSource } from '../sizings/sizing-source'
 import type { CatalogueService } from './catalogue.service'
 
-const LINE_READERS = ['engineer', 'sales', 'production', 'admin'] as const
-const SELLERS = ['sales', 'admin'] as const
-const ADMIN = ['admin'] as const
+const LINE_READERS = ACCESS.catalogue.read
+const SELLERS = ACCESS.catalogue.prices
+const ADMIN = ACCESS.catalogue.write
 const ListQuery = z.object({ includeInactive: z.enum(['true', 'false']).optional() })
 
 export function catalogueRouter(
@@ -29,6 +35,7 @@ export function catalogueRouter(
     {
       method: 'get',
       path: '/api/catalogue/lines',
+      response: z.array(ProductLineSchema),
       tag,
       summary: 'Absorber product lines (prices for sales and admin only)',
       access: LINE_READERS,
@@ -42,6 +49,7 @@ export function catalogueRouter(
     {
       method: 'get',
       path: '/api/catalogue/lines/:id',
+      response: ProductLineSchema,
       tag,
       summary: 'One product line',
       access: LINE_READERS,
@@ -55,6 +63,7 @@ export function catalogueRouter(
     {
       method: 'post',
       path: '/api/catalogue/lines',
+      response: ProductLineSchema,
       tag,
       summary: 'Add a product line',
       access: ADMIN,
@@ -69,6 +78,7 @@ export function catalogueRouter(
     {
       method: 'put',
       path: '/api/catalogue/lines/:id',
+      response: ProductLineSchema,
       tag,
       summary: 'Change a product line (quotes already made keep their prices)',
       access: ADMIN,
@@ -83,6 +93,7 @@ export function catalogueRouter(
     {
       method: 'get',
       path: '/api/catalogue/options',
+      response: z.array(CatalogueOptionSchema),
       tag,
       summary: 'Options and services with their prices',
       access: SELLERS,
@@ -97,6 +108,7 @@ export function catalogueRouter(
     {
       method: 'post',
       path: '/api/catalogue/options',
+      response: CatalogueOptionSchema,
       tag,
       summary: 'Add an option or service',
       access: ADMIN,
@@ -111,6 +123,7 @@ export function catalogueRouter(
     {
       method: 'put',
       path: '/api/catalogue/options/:id',
+      response: CatalogueOptionSchema,
       tag,
       summary: 'Change an option or service',
       access: ADMIN,
@@ -125,9 +138,10 @@ export function catalogueRouter(
     {
       method: 'get',
       path: '/api/catalogue/matches',
+      response: z.array(UnitMatchSchema),
       tag,
       summary: 'Which product lines can carry a sizing, and why the others cannot',
-      access: ['engineer', ...SELLERS],
+      access: ACCESS.catalogue.match,
       query: MatchQuerySchema,
     },
     async ({ user, query }) => catalogue.match(await sizings.visibleSummary(user, query.sizingId)),

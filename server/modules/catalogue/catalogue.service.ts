@@ -1,3 +1,4 @@
+import { ACCESS } from '../../../shared/access'
 import { matchUnits } from '../../../shared/catalogue'
 import type {
   CatalogueOptionInput,
@@ -11,7 +12,7 @@ import { AppError, notFound } from '../../http/app-error'
 import type { CatalogueRepository, ProductLineRecord } from './catalogue.repository'
 
 /** Who sees catalogue prices: the people who quote and the admin who sets them. */
-const PRICE_READERS: readonly Role[] = ['sales', 'admin']
+const PRICE_READERS: readonly Role[] = ACCESS.catalogue.prices
 
 function forRole(line: ProductLineRecord, role: Role): ProductLine {
   return PRICE_READERS.includes(role) ? line : { ...line, prices: null }
@@ -49,6 +50,8 @@ export function catalogueService(deps: { catalogue: CatalogueRepository }) {
   return {
     line,
     option,
+    /** The active product lines in full, for the server's own design checks. */
+    activeUnits: () => repo.listLines(true),
     async listLines(role: Role, includeInactive = false) {
       const all = await repo.listLines(!(includeInactive && role === 'admin'))
       return all.map((l) => forRole(l, role))

@@ -27,6 +27,9 @@ export function companiesRepository(ds: DataSource) {
     async create(data: { name: string; kind: 'supplier' | 'customer'; address?: string }) {
       return toCompany(await repo.save(repo.create({ address: '', ...data })))
     },
+    async update(id: number, patch: { name: string; address: string }) {
+      await repo.update({ id }, patch)
+    },
   }
 }
 export type CompaniesRepository = ReturnType<typeof companiesRepository>

@@ -1,12 +1,14 @@
+import { CompanyDetailsSchema } from '../../../shared/schemas/auth'
 import { Router } from 'express'
 import { z } from 'zod'
+import { ACCESS } from '../../../shared/access'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
-import type { CompaniesRepository } from './companies.repository'
+import type { CompaniesService } from './companies.service'
 
 const CompanyQuerySchema = z.object({ kind: z.enum(['supplier', 'customer']).optional() })
 
-export function companiesRouter(api: ApiRegistry, companies: CompaniesRepository) {
+export function companiesRouter(api: ApiRegistry, companies: CompaniesService) {
   const router = Router()
   route(
     router,
@@ -14,9 +16,10 @@ export function companiesRouter(api: ApiRegistry, companies: CompaniesRepository
     {
       method: 'get',
       path: '/api/companies',
+      response: z.array(CompanyDetailsSchema),
       tag: 'Companies',
       summary: 'Companies, optionally of one kind',
-      access: ['admin', 'sales', 'engineer'],
+      access: ACCESS.companies.read,
       query: CompanyQuerySchema,
     },
     ({ query }) => companies.list(query.kind),

@@ -1,7 +1,8 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm'
+import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm'
+import { CreatedRecord } from '../../db/record-columns'
 
 @Entity('companies')
-export class CompanyEntity {
+export class CompanyEntity extends CreatedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
@@ -13,7 +14,4 @@ export class CompanyEntity {
 
   @Column('varchar', { length: 300, default: '' })
   address: string
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
-  createdAt: Date
 }

@@ -1,25 +1,25 @@
 import {
   Column,
-  CreateDateColumn,
   Entity,
   JoinColumn,
   ManyToOne,
   PrimaryGeneratedColumn,
   type Relation,
 } from 'typeorm'
-import { CompanyEntity } from '../companies/company.entity'
-import { UserEntity } from '../users/user.entity'
+import { CreatedRecord } from '../../db/record-columns'
+import type { CompanyEntity } from '../companies/company.entity'
+import type { UserEntity } from '../users/user.entity'
 
 /** A person at a customer company; becomes a customer user when invited. */
 @Entity('contacts')
-export class ContactEntity {
+export class ContactEntity extends CreatedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
   @Column('int')
   companyId: number
 
-  @ManyToOne(() => CompanyEntity, { onDelete: 'CASCADE' })
+  @ManyToOne('CompanyEntity', { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'companyId' })
   company: Relation<CompanyEntity>
 
@@ -38,10 +38,7 @@ export class ContactEntity {
   @Column('int', { nullable: true })
   userId: number | null
 
-  @ManyToOne(() => UserEntity, { nullable: true, onDelete: 'SET NULL' })
+  @ManyToOne('UserEntity', { nullable: true, onDelete: 'SET NULL' })
   @JoinColumn({ name: 'userId' })
   user: Relation<UserEntity> | null
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
-  createdAt: Date
 }

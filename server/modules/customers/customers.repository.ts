@@ -1,6 +1,5 @@
 import type { DataSource } from 'typeorm'
 import type { Contact, ContactInput } from '../../../shared/schemas/customer'
-import { CompanyEntity } from '../companies/company.entity'
 import { ContactEntity } from './contact.entity'
 
 const toContact = (c: ContactEntity): Contact => ({
@@ -15,7 +14,6 @@ const toContact = (c: ContactEntity): Contact => ({
 
 export function customersRepository(ds: DataSource) {
   const contacts = ds.getRepository(ContactEntity)
-  const companies = ds.getRepository(CompanyEntity)
   return {
     async contactsOf(companyId: number) {
       const rows = await contacts.find({ where: { companyId }, order: { name: 'ASC' } })
@@ -31,10 +29,6 @@ export function customersRepository(ds: DataSource) {
     async updateContact(id: number, patch: Partial<ContactInput> & { userId?: number | null }) {
       await contacts.update({ id }, patch)
       return (await this.findContact(id)) as Contact
-    },
-    /** Name and address only; the kind of a company never changes. */
-    async updateCompany(id: number, patch: { name: string; address: string }) {
-      await companies.update({ id }, patch)
     },
   }
 }

@@ -1,4 +1,8 @@
+import { z } from 'zod'
+import { UserSummarySchema } from '../../../shared/schemas/auth'
+import { ContactSchema, CustomerSchema } from '../../../shared/schemas/customer'
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
   ContactInputSchema,
@@ -10,7 +14,7 @@ import { route } from '../../http/route'
 import { clientAddress } from '../../http/client-address'
 import type { CustomersService } from './customers.service'
 
-const SELLERS = ['sales', 'admin'] as const
+const SELLERS = ACCESS.customers.write
 
 export function customersRouter(api: ApiRegistry, customers: CustomersService) {
   const router = Router()
@@ -19,7 +23,13 @@ export function customersRouter(api: ApiRegistry, customers: CustomersService) {
   route(
     router,
     api,
-    { ...base, method: 'get', path: '/api/customers', summary: 'Customer companies and contacts' },
+    {
+      ...base,
+      method: 'get',
+      path: '/api/customers',
+      response: z.array(CustomerSchema),
+      summary: 'Customer companies and contacts',
+    },
     () => customers.list(),
   )
   route(
@@ -29,6 +39,7 @@ export function customersRouter(api: ApiRegistry, customers: CustomersService) {
       ...base,
       method: 'post',
       path: '/api/customers',
+      response: CustomerSchema,
       summary: 'Add a customer company',
       body: CustomerInputSchema,
       status: 201,
@@ -42,6 +53,7 @@ export function customersRouter(api: ApiRegistry, customers: CustomersService) {
       ...base,
       method: 'get',
       path: '/api/customers/:id',
+      response: CustomerSchema,
       summary: 'One customer with contacts',
       params: IdParamSchema,
     },
@@ -54,6 +66,7 @@ export function customersRouter(api: ApiRegistry, customers: CustomersService) {
       ...base,
       method: 'put',
       path: '/api/customers/:id',
+      response: CustomerSchema,
       summary: 'Rename a customer or change its address',
       params: IdParamSchema,
       body: CustomerInputSchema,
@@ -67,6 +80,7 @@ export function customersRouter(api: ApiRegistry, customers: CustomersService) {
       ...base,
       method: 'post',
       path: '/api/customers/:id/contacts',
+      response: ContactSchema,
       summary: 'Add a contact',
       params: IdParamSchema,
       body: ContactInputSchema,
@@ -81,6 +95,7 @@ export function customersRouter(api: ApiRegistry, customers: CustomersService) {
       ...base,
       method: 'put',
       path: '/api/customers/:id/contacts/:contactId',
+      response: ContactSchema,
       summary: 'Change a contact',
       params: ContactParamsSchema,
       body: ContactInputSchema,
@@ -94,6 +109,7 @@ export function customersRouter(api: ApiRegistry, customers: CustomersService) {
       ...base,
       method: 'post',
       path: '/api/customers/:id/contacts/:contactId/invite',
+      response: UserSummarySchema,
       summary: 'Invite a contact as a customer user (mails a set-password link)',
       params: ContactParamsSchema,
       status: 201,

@@ -1,13 +1,13 @@
 import type { ContactInput, Customer, CustomerInput } from '../../../shared/schemas/customer'
 import type { UserSummary } from '../../../shared/schemas/auth'
 import { AppError, notFound } from '../../http/app-error'
-import type { CompaniesRepository } from '../companies/companies.repository'
+import type { CompaniesService } from '../companies/companies.service'
 import type { usersService } from '../users/users.service'
 import type { CustomersRepository } from './customers.repository'
 
 export function customersService(deps: {
   customers: CustomersRepository
-  companies: CompaniesRepository
+  companies: CompaniesService
   usersAdmin: Pick<ReturnType<typeof usersService>, 'invite'>
 }) {
   async function company(id: number) {
@@ -51,7 +51,7 @@ export function customersService(deps: {
     async update(id: number, input: CustomerInput) {
       await company(id)
       await nameFree(input.name, id)
-      await deps.customers.updateCompany(id, input)
+      await deps.companies.update(id, input)
       return get(id)
     },
     async addContact(companyId: number, input: ContactInput) {

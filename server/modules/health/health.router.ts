@@ -1,3 +1,4 @@
+import { ApiDocumentSchema, HealthSchema } from '../../../shared/schemas/service'
 import { Router } from 'express'
 import type { DataSource } from 'typeorm'
 import type { ApiRegistry } from '../../http/api-registry'
@@ -11,6 +12,7 @@ export function healthRouter(api: ApiRegistry, ds: DataSource, version: string) 
     {
       method: 'get',
       path: '/api/health',
+      response: HealthSchema,
       tag: 'Service',
       summary: 'Liveness and database reachability',
       access: 'public',
@@ -39,6 +41,7 @@ export function healthRouter(api: ApiRegistry, ds: DataSource, version: string) 
     {
       method: 'get',
       path: '/api/openapi.json',
+      response: ApiDocumentSchema,
       tag: 'Service',
       summary: 'This API document',
       access: 'public',

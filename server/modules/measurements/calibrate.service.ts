@@ -6,6 +6,9 @@ import type { AuthUser } from '../../middleware/authenticate'
 import { modelErrorToAppError } from '../models/check-model'
 import type { ModelsService } from '../models/models.service'
 import type { MeasurementsService } from './measurements.service'
+import type { ModelUpdateService } from './model-update.service'
+import type { RecordAnalysesService } from './record-analyses.service'
+import type { RecordChannelsService } from './record-channels.service'
 
 function withDamping(d: ModelDefinition, mode: number, ratio: number | undefined) {
   if (ratio === undefined) return d.hostDampingRatio
@@ -54,3 +57,12 @@ export function calibrationService(deps: {
   }
 }
 export type CalibrationService = ReturnType<typeof calibrationService>
+
+/** The records and model calibration from them: what the measurements router calls. */
+/** What the measurements routers call, built once in the composition root (server/services.ts). */
+export type Measurements = MeasurementsService & {
+  calibrate: CalibrationService
+  mapChannels: RecordChannelsService
+  analyses: RecordAnalysesService
+  updates: ModelUpdateService
+}

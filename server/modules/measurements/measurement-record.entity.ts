@@ -1,27 +1,28 @@
 import {
   Column,
-  CreateDateColumn,
   Entity,
   JoinColumn,
   ManyToOne,
   PrimaryGeneratedColumn,
   type Relation,
 } from 'typeorm'
-import type { IdentificationResult } from '../../../shared/measurements'
+import { CreatedRecord } from '../../db/record-columns'
+import type { IdentificationResult, TimeUnit, TimeUnitSource } from '../../../shared/measurements'
+import type { RecordChannelInfo } from '../../../shared/schemas/measurement'
 import { jsonColumn } from '../../http/json-column'
-import { SiteEntity } from '../sites/site.entity'
-import { UserEntity } from '../users/user.entity'
+import type { SiteEntity } from '../sites/site.entity'
+import type { UserEntity } from '../users/user.entity'
 
 /** An acceleration record measured at a site; the file lives on disk, its identification here. */
 @Entity('measurement_records')
-export class MeasurementRecordEntity {
+export class MeasurementRecordEntity extends CreatedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
   @Column('int')
   siteId: number
 
-  @ManyToOne(() => SiteEntity, { onDelete: 'CASCADE' })
+  @ManyToOne('SiteEntity', { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'siteId' })
   site: Relation<SiteEntity>
 
@@ -36,7 +37,7 @@ export class MeasurementRecordEntity {
   @Column('int')
   ownerId: number
 
-  @ManyToOne(() => UserEntity, { onDelete: 'RESTRICT' })
+  @ManyToOne('UserEntity', { onDelete: 'RESTRICT' })
   @JoinColumn({ name: 'ownerId' })
   owner: Relation<UserEntity>
 
@@ -62,9 +63,17 @@ export class MeasurementRecordEntity {
   @Column('varchar', { length: 20 })
   kind: string
 
+  /** every acceleration channel with its node and axis; null on records stored before channels */
+  @Column('longtext', { nullable: true, transformer: jsonColumn })
+  channels: RecordChannelInfo[] | null
+
+  /** the unit the time column was read in, kept so the file is re-read the same way */
+  @Column('varchar', { length: 2, nullable: true })
+  timeUnit: TimeUnit | null
+
+  @Column('varchar', { length: 10, nullable: true })
+  timeUnitSource: TimeUnitSource | null
+
   @Column('longtext', { transformer: jsonColumn })
   result: IdentificationResult
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
-  createdAt: Date
 }

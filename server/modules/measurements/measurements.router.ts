@@ -1,4 +1,13 @@
+import { closedSignal } from '../../http/closed-signal'
+import { z } from 'zod'
+import { HostModelSchema } from '../../../shared/schemas/host-model'
+import {
+  AddedPeakSchema,
+  MeasurementRecordSchema,
+  MeasurementRecordSummarySchema,
+} from '../../../shared/schemas/measurement'
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
   CalibrateSchema,
@@ -10,10 +19,11 @@ import {
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import { singleUpload } from '../../http/upload'
-import type { Measurements } from './build-measurements'
+import type { Measurements } from './calibrate.service'
+import { recordAnalysesRoutes } from './record-analyses.router'
 
-const READERS = ['engineer', 'sales', 'admin'] as const
-const WRITERS = ['engineer', 'admin'] as const
+const READERS = ACCESS.measurements.read
+const WRITERS = ACCESS.measurements.write
 
 export function measurementsRouter(api: ApiRegistry, m: Measurements) {
   const router = Router()
@@ -24,6 +34,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     {
       method: 'post',
       path: '/api/sites/:id/records',
+      response: MeasurementRecordSchema,
       tag,
       summary: 'Upload an acceleration record (multipart field "record") and identify its modes',
       access: WRITERS,
@@ -33,7 +44,8 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
       before: [singleUpload('record', MAX_RECORD_BYTES)],
       status: 201,
     },
-    ({ user, params, body, req }) => m.upload(user, params.id, body, req.file),
+    ({ user, params, body, req, res }) =>
+      m.upload(user, params.id, body, req.file, closedSignal(res)),
   )
   route(
     router,
@@ -41,6 +53,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     {
       method: 'get',
       path: '/api/sites/:id/records',
+      response: z.array(MeasurementRecordSummarySchema),
       tag,
       summary: 'Records of a site',
       access: READERS,
@@ -54,6 +67,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     {
       method: 'get',
       path: '/api/records/:id',
+      response: MeasurementRecordSchema,
       tag,
       summary: 'One record with its spectrum and peaks',
       access: READERS,
@@ -68,7 +82,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
       method: 'delete',
       path: '/api/records/:id',
       tag,
-      summary: 'Delete a record and its file',
+      summary: 'Delete a record, its file and its analyses',
       access: WRITERS,
       params: IdParamSchema,
     },
@@ -80,6 +94,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     {
       method: 'post',
       path: '/api/records/:id/peaks',
+      response: AddedPeakSchema,
       tag,
       summary: 'Identify a peak near a frequency and add it',
       access: WRITERS,
@@ -95,6 +110,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     {
       method: 'delete',
       path: '/api/records/:id/peaks/:index',
+      response: MeasurementRecordSchema,
       tag,
       summary: 'Drop a false peak (0-based index in the list)',
       access: WRITERS,
@@ -108,6 +124,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     {
       method: 'post',
       path: '/api/models/:id/calibrate',
+      response: HostModelSchema,
       tag,
       summary: 'Scale a model’s springs to a measured frequency; saves a new revision',
       access: WRITERS,
@@ -117,5 +134,6 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     },
     ({ user, params, body }) => m.calibrate(user, params.id, body),
   )
+  recordAnalysesRoutes(router, api, m)
   return router
 }

@@ -5,7 +5,8 @@ import type { AuthUser } from '../../middleware/authenticate'
 import type { ModelsService } from '../models/models.service'
 import type { SitesService } from '../sites/sites.service'
 import type { MeasurementsRepository, StoredRecord } from './measurements.repository'
-import { checkRecordFile, identify, peakAt, readRecord } from './record-file'
+import type { SizingPool } from '../../workers/pool'
+import { checkRecordFile, peakAt, readAsStored, readRecord } from './record-file'
 
 type UploadedFile = { originalname: string; buffer: Buffer } | undefined
 
@@ -14,6 +15,7 @@ export function measurementsService(deps: {
   sites: SitesService
   models: ModelsService
   files: FileStore
+  pool: Pick<SizingPool, 'identify'>
 }) {
   async function stored(id: number): Promise<StoredRecord> {
     const r = await deps.records.findById(id)
@@ -44,18 +46,37 @@ export function measurementsService(deps: {
   return {
     get,
     stored,
+    assertCanEdit,
     async list(siteId: number) {
       await deps.sites.get(siteId)
       return deps.records.listBySite(siteId)
     },
 
     /** Reads and identifies the whole file first, so a refused upload leaves nothing behind. */
-    async upload(user: AuthUser, siteId: number, input: RecordUpload, upload: UploadedFile) {
+    async upload(
+      user: AuthUser,
+      siteId: number,
+      input: RecordUpload,
+      upload: UploadedFile,
+      signal?: AbortSignal,
+    ) {
       await deps.sites.get(siteId)
       await assertModelOfSite(input.modelId, siteId)
       const file = checkRecordFile(upload)
-      const record = readRecord(file.buffer, input.sampleRateHz)
-      const result = identify(record, input.kind)
+      // Reading and identifying an 8 MB record takes seconds: in the worker pool, not here.
+      const read = await deps.pool.identify(
+        {
+          bytes: file.buffer,
+          readAs: {
+            ...(input.sampleRateHz !== undefined && { sampleRateHz: input.sampleRateHz }),
+            ...(input.timeUnit !== undefined && { timeUnit: input.timeUnit }),
+          },
+          kind: input.kind,
+        },
+        { signal },
+      )
+      if (!read.ok) throw new AppError(read.code, read.message, read.status, read.details)
+      const { result, record } = read
       const storedName = await deps.files.save(file.buffer, '.csv')
       try {
         const id = await deps.records.create({
@@ -66,11 +87,19 @@ export function measurementsService(deps: {
           filename: file.originalname.slice(0, 200),
           storedName,
           size: file.buffer.length,
-          sampleRateHz: record.sampleRateHz,
-          samples: record.acceleration.length,
+          sampleRateHz: read.sampleRateHz,
+          samples: read.samples,
           rateFromForm: input.sampleRateHz !== undefined,
           kind: result.kind,
           result,
+          channels: record.channels.map((c, i) => ({
+            name: c.name.slice(0, 60),
+            column: c.column,
+            nodeId: i === 0 ? (input.nodeId ?? null) : null,
+            direction: null,
+          })),
+          timeUnit: record.timeUnit,
+          timeUnitSource: record.timeUnitSource,
         })
         return get(id)
       } catch (e) {
@@ -101,7 +130,7 @@ export function measurementsService(deps: {
         )
       }
       const bytes = await deps.files.read(r.storedName)
-      const record = readRecord(bytes, r.rateFromForm ? r.sampleRateHz : undefined)
+      const record = readRecord(bytes, readAsStored(r))
       const others = r.result.peaks.map((p) => p.frequencyHz)
       const peak = peakAt(record, frequencyHz, r.result.kind, others)
       const result = { ...r.result, peaks: [...r.result.peaks, peak] }

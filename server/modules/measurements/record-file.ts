@@ -7,8 +7,10 @@ import {
   type IdentifiedPeak,
   type ParsedRecord,
   type RecordKind,
+  type TimeUnit,
 } from '../../../shared/measurements'
 import { AppError } from '../../http/app-error'
+import type { ReadAs } from '../../workers/measurements.worker'
 
 const TEXT_NAME = /\.(csv|txt)$/i
 
@@ -32,10 +34,22 @@ export function checkRecordFile(file: { originalname: string; buffer: Buffer } |
   return file
 }
 
-/** Reads a record file; the rate is only passed for a file without a time column. */
-export function readRecord(bytes: Uint8Array, sampleRateHz?: number): ParsedRecord {
+/** A stored record is read again exactly as at its upload. */
+export function readAsStored(r: {
+  rateFromForm: boolean
+  sampleRateHz: number
+  timeUnit: TimeUnit | null
+}): ReadAs {
+  return {
+    ...(r.rateFromForm && { sampleRateHz: r.sampleRateHz }),
+    ...(r.timeUnit && { timeUnit: r.timeUnit }),
+  }
+}
+
+/** Reads a record file with every channel; a refused file is a 4xx naming the line. */
+export function readRecord(bytes: Uint8Array, readAs: ReadAs): ParsedRecord {
   try {
-    return parseRecordBytes(bytes, sampleRateHz === undefined ? {} : { sampleRateHz })
+    return parseRecordBytes(bytes, readAs)
   } catch (e) {
     throw asAppError(e)
   }

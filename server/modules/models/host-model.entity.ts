@@ -1,33 +1,32 @@
 import {
   Column,
-  CreateDateColumn,
   Entity,
   JoinColumn,
   ManyToOne,
   PrimaryGeneratedColumn,
-  UpdateDateColumn,
   type Relation,
 } from 'typeorm'
-import { SiteEntity } from '../sites/site.entity'
-import { UserEntity } from '../users/user.entity'
+import { TrackedRecord } from '../../db/record-columns'
+import type { SiteEntity } from '../sites/site.entity'
+import type { UserEntity } from '../users/user.entity'
 
 /** A host structure model of a site; its content lives in numbered revisions. */
 @Entity('host_models')
-export class HostModelEntity {
+export class HostModelEntity extends TrackedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
   @Column('int')
   siteId: number
 
-  @ManyToOne(() => SiteEntity, { onDelete: 'CASCADE' })
+  @ManyToOne('SiteEntity', { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'siteId' })
   site: Relation<SiteEntity>
 
   @Column('int')
   ownerId: number
 
-  @ManyToOne(() => UserEntity, { onDelete: 'RESTRICT' })
+  @ManyToOne('UserEntity', { onDelete: 'RESTRICT' })
   @JoinColumn({ name: 'ownerId' })
   owner: Relation<UserEntity>
 
@@ -36,15 +35,4 @@ export class HostModelEntity {
 
   @Column('int', { default: 1 })
   currentRevision: number
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
-  createdAt: Date
-
-  @UpdateDateColumn({
-    type: 'datetime',
-    precision: 3,
-    default: () => 'CURRENT_TIMESTAMP(3)',
-    onUpdate: 'CURRENT_TIMESTAMP(3)',
-  })
-  updatedAt: Date
 }

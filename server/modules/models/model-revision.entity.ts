@@ -1,6 +1,5 @@
 import {
   Column,
-  CreateDateColumn,
   Entity,
   Index,
   JoinColumn,
@@ -8,21 +7,22 @@ import {
   PrimaryGeneratedColumn,
   type Relation,
 } from 'typeorm'
+import { CreatedRecord } from '../../db/record-columns'
 import type { ModelDefinition } from '../../../shared/schemas/sizing'
 import { jsonColumn } from '../../http/json-column'
-import { HostModelEntity } from './host-model.entity'
+import type { HostModelEntity } from './host-model.entity'
 
 /** One immutable state of a model, with why it was made (edit, calibration…). */
 @Entity('model_revisions')
 @Index(['modelId', 'revision'], { unique: true })
-export class ModelRevisionEntity {
+export class ModelRevisionEntity extends CreatedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
   @Column('int')
   modelId: number
 
-  @ManyToOne(() => HostModelEntity, { onDelete: 'CASCADE' })
+  @ManyToOne('HostModelEntity', { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'modelId' })
   model: Relation<HostModelEntity>
 
@@ -37,7 +37,4 @@ export class ModelRevisionEntity {
 
   @Column('int')
   createdById: number
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
-  createdAt: Date
 }

@@ -1,7 +1,6 @@
 import type { DataSource } from 'typeorm'
 import type { HostModel, ModelRevision } from '../../../shared/schemas/host-model'
 import type { ModelDefinition } from '../../../shared/schemas/sizing'
-import { UserEntity } from '../users/user.entity'
 import { HostModelEntity } from './host-model.entity'
 import { ModelRevisionEntity } from './model-revision.entity'
 
@@ -12,7 +11,8 @@ export function modelsRepository(ds: DataSource) {
   async function hydrate(m: HostModelEntity): Promise<HostModel> {
     const revs = await revisions
       .createQueryBuilder('r')
-      .leftJoin(UserEntity, 'u', 'u.id = r.createdById')
+      // Only the author's name is read, from the users table the users module owns.
+      .leftJoin('users', 'u', 'u.id = r.createdById')
       .addSelect('u.name', 'createdByName')
       .where('r.modelId = :id', { id: m.id })
       .orderBy('r.revision', 'ASC')
@@ -58,7 +58,7 @@ export function modelsRepository(ds: DataSource) {
     async revisionAt(modelId: number, revision: number): Promise<ModelRevision | null> {
       const { entities, raw } = await revisions
         .createQueryBuilder('r')
-        .leftJoin(UserEntity, 'u', 'u.id = r.createdById')
+        .leftJoin('users', 'u', 'u.id = r.createdById')
         .addSelect('u.name', 'createdByName')
         .where('r.modelId = :modelId AND r.revision = :revision', { modelId, revision })
         .getRawAndEntities()

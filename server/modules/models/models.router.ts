@@ -1,4 +1,7 @@
+import { z } from 'zod'
+import { HostModelSchema, ModelRevisionSchema } from '../../../shared/schemas/host-model'
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
   ModelCreateSchema,
@@ -10,8 +13,8 @@ import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import type { ModelsService } from './models.service'
 
-const READERS = ['engineer', 'sales', 'admin'] as const
-const WRITERS = ['engineer', 'admin'] as const
+const READERS = ACCESS.models.read
+const WRITERS = ACCESS.models.write
 
 export function modelsRouter(api: ApiRegistry, models: ModelsService) {
   const router = Router()
@@ -22,6 +25,7 @@ export function modelsRouter(api: ApiRegistry, models: ModelsService) {
     {
       method: 'get',
       path: '/api/models',
+      response: z.array(HostModelSchema),
       tag,
       summary: 'Host models, optionally of one site',
       access: READERS,
@@ -35,6 +39,7 @@ export function modelsRouter(api: ApiRegistry, models: ModelsService) {
     {
       method: 'post',
       path: '/api/models',
+      response: HostModelSchema,
       tag,
       summary: 'Create a host model (revision 1)',
       access: WRITERS,
@@ -49,6 +54,7 @@ export function modelsRouter(api: ApiRegistry, models: ModelsService) {
     {
       method: 'get',
       path: '/api/models/:id',
+      response: HostModelSchema,
       tag,
       summary: 'A model at its current revision, with the revision list',
       access: READERS,
@@ -62,6 +68,7 @@ export function modelsRouter(api: ApiRegistry, models: ModelsService) {
     {
       method: 'get',
       path: '/api/models/:id/revisions/:revision',
+      response: ModelRevisionSchema,
       tag,
       summary: 'One revision of a model with its structure (a sizing may use an older one)',
       access: READERS,
@@ -75,6 +82,7 @@ export function modelsRouter(api: ApiRegistry, models: ModelsService) {
     {
       method: 'post',
       path: '/api/models/:id/revisions',
+      response: HostModelSchema,
       tag,
       summary: 'Save a new revision',
       access: WRITERS,

@@ -1,4 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm'
+import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm'
+import { CreatedRecord } from '../../db/record-columns'
 import type { MailMessage } from '../../integrations/mail'
 import { jsonColumn } from '../../http/json-column'
 
@@ -10,7 +11,7 @@ export type OutboxState = 'pending' | 'sent' | 'failed'
  */
 @Entity('outbox_mails')
 @Index('IDX_outbox_mails_due', ['state', 'nextAttemptAt'])
-export class OutboxMailEntity {
+export class OutboxMailEntity extends CreatedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
@@ -38,9 +39,6 @@ export class OutboxMailEntity {
 
   @Column('datetime', { precision: 3, nullable: true })
   sentAt: Date | null
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
-  createdAt: Date
 }
 
 export type StoredMail = Omit<MailMessage, 'attachments'> & {

@@ -1,10 +1,8 @@
-import type { DataSource, EntityManager } from 'typeorm'
+import type { DataSource } from 'typeorm'
+import type { Tx } from '../../db/tx'
 import type { MailMessage } from '../../integrations/mail'
 import { claimRows } from './claim-rows'
 import { OutboxMailEntity, type StoredMail } from './outbox-mail.entity'
-
-/** A database transaction handed between repositories, so one story commits as one. */
-export type Tx = EntityManager
 
 export interface DueMail {
   id: number

@@ -1,6 +1,7 @@
 import type { Logger } from 'pino'
 import type { Mailer, MailMessage } from '../../integrations/mail'
-import type { OutboxRepository, Tx } from './outbox.repository'
+import type { Tx } from '../../db/tx'
+import type { OutboxRepository } from './outbox.repository'
 
 /** A mail that failed is tried again after 30 s, 1 min, 2 min … up to an hour apart. */
 export const RETRY_BASE_MS = 30_000

@@ -3,7 +3,7 @@ import type { PaymentGateway } from '../../integrations/payments'
 import type { OutboxService } from '../outbox/outbox.service'
 import type { ProductionService } from '../production/production.service'
 import type { QuotesService } from '../quotes/quotes.service'
-import type { UsersRepository } from '../users/users.repository'
+import type { UsersService } from '../users/users.service'
 import { orderNumber } from './format'
 import type { SessionObject } from './payment-event'
 import { paidOrderMails } from './payment-mail'
@@ -15,7 +15,7 @@ export interface FulfilmentDeps {
   gateway: PaymentGateway
   quotes: Pick<QuotesService, 'forPayment' | 'markPaidIn' | 'lockIn'>
   production: Pick<ProductionService, 'prepare'>
-  users: UsersRepository
+  users: Pick<UsersService, 'list'>
   outbox: OutboxService
   publicUrl: () => string
   now: () => Date

@@ -1,8 +1,9 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm'
+import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm'
+import { CreatedRecord } from '../../db/record-columns'
 
 /** A paid quote; one per quote (the unique index is what makes the order exactly-once). */
 @Entity('orders')
-export class OrderEntity {
+export class OrderEntity extends CreatedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
@@ -27,7 +28,4 @@ export class OrderEntity {
 
   @Column('datetime', { precision: 3 })
   paidAt: Date
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
-  createdAt: Date
 }

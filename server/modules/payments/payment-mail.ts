@@ -1,5 +1,5 @@
 import type { MailMessage } from '../../integrations/mail'
-import type { UserRecord } from '../users/users.repository'
+import type { UserSummary } from '../../../shared/schemas/auth'
 import { formatMoney, type Currency } from '../../../shared/money'
 
 export interface PaidOrder {
@@ -11,7 +11,7 @@ export interface PaidOrder {
 }
 
 /** The receipt to the customer's users and the order notice to production. */
-export function paidOrderMails(users: UserRecord[], o: PaidOrder, publicUrl: string) {
+export function paidOrderMails(users: UserSummary[], o: PaidOrder, publicUrl: string) {
   const customers = users.filter(
     (u) => u.active && u.role === 'customer' && u.companyId === o.companyId,
   )

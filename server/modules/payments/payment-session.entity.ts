@@ -1,11 +1,5 @@
-import {
-  Column,
-  CreateDateColumn,
-  Entity,
-  Index,
-  PrimaryGeneratedColumn,
-  UpdateDateColumn,
-} from 'typeorm'
+import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm'
+import { TrackedRecord } from '../../db/record-columns'
 
 /**
  * open → complete (made the order) | expired | failed; a second paid session of a quote that
@@ -16,7 +10,7 @@ export type SessionStatus = 'open' | 'complete' | 'expired' | 'failed' | 'refund
 /** A checkout session the server created for a quote, with the amount it asked for. */
 @Entity('payment_sessions')
 @Index('IDX_payment_sessions_due', ['status', 'nextCheckAt'])
-export class PaymentSessionEntity {
+export class PaymentSessionEntity extends TrackedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
@@ -53,15 +47,4 @@ export class PaymentSessionEntity {
 
   @Column('datetime', { precision: 3, nullable: true })
   refundedAt: Date | null
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
-  createdAt: Date
-
-  @UpdateDateColumn({
-    type: 'datetime',
-    precision: 3,
-    default: () => 'CURRENT_TIMESTAMP(3)',
-    onUpdate: 'CURRENT_TIMESTAMP(3)',
-  })
-  updatedAt: Date
 }

@@ -1,6 +1,6 @@
 import { withNamedLock } from '../../db/named-lock'
 import { In, type DataSource } from 'typeorm'
-import type { Tx } from '../outbox/outbox.repository'
+import type { Tx } from '../../db/tx'
 import { claimRows } from '../outbox/claim-rows'
 import { OrderEntity } from './order.entity'
 import { PaymentEventEntity } from './payment-event.entity'

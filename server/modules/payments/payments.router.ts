@@ -1,4 +1,13 @@
+import { z } from 'zod'
+import {
+  CheckoutAnswerSchema,
+  OrderInfoSchema,
+  QuoteOrderSchema,
+  RefundInfoSchema,
+} from '../../../shared/schemas/payment'
+import { WebhookOutcomeSchema } from '../../../shared/schemas/service'
 import express, { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import { PaymentReturnSchema } from '../../../shared/schemas/payment'
 import type { ApiRegistry } from '../../http/api-registry'
@@ -14,6 +23,7 @@ export function paymentsWebhookRouter(api: ApiRegistry, payments: PaymentsServic
     {
       method: 'post',
       path: '/api/payments/webhook',
+      response: WebhookOutcomeSchema,
       tag: 'Payments',
       summary: 'Signed payment events (checkout completed, expired, payment failed)',
       access: 'public',
@@ -37,10 +47,11 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
     {
       method: 'post',
       path: '/api/quotes/:id/checkout',
+      response: CheckoutAnswerSchema,
       tag,
       summary:
         'Start paying an accepted quote; answers the hosted payment page URL (201), the still open one on a repeat, or a paid quote as paid (200)',
-      access: ['customer'],
+      access: ACCESS.quotes.accept,
       params: IdParamSchema,
       status: 201,
     },
@@ -56,9 +67,10 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
     {
       method: 'post',
       path: '/api/quotes/:id/payment-return',
+      response: QuoteOrderSchema,
       tag,
       summary: 'Back from the payment page: confirm the session with the payment service',
-      access: ['customer'],
+      access: ACCESS.quotes.accept,
       params: IdParamSchema,
       body: PaymentReturnSchema,
     },
@@ -70,9 +82,10 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
     {
       method: 'get',
       path: '/api/payments/refunds',
+      response: z.array(RefundInfoSchema),
       tag,
       summary: 'Second payments of paid quotes and their refunds',
-      access: ['admin'],
+      access: ACCESS.refunds.read,
     },
     () => payments.refunds(),
   )
@@ -82,9 +95,10 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
     {
       method: 'get',
       path: '/api/quotes/:id/order',
+      response: QuoteOrderSchema,
       tag,
       summary: 'The order of a paid quote, or null',
-      access: ['customer', 'sales', 'production', 'admin'],
+      access: ACCESS.orders.read,
       params: IdParamSchema,
     },
     ({ user, params }) => payments.orderFor(user, params.id),
@@ -95,9 +109,10 @@ export function paymentsRouter(api: ApiRegistry, payments: PaymentsService) {
     {
       method: 'get',
       path: '/api/orders',
+      response: z.array(OrderInfoSchema),
       tag,
       summary: 'Orders (a customer sees their company’s)',
-      access: ['customer', 'sales', 'production', 'admin'],
+      access: ACCESS.orders.read,
     },
     ({ user }) => payments.orders(user),
   )

@@ -1,10 +1,8 @@
 import type { DataSource } from 'typeorm'
 import type { BuildSpecification, WorkOrderState } from '../../../shared/schemas/work-order'
-import { QuoteEventEntity } from '../quotes/quote-event.entity'
-import { UserEntity } from '../users/user.entity'
 import { WorkOrderEventEntity } from './work-order-event.entity'
 import { WorkOrderEntity } from './work-order.entity'
-import type { Tx } from '../outbox/outbox.repository'
+import type { Tx } from '../../db/tx'
 
 export type WorkOrderEvent = Omit<WorkOrderEventEntity, 'at'> & {
   at: string
@@ -23,50 +21,11 @@ export interface NewWorkOrder {
 export function productionRepository(ds: DataSource) {
   const orders = ds.getRepository(WorkOrderEntity)
   const events = ds.getRepository(WorkOrderEventEntity)
-  /** Every recorded state change of quotes, orders (a quote going paid) and work orders. */
-  async function audit() {
-    const quoteRows = await ds
-      .getRepository(QuoteEventEntity)
-      .createQueryBuilder('e')
-      .leftJoin(UserEntity, 'u', 'u.id = e.actorId')
-      .select([
-        'e.quoteId AS recordId',
-        'e.fromState AS fromState',
-        'e.toState AS toState',
-        'e.at AS at',
-        'e.note AS note',
-        'u.name AS actorName',
-      ])
-      .getRawMany<{
-        recordId: number
-        fromState: string | null
-        toState: string
-        at: Date
-        note: string
-        actorName: string | null
-      }>()
-    const quotes = quoteRows.map((r) => ({
-      record: 'quote' as const,
-      ...r,
-      at: new Date(r.at).toISOString(),
-    }))
-    const work = (await events_()).map((e) => ({
-      record: 'work-order' as const,
-      recordId: e.workOrderId,
-      fromState: e.fromState,
-      toState: e.toState ?? (e.passes ? 'tuning passed' : 'tuning failed'),
-      at: e.at,
-      note:
-        e.kind === 'tuning' ? `measured ${e.measuredHz} Hz${e.note ? `; ${e.note}` : ''}` : e.note,
-      actorName: e.actorName,
-    }))
-    return [...quotes, ...work].sort((a, b) => a.at.localeCompare(b.at))
-  }
-
   async function events_(workOrderId?: number): Promise<WorkOrderEvent[]> {
     const qb = events
       .createQueryBuilder('e')
-      .leftJoin(UserEntity, 'u', 'u.id = e.actorId')
+      // Only the actor's name is read, from the users table the users module owns.
+      .leftJoin('users', 'u', 'u.id = e.actorId')
       .addSelect('u.name', 'actorName')
       .orderBy('e.id', 'ASC')
     if (workOrderId) qb.where('e.workOrderId = :id', { id: workOrderId })
@@ -79,7 +38,6 @@ export function productionRepository(ds: DataSource) {
   }
 
   return {
-    audit,
     findById: (id: number) => orders.findOneBy({ id }),
     findByQuote: (quoteId: number) => orders.findOneBy({ quoteId }),
     list: () => orders.find({ order: { dueDate: 'ASC', id: 'ASC' } }),

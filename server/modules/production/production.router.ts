@@ -1,11 +1,14 @@
+import { z } from 'zod'
+import { WorkOrderRowSchema, WorkOrderSchema } from '../../../shared/schemas/work-order'
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import { StatusChangeSchema, TuningRecordInputSchema } from '../../../shared/schemas/work-order'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import type { ProductionService } from './production.service'
 
-const BUILDERS = ['production', 'admin'] as const
+const BUILDERS = ACCESS.workOrders.write
 
 export function productionRouter(api: ApiRegistry, production: ProductionService) {
   const router = Router()
@@ -16,6 +19,7 @@ export function productionRouter(api: ApiRegistry, production: ProductionService
     {
       method: 'get',
       path: '/api/work-orders',
+      response: z.array(WorkOrderRowSchema),
       tag,
       summary: 'The production queue',
       access: BUILDERS,
@@ -28,6 +32,7 @@ export function productionRouter(api: ApiRegistry, production: ProductionService
     {
       method: 'get',
       path: '/api/work-orders/:id',
+      response: WorkOrderSchema,
       tag,
       summary: 'A work order with its frozen specification and history',
       access: BUILDERS,
@@ -41,6 +46,7 @@ export function productionRouter(api: ApiRegistry, production: ProductionService
     {
       method: 'post',
       path: '/api/work-orders/:id/state',
+      response: WorkOrderSchema,
       tag,
       summary: 'Move a work order one step',
       access: BUILDERS,
@@ -55,6 +61,7 @@ export function productionRouter(api: ApiRegistry, production: ProductionService
     {
       method: 'post',
       path: '/api/work-orders/:id/tuning',
+      response: WorkOrderSchema,
       tag,
       summary: 'Record the measured frequency of the built unit',
       access: BUILDERS,
@@ -84,18 +91,6 @@ export function productionRouter(api: ApiRegistry, production: ProductionService
         .send(bytes)
       return undefined
     },
-  )
-  route(
-    router,
-    api,
-    {
-      method: 'get',
-      path: '/api/audit',
-      tag: 'Audit',
-      summary: 'Every work-order change and measurement',
-      access: ['admin'],
-    },
-    () => production.audit(),
   )
   return router
 }

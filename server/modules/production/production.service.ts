@@ -4,12 +4,12 @@ import { AppError, notFound } from '../../http/app-error'
 import type { Mailer } from '../../integrations/mail'
 import type { AuthUser } from '../../middleware/authenticate'
 import type { QuotesService } from '../quotes/quotes.service'
-import type { UsersRepository } from '../users/users.repository'
+import type { UsersService } from '../users/users.service'
 import type { ProductionRepository } from './production.repository'
 import { buildSpecification, specificationHash } from './specification'
-import { inlineFontCss, type PdfRenderer } from '../../integrations/pdf'
+import { inlineFontCss, type PdfRenderer } from '../../integrations/pdf/renderer'
 import { workOrderHtml } from './work-order-html'
-import type { Tx } from '../outbox/outbox.repository'
+import type { Tx } from '../../db/tx'
 
 const moved = (state: string) =>
   new AppError('state-changed', `Someone else moved this work order to ${state}; reload it.`, 409, {
@@ -19,7 +19,7 @@ const moved = (state: string) =>
 export function productionService(deps: {
   repo: ProductionRepository
   quotes: QuotesService
-  users: UsersRepository
+  users: Pick<UsersService, 'list'>
   mailer: Mailer
   pdf: PdfRenderer
   now: () => Date
@@ -118,7 +118,8 @@ export function productionService(deps: {
       return (await deps.repo.findByQuote(quoteId))?.state ?? null
     },
 
-    audit: () => deps.repo.audit(),
+    /** Every work order's changes and tuning records, oldest first. */
+    allEvents: () => deps.repo.events(),
 
     /** The workshop sheet as a PDF. */
     async pdf(id: number) {

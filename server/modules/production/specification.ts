@@ -33,6 +33,9 @@ export function buildSpecification(q: Quote): BuildSpecification {
     options: q.lines
       .filter((l) => l.kind !== 'unit')
       .map((l) => `${l.quantity} × ${l.description}`),
+    ...(q.sizing.load && { designLoad: q.sizing.load }),
+    stroke: q.sizing.stroke,
+    strokeLimit: q.sizing.strokeLimit ?? null,
     designAcknowledgement: q.sizing.designAcknowledgement ?? null,
     designConfirmation: q.designConfirmation,
   }

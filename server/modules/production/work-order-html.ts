@@ -1,5 +1,8 @@
-import { esc, sig } from '../quotes/pdf/html'
-import { ACKNOWLEDGEMENT_CSS, acknowledgementHtml } from '../quotes/pdf/acknowledgement-html'
+import { esc, sig } from '../../integrations/pdf/html'
+import {
+  ACKNOWLEDGEMENT_CSS,
+  acknowledgementHtml,
+} from '../../integrations/pdf/acknowledgement-html'
 import type { BuildSpecification } from '../../../shared/schemas/work-order'
 
 interface Printable {
@@ -8,6 +11,17 @@ interface Printable {
   state: string
   specHash: string
   specification: BuildSpecification
+}
+
+/** The design load and the stroke the end stops must allow; older work orders have neither. */
+function loadRows(s: BuildSpecification): [string, string][] {
+  const limit = s.strokeLimit ? ` (limit ${sig(s.strokeLimit * 1000, 3)} mm)` : ''
+  return [
+    ...(s.designLoad ? [['Design load', s.designLoad] as [string, string]] : []),
+    ...(s.stroke !== undefined
+      ? [['Stroke', `${sig(s.stroke * 1000, 3)} mm at the design load${limit}`] as [string, string]]
+      : []),
+  ]
 }
 
 /** The workshop sheet: the frozen build values, the tuning target and the safety notes. */
@@ -26,6 +40,7 @@ export function workOrderHtml(w: Printable, fontCss: string) {
       'Target frequency',
       `${sig(s.targetFrequencyHz, 4)} Hz ± ${sig(s.frequencyTolerance * 100, 2)} %`,
     ],
+    ...loadRows(s),
     ['Options', s.options.join('; ') || '—'],
   ]
   return `<!doctype html><html><head><meta charset="utf-8"><style>${fontCss}

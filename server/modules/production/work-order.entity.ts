@@ -1,16 +1,11 @@
-import {
-  Column,
-  CreateDateColumn,
-  Entity,
-  Index,
-  PrimaryGeneratedColumn,
-  UpdateDateColumn,
-} from 'typeorm'
+import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm'
+import { TrackedRecord } from '../../db/record-columns'
 import type { BuildSpecification, WorkOrderState } from '../../../shared/schemas/work-order'
 import { jsonColumn } from '../../http/json-column'
 
+@Index('IDX_work_orders_due', ['dueDate', 'id'])
 @Entity('work_orders')
-export class WorkOrderEntity {
+export class WorkOrderEntity extends TrackedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
@@ -36,15 +31,4 @@ export class WorkOrderEntity {
 
   @Column('date')
   dueDate: string
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
-  createdAt: Date
-
-  @UpdateDateColumn({
-    type: 'datetime',
-    precision: 3,
-    default: () => 'CURRENT_TIMESTAMP(3)',
-    onUpdate: 'CURRENT_TIMESTAMP(3)',
-  })
-  updatedAt: Date
 }

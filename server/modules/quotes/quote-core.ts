@@ -9,14 +9,17 @@ import type { SizingSummary } from '../../../shared/schemas/sizing'
 import type { AppliedTaxRate } from '../../../shared/schemas/tax'
 import { AppError, notFound } from '../../http/app-error'
 import type { AuthUser } from '../../middleware/authenticate'
+import type { Mailer } from '../../integrations/mail'
+import type { PdfRenderer } from '../../integrations/pdf/renderer'
 import type { CatalogueService } from '../catalogue/catalogue.service'
+import type { CompaniesService } from '../companies/companies.service'
 import type { CustomersService } from '../customers/customers.service'
 import { priceLines, totalsOf } from './price-lines'
 import type { QuoteRow } from './quote-rows'
 import { dayOf, hasLapsed } from './quote-states'
 import { quoteOf } from './quote-view'
 import type { QuotesRepository } from './quotes.repository'
-import type { SizingSource } from './sizing-source'
+import type { SizingSource } from '../sizings/sizing-source'
 
 export interface QuotesDeps {
   quotes: QuotesRepository
@@ -26,6 +29,13 @@ export interface QuotesDeps {
   /** the named tax rate of a customer's quote, chosen on the server */
   taxRate: (companyId: number, chosenId: number | null) => Promise<AppliedTaxRate>
   now: () => Date
+}
+
+export interface QuotesServiceDeps extends QuotesDeps {
+  companies: CompaniesService
+  mailer: Mailer
+  pdf: PdfRenderer
+  publicUrl: () => string
 }
 
 export const isCustomer = (u: AuthUser) => u.role === 'customer'

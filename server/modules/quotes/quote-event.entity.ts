@@ -8,8 +8,8 @@ import {
   type Relation,
 } from 'typeorm'
 import type { QuoteState } from '../../../shared/schemas/quote'
-import { UserEntity } from '../users/user.entity'
-import { QuoteEntity } from './quote.entity'
+import type { UserEntity } from '../users/user.entity'
+import type { QuoteEntity } from './quote.entity'
 
 /** One state change of a quote, who made it and when; the audit log reads this table. */
 @Entity('quote_events')
@@ -21,7 +21,7 @@ export class QuoteEventEntity {
   @Column('int')
   quoteId: number
 
-  @ManyToOne(() => QuoteEntity, { onDelete: 'CASCADE' })
+  @ManyToOne('QuoteEntity', { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'quoteId' })
   quote: Relation<QuoteEntity>
 
@@ -36,7 +36,7 @@ export class QuoteEventEntity {
   @Column('int', { nullable: true })
   actorId: number | null
 
-  @ManyToOne(() => UserEntity, { nullable: true, onDelete: 'SET NULL' })
+  @ManyToOne('UserEntity', { nullable: true, onDelete: 'SET NULL' })
   @JoinColumn({ name: 'actorId' })
   actor: Relation<UserEntity> | null
 

@@ -6,7 +6,7 @@ import {
   PrimaryGeneratedColumn,
   type Relation,
 } from 'typeorm'
-import { QuoteEntity } from './quote.entity'
+import type { QuoteEntity } from './quote.entity'
 
 /** A priced line, frozen with its code and text so catalogue changes never reach it. */
 @Entity('quote_lines')
@@ -17,7 +17,7 @@ export class QuoteLineEntity {
   @Column('int')
   quoteId: number
 
-  @ManyToOne(() => QuoteEntity, (q) => q.lines, { onDelete: 'CASCADE' })
+  @ManyToOne('QuoteEntity', 'lines', { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'quoteId' })
   quote: Relation<QuoteEntity>
 

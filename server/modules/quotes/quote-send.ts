@@ -5,14 +5,14 @@ import {
   type QuoteSend,
 } from '../../../shared/schemas/quote'
 import { AppError, notFound } from '../../http/app-error'
-import { inlineFontCss } from '../../integrations/pdf'
+import { inlineFontCss } from '../../integrations/pdf/renderer'
 import type { AuthUser } from '../../middleware/authenticate'
 import { quoteFooter, quoteHtml, type Supplier } from './pdf/quote-html'
 import type { QuotesCore } from './quote-core'
 import { portalLink, quoteMail } from './quote-mail'
 import type { QuoteRow } from './quote-rows'
 import { dayOf } from './quote-states'
-import type { QuotesServiceDeps } from './quotes.service'
+import type { QuotesServiceDeps } from './quote-core'
 
 const conflict = (code: string, message: string) => new AppError(code, message, 409)
 

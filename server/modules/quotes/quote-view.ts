@@ -1,5 +1,6 @@
 import type { Quote, QuoteEvent, QuoteSummary } from '../../../shared/schemas/quote'
 import type { QuoteRow } from './quote-rows'
+import type { QuoteListRow } from './quotes.repository'
 
 /** The printed reference: "TDW-2026-0001", or "TDW-2026-0001 rev 2" from the 2nd revision. */
 export const referenceOf = (number: string, revision: number) =>
@@ -25,6 +26,29 @@ export function summaryOf(r: QuoteRow, latest: boolean): QuoteSummary {
     createdAt: r.createdAt.toISOString(),
     sentAt: iso(r.sentAt),
     latest,
+  }
+}
+
+/** A list row as the summary the list answers with. */
+export function listSummary(r: QuoteListRow): QuoteSummary {
+  const revision = Number(r.revision)
+  return {
+    id: Number(r.id),
+    number: r.number,
+    revision,
+    reference: referenceOf(r.number, revision),
+    state: r.state,
+    sizingId: Number(r.sizingId),
+    sizingTitle: r.sizingTitle ?? '',
+    companyId: Number(r.companyId),
+    companyName: r.companyName ?? '',
+    siteName: r.siteName ?? '',
+    currency: r.currency as QuoteSummary['currency'],
+    total: Number(r.total),
+    validUntil: r.validUntil,
+    createdAt: new Date(r.createdAt).toISOString(),
+    sentAt: r.sentAt ? new Date(r.sentAt).toISOString() : null,
+    latest: Number(r.latest) === revision,
   }
 }
 

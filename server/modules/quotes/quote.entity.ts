@@ -1,29 +1,30 @@
 import {
   Column,
-  CreateDateColumn,
   Entity,
   Index,
   JoinColumn,
   ManyToOne,
   OneToMany,
   PrimaryGeneratedColumn,
-  UpdateDateColumn,
   type Relation,
 } from 'typeorm'
+import { TrackedRecord } from '../../db/record-columns'
 import type { Currency } from '../../../shared/money'
 import type { QuoteState } from '../../../shared/schemas/quote'
 import type { SizingSummary } from '../../../shared/schemas/sizing'
 import { jsonColumn } from '../../http/json-column'
-import { CompanyEntity } from '../companies/company.entity'
-import { ContactEntity } from '../customers/contact.entity'
-import { UserEntity } from '../users/user.entity'
-import { QuoteLineEntity } from './quote-line.entity'
+import type { CompanyEntity } from '../companies/company.entity'
+import type { ContactEntity } from '../customers/contact.entity'
+import type { UserEntity } from '../users/user.entity'
+import type { QuoteLineEntity } from './quote-line.entity'
 
 /** One revision of a numbered quote; a sent revision is never changed, only superseded. */
 @Entity('quotes')
+@Index('IDX_quotes_created', ['createdAt', 'id'])
+@Index('IDX_quotes_expiry', ['state', 'validUntil'])
 @Index('UQ_quotes_number_revision', ['number', 'revision'], { unique: true })
 @Index('UQ_quotes_year_seq_revision', ['year', 'seq', 'revision'], { unique: true })
-export class QuoteEntity {
+export class QuoteEntity extends TrackedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
@@ -53,14 +54,14 @@ export class QuoteEntity {
   @Column('int')
   companyId: number
 
-  @ManyToOne(() => CompanyEntity, { onDelete: 'RESTRICT' })
+  @ManyToOne('CompanyEntity', { onDelete: 'RESTRICT' })
   @JoinColumn({ name: 'companyId' })
   company: Relation<CompanyEntity>
 
   @Column('int', { nullable: true })
   contactId: number | null
 
-  @ManyToOne(() => ContactEntity, { nullable: true, onDelete: 'SET NULL' })
+  @ManyToOne('ContactEntity', { nullable: true, onDelete: 'SET NULL' })
   @JoinColumn({ name: 'contactId' })
   contact: Relation<ContactEntity> | null
 
@@ -102,13 +103,13 @@ export class QuoteEntity {
   @Column('int')
   total: number
 
-  @OneToMany(() => QuoteLineEntity, (l) => l.quote, { cascade: true })
+  @OneToMany('QuoteLineEntity', 'quote', { cascade: true })
   lines: Relation<QuoteLineEntity[]>
 
   @Column('int')
   createdById: number
 
-  @ManyToOne(() => UserEntity, { onDelete: 'RESTRICT' })
+  @ManyToOne('UserEntity', { onDelete: 'RESTRICT' })
   @JoinColumn({ name: 'createdById' })
   createdBy: Relation<UserEntity>
 
@@ -131,21 +132,10 @@ export class QuoteEntity {
   @Column('int', { nullable: true })
   designConfirmedById: number | null
 
-  @ManyToOne(() => UserEntity, { nullable: true, onDelete: 'SET NULL' })
+  @ManyToOne('UserEntity', { nullable: true, onDelete: 'SET NULL' })
   @JoinColumn({ name: 'designConfirmedById' })
   designConfirmedBy: Relation<UserEntity> | null
 
   @Column('datetime', { precision: 3, nullable: true })
   designConfirmedAt: Date | null
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
-  createdAt: Date
-
-  @UpdateDateColumn({
-    type: 'datetime',
-    precision: 3,
-    default: () => 'CURRENT_TIMESTAMP(3)',
-    onUpdate: 'CURRENT_TIMESTAMP(3)',
-  })
-  updatedAt: Date
 }

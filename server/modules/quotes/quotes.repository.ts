@@ -35,6 +35,28 @@ const relations = {
   lines: true,
 } as const
 
+/** Rows per page of the quotes list when the query does not say. */
+export const DEFAULT_PAGE = 50
+
+/** A quotes list row as the database returns it (numbers may come as strings). */
+export interface QuoteListRow {
+  id: number
+  number: string
+  revision: number
+  state: QuoteState
+  sizingId: number
+  sizingTitle: string | null
+  siteName: string | null
+  companyId: number
+  companyName: string | null
+  currency: string
+  total: number
+  validUntil: string
+  createdAt: Date
+  sentAt: Date | null
+  latest: number
+}
+
 function linesOf(quoteId: number, lines: LineWrite[]) {
   return lines.map((l, i) => ({ ...l, quoteId, position: i + 1 }))
 }
@@ -72,12 +94,13 @@ export function quotesRepository(ds: DataSource) {
       })
       return q ? toRow(q) : null
     },
-    async list(q: QuoteListQuery & { states?: readonly QuoteState[] }) {
-      const qb = quotes
-        .createQueryBuilder('q')
-        .leftJoinAndSelect('q.company', 'company')
-        .orderBy('q.createdAt', 'DESC')
-        .addOrderBy('q.id', 'DESC')
+    /**
+     * One page of quotes, newest first, with only the columns a list shows (the frozen sizing's
+     * title and site, not the whole summary) and whether each is its number's latest revision,
+     * in one query; the total matching goes with it.
+     */
+    async listPage(q: QuoteListQuery & { states?: readonly QuoteState[] }) {
+      const qb = quotes.createQueryBuilder('q').leftJoin('q.company', 'company')
       if (q.states) qb.andWhere('q.state IN (:...states)', { states: q.states })
       if (q.state) qb.andWhere('q.state = :state', { state: q.state })
       if (q.companyId) qb.andWhere('q.companyId = :c', { c: q.companyId })
@@ -91,7 +114,31 @@ export function quotesRepository(ds: DataSource) {
           ),
         )
       }
-      return (await qb.getMany()).map((e) => toRow({ ...e, lines: [] } as QuoteEntity))
+      const total = await qb.getCount()
+      const rows = await qb
+        .select([
+          'q.id AS id',
+          'q.number AS number',
+          'q.revision AS revision',
+          'q.state AS state',
+          'q.sizingId AS sizingId',
+          "JSON_VALUE(q.sizing, '$.title') AS sizingTitle",
+          "JSON_VALUE(q.sizing, '$.siteName') AS siteName",
+          'q.companyId AS companyId',
+          'company.name AS companyName',
+          'q.currency AS currency',
+          'q.total AS total',
+          'q.validUntil AS validUntil',
+          'q.createdAt AS createdAt',
+          'q.sentAt AS sentAt',
+        ])
+        .addSelect('(SELECT MAX(r.revision) FROM quotes r WHERE r.number = q.number)', 'latest')
+        .orderBy('q.createdAt', 'DESC')
+        .addOrderBy('q.id', 'DESC')
+        .limit(q.limit ?? DEFAULT_PAGE)
+        .offset(q.offset ?? 0)
+        .getRawMany<QuoteListRow>()
+      return { total, rows }
     },
     /** Runs `work` while no other instance numbers a quote of the year. */
     numbering: <T>(year: number, work: () => Promise<T>) =>
@@ -176,6 +223,14 @@ export function quotesRepository(ds: DataSource) {
         order: { at: 'ASC', id: 'ASC' },
       })
       return rows.map(toEvent)
+    },
+    /** Every quote's state changes, oldest first, for the audit trail. */
+    async allEvents() {
+      const rows = await events.find({
+        relations: { actor: true },
+        order: { at: 'ASC', id: 'ASC' },
+      })
+      return rows.map((e) => ({ quoteId: e.quoteId, ...toEvent(e) }))
     },
     /** Ids of sent quotes whose last valid day is before `today` (YYYY-MM-DD). */
     async dueForExpiry(today: string) {

@@ -1,4 +1,8 @@
+import { z } from 'zod'
+import { AnyQuoteSchema, QuoteSummarySchema } from '../../../shared/schemas/quote'
+import { SizingSummarySchema } from '../../../shared/schemas/sizing'
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
   QuoteAcceptSchema,
@@ -12,8 +16,8 @@ import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import type { QuotesService } from './quotes.service'
 
-const SELLERS = ['sales', 'admin'] as const
-const READERS = ['sales', 'admin', 'customer'] as const
+const SELLERS = ACCESS.quotes.write
+const READERS = ACCESS.quotes.read
 
 /** Engineers and production may not read quotes at all (403); customers only their own. */
 export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
@@ -27,11 +31,17 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       tag,
       method: 'get',
       path: '/api/quotes',
-      summary: 'Quotes, filtered by state, customer, date and text',
+      response: z.array(QuoteSummarySchema),
+      summary:
+        'One page of quotes (limit, offset; newest first), filtered by state, customer, date and text; the total matching is in X-Total-Count',
       access: READERS,
       query: QuoteListQuerySchema,
     },
-    ({ user, query }) => quotes.list(user, query),
+    async ({ user, query, res }) => {
+      const page = await quotes.list(user, query)
+      res.set('x-total-count', String(page.total))
+      return page.items
+    },
   )
   route(
     router,
@@ -40,6 +50,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       tag,
       method: 'post',
       path: '/api/quotes',
+      response: AnyQuoteSchema,
       summary: 'Make a draft quote from a submitted sizing (priced on the server)',
       access: SELLERS,
       body: QuoteCreateSchema,
@@ -54,6 +65,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       ...one,
       method: 'get',
       path: '/api/quotes/from-sizing/:id',
+      response: SizingSummarySchema,
       summary: 'The summary of a sizing to quote from, as the quote will freeze it',
       access: SELLERS,
     },
@@ -62,7 +74,14 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
   route(
     router,
     api,
-    { ...one, method: 'get', path: '/api/quotes/:id', summary: 'One quote', access: READERS },
+    {
+      ...one,
+      method: 'get',
+      path: '/api/quotes/:id',
+      response: AnyQuoteSchema,
+      summary: 'One quote',
+      access: READERS,
+    },
     ({ user, params }) => quotes.get(user, params.id),
   )
   route(
@@ -72,6 +91,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       ...one,
       method: 'put',
       path: '/api/quotes/:id',
+      response: AnyQuoteSchema,
       summary: 'Change a draft (re-priced); a sent quote answers 409',
       access: SELLERS,
       body: QuoteDraftSchema,
@@ -85,6 +105,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       ...one,
       method: 'post',
       path: '/api/quotes/:id/send',
+      response: AnyQuoteSchema,
       summary:
         'Mail the PDF and the portal link to the contact; the quote becomes sent (a repeat answers it as sent). A sizing handed over with failed checks needs confirmDesignChecks (422 design-checks-unconfirmed)',
       access: SELLERS,
@@ -99,6 +120,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       ...one,
       method: 'post',
       path: '/api/quotes/:id/revise',
+      response: AnyQuoteSchema,
       summary: 'Make the next revision as a draft; the old one is kept',
       access: SELLERS,
       status: 201,
@@ -112,6 +134,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       ...one,
       method: 'post',
       path: '/api/quotes/:id/withdraw',
+      response: AnyQuoteSchema,
       summary: 'Withdraw a draft or sent quote',
       access: SELLERS,
       body: QuoteNoteSchema,
@@ -125,8 +148,9 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       ...one,
       method: 'post',
       path: '/api/quotes/:id/accept',
+      response: AnyQuoteSchema,
       summary: 'The customer accepts a sent quote with a name and a purchase order',
-      access: ['customer'],
+      access: ACCESS.quotes.accept,
       body: QuoteAcceptSchema,
     },
     ({ user, params, body }) => quotes.accept(user, params.id, body),

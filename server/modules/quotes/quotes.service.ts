@@ -6,24 +6,14 @@ import type {
 } from '../../../shared/schemas/quote'
 import { CUSTOMER_VISIBLE_STATES } from '../../../shared/schemas/quote'
 import { AppError } from '../../http/app-error'
-import type { Mailer } from '../../integrations/mail'
-import type { PdfRenderer } from '../../integrations/pdf'
 import type { AuthUser } from '../../middleware/authenticate'
-import type { CompaniesRepository } from '../companies/companies.repository'
-import { expireDue, isCustomer, quotesCore, type QuotesDeps } from './quote-core'
+import { expireDue, isCustomer, quotesCore, type QuotesServiceDeps } from './quote-core'
 import { quoteSending } from './quote-send'
 import { insertNumbered } from './quote-numbers'
 import type { QuoteRow } from './quote-rows'
-import type { Tx } from '../outbox/outbox.repository'
+import type { Tx } from '../../db/tx'
 import { REVISABLE, sourcesOf } from './quote-states'
-import { referenceOf, summaryOf } from './quote-view'
-
-export interface QuotesServiceDeps extends QuotesDeps {
-  companies: CompaniesRepository
-  mailer: Mailer
-  pdf: PdfRenderer
-  publicUrl: () => string
-}
+import { listSummary, referenceOf, summaryOf } from './quote-view'
 
 const conflict = (code: string, message: string) => new AppError(code, message, 409)
 
@@ -57,17 +47,15 @@ export function quotesService(deps: QuotesServiceDeps) {
   }
 
   return {
+    /** One page of the list, newest first, and the total matching the filters. */
     list: async (user: AuthUser, q: QuoteListQuery) => {
       await expireDue(repo, deps.now())
-      const rows = await repo.list(
+      const page = await repo.listPage(
         isCustomer(user)
           ? { ...q, companyId: user.companyId ?? -1, states: CUSTOMER_VISIBLE_STATES }
           : q,
       )
-      const latest = new Map<string, number>()
-      for (const n of new Set(rows.map((r) => r.number)))
-        latest.set(n, await repo.latestRevision(n))
-      return rows.map((r) => summaryOf(r, latest.get(r.number) === r.revision))
+      return { total: page.total, items: page.rows.map(listSummary) }
     },
 
     /** A sizing as a new quote would freeze it; another engineer's draft is a 404. */
@@ -234,6 +222,8 @@ export function quotesService(deps: QuotesServiceDeps) {
     lockIn: (tx: Tx, quoteId: number) => repo.lockIn(tx, quoteId),
 
     expireDue: (now: Date) => expireDue(repo, now),
+    /** Every quote's state changes, for the audit trail. */
+    stateChanges: () => repo.allEvents(),
   }
 }
 export type QuotesService = ReturnType<typeof quotesService>

@@ -1,24 +1,24 @@
 import {
   Column,
-  CreateDateColumn,
   Entity,
   JoinColumn,
   ManyToOne,
   PrimaryGeneratedColumn,
   type Relation,
 } from 'typeorm'
-import { SiteEntity } from './site.entity'
+import { CreatedRecord } from '../../db/record-columns'
+import type { SiteEntity } from './site.entity'
 
 /** A photo taken at the site; the bytes live on disk under the upload directory. */
 @Entity('site_photos')
-export class SitePhotoEntity {
+export class SitePhotoEntity extends CreatedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
   @Column('int')
   siteId: number
 
-  @ManyToOne(() => SiteEntity, (s) => s.photos, { onDelete: 'CASCADE' })
+  @ManyToOne('SiteEntity', 'photos', { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'siteId' })
   site: Relation<SiteEntity>
 
@@ -33,7 +33,4 @@ export class SitePhotoEntity {
 
   @Column('int')
   size: number
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
-  createdAt: Date
 }

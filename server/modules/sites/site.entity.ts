@@ -1,21 +1,22 @@
 import {
+  Index,
   Column,
-  CreateDateColumn,
   Entity,
   JoinColumn,
   ManyToOne,
   OneToMany,
   PrimaryGeneratedColumn,
-  UpdateDateColumn,
   type Relation,
 } from 'typeorm'
+import { TrackedRecord } from '../../db/record-columns'
 import type { StructureKind } from '../../../shared/schemas/site'
-import { CompanyEntity } from '../companies/company.entity'
-import { UserEntity } from '../users/user.entity'
-import { SitePhotoEntity } from './site-photo.entity'
+import type { CompanyEntity } from '../companies/company.entity'
+import type { UserEntity } from '../users/user.entity'
+import type { SitePhotoEntity } from './site-photo.entity'
 
+@Index('IDX_sites_updated', ['updatedAt'])
 @Entity('sites')
-export class SiteEntity {
+export class SiteEntity extends TrackedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
@@ -25,14 +26,14 @@ export class SiteEntity {
   @Column('int')
   companyId: number
 
-  @ManyToOne(() => CompanyEntity, { onDelete: 'RESTRICT' })
+  @ManyToOne('CompanyEntity', { onDelete: 'RESTRICT' })
   @JoinColumn({ name: 'companyId' })
   company: Relation<CompanyEntity>
 
   @Column('int')
   ownerId: number
 
-  @ManyToOne(() => UserEntity, { onDelete: 'RESTRICT' })
+  @ManyToOne('UserEntity', { onDelete: 'RESTRICT' })
   @JoinColumn({ name: 'ownerId' })
   owner: Relation<UserEntity>
 
@@ -51,17 +52,6 @@ export class SiteEntity {
   @Column('text')
   notes: string
 
-  @OneToMany(() => SitePhotoEntity, (p) => p.site)
+  @OneToMany('SitePhotoEntity', 'site')
   photos: Relation<SitePhotoEntity[]>
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
-  createdAt: Date
-
-  @UpdateDateColumn({
-    type: 'datetime',
-    precision: 3,
-    default: () => 'CURRENT_TIMESTAMP(3)',
-    onUpdate: 'CURRENT_TIMESTAMP(3)',
-  })
-  updatedAt: Date
 }

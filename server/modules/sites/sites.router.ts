@@ -1,4 +1,7 @@
+import { z } from 'zod'
+import { SiteSchema } from '../../../shared/schemas/site'
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema, IdSchema } from '../../../shared/schemas/ids'
 import { SiteInputSchema, SiteListQuerySchema } from '../../../shared/schemas/site'
 import type { ApiRegistry } from '../../http/api-registry'
@@ -7,8 +10,8 @@ import { singleUpload } from '../../http/upload'
 import { MAX_PHOTO_BYTES, type SitesService } from './sites.service'
 
 const PhotoParams = IdParamSchema.extend({ photoId: IdSchema })
-const READERS = ['engineer', 'sales', 'admin'] as const
-const WRITERS = ['engineer', 'admin'] as const
+const READERS = ACCESS.sites.read
+const WRITERS = ACCESS.sites.write
 
 export function sitesRouter(api: ApiRegistry, sites: SitesService) {
   const router = Router()
@@ -19,6 +22,7 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     {
       method: 'get',
       path: '/api/sites',
+      response: z.array(SiteSchema),
       tag,
       summary: 'Sites, with search and filters',
       access: READERS,
@@ -32,6 +36,7 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     {
       method: 'post',
       path: '/api/sites',
+      response: SiteSchema,
       tag,
       summary: 'Create a site',
       access: WRITERS,
@@ -46,6 +51,7 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     {
       method: 'get',
       path: '/api/sites/:id',
+      response: SiteSchema,
       tag,
       summary: 'One site',
       access: READERS,
@@ -59,6 +65,7 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     {
       method: 'put',
       path: '/api/sites/:id',
+      response: SiteSchema,
       tag,
       summary: 'Change a site',
       access: WRITERS,
@@ -73,6 +80,7 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     {
       method: 'post',
       path: '/api/sites/:id/photos',
+      response: SiteSchema,
       tag,
       summary: 'Add a photo (multipart field "photo")',
       access: WRITERS,

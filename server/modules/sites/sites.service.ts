@@ -2,7 +2,7 @@ import type { Site, SiteInput, SiteListQuery } from '../../../shared/schemas/sit
 import type { AuthUser } from '../../middleware/authenticate'
 import { AppError, forbidden, notFound } from '../../http/app-error'
 import type { FileStore } from '../../integrations/file-store'
-import type { CompaniesRepository } from '../companies/companies.repository'
+import type { CompaniesService } from '../companies/companies.service'
 import type { SitesRepository } from './sites.repository'
 import { imageType } from './image-type'
 
@@ -10,7 +10,7 @@ export const MAX_PHOTO_BYTES = 12 * 1024 * 1024
 
 export function sitesService(deps: {
   sites: SitesRepository
-  companies: CompaniesRepository
+  companies: CompaniesService
   files: FileStore
 }) {
   async function customerCompany(id: number) {

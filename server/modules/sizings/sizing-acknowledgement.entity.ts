@@ -9,8 +9,8 @@ import {
 } from 'typeorm'
 import type { DesignCheck } from '../../../shared/schemas/design-checks'
 import { jsonColumn } from '../../http/json-column'
-import { UserEntity } from '../users/user.entity'
-import { SizingEntity } from './sizing.entity'
+import type { UserEntity } from '../users/user.entity'
+import type { SizingEntity } from './sizing.entity'
 
 /**
  * An engineer's acceptance of a design that fails checks, made at a handover. Every one is kept;
@@ -25,7 +25,7 @@ export class SizingAcknowledgementEntity {
   @Column('int')
   sizingId: number
 
-  @ManyToOne(() => SizingEntity, { onDelete: 'CASCADE' })
+  @ManyToOne('SizingEntity', { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'sizingId' })
   sizing: Relation<SizingEntity>
 
@@ -42,7 +42,7 @@ export class SizingAcknowledgementEntity {
   @Column('int')
   acknowledgedById: number
 
-  @ManyToOne(() => UserEntity, { onDelete: 'RESTRICT' })
+  @ManyToOne('UserEntity', { onDelete: 'RESTRICT' })
   @JoinColumn({ name: 'acknowledgedById' })
   acknowledgedBy: Relation<UserEntity>
 

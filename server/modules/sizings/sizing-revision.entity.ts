@@ -1,6 +1,5 @@
 import {
   Column,
-  CreateDateColumn,
   Entity,
   Index,
   JoinColumn,
@@ -8,22 +7,23 @@ import {
   PrimaryGeneratedColumn,
   type Relation,
 } from 'typeorm'
+import { CreatedRecord } from '../../db/record-columns'
 import type { SizingInput, SizingSummary } from '../../../shared/schemas/sizing'
 import type { SizingEvaluation } from '../../../shared/sizing/evaluate-sizing'
 import { jsonColumn } from '../../http/json-column'
-import { SizingEntity } from './sizing.entity'
+import type { SizingEntity } from './sizing.entity'
 
 /** One saved state of a sizing: the choices and the server's authoritative result. */
 @Entity('sizing_revisions')
 @Index(['sizingId', 'revision'], { unique: true })
-export class SizingRevisionEntity {
+export class SizingRevisionEntity extends CreatedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
   @Column('int')
   sizingId: number
 
-  @ManyToOne(() => SizingEntity, { onDelete: 'CASCADE' })
+  @ManyToOne('SizingEntity', { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'sizingId' })
   sizing: Relation<SizingEntity>
 
@@ -44,7 +44,4 @@ export class SizingRevisionEntity {
 
   @Column('int')
   createdById: number
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
-  createdAt: Date
 }

@@ -1,42 +1,43 @@
 import {
+  Index,
   Column,
-  CreateDateColumn,
   Entity,
   JoinColumn,
   ManyToOne,
   PrimaryGeneratedColumn,
-  UpdateDateColumn,
   type Relation,
 } from 'typeorm'
+import { TrackedRecord } from '../../db/record-columns'
 import type { SizingState } from '../../../shared/schemas/sizing'
-import { SizingAcknowledgementEntity } from './sizing-acknowledgement.entity'
-import { HostModelEntity } from '../models/host-model.entity'
-import { SiteEntity } from '../sites/site.entity'
-import { UserEntity } from '../users/user.entity'
+import type { SizingAcknowledgementEntity } from './sizing-acknowledgement.entity'
+import type { HostModelEntity } from '../models/host-model.entity'
+import type { SiteEntity } from '../sites/site.entity'
+import type { UserEntity } from '../users/user.entity'
 
+@Index('IDX_sizings_updated', ['updatedAt'])
 @Entity('sizings')
-export class SizingEntity {
+export class SizingEntity extends TrackedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
   @Column('int')
   siteId: number
 
-  @ManyToOne(() => SiteEntity, { onDelete: 'RESTRICT' })
+  @ManyToOne('SiteEntity', { onDelete: 'RESTRICT' })
   @JoinColumn({ name: 'siteId' })
   site: Relation<SiteEntity>
 
   @Column('int')
   modelId: number
 
-  @ManyToOne(() => HostModelEntity, { onDelete: 'RESTRICT' })
+  @ManyToOne('HostModelEntity', { onDelete: 'RESTRICT' })
   @JoinColumn({ name: 'modelId' })
   model: Relation<HostModelEntity>
 
   @Column('int')
   ownerId: number
 
-  @ManyToOne(() => UserEntity, { onDelete: 'RESTRICT' })
+  @ManyToOne('UserEntity', { onDelete: 'RESTRICT' })
   @JoinColumn({ name: 'ownerId' })
   owner: Relation<UserEntity>
 
@@ -59,18 +60,7 @@ export class SizingEntity {
   @Column('int', { nullable: true })
   acknowledgementId: number | null
 
-  @ManyToOne(() => SizingAcknowledgementEntity, { nullable: true, onDelete: 'SET NULL' })
+  @ManyToOne('SizingAcknowledgementEntity', { nullable: true, onDelete: 'SET NULL' })
   @JoinColumn({ name: 'acknowledgementId' })
   acknowledgement: Relation<SizingAcknowledgementEntity> | null
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
-  createdAt: Date
-
-  @UpdateDateColumn({
-    type: 'datetime',
-    precision: 3,
-    default: () => 'CURRENT_TIMESTAMP(3)',
-    onUpdate: 'CURRENT_TIMESTAMP(3)',
-  })
-  updatedAt: Date
 }

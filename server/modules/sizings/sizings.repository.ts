@@ -6,8 +6,6 @@ import type {
   SizingState,
 } from '../../../shared/schemas/sizing'
 import type { SizingEvaluation } from '../../../shared/sizing/evaluate-sizing'
-import { SiteEntity } from '../sites/site.entity'
-import { CompanyEntity } from '../companies/company.entity'
 import { SizingRevisionEntity } from './sizing-revision.entity'
 import { SizingEntity } from './sizing.entity'
 import type { StoredSummary } from './sizing-summary'
@@ -70,8 +68,8 @@ export function sizingsRepository(ds: DataSource) {
       const qb = sizings
         .createQueryBuilder('s')
         .leftJoinAndSelect('s.owner', 'owner')
-        .innerJoin(SiteEntity, 'site', 'site.id = s.siteId')
-        .innerJoin(CompanyEntity, 'company', 'company.id = site.companyId')
+        .innerJoin('s.site', 'site')
+        .innerJoin('site.company', 'company')
         .innerJoin(
           SizingRevisionEntity,
           'r',

@@ -1,5 +1,8 @@
+import { closedSignal } from '../../http/closed-signal'
+import { SizingListItemSchema, SizingViewSchema } from '../../../shared/schemas/sizing'
 import { Router } from 'express'
 import { z } from 'zod'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema, IdSchema } from '../../../shared/schemas/ids'
 import {
   SizingCreateSchema,
@@ -11,8 +14,8 @@ import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import type { SizingsService } from './sizings.service'
 
-const READERS = ['engineer', 'sales', 'admin'] as const
-const WRITERS = ['engineer', 'admin'] as const
+const READERS = ACCESS.sizings.read
+const WRITERS = ACCESS.sizings.write
 const RevisionQuery = z.object({ revision: IdSchema.optional() })
 
 export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
@@ -24,6 +27,7 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     {
       method: 'get',
       path: '/api/sizings',
+      response: z.array(SizingListItemSchema),
       tag,
       summary: 'Sizings visible to the caller',
       access: READERS,
@@ -37,13 +41,14 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     {
       method: 'post',
       path: '/api/sizings',
+      response: SizingViewSchema,
       tag,
       summary: 'Create a sizing; the server solves it in the worker pool',
       access: WRITERS,
       body: SizingCreateSchema,
       status: 201,
     },
-    ({ user, body }) => sizings.create(user, body.input),
+    ({ user, body, res }) => sizings.create(user, body.input, { signal: closedSignal(res) }),
   )
   route(
     router,
@@ -51,6 +56,7 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     {
       method: 'get',
       path: '/api/sizings/:id',
+      response: SizingViewSchema,
       tag,
       summary: 'A sizing with its stored result (current or a given revision)',
       access: READERS,
@@ -65,13 +71,15 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     {
       method: 'put',
       path: '/api/sizings/:id',
+      response: SizingViewSchema,
       tag,
       summary: 'Save a new revision from a base revision',
       access: WRITERS,
       params: IdParamSchema,
       body: SizingSaveSchema,
     },
-    ({ user, params, body }) => sizings.save(user, params.id, body),
+    ({ user, params, body, res }) =>
+      sizings.save(user, params.id, body, { signal: closedSignal(res) }),
   )
   route(
     router,
@@ -79,6 +87,7 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     {
       method: 'post',
       path: '/api/sizings/:id/submit',
+      response: SizingViewSchema,
       tag,
       summary:
         'Hand the sizing over to sales; a design that fails its checks needs them acknowledged with a reason (422 design-checks-failed)',
@@ -94,6 +103,7 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     {
       method: 'post',
       path: '/api/sizings/:id/reopen',
+      response: SizingViewSchema,
       tag,
       summary: 'Reopen a handed-over sizing to revise it',
       access: WRITERS,

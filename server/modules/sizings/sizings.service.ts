@@ -7,7 +7,7 @@ import type {
 } from '../../../shared/schemas/sizing'
 import { AppError, forbidden, notFound } from '../../http/app-error'
 import type { AuthUser } from '../../middleware/authenticate'
-import type { SizingPool } from '../../workers/pool'
+import type { JobOptions, SizingPool } from '../../workers/pool'
 import { checkModel, dotted } from '../models/check-model'
 import type { ModelsService } from '../models/models.service'
 import type { SitesService } from '../sites/sites.service'
@@ -55,7 +55,7 @@ export function sizingsService(deps: SizingsDeps) {
   }
 
   /** The authoritative solve, in the worker pool; a model error becomes a 400 naming the field. */
-  async function evaluate(input: SizingInput) {
+  async function evaluate(input: SizingInput, job: JobOptions = {}) {
     const site = await deps.sites.get(input.siteId)
     await checkRecords(site.id, input.records)
     const model = await deps.models.get(input.modelId)
@@ -66,7 +66,7 @@ export function sizingsService(deps: SizingsDeps) {
     const definition = await deps.models.definitionAt(input.modelId, input.modelRevision)
     // A model stored before today's checks is checked again before it reaches the engine.
     checkModel(definition, 'model')
-    const out = await deps.pool.run({ model: definition, input })
+    const out = await deps.pool.run({ model: definition, input }, job)
     if (!out.ok && out.unsolvable)
       throw new AppError('unsolvable-model', out.message, 422, [
         { path: 'model', message: out.message },
@@ -113,8 +113,8 @@ export function sizingsService(deps: SizingsDeps) {
       return deps.sizings.list({ ...q, visibleTo: { ownerId: user.id } })
     },
 
-    async create(user: AuthUser, input: SizingInput) {
-      const data = await evaluate(input)
+    async create(user: AuthUser, input: SizingInput, job?: JobOptions) {
+      const data = await evaluate(input, job)
       const id = await deps.sizings.create({
         siteId: input.siteId,
         modelId: input.modelId,
@@ -126,7 +126,7 @@ export function sizingsService(deps: SizingsDeps) {
     },
 
     /** Saves revision base+1; the same save repeated returns the revision it already made. */
-    async save(user: AuthUser, id: number, body: SizingSave) {
+    async save(user: AuthUser, id: number, body: SizingSave, job?: JobOptions) {
       const s = await record(user, id)
       assertOwner(user, s)
       if (s.state !== 'draft')
@@ -143,7 +143,7 @@ export function sizingsService(deps: SizingsDeps) {
         const latest = await deps.sizings.revision(id, s.currentRevision)
         if (latest && isDeepStrictEqual(latest.input, body.input)) return view(user, id)
       }
-      const data = await evaluate(body.input)
+      const data = await evaluate(body.input, job)
       if (
         await deps.sizings.addRevision(id, body.baseRevision, user.id, {
           ...data,

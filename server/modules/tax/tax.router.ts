@@ -1,22 +1,29 @@
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
-import { CompanyTaxRateSchema, TaxRateInputSchema } from '../../../shared/schemas/tax'
+import {
+  CompanyTaxRateSchema,
+  TaxRateInputSchema,
+  TaxRateSchema,
+  TaxSettingsSchema,
+} from '../../../shared/schemas/tax'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import type { TaxService } from './tax.service'
 
 export function taxRouter(api: ApiRegistry, tax: TaxService) {
   const router = Router()
-  const admin = { tag: 'Tax rates', access: ['admin'] as const }
+  const admin = { tag: 'Tax rates', access: ACCESS.tax.write }
   route(
     router,
     api,
     {
       tag: 'Tax rates',
-      access: ['admin', 'sales'],
+      access: ACCESS.tax.read,
       method: 'get',
       path: '/api/tax-rates',
       summary: 'Named tax rates, the default, and each customer company’s own rate',
+      response: TaxSettingsSchema,
     },
     () => tax.settings(),
   )
@@ -28,6 +35,7 @@ export function taxRouter(api: ApiRegistry, tax: TaxService) {
       method: 'post',
       path: '/api/tax-rates',
       summary: 'Add a named tax rate',
+      response: TaxRateSchema,
       body: TaxRateInputSchema,
       status: 201,
     },
@@ -41,6 +49,7 @@ export function taxRouter(api: ApiRegistry, tax: TaxService) {
       method: 'put',
       path: '/api/tax-rates/:id',
       summary: 'Change a tax rate; quotes priced afterwards use the new rate',
+      response: TaxRateSchema,
       params: IdParamSchema,
       body: TaxRateInputSchema,
     },
@@ -54,6 +63,7 @@ export function taxRouter(api: ApiRegistry, tax: TaxService) {
       method: 'put',
       path: '/api/tax-rates/companies/:id',
       summary: 'Give a customer company its own tax rate, or null for the default',
+      response: TaxSettingsSchema,
       params: IdParamSchema,
       body: CompanyTaxRateSchema,
     },

@@ -1,11 +1,11 @@
 import type { AppliedTaxRate, TaxRateInput, TaxSettings } from '../../../shared/schemas/tax'
 import { AppError, notFound } from '../../http/app-error'
-import type { CompaniesRepository } from '../companies/companies.repository'
+import type { CompaniesService } from '../companies/companies.service'
 import type { TaxRepository } from './tax.repository'
 
 export interface TaxDeps {
   repo: TaxRepository
-  companies: CompaniesRepository
+  companies: Pick<CompaniesService, 'list' | 'findById'>
 }
 
 function nameTaken(name: string) {

@@ -1,17 +1,17 @@
 import {
   Column,
-  CreateDateColumn,
   Entity,
   JoinColumn,
   ManyToOne,
   PrimaryGeneratedColumn,
   type Relation,
 } from 'typeorm'
+import { CreatedRecord } from '../../db/record-columns'
 import type { Role } from '../../../shared/schemas/auth'
-import { CompanyEntity } from '../companies/company.entity'
+import type { CompanyEntity } from '../companies/company.entity'
 
 @Entity('users')
-export class UserEntity {
+export class UserEntity extends CreatedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
@@ -41,10 +41,7 @@ export class UserEntity {
   @Column('int', { nullable: true })
   companyId: number | null
 
-  @ManyToOne(() => CompanyEntity, { nullable: true, onDelete: 'RESTRICT' })
+  @ManyToOne('CompanyEntity', { nullable: true, onDelete: 'RESTRICT' })
   @JoinColumn({ name: 'companyId' })
   company: Relation<CompanyEntity> | null
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
-  createdAt: Date
 }

@@ -1,17 +1,9 @@
 import type { DataSource } from 'typeorm'
-import type { Role } from '../../../shared/schemas/auth'
+import type { Account } from '../auth/accounts'
 import { UserEntity } from './user.entity'
 
-export interface UserRecord {
-  id: number
-  email: string
-  name: string
-  role: Role
-  passwordHash: string | null
-  active: boolean
-  tokenVersion: number
-  companyId: number | null
-  companyName: string | null
+/** A user account as the users module keeps it: what sign-in reads, and when it was made. */
+export interface UserRecord extends Account {
   createdAt: Date
 }
 

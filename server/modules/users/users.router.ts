@@ -1,4 +1,7 @@
+import { z } from 'zod'
+import { UserSummarySchema } from '../../../shared/schemas/auth'
 import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
 import { InviteSchema, UserPatchSchema } from '../../../shared/schemas/auth'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import type { ApiRegistry } from '../../http/api-registry'
@@ -12,7 +15,14 @@ export function usersRouter(api: ApiRegistry, users: ReturnType<typeof usersServ
   route(
     router,
     api,
-    { method: 'get', path: '/api/users', tag, summary: 'All users', access: ['admin'] },
+    {
+      method: 'get',
+      path: '/api/users',
+      response: z.array(UserSummarySchema),
+      tag,
+      summary: 'All users',
+      access: ACCESS.users.read,
+    },
     () => users.list(),
   )
   route(
@@ -21,9 +31,10 @@ export function usersRouter(api: ApiRegistry, users: ReturnType<typeof usersServ
     {
       method: 'post',
       path: '/api/users',
+      response: UserSummarySchema,
       tag,
       summary: 'Invite a user by e-mail',
-      access: ['admin'],
+      access: ACCESS.users.write,
       body: InviteSchema,
       status: 201,
     },
@@ -35,9 +46,10 @@ export function usersRouter(api: ApiRegistry, users: ReturnType<typeof usersServ
     {
       method: 'patch',
       path: '/api/users/:id',
+      response: UserSummarySchema,
       tag,
       summary: 'Change role or deactivate',
-      access: ['admin'],
+      access: ACCESS.users.write,
       params: IdParamSchema,
       body: UserPatchSchema,
     },

@@ -1,7 +1,7 @@
 import type { Invite, UserPatch, UserSummary } from '../../../shared/schemas/auth'
 import { AppError, notFound } from '../../http/app-error'
 import { hashPassword, type AuthService } from '../auth/auth.service'
-import type { CompaniesRepository } from '../companies/companies.repository'
+import type { CompaniesService } from '../companies/companies.service'
 import type { Throttle } from '../../integrations/rate-limits'
 import type { UserRecord, UsersRepository } from './users.repository'
 
@@ -23,7 +23,7 @@ function summary(u: UserRecord): UserSummary {
 
 export function usersService(deps: {
   users: UsersRepository
-  companies: CompaniesRepository
+  companies: CompaniesService
   auth: AuthService
   inviteLimit: Throttle
 }) {
@@ -95,3 +95,4 @@ export function usersService(deps: {
     },
   }
 }
+export type UsersService = ReturnType<typeof usersService>

@@ -1,6 +1,13 @@
 /** The human-readable `npm run bench` report: each figure with its target and ratio beside it. */
-import type { BenchResult } from '../bench'
+import type { ServerFigures } from '../bench-server'
+import type { EigenFigure, StudyFigure } from './engine'
 import { TARGETS } from './targets'
+
+export interface BenchResult extends ServerFigures {
+  study: StudyFigure[]
+  eigen: EigenFigure[]
+  bundle: { initialGzipBytes: number; largestRouteGzipBytes: number }
+}
 
 const ms = (v: number | null) => (v === null ? '—' : v < 10 ? v.toFixed(2) : v.toFixed(0))
 const verdict = (ok: boolean) => (ok ? 'met' : 'not met')

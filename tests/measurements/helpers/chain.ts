@@ -1,4 +1,4 @@
-import { gaussian, mulberry32 } from './random'
+import { gaussian, seeded } from '../../helpers/random'
 import { transition } from './synthesize'
 
 /** A classical normal mode: frequency, damping ratio and mass-normalised shape. */
@@ -12,7 +12,7 @@ export interface NormalMode {
 /**
  * Modes of n equal masses m between two supports joined by n+1 equal springs k:
  * ω_r² = (4k/m) sin²(rπ/(2(n+1))), φ_jr = sin(j r π/(n+1)) (textbook closed form for the
- * uniform fixed–fixed chain; engineering-references "Chains"), scaled so φᵀMφ = 1
+ * uniform fixed–fixed chain; docs/engineering/host-model.md#chain-check-values), scaled so φᵀMφ = 1
  * (Σ_j sin²(j r π/(n+1)) = (n+1)/2).
  * @param n masses
  * @param m kg
@@ -83,7 +83,7 @@ export function ambientResponse(
 ): Float64Array[] {
   const n = Math.round(durationS * sampleRateHz)
   const dofs = modes[0]?.shape.length ?? 0
-  const normal = gaussian(mulberry32(seed))
+  const normal = gaussian(seeded(seed))
   const forces = Array.from({ length: dofs }, () => Float64Array.from({ length: n }, normal))
   const modalForce = (mode: NormalMode, j: number) =>
     mode.shape.reduce((u, phi, d) => u + phi * force * (forces[d]?.[j] ?? 0), 0)
@@ -108,7 +108,7 @@ export function impulseResponse(
   seed: number,
 ): Float64Array[] {
   const n = Math.round(durationS * sampleRateHz)
-  const normal = gaussian(mulberry32(seed))
+  const normal = gaussian(seeded(seed))
   const out = superpose(
     modes,
     sampleRateHz,

@@ -1,4 +1,4 @@
-import { gaussian, mulberry32 } from './random'
+import { gaussian, seeded } from '../../helpers/random'
 
 /** One single-degree-of-freedom mode: natural frequency f (Hz) and damping ratio ζ. */
 export interface Mode {
@@ -42,7 +42,7 @@ export function freeDecay(
 ): Float64Array {
   const n = Math.round(durationS * sampleRateHz)
   const start = Math.round(preTriggerS * sampleRateHz)
-  const normal = gaussian(mulberry32(seed))
+  const normal = gaussian(seeded(seed))
   const out = new Float64Array(n)
   for (const { mode, velocity } of modes) {
     const m = transition(mode, 1 / sampleRateHz)
@@ -69,7 +69,7 @@ export function ambient(
   seed: number,
 ): Float64Array {
   const n = Math.round(durationS * sampleRateHz)
-  const normal = gaussian(mulberry32(seed))
+  const normal = gaussian(seeded(seed))
   const force = Float64Array.from({ length: n }, () => normal())
   const out = Float64Array.from({ length: n }, () => noise * normal())
   for (const { mode, gain } of modes) {

@@ -1,9 +1,12 @@
 import { formatBasisPoints, formatMoney } from '../../../../shared/money'
 import type { CustomerQuote as Quote } from '../../../../shared/schemas/quote'
-import { esc, sig } from './html'
+import { esc, sig } from '../../../integrations/pdf/html'
 import { responseChartSvg } from './response-chart'
 import { QUOTE_CSS } from './quote-styles'
-import { ACKNOWLEDGEMENT_CSS, acknowledgementHtml } from './acknowledgement-html'
+import {
+  ACKNOWLEDGEMENT_CSS,
+  acknowledgementHtml,
+} from '../../../integrations/pdf/acknowledgement-html'
 
 /** The engineering caution printed on every quote. */
 export const QUOTE_CAUTION =

@@ -1,4 +1,4 @@
-import { esc } from './html'
+import { esc } from '../../../integrations/pdf/html'
 
 export interface ChartSeries {
   frequencyHz: readonly number[]

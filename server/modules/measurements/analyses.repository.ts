@@ -1,0 +1,41 @@
+import type { DataSource } from 'typeorm'
+import type { RecordAnalysis } from '../../../shared/schemas/record-analysis'
+import { RecordAnalysisEntity } from './record-analysis.entity'
+
+function toAnalysis(a: RecordAnalysisEntity): RecordAnalysis {
+  return {
+    id: a.id,
+    recordId: a.recordId,
+    ownerId: a.ownerId,
+    method: a.method,
+    modes: a.modes,
+    result: a.result,
+    createdAt: a.createdAt.toISOString(),
+  }
+}
+
+/** Modal analyses of records; they are removed with their record (foreign key cascade). */
+export function analysesRepository(ds: DataSource) {
+  const repo = ds.getRepository(RecordAnalysisEntity)
+  return {
+    async create(input: Omit<RecordAnalysis, 'id' | 'createdAt'>) {
+      const saved = await repo.save(repo.create(input))
+      return toAnalysis(await repo.findOneByOrFail({ id: saved.id }))
+    },
+    async findById(id: number) {
+      const a = await repo.findOneBy({ id })
+      return a ? toAnalysis(a) : null
+    },
+    async listByRecord(recordId: number) {
+      const rows = await repo.find({
+        where: { recordId },
+        order: { createdAt: 'DESC', id: 'DESC' },
+      })
+      return rows.map(toAnalysis)
+    },
+    async remove(id: number) {
+      await repo.delete({ id })
+    },
+  }
+}
+export type AnalysesRepository = ReturnType<typeof analysesRepository>

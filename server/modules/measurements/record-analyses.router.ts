@@ -1,0 +1,116 @@
+import type { Router } from 'express'
+import { z } from 'zod'
+import { IdParamSchema } from '../../../shared/schemas/ids'
+import {
+  AnalysisRunSchema,
+  ChannelMapSchema,
+  ModelUpdateRequestSchema,
+} from '../../../shared/schemas/record-analysis'
+import type { ApiRegistry } from '../../http/api-registry'
+import { route } from '../../http/route'
+import type { Measurements } from './calibrate.service'
+
+const READERS = ['engineer', 'sales', 'admin'] as const
+const WRITERS = ['engineer', 'admin'] as const
+const tag = 'Measurements'
+
+const HistoryQuerySchema = z.object({
+  /** most points per channel in the chart */
+  points: z.coerce.number().int().min(100).max(20_000).default(4000),
+})
+
+/** Channels, time histories, modal analyses of records and model updating from them. */
+export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measurements) {
+  const common = { tag, params: IdParamSchema }
+  route(
+    router,
+    api,
+    {
+      ...common,
+      method: 'put',
+      path: '/api/records/:id/channels',
+      summary: 'Tie the record to a model and each channel to a node and sensing axis',
+      access: WRITERS,
+      body: ChannelMapSchema,
+    },
+    ({ user, params, body }) => m.mapChannels(user, params.id, body),
+  )
+  route(
+    router,
+    api,
+    {
+      ...common,
+      method: 'get',
+      path: '/api/records/:id/history',
+      summary: 'Every channel over time, thinned for a chart (peaks kept)',
+      access: READERS,
+      query: HistoryQuerySchema,
+    },
+    ({ params, query }) => m.analyses.history(params.id, query.points),
+  )
+  route(
+    router,
+    api,
+    {
+      ...common,
+      method: 'post',
+      path: '/api/records/:id/analyses',
+      summary: 'Identify the modes of all channels (FDD/EFDD or SSI-COV) and keep the result',
+      access: WRITERS,
+      body: AnalysisRunSchema,
+      status: 201,
+    },
+    ({ user, params, body }) => m.analyses.run(user, params.id, body),
+  )
+  route(
+    router,
+    api,
+    {
+      ...common,
+      method: 'get',
+      path: '/api/records/:id/analyses',
+      summary: 'The modal analyses of a record, newest first',
+      access: READERS,
+    },
+    ({ params }) => m.analyses.list(params.id),
+  )
+  route(
+    router,
+    api,
+    {
+      ...common,
+      method: 'delete',
+      path: '/api/analyses/:id',
+      summary: 'Delete one modal analysis',
+      access: WRITERS,
+    },
+    ({ user, params }) => m.analyses.remove(user, params.id),
+  )
+  route(
+    router,
+    api,
+    {
+      ...common,
+      method: 'post',
+      path: '/api/models/:id/updates/preview',
+      summary: 'Model updating from an analysis: factors, frequencies and MAC before and after',
+      access: WRITERS,
+      body: ModelUpdateRequestSchema,
+    },
+    ({ params, body }) => m.updates.preview(params.id, body),
+  )
+  route(
+    router,
+    api,
+    {
+      ...common,
+      method: 'post',
+      path: '/api/models/:id/updates',
+      summary: 'Model updating from an analysis, saved as a new model revision with its reason',
+      access: WRITERS,
+      body: ModelUpdateRequestSchema,
+      status: 201,
+    },
+    ({ user, params, body }) => m.updates.apply(user, params.id, body),
+  )
+}

@@ -1,0 +1,59 @@
+import type {
+  IdentificationResult,
+  RecordKind,
+  TimeUnit,
+  TimeUnitSource,
+} from '../../shared/measurements'
+import { AppError } from '../http/app-error'
+import { identify, readRecord } from '../modules/measurements/record-file'
+import type { ReadAs } from './measurements.worker'
+
+export interface RecordJob {
+  bytes: Uint8Array
+  /** how to read the file: a sample rate for a file without a time column, the time unit */
+  readAs: ReadAs
+  kind?: RecordKind
+}
+
+/** What an upload stores of a read record: its rate, length, channels and time unit. */
+export interface ReadSummary {
+  channels: { name: string; column: number }[]
+  timeUnit: TimeUnit | null
+  timeUnitSource: TimeUnitSource | null
+}
+
+export type RecordOutcome =
+  | {
+      ok: true
+      sampleRateHz: number
+      samples: number
+      record: ReadSummary
+      result: IdentificationResult
+    }
+  | { ok: false; code: string; message: string; status: number; details?: unknown }
+
+/**
+ * Reads a record file and identifies its modes in a worker thread, so a large upload never holds
+ * up other requests. A refusal comes back as data (errors lose their class crossing threads).
+ */
+export default function run(job: RecordJob): RecordOutcome {
+  try {
+    const record = readRecord(job.bytes, job.readAs)
+    const result = identify(record, job.kind)
+    return {
+      ok: true,
+      sampleRateHz: record.sampleRateHz,
+      samples: record.acceleration.length,
+      record: {
+        channels: record.channels.map((c) => ({ name: c.name, column: c.column })),
+        timeUnit: record.timeUnit,
+        timeUnitSource: record.timeUnitSource,
+      },
+      result,
+    }
+  } catch (e) {
+    if (e instanceof AppError)
+      return { ok: false, code: e.code, message: e.message, status: e.status, details: e.details }
+    throw e
+  }
+}

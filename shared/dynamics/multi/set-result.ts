@@ -1,0 +1,86 @@
+import type { TuningName } from '../../schemas/model'
+import type { AbsorberReport, ExcitationReport, ModeReport, ResponseReport } from '../sizing-result'
+import type { SetRobustnessReport } from './set-robustness'
+import type { SetStartName } from './set-starts'
+
+/** One unit of a set, as built and as it behaves with the whole set in place; the fields shared
+ * with the single absorber mean the same, with its own target mode for the ratios. */
+export interface SetUnitReport extends Pick<
+  AbsorberReport,
+  | 'node'
+  | 'relativeTo'
+  | 'mass'
+  | 'massRatio'
+  | 'stiffness'
+  | 'damping'
+  | 'frequencyHz'
+  | 'frequencyRatio'
+  | 'dampingRatio'
+  | 'strokeLimit'
+> {
+  /** 1-based mode the unit aims at */
+  targetMode: number
+  /** kg, of that mode on the unit's coordinate, 1/(uᵀφ_r)² */
+  effectiveMass: number
+  /** 'joint' when tuned together with other units, else the request's method */
+  tuning: TuningName | 'given' | 'joint'
+  /** sag of a vertical unit under its own weight, g/ω_a², m */
+  staticDeflection: number
+  /** largest stroke per unit load over the band with the whole set (m per load unit) */
+  maxStrokePerLoad: number | null
+  maxStrokeFrequencyHz: number | null
+  /** largest stroke at the design load (excitation.amplitude), m */
+  maxStroke: number | null
+  /** whether maxStroke stays within strokeLimit; null without a limit */
+  strokeWithinLimit: boolean | null
+}
+
+/** Peak response per unit load, without and with the whole set, over some band. */
+export interface SetPeakReport {
+  without: number | null
+  with: number | null
+  withoutFrequencyHz: number | null
+  withFrequencyHz: number | null
+  /** 1 − with/without */
+  reduction: number | null
+}
+
+/** One target mode's own band and its peak there. */
+export interface TargetReport extends SetPeakReport {
+  /** 1-based */
+  mode: number
+  frequencyHz: number
+  minHz: number
+  maxHz: number
+}
+
+/** Result of `solveSet`: the command line's answer for a model with `absorbers`. */
+export interface SetSizingResult {
+  nodeIds: string[]
+  modes: ModeReport[]
+  excitation: ExcitationReport
+  response: ResponseReport
+  /** the union of the target modes' bands (or the user's band / running speed), Hz */
+  band: { intervals: { minHz: number; maxHz: number }[]; modes: number[]; source: string }
+  absorbers: SetUnitReport[]
+  /** kg, Σ of the units' masses */
+  totalMass: number
+  /** over the whole band, in `unit` */
+  peak: SetPeakReport & { unit: string }
+  /** each target mode over its own band (the user's band when one is given) */
+  targets: TargetReport[]
+  tuning: {
+    /** 'hinf': largest response over the band; 'h2': its mean square */
+    objective: 'hinf' | 'h2'
+    /** where the joint search started; null when no unit was optimised */
+    startedFrom: SetStartName | null
+    /** the objective of each start on the same model; the result is never worse than the best */
+    starts: { name: SetStartName; value: number }[]
+    value: number
+    scope: string
+  }
+  /** the peak with the set when the host frequency is off, beside one unit of the same mass */
+  robustness: SetRobustnessReport
+  notes: string[]
+  cautions: string[]
+}

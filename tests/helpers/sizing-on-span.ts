@@ -1,0 +1,49 @@
+import { spanModel } from '../../shared/dynamics'
+import type { SizingInput } from '../../shared/schemas/sizing'
+import { toAuthUser } from '../../server/modules/auth/auth.service'
+import type { TestApp } from './app'
+import { makeUser } from './factories'
+import { makeCompany } from './records'
+
+/** A fresh engineer with a three-mass floor span (5.8 Hz, invented) and a draft sizing on it. */
+export async function engineerWithSizing(t: TestApp) {
+  const s = t.services
+  const engineer = await makeUser(t, 'engineer')
+  const user = toAuthUser((await s.users.findByEmail(engineer.email))!)
+  const company = await makeCompany(t)
+  const site = await s.sites.create(user, {
+    name: `Round-trip floor ${engineer.id}`,
+    companyId: company.id,
+    structureKind: 'floor',
+    address: '',
+    contactName: '',
+    contactPhone: '',
+    notes: '',
+  })
+  const m = spanModel(3, 30_000, 5.8)
+  const definition = { nodes: m.nodes, springs: m.springs, hostDampingRatio: 0.02 }
+  const model = await s.models.create(user, {
+    siteId: site.id,
+    name: 'Bay span',
+    definition,
+    reason: 'first version',
+  })
+  const input: SizingInput = {
+    title: 'Bay absorber',
+    siteId: site.id,
+    modelId: model.id,
+    modelRevision: 1,
+    targetMode: 1,
+    absorberNode: 'node-2',
+    excitationNode: 'node-2',
+    responseNode: 'node-2',
+    forceAmplitude: 280,
+    massRatio: 0.02,
+    tuning: 'optimize',
+    orientation: 'vertical',
+    acceptance: { label: 'custom', quantity: 'acceleration', limit: 0.05 },
+    detuningTolerance: 0.1,
+  }
+  const sizing = await s.sizings.create(user, input)
+  return { engineer, user, sizing, input, modelId: model.id }
+}
