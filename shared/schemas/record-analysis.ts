@@ -120,3 +120,37 @@ export interface ModelUpdateAnswer {
   update: ModelUpdate
   model: HostModel | null
 }
+
+/** An engine object passed through as it is (its type is the engine's); checked to be an object. */
+const engineObject = <T>(what: string) =>
+  z.custom<T>((v) => typeof v === 'object' && v !== null, `an ${what}`)
+
+/** The answers of the record-analysis routes, for the OpenAPI document and the API tests. */
+export const AnalysisModeSchema: z.ZodType<AnalysisMode> = z.object({
+  frequencyHz: z.number(),
+  dampingRatio: z.number().nullable(),
+  shape: z.array(z.number()),
+  flags: z.array(z.custom<ResultFlag>((v) => typeof v === 'string', 'a flag')),
+  warnings: z.array(z.string()),
+})
+
+export const RecordAnalysisSchema: z.ZodType<RecordAnalysis> = z.object({
+  id: z.number().int(),
+  recordId: z.number().int(),
+  ownerId: z.number().int(),
+  method: z.enum(['fdd', 'ssi']),
+  modes: z.array(AnalysisModeSchema),
+  result: engineObject<ModalIdentification | SsiIdentification>('identification'),
+  createdAt: z.string(),
+})
+
+export const RecordTimeHistorySchema: z.ZodType<RecordTimeHistory> = z.object({
+  sampleRateHz: z.number(),
+  timeS: z.array(z.number()),
+  channels: z.array(z.object({ name: z.string(), values: z.array(z.number()) })),
+})
+
+export const ModelUpdateAnswerSchema: z.ZodType<ModelUpdateAnswer> = z.object({
+  update: engineObject<ModelUpdate>('update'),
+  model: engineObject<HostModel>('host model').nullable(),
+})

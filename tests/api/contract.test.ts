@@ -17,7 +17,12 @@ beforeAll(async () => {
 afterAll(() => t.close())
 
 /** The routes that answer with no body: a new JSON route must declare its response schema. */
-const NO_BODY = ['delete /api/records/{id}', 'post /api/auth/password', 'post /api/auth/sign-out']
+const NO_BODY = [
+  'delete /api/analyses/{id}',
+  'delete /api/records/{id}',
+  'post /api/auth/password',
+  'post /api/auth/sign-out',
+]
 
 describe('the API contract', () => {
   it('documents the answer of every route: a JSON schema, a file type, or no body', async () => {

@@ -1,17 +1,22 @@
 import type { Router } from 'express'
 import { z } from 'zod'
 import { IdParamSchema } from '../../../shared/schemas/ids'
+import { ACCESS } from '../../../shared/access'
+import { MeasurementRecordSchema } from '../../../shared/schemas/measurement'
 import {
   AnalysisRunSchema,
   ChannelMapSchema,
+  ModelUpdateAnswerSchema,
   ModelUpdateRequestSchema,
+  RecordAnalysisSchema,
+  RecordTimeHistorySchema,
 } from '../../../shared/schemas/record-analysis'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import type { Measurements } from './calibrate.service'
 
-const READERS = ['engineer', 'sales', 'admin'] as const
-const WRITERS = ['engineer', 'admin'] as const
+const READERS = ACCESS.measurements.read
+const WRITERS = ACCESS.measurements.write
 const tag = 'Measurements'
 
 const HistoryQuerySchema = z.object({
@@ -29,6 +34,7 @@ export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measur
       ...common,
       method: 'put',
       path: '/api/records/:id/channels',
+      response: MeasurementRecordSchema,
       summary: 'Tie the record to a model and each channel to a node and sensing axis',
       access: WRITERS,
       body: ChannelMapSchema,
@@ -42,6 +48,7 @@ export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measur
       ...common,
       method: 'get',
       path: '/api/records/:id/history',
+      response: RecordTimeHistorySchema,
       summary: 'Every channel over time, thinned for a chart (peaks kept)',
       access: READERS,
       query: HistoryQuerySchema,
@@ -55,6 +62,7 @@ export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measur
       ...common,
       method: 'post',
       path: '/api/records/:id/analyses',
+      response: RecordAnalysisSchema,
       summary: 'Identify the modes of all channels (FDD/EFDD or SSI-COV) and keep the result',
       access: WRITERS,
       body: AnalysisRunSchema,
@@ -69,6 +77,7 @@ export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measur
       ...common,
       method: 'get',
       path: '/api/records/:id/analyses',
+      response: z.array(RecordAnalysisSchema),
       summary: 'The modal analyses of a record, newest first',
       access: READERS,
     },
@@ -93,6 +102,7 @@ export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measur
       ...common,
       method: 'post',
       path: '/api/models/:id/updates/preview',
+      response: ModelUpdateAnswerSchema,
       summary: 'Model updating from an analysis: factors, frequencies and MAC before and after',
       access: WRITERS,
       body: ModelUpdateRequestSchema,
@@ -106,6 +116,7 @@ export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measur
       ...common,
       method: 'post',
       path: '/api/models/:id/updates',
+      response: ModelUpdateAnswerSchema,
       summary: 'Model updating from an analysis, saved as a new model revision with its reason',
       access: WRITERS,
       body: ModelUpdateRequestSchema,
