@@ -1,11 +1,5 @@
-import {
-  Column,
-  Entity,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from 'typeorm'
+import { Column, Entity, PrimaryGeneratedColumn, type Relation } from 'typeorm'
+import { ReferenceTo } from '../../db/reference-column'
 import { CreatedRecord } from '../../db/record-columns'
 import type { IdentificationResult, TimeUnit, TimeUnitSource } from '../../../shared/measurements'
 import type { RecordChannelInfo } from '../../../shared/schemas/measurement'
@@ -19,11 +13,9 @@ export class MeasurementRecordEntity extends CreatedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
-  @Column('int')
-  siteId: number
+  declare siteId: number
 
-  @ManyToOne('SiteEntity', { onDelete: 'CASCADE' })
-  @JoinColumn({ name: 'siteId' })
+  @ReferenceTo('SiteEntity', { onDelete: 'CASCADE' })
   site: Relation<SiteEntity>
 
   /** the host model the record was taken on, when known */
@@ -34,11 +26,9 @@ export class MeasurementRecordEntity extends CreatedRecord {
   @Column('varchar', { length: 60, nullable: true })
   nodeId: string | null
 
-  @Column('int')
-  ownerId: number
+  declare ownerId: number
 
-  @ManyToOne('UserEntity', { onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'ownerId' })
+  @ReferenceTo('UserEntity', { onDelete: 'RESTRICT' })
   owner: Relation<UserEntity>
 
   @Column('varchar', { length: 200 })

@@ -1,11 +1,5 @@
-import {
-  Column,
-  Entity,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from 'typeorm'
+import { Column, Entity, PrimaryGeneratedColumn, type Relation } from 'typeorm'
+import { ReferenceTo } from '../../db/reference-column'
 import { TrackedRecord } from '../../db/record-columns'
 import type { SiteEntity } from '../sites/site.entity'
 import type { UserEntity } from '../users/user.entity'
@@ -16,18 +10,14 @@ export class HostModelEntity extends TrackedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
-  @Column('int')
-  siteId: number
+  declare siteId: number
 
-  @ManyToOne('SiteEntity', { onDelete: 'CASCADE' })
-  @JoinColumn({ name: 'siteId' })
+  @ReferenceTo('SiteEntity', { onDelete: 'CASCADE' })
   site: Relation<SiteEntity>
 
-  @Column('int')
-  ownerId: number
+  declare ownerId: number
 
-  @ManyToOne('UserEntity', { onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'ownerId' })
+  @ReferenceTo('UserEntity', { onDelete: 'RESTRICT' })
   owner: Relation<UserEntity>
 
   @Column('varchar', { length: 160 })

@@ -1,12 +1,5 @@
-import {
-  Column,
-  Entity,
-  Index,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from 'typeorm'
+import { Column, Entity, Index, PrimaryGeneratedColumn, type Relation } from 'typeorm'
+import { ReferenceTo } from '../../db/reference-column'
 import { CreatedRecord } from '../../db/record-columns'
 import type { ModelDefinition } from '../../../shared/schemas/sizing'
 import { jsonColumn } from '../../http/json-column'
@@ -19,11 +12,9 @@ export class ModelRevisionEntity extends CreatedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
-  @Column('int')
-  modelId: number
+  declare modelId: number
 
-  @ManyToOne('HostModelEntity', { onDelete: 'CASCADE' })
-  @JoinColumn({ name: 'modelId' })
+  @ReferenceTo('HostModelEntity', { onDelete: 'CASCADE' })
   model: Relation<HostModelEntity>
 
   @Column('int')

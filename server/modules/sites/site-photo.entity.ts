@@ -1,11 +1,5 @@
-import {
-  Column,
-  Entity,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from 'typeorm'
+import { Column, Entity, PrimaryGeneratedColumn, type Relation } from 'typeorm'
+import { ReferenceTo } from '../../db/reference-column'
 import { CreatedRecord } from '../../db/record-columns'
 import type { SiteEntity } from './site.entity'
 
@@ -15,11 +9,9 @@ export class SitePhotoEntity extends CreatedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
-  @Column('int')
-  siteId: number
+  declare siteId: number
 
-  @ManyToOne('SiteEntity', 'photos', { onDelete: 'CASCADE' })
-  @JoinColumn({ name: 'siteId' })
+  @ReferenceTo('SiteEntity', { onDelete: 'CASCADE', inverse: 'photos' })
   site: Relation<SiteEntity>
 
   @Column('varchar', { length: 200 })

@@ -1,13 +1,5 @@
-import {
-  Index,
-  Column,
-  Entity,
-  JoinColumn,
-  ManyToOne,
-  OneToMany,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from 'typeorm'
+import { Index, Column, Entity, OneToMany, PrimaryGeneratedColumn, type Relation } from 'typeorm'
+import { ReferenceTo } from '../../db/reference-column'
 import { TrackedRecord } from '../../db/record-columns'
 import type { StructureKind } from '../../../shared/schemas/site'
 import type { CompanyEntity } from '../companies/company.entity'
@@ -23,18 +15,14 @@ export class SiteEntity extends TrackedRecord {
   @Column('varchar', { length: 160 })
   name: string
 
-  @Column('int')
-  companyId: number
+  declare companyId: number
 
-  @ManyToOne('CompanyEntity', { onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'companyId' })
+  @ReferenceTo('CompanyEntity', { onDelete: 'RESTRICT' })
   company: Relation<CompanyEntity>
 
-  @Column('int')
-  ownerId: number
+  declare ownerId: number
 
-  @ManyToOne('UserEntity', { onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'ownerId' })
+  @ReferenceTo('UserEntity', { onDelete: 'RESTRICT' })
   owner: Relation<UserEntity>
 
   @Column('varchar', { length: 300, default: '' })

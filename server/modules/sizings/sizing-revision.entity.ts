@@ -1,12 +1,5 @@
-import {
-  Column,
-  Entity,
-  Index,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from 'typeorm'
+import { Column, Entity, Index, PrimaryGeneratedColumn, type Relation } from 'typeorm'
+import { ReferenceTo } from '../../db/reference-column'
 import { CreatedRecord } from '../../db/record-columns'
 import type { SizingInput, SizingSummary } from '../../../shared/schemas/sizing'
 import type { SizingEvaluation } from '../../../shared/sizing/evaluate-sizing'
@@ -20,11 +13,9 @@ export class SizingRevisionEntity extends CreatedRecord {
   @PrimaryGeneratedColumn('increment', { type: 'int' })
   id: number
 
-  @Column('int')
-  sizingId: number
+  declare sizingId: number
 
-  @ManyToOne('SizingEntity', { onDelete: 'CASCADE' })
-  @JoinColumn({ name: 'sizingId' })
+  @ReferenceTo('SizingEntity', { onDelete: 'CASCADE' })
   sizing: Relation<SizingEntity>
 
   @Column('int')
