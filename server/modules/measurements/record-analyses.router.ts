@@ -7,12 +7,11 @@ import {
   ModelUpdateRequestSchema,
 } from '../../../shared/schemas/record-analysis'
 import type { ApiRegistry } from '../../http/api-registry'
-import { route } from '../../http/route'
+import { routesFor } from '../../http/route'
 import type { Measurements } from './calibrate.service'
 
 const READERS = ['engineer', 'sales', 'admin'] as const
 const WRITERS = ['engineer', 'admin'] as const
-const tag = 'Measurements'
 
 const HistoryQuerySchema = z.object({
   /** most points per channel in the chart */
@@ -21,10 +20,9 @@ const HistoryQuerySchema = z.object({
 
 /** Channels, time histories, modal analyses of records and model updating from them. */
 export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measurements) {
-  const common = { tag, params: IdParamSchema }
-  route(
-    router,
-    api,
+  const add = routesFor(router, api, 'Measurements')
+  const common = { params: IdParamSchema }
+  add(
     {
       ...common,
       method: 'put',
@@ -35,9 +33,7 @@ export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measur
     },
     ({ user, params, body }) => m.mapChannels(user, params.id, body),
   )
-  route(
-    router,
-    api,
+  add(
     {
       ...common,
       method: 'get',
@@ -48,9 +44,7 @@ export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measur
     },
     ({ params, query }) => m.analyses.history(params.id, query.points),
   )
-  route(
-    router,
-    api,
+  add(
     {
       ...common,
       method: 'post',
@@ -62,9 +56,7 @@ export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measur
     },
     ({ user, params, body }) => m.analyses.run(user, params.id, body),
   )
-  route(
-    router,
-    api,
+  add(
     {
       ...common,
       method: 'get',
@@ -74,9 +66,7 @@ export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measur
     },
     ({ params }) => m.analyses.list(params.id),
   )
-  route(
-    router,
-    api,
+  add(
     {
       ...common,
       method: 'delete',
@@ -86,9 +76,7 @@ export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measur
     },
     ({ user, params }) => m.analyses.remove(user, params.id),
   )
-  route(
-    router,
-    api,
+  add(
     {
       ...common,
       method: 'post',
@@ -99,9 +87,7 @@ export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measur
     },
     ({ params, body }) => m.updates.preview(params.id, body),
   )
-  route(
-    router,
-    api,
+  add(
     {
       ...common,
       method: 'post',
