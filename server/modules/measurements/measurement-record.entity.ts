@@ -1,6 +1,6 @@
-import { Column, Entity, PrimaryGeneratedColumn, type Relation } from 'typeorm'
+import { Column, Entity, type Relation } from 'typeorm'
 import { ReferenceTo } from '../../db/reference-column'
-import { CreatedRecord } from '../../db/record-columns'
+import { NumberedCreatedRecord } from '../../db/record-columns'
 import type { IdentificationResult, TimeUnit, TimeUnitSource } from '../../../shared/measurements'
 import type { RecordChannelInfo } from '../../../shared/schemas/measurement'
 import { jsonColumn } from '../../http/json-column'
@@ -9,10 +9,7 @@ import type { UserEntity } from '../users/user.entity'
 
 /** An acceleration record measured at a site; the file lives on disk, its identification here. */
 @Entity('measurement_records')
-export class MeasurementRecordEntity extends CreatedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
+export class MeasurementRecordEntity extends NumberedCreatedRecord {
   declare siteId: number
 
   @ReferenceTo('SiteEntity', { onDelete: 'CASCADE' })

@@ -1,17 +1,14 @@
-import { Column, Entity, PrimaryGeneratedColumn, type Relation } from 'typeorm'
+import { Column, Entity, type Relation } from 'typeorm'
 import { ReferenceTo } from '../../db/reference-column'
 import type { RecordAnalysis } from '../../../shared/schemas/record-analysis'
 import { jsonColumn } from '../../http/json-column'
-import { CreatedRecord } from '../../db/record-columns'
+import { NumberedCreatedRecord } from '../../db/record-columns'
 import type { UserEntity } from '../users/user.entity'
 import type { MeasurementRecordEntity } from './measurement-record.entity'
 
 /** One identification of a record's modes from all its channels; goes with its record. */
 @Entity('record_analyses')
-export class RecordAnalysisEntity extends CreatedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
+export class RecordAnalysisEntity extends NumberedCreatedRecord {
   declare recordId: number
 
   @ReferenceTo('MeasurementRecordEntity', {

@@ -1,15 +1,12 @@
-import { Column, Entity, PrimaryGeneratedColumn, type Relation } from 'typeorm'
+import { Column, Entity, type Relation } from 'typeorm'
 import { ReferenceTo } from '../../db/reference-column'
-import { TrackedRecord } from '../../db/record-columns'
+import { NumberedTrackedRecord } from '../../db/record-columns'
 import type { SiteEntity } from '../sites/site.entity'
 import type { UserEntity } from '../users/user.entity'
 
 /** A host structure model of a site; its content lives in numbered revisions. */
 @Entity('host_models')
-export class HostModelEntity extends TrackedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
+export class HostModelEntity extends NumberedTrackedRecord {
   declare siteId: number
 
   @ReferenceTo('SiteEntity', { onDelete: 'CASCADE' })

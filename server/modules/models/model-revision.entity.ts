@@ -1,6 +1,6 @@
-import { Column, Entity, Index, PrimaryGeneratedColumn, type Relation } from 'typeorm'
+import { Column, Entity, Index, type Relation } from 'typeorm'
 import { ReferenceTo } from '../../db/reference-column'
-import { CreatedRecord } from '../../db/record-columns'
+import { NumberedCreatedRecord } from '../../db/record-columns'
 import type { ModelDefinition } from '../../../shared/schemas/sizing'
 import { jsonColumn } from '../../http/json-column'
 import type { HostModelEntity } from './host-model.entity'
@@ -8,10 +8,7 @@ import type { HostModelEntity } from './host-model.entity'
 /** One immutable state of a model, with why it was made (edit, calibration…). */
 @Entity('model_revisions')
 @Index(['modelId', 'revision'], { unique: true })
-export class ModelRevisionEntity extends CreatedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
+export class ModelRevisionEntity extends NumberedCreatedRecord {
   declare modelId: number
 
   @ReferenceTo('HostModelEntity', { onDelete: 'CASCADE' })

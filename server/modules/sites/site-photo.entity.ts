@@ -1,14 +1,11 @@
-import { Column, Entity, PrimaryGeneratedColumn, type Relation } from 'typeorm'
+import { Column, Entity, type Relation } from 'typeorm'
 import { ReferenceTo } from '../../db/reference-column'
-import { CreatedRecord } from '../../db/record-columns'
+import { NumberedCreatedRecord } from '../../db/record-columns'
 import type { SiteEntity } from './site.entity'
 
 /** A photo taken at the site; the bytes live on disk under the upload directory. */
 @Entity('site_photos')
-export class SitePhotoEntity extends CreatedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
+export class SitePhotoEntity extends NumberedCreatedRecord {
   declare siteId: number
 
   @ReferenceTo('SiteEntity', { onDelete: 'CASCADE', inverse: 'photos' })

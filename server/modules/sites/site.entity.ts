@@ -1,6 +1,6 @@
-import { Index, Column, Entity, OneToMany, PrimaryGeneratedColumn, type Relation } from 'typeorm'
+import { Index, Column, Entity, OneToMany, type Relation } from 'typeorm'
 import { ReferenceTo } from '../../db/reference-column'
-import { TrackedRecord } from '../../db/record-columns'
+import { NumberedTrackedRecord } from '../../db/record-columns'
 import type { StructureKind } from '../../../shared/schemas/site'
 import type { CompanyEntity } from '../companies/company.entity'
 import type { UserEntity } from '../users/user.entity'
@@ -8,10 +8,7 @@ import type { SitePhotoEntity } from './site-photo.entity'
 
 @Index('IDX_sites_updated', ['updatedAt'])
 @Entity('sites')
-export class SiteEntity extends TrackedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
+export class SiteEntity extends NumberedTrackedRecord {
   @Column('varchar', { length: 160 })
   name: string
 

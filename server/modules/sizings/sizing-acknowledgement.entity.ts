@@ -1,4 +1,5 @@
-import { Column, Entity, Index, PrimaryGeneratedColumn, type Relation } from 'typeorm'
+import { Column, Entity, Index, type Relation } from 'typeorm'
+import { NumberedRecord } from '../../db/record-columns'
 import { ReferenceTo } from '../../db/reference-column'
 import type { DesignCheck } from '../../../shared/schemas/design-checks'
 import { jsonColumn } from '../../http/json-column'
@@ -11,10 +12,7 @@ import type { SizingEntity } from './sizing.entity'
  */
 @Entity('sizing_acknowledgements')
 @Index(['sizingId', 'revision'])
-export class SizingAcknowledgementEntity {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
+export class SizingAcknowledgementEntity extends NumberedRecord {
   declare sizingId: number
 
   @ReferenceTo('SizingEntity', { onDelete: 'CASCADE' })

@@ -1,6 +1,6 @@
-import { Column, Entity, Index, PrimaryGeneratedColumn, type Relation } from 'typeorm'
+import { Column, Entity, Index, type Relation } from 'typeorm'
 import { ReferenceTo } from '../../db/reference-column'
-import { CreatedRecord } from '../../db/record-columns'
+import { NumberedCreatedRecord } from '../../db/record-columns'
 import type { SizingInput, SizingSummary } from '../../../shared/schemas/sizing'
 import type { SizingEvaluation } from '../../../shared/sizing/evaluate-sizing'
 import { jsonColumn } from '../../http/json-column'
@@ -9,10 +9,7 @@ import type { SizingEntity } from './sizing.entity'
 /** One saved state of a sizing: the choices and the server's authoritative result. */
 @Entity('sizing_revisions')
 @Index(['sizingId', 'revision'], { unique: true })
-export class SizingRevisionEntity extends CreatedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
+export class SizingRevisionEntity extends NumberedCreatedRecord {
   declare sizingId: number
 
   @ReferenceTo('SizingEntity', { onDelete: 'CASCADE' })

@@ -1,6 +1,6 @@
-import { Index, Column, Entity, PrimaryGeneratedColumn, type Relation } from 'typeorm'
+import { Index, Column, Entity, type Relation } from 'typeorm'
 import { ReferenceTo } from '../../db/reference-column'
-import { TrackedRecord } from '../../db/record-columns'
+import { NumberedTrackedRecord } from '../../db/record-columns'
 import type { SizingState } from '../../../shared/schemas/sizing'
 import type { SizingAcknowledgementEntity } from './sizing-acknowledgement.entity'
 import type { HostModelEntity } from '../models/host-model.entity'
@@ -9,10 +9,7 @@ import type { UserEntity } from '../users/user.entity'
 
 @Index('IDX_sizings_updated', ['updatedAt'])
 @Entity('sizings')
-export class SizingEntity extends TrackedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
+export class SizingEntity extends NumberedTrackedRecord {
   declare siteId: number
 
   @ReferenceTo('SiteEntity', { onDelete: 'RESTRICT' })
