@@ -1,15 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { beforeAll, describe, expect, it } from 'vitest'
 import type { Role } from '../../shared/schemas/auth'
 import { seedPeople } from '../../seed/seed-people'
 import { DEMO_USERS } from '../../seed/demo-people'
-import {
-  navLabels,
-  newPage,
-  shot,
-  signInAs,
-  startBrowserRig,
-  type BrowserRig,
-} from '../helpers/browser'
+import { navLabels, newPage, shot, signInAs, browserRigPerFile } from '../helpers/browser'
 
 /**
  * What each role finds in the menu, written out by hand rather than read from the access table
@@ -33,12 +26,10 @@ const MENU_BY_ROLE: Record<Role, string[]> = {
   ],
 }
 
-let rig: BrowserRig
+const rig = browserRigPerFile()
 beforeAll(async () => {
-  rig = await startBrowserRig()
   await seedPeople(rig.t.services)
 })
-afterAll(() => rig?.close())
 
 describe('navigation by role, in Chromium on a portrait tablet', () => {
   for (const demo of DEMO_USERS) {
