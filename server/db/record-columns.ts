@@ -1,4 +1,4 @@
-import { CreateDateColumn, UpdateDateColumn } from 'typeorm'
+import { CreateDateColumn, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm'
 
 /**
  * The creation time every table keeps, millisecond precision, set by MariaDB. An abstract base:
@@ -18,4 +18,22 @@ export abstract class TrackedRecord extends CreatedRecord {
     onUpdate: 'CURRENT_TIMESTAMP(3)',
   })
   updatedAt: Date
+}
+
+/** An int primary key MariaDB counts up; for a table that keeps no times. */
+export abstract class NumberedRecord {
+  @PrimaryGeneratedColumn('increment', { type: 'int' })
+  id: number
+}
+
+/** The counted int primary key and the creation time. */
+export abstract class NumberedCreatedRecord extends CreatedRecord {
+  @PrimaryGeneratedColumn('increment', { type: 'int' })
+  id: number
+}
+
+/** The counted int primary key, the creation and the last-change times. */
+export abstract class NumberedTrackedRecord extends TrackedRecord {
+  @PrimaryGeneratedColumn('increment', { type: 'int' })
+  id: number
 }

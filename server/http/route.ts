@@ -125,3 +125,14 @@ export function route<B = undefined, Q = undefined, P = undefined, R = unknown>(
     },
   )
 }
+
+/**
+ * The routes of one router under one tag of the API document: `add(spec, handler)` is
+ * `route(router, registry, { ...spec, tag }, handler)`.
+ */
+export function routesFor(router: Router, registry: ApiRegistry, tag: string) {
+  return <B = undefined, Q = undefined, P = undefined, R = unknown>(
+    spec: Omit<RouteSpec<B, Q, P, R>, 'tag'>,
+    handler: Parameters<typeof route<B, Q, P, R>>[3],
+  ) => route<B, Q, P, R>(router, registry, { ...spec, tag }, handler)
+}

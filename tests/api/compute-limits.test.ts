@@ -3,7 +3,7 @@ import request from 'supertest'
 import { createSizingPool, type SizingPool } from '../../server/workers/pool'
 import { anotherInstance, makeTestApp, type TestApp } from '../helpers/app'
 import { signedIn } from '../helpers/factories'
-import { makeCompany, siteBody, sizingInput } from '../helpers/records'
+import { makeCompany, siteBody, sizingInput, siteWithModel } from '../helpers/records'
 
 let t: TestApp
 beforeAll(async () => {
@@ -26,18 +26,15 @@ function chain(n: number) {
   return { nodes, springs, hostDampingRatio: 0.01 }
 }
 
-async function siteWithModel(agent: request.Agent, n: number) {
-  const site = (await agent.post('/api/sites').send(siteBody((await makeCompany(t)).id))).body
-  const model = await agent
-    .post('/api/models')
-    .send({ siteId: site.id, name: `Chain of ${n}`, definition: chain(n) })
-  expect(model.status).toBe(201)
-  const input = sizingInput(site.id, model.body.id, {
+async function chainOnSite(agent: request.Agent, n: number) {
+  const made = { name: `Chain of ${n}`, definition: chain(n) }
+  const { site, model } = await siteWithModel(t, agent, made, {})
+  const input = sizingInput(site.id, model.id, {
     absorberNode: `storey-${n}`,
     excitationNode: `storey-${n}`,
     responseNode: `storey-${n}`,
   })
-  return { site, model: model.body, input }
+  return { site, model, input }
 }
 
 /** An app instance on the same database whose engine pool has the given limits. */
@@ -68,7 +65,7 @@ describe('bounded compute', () => {
 
   it('stops a sizing that runs past its time budget with 422 and stores no sizing', async () => {
     const { agent, cookie } = await signedIn(t, 'engineer')
-    const { input, site } = await siteWithModel(agent, 300)
+    const { input, site } = await chainOnSite(agent, 300)
     const other = await appWithPool(createSizingPool(1, { budgetMs: 20 }))
     try {
       const res = await request(other.app)
@@ -87,7 +84,7 @@ describe('bounded compute', () => {
 
   it('answers 503 with Retry-After when the engine queue is full, and solves the others', async () => {
     const { agent, cookie } = await signedIn(t, 'engineer')
-    const { input } = await siteWithModel(agent, 300)
+    const { input } = await chainOnSite(agent, 300)
     const other = await appWithPool(createSizingPool(1, { maxQueue: 1 }))
     try {
       const answers = await Promise.all(
@@ -110,7 +107,7 @@ describe('bounded compute', () => {
 
   it('cancels the sizing of a request the client closed, and stores nothing', async () => {
     const { agent, cookie } = await signedIn(t, 'engineer')
-    const { input, site } = await siteWithModel(agent, 600)
+    const { input, site } = await chainOnSite(agent, 600)
     const real = createSizingPool(1)
     const outcomes: string[] = []
     const spy: SizingPool = {

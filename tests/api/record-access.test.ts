@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Agent } from 'supertest'
 import { makeTestApp, type TestApp } from '../helpers/app'
 import { signedIn } from '../helpers/factories'
-import { buildingDefinition, makeCompany, siteBody, sizingInput } from '../helpers/records'
+import { sizingInput, siteWithModel } from '../helpers/records'
 import { makePaymentRig, type PaymentRig } from './payments-rig'
 
 let t: TestApp
@@ -13,16 +13,7 @@ afterAll(() => t.close())
 
 /** A draft sizing of a fresh engineer, through the API and the real engine. */
 async function draftOf(agent: Agent) {
-  const site = (
-    await agent
-      .post('/api/sites')
-      .send(siteBody((await makeCompany(t)).id, { structureKind: 'building' }))
-  ).body
-  const model = (
-    await agent
-      .post('/api/models')
-      .send({ siteId: site.id, name: 'Five storeys', definition: buildingDefinition() })
-  ).body
+  const { site, model } = await siteWithModel(t, agent)
   const res = await agent.post('/api/sizings').send({ input: sizingInput(site.id, model.id) })
   expect(res.status).toBe(201)
   return res.body as { id: number; state: string }

@@ -6,7 +6,7 @@ import { mac } from '../../shared/measurements'
 import { makeTestApp, type TestApp } from '../helpers/app'
 import { chainDefinition, chainRecordCsv, chainTruth, TRUE_SCALE } from '../helpers/chain-record'
 import { signedIn } from '../helpers/factories'
-import { makeCompany, siteBody } from '../helpers/records'
+import { siteWithModel } from '../helpers/records'
 
 // The record: ambient response of a uniform three-mass chain whose modes are known in closed
 // form (tests/helpers/chain-record). Methods: FDD/EFDD (Brincker, Zhang & Andersen 2001),
@@ -27,16 +27,13 @@ afterAll(async () => {
 type Agent = Awaited<ReturnType<typeof signedIn>>['agent']
 
 async function setUp(agent: Agent) {
-  const site = (await agent.post('/api/sites').send(siteBody((await makeCompany(t)).id))).body
-  const model = await agent
-    .post('/api/models')
-    .send({ siteId: site.id, name: 'Gallery chain', definition: chainDefinition() })
-  expect(model.status).toBe(201)
+  const chain = { name: 'Gallery chain', definition: chainDefinition() }
+  const { site, model } = await siteWithModel(t, agent, chain, {})
   const record = await agent
     .post(`/api/sites/${site.id}/records`)
     .attach('record', CSV, 'gallery-ambient.csv')
   expect(record.status).toBe(201)
-  return { site, model: model.body, record: record.body }
+  return { site, model, record: record.body }
 }
 
 const MAPPING = (modelId: number) => ({

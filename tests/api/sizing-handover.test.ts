@@ -2,13 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { seedCatalogue } from '../../seed/seed-catalogue'
 import { makeTestApp, type TestApp } from '../helpers/app'
 import { signedIn } from '../helpers/factories'
-import {
-  OVER_LIMIT,
-  buildingDefinition,
-  makeCompany,
-  siteBody,
-  sizingInput,
-} from '../helpers/records'
+import { OVER_LIMIT, sizingInput, siteWithModel } from '../helpers/records'
 
 let t: TestApp
 beforeAll(async () => {
@@ -23,16 +17,7 @@ afterAll(() => t.close())
  */
 async function overLimitSizing() {
   const { agent, user } = await signedIn(t, 'engineer')
-  const site = (
-    await agent
-      .post('/api/sites')
-      .send(siteBody((await makeCompany(t)).id, { structureKind: 'building' }))
-  ).body
-  const model = (
-    await agent
-      .post('/api/models')
-      .send({ siteId: site.id, name: 'Five storeys', definition: buildingDefinition() })
-  ).body
+  const { site, model } = await siteWithModel(t, agent)
   const res = await agent
     .post('/api/sizings')
     .send({ input: sizingInput(site.id, model.id, OVER_LIMIT) })

@@ -16,6 +16,7 @@ import {
   makeCompany,
   siteBody,
   sizingInput,
+  siteWithModel,
 } from '../helpers/records'
 
 let t: TestApp
@@ -25,18 +26,7 @@ beforeAll(async () => {
 })
 afterAll(() => t.close())
 
-async function siteAndModel(agent: Agent) {
-  const site = (
-    await agent
-      .post('/api/sites')
-      .send(siteBody((await makeCompany(t)).id, { structureKind: 'building' }))
-  ).body
-  const model = await agent
-    .post('/api/models')
-    .send({ siteId: site.id, name: 'Five storeys', definition: buildingDefinition() })
-  expect(model.status).toBe(201)
-  return { site, model: model.body }
-}
+const siteAndModel = (agent: Agent) => siteWithModel(t, agent)
 
 describe('models', () => {
   it('refuses a model with a floating node, naming the field, and saves nothing', async () => {

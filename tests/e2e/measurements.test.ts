@@ -1,30 +1,22 @@
 import { readFileSync } from 'node:fs'
 import path from 'node:path'
-import request from 'supertest'
 import { singleModeModel } from '../../shared/dynamics'
-import { afterAll, beforeAll, expect, it } from 'vitest'
-import { PASSWORD, makeUser } from '../helpers/factories'
+import { expect, it } from 'vitest'
+import { PASSWORD, signedIn } from '../helpers/factories'
 import {
   mainText,
   newPage,
   shot,
   signInAs,
-  startBrowserRig,
+  browserRigPerFile,
   waitForText,
-  type BrowserRig,
 } from '../helpers/browser'
 import { buildingDefinition, makeCompany, siteBody, sizingInput } from '../helpers/records'
 
-let rig: BrowserRig
-beforeAll(async () => {
-  rig = await startBrowserRig()
-})
-afterAll(() => rig?.close())
+const rig = browserRigPerFile()
 
 it('lets an engineer upload a heel-drop record, see its peaks and calibrate a model', async () => {
-  const engineer = await makeUser(rig.t, 'engineer')
-  const agent = request.agent(rig.t.app)
-  await agent.post('/api/auth/sign-in').send({ email: engineer.email, password: PASSWORD })
+  const { agent, user: engineer } = await signedIn(rig.t, 'engineer')
   const company = await makeCompany(rig.t)
   const site = (await agent.post('/api/sites').send(siteBody(company.id))).body
   const model = await agent
@@ -55,9 +47,7 @@ it('lets an engineer upload a heel-drop record, see its peaks and calibrate a mo
 })
 
 it('calibrates from step 2 of a sizing, shows model against measurement before and after, and moves the sizing only when asked', async () => {
-  const engineer = await makeUser(rig.t, 'engineer')
-  const agent = request.agent(rig.t.app)
-  await agent.post('/api/auth/sign-in').send({ email: engineer.email, password: PASSWORD })
+  const { agent, user: engineer } = await signedIn(rig.t, 'engineer')
   const site = (await agent.post('/api/sites').send(siteBody((await makeCompany(rig.t)).id))).body
   // one floor mode at 5.8 Hz, 20 t modal mass; the heel-drop record peaks near 6.29 Hz
   const floor = singleModeModel(5.8, 20_000)

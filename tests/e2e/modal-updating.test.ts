@@ -1,33 +1,25 @@
 import { mkdtempSync, writeFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import path from 'node:path'
-import request from 'supertest'
-import { afterAll, beforeAll, expect, it } from 'vitest'
-import { PASSWORD, makeUser } from '../helpers/factories'
+import { expect, it } from 'vitest'
+import { PASSWORD, signedIn } from '../helpers/factories'
 import {
   mainText,
   newPage,
   shot,
   signInAs,
-  startBrowserRig,
+  browserRigPerFile,
   waitForText,
-  type BrowserRig,
 } from '../helpers/browser'
 import { chainDefinition, chainRecordCsv, chainTruth, TRUE_SCALE } from '../helpers/chain-record'
 import { makeCompany, siteBody, sizingInput } from '../helpers/records'
 
 // The record is the seeded ambient response of a three-mass chain whose modes are known in
 // closed form (tests/helpers/chain-record); the model as drawn is 10 % too soft.
-let rig: BrowserRig
-beforeAll(async () => {
-  rig = await startBrowserRig()
-})
-afterAll(() => rig?.close())
+const rig = browserRigPerFile()
 
 it('takes a three-channel ambient record to an updated model and sizes on its revision', async () => {
-  const engineer = await makeUser(rig.t, 'engineer')
-  const agent = request.agent(rig.t.app)
-  await agent.post('/api/auth/sign-in').send({ email: engineer.email, password: PASSWORD })
+  const { agent, user: engineer } = await signedIn(rig.t, 'engineer')
   const site = (await agent.post('/api/sites').send(siteBody((await makeCompany(rig.t)).id))).body
   const model = (
     await agent

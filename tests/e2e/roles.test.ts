@@ -1,16 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { beforeAll, describe, expect, it } from 'vitest'
 import type { Role } from '../../shared/schemas/auth'
 import { seedPeople } from '../../seed/seed-people'
 import { DEMO_USERS } from '../../seed/demo-people'
-import {
-  navLabels,
-  navigate,
-  newPage,
-  shot,
-  signInAs,
-  startBrowserRig,
-  type BrowserRig,
-} from '../helpers/browser'
+import { navLabels, navigate, newPage, shot, signInAs, browserRigPerFile } from '../helpers/browser'
 
 /**
  * What each role finds in the menu, written out by hand rather than read from the access table
@@ -36,12 +28,10 @@ const MENU_BY_ROLE: Record<Role, string[]> = {
   ],
 }
 
-let rig: BrowserRig
+const rig = browserRigPerFile()
 beforeAll(async () => {
-  rig = await startBrowserRig()
   await seedPeople(rig.t.services)
 })
-afterAll(() => rig?.close())
 
 describe('navigation by role, in Chromium on a portrait tablet', () => {
   for (const demo of DEMO_USERS) {
@@ -52,7 +42,7 @@ describe('navigation by role, in Chromium on a portrait tablet', () => {
       expect(await navLabels(page)).toEqual(labels)
       await shot(page, `roles-${demo.role}`)
       for (const label of labels) {
-        await page.locator(`nav[aria-label="Main"] a ::-p-text(${label})`).click()
+        await navigate(page, label)
         // the route guard lets the role in (the entry turns active) or refuses (not-found page)
         await page.waitForFunction(
           (l) =>

@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { beforeAll, describe, expect, it } from 'vitest'
 import request from 'supertest'
 import type { Page } from 'puppeteer-core'
 import { seedPeople } from '../../seed/seed-people'
@@ -18,23 +18,20 @@ import {
   openStep,
   shot,
   signInAs,
-  startBrowserRig,
+  browserRigPerFile,
   valueOf,
   waitForText,
-  type BrowserRig,
 } from '../helpers/browser'
 import { PASSWORD } from '../helpers/factories'
 import { engineerWithSizing } from '../helpers/sizing-on-span'
 
-let rig: BrowserRig
+const rig = browserRigPerFile()
 beforeAll(async () => {
-  rig = await startBrowserRig()
   const { companyIds } = await seedPeople(rig.t.services)
   await seedCatalogue(rig.t.services)
   await seedSizings(rig.t.services, { companyIds })
   await seedSizings(rig.t.services, { companyIds })
 })
-afterAll(() => rig?.close())
 
 const demo = (role: string) => DEMO_USERS.find((u) => u.role === role)!
 

@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { describe, expect, it } from 'vitest'
 import request from 'supertest'
 import type { Page } from 'puppeteer-core'
 import {
@@ -8,19 +8,14 @@ import {
   openStep,
   shot,
   signInAs,
-  startBrowserRig,
+  browserRigPerFile,
   valueOf,
   waitForText,
-  type BrowserRig,
 } from '../helpers/browser'
 import { PASSWORD } from '../helpers/factories'
 import { engineerWithSizing } from '../helpers/sizing-on-span'
 
-let rig: BrowserRig
-beforeAll(async () => {
-  rig = await startBrowserRig()
-})
-afterAll(() => rig?.close())
+const rig = browserRigPerFile()
 
 /** Saves from the hand-over step and waits for the server's revision. */
 async function save(page: Page, revision: number) {

@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { describe, expect, it } from 'vitest'
 import { seedCatalogue } from '../../seed/seed-catalogue'
 import { makeUser, PASSWORD, signedIn } from '../helpers/factories'
 import { makeCompany } from '../helpers/records'
@@ -11,16 +11,11 @@ import {
   PORTRAIT,
   shot,
   signInAs,
-  startBrowserRig,
+  browserRigPerFile,
   waitForText,
-  type BrowserRig,
 } from '../helpers/browser'
 
-let rig: BrowserRig
-beforeAll(async () => {
-  rig = await startBrowserRig()
-})
-afterAll(() => rig?.close())
+const rig = browserRigPerFile()
 
 describe.each([
   ['portrait', PORTRAIT],

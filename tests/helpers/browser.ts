@@ -2,6 +2,7 @@ import { mkdirSync } from 'node:fs'
 import type { AddressInfo } from 'node:net'
 import type { Server } from 'node:http'
 import path from 'node:path'
+import { afterAll, beforeAll } from 'vitest'
 import puppeteer, { type Browser, type Page } from 'puppeteer-core'
 import { CHROMIUM_ARGS } from '../../server/integrations/pdf/renderer'
 import { makeTestApp, type TestApp } from './app'
@@ -50,6 +51,19 @@ export async function startBrowserRig(extraEnv: Record<string, string> = {}): Pr
       await t.close()
     },
   }
+}
+
+/**
+ * The rig of one test file: started before its tests and closed after them. The object is filled
+ * in when the rig has started, so read its fields inside the tests.
+ */
+export function browserRigPerFile(): BrowserRig {
+  const rig = {} as BrowserRig
+  beforeAll(async () => {
+    Object.assign(rig, await startBrowserRig())
+  })
+  afterAll(() => rig.close?.())
+  return rig
 }
 
 export async function newPage(

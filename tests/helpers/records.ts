@@ -1,4 +1,5 @@
 import { randomBytes } from 'node:crypto'
+import type { Agent } from 'supertest'
 import type { TestApp } from './app'
 
 /** A fresh customer company. */
@@ -75,3 +76,27 @@ export const PASSING_CHOICES = {
 
 /** A limit the building's 2 % absorber cannot meet (its response is about 0.08 m/s²). */
 export const OVER_LIMIT = { acceptance: { label: 'custom', quantity: 'acceleration', limit: 0.01 } }
+
+/** A model as the API takes it: a name and its definition. */
+interface ModelBody {
+  name: string
+  definition: unknown
+}
+
+/**
+ * A fresh customer's site with one model on it, made through the API by the signed-in agent;
+ * by default the five-storey building on a building site.
+ */
+export async function siteWithModel(
+  t: TestApp,
+  agent: Agent,
+  model: ModelBody = { name: 'Five storeys', definition: buildingDefinition() },
+  site: Record<string, unknown> = { structureKind: 'building' },
+) {
+  const company = await makeCompany(t)
+  const made = (await agent.post('/api/sites').send(siteBody(company.id, site))).body
+  const res = await agent.post('/api/models').send({ siteId: made.id, ...model })
+  if (res.status !== 201)
+    throw new Error(`model refused: ${res.status} ${JSON.stringify(res.body)}`)
+  return { site: made, model: res.body }
+}

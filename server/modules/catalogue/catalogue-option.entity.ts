@@ -1,12 +1,10 @@
-import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm'
+import { Column, Entity } from 'typeorm'
+import { NumberedRecord } from '../../db/record-columns'
 import type { OptionKind } from '../../../shared/schemas/catalogue'
 
 /** An option or service priced per item, in minor units per currency. */
 @Entity('catalogue_options')
-export class CatalogueOptionEntity {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
+export class CatalogueOptionEntity extends NumberedRecord {
   @Column('varchar', { length: 24, unique: true })
   code: string
 

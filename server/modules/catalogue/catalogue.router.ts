@@ -13,7 +13,7 @@ import {
   ProductLineInputSchema,
 } from '../../../shared/schemas/catalogue'
 import type { ApiRegistry } from '../../http/api-registry'
-import { route } from '../../http/route'
+import { routesFor } from '../../http/route'
 import type { SizingSource } from '../sizings/sizing-source'
 import type { CatalogueService } from './catalogue.service'
 
@@ -28,43 +28,34 @@ export function catalogueRouter(
   sizings: SizingSource,
 ) {
   const router = Router()
-  const tag = 'Catalogue'
-  route(
-    router,
-    api,
+  const add = routesFor(router, api, 'Catalogue')
+  add(
     {
       method: 'get',
       path: '/api/catalogue/lines',
       response: z.array(ProductLineSchema),
-      tag,
       summary: 'Absorber product lines (prices for sales and admin only)',
       access: LINE_READERS,
       query: ListQuery,
     },
     ({ user, query }) => catalogue.listLines(user.role, query.includeInactive === 'true'),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'get',
       path: '/api/catalogue/lines/:id',
       response: ProductLineSchema,
-      tag,
       summary: 'One product line',
       access: LINE_READERS,
       params: IdParamSchema,
     },
     ({ user, params }) => catalogue.getLine(user.role, params.id),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'post',
       path: '/api/catalogue/lines',
       response: ProductLineSchema,
-      tag,
       summary: 'Add a product line',
       access: ADMIN,
       body: ProductLineInputSchema,
@@ -72,14 +63,11 @@ export function catalogueRouter(
     },
     ({ body }) => catalogue.createLine(body),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'put',
       path: '/api/catalogue/lines/:id',
       response: ProductLineSchema,
-      tag,
       summary: 'Change a product line (quotes already made keep their prices)',
       access: ADMIN,
       params: IdParamSchema,
@@ -87,14 +75,11 @@ export function catalogueRouter(
     },
     ({ params, body }) => catalogue.updateLine(params.id, body),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'get',
       path: '/api/catalogue/options',
       response: z.array(CatalogueOptionSchema),
-      tag,
       summary: 'Options and services with their prices',
       access: SELLERS,
       query: ListQuery,
@@ -102,14 +87,11 @@ export function catalogueRouter(
     ({ user, query }) =>
       catalogue.listOptions(user.role === 'admin' && query.includeInactive === 'true'),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'post',
       path: '/api/catalogue/options',
       response: CatalogueOptionSchema,
-      tag,
       summary: 'Add an option or service',
       access: ADMIN,
       body: CatalogueOptionInputSchema,
@@ -117,14 +99,11 @@ export function catalogueRouter(
     },
     ({ body }) => catalogue.createOption(body),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'put',
       path: '/api/catalogue/options/:id',
       response: CatalogueOptionSchema,
-      tag,
       summary: 'Change an option or service',
       access: ADMIN,
       params: IdParamSchema,
@@ -132,14 +111,11 @@ export function catalogueRouter(
     },
     ({ params, body }) => catalogue.updateOption(params.id, body),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'get',
       path: '/api/catalogue/matches',
       response: z.array(UnitMatchSchema),
-      tag,
       summary: 'Which product lines can carry a sizing, and why the others cannot',
       access: ACCESS.catalogue.match,
       query: MatchQuerySchema,

@@ -1,13 +1,11 @@
-import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm'
+import { Column, Entity } from 'typeorm'
+import { NumberedRecord } from '../../db/record-columns'
 import type { Orientation } from '../../../shared/schemas/sizing'
 import type { DamperType } from '../../../shared/schemas/catalogue'
 
 /** An absorber product line; SI units (kg, Hz, m), prices in minor units per currency. */
 @Entity('product_lines')
-export class ProductLineEntity {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
+export class ProductLineEntity extends NumberedRecord {
   @Column('varchar', { length: 24, unique: true })
   code: string
 

@@ -1,12 +1,6 @@
-import {
-  Column,
-  Entity,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from 'typeorm'
-import { CreatedRecord } from '../../db/record-columns'
+import { Column, Entity, type Relation } from 'typeorm'
+import { ReferenceTo } from '../../db/reference-column'
+import { NumberedCreatedRecord } from '../../db/record-columns'
 import type { IdentificationResult, TimeUnit, TimeUnitSource } from '../../../shared/measurements'
 import type { RecordChannelInfo } from '../../../shared/schemas/measurement'
 import { jsonColumn } from '../../http/json-column'
@@ -15,15 +9,10 @@ import type { UserEntity } from '../users/user.entity'
 
 /** An acceleration record measured at a site; the file lives on disk, its identification here. */
 @Entity('measurement_records')
-export class MeasurementRecordEntity extends CreatedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
+export class MeasurementRecordEntity extends NumberedCreatedRecord {
+  declare siteId: number
 
-  @Column('int')
-  siteId: number
-
-  @ManyToOne('SiteEntity', { onDelete: 'CASCADE' })
-  @JoinColumn({ name: 'siteId' })
+  @ReferenceTo('SiteEntity', { onDelete: 'CASCADE' })
   site: Relation<SiteEntity>
 
   /** the host model the record was taken on, when known */
@@ -34,11 +23,9 @@ export class MeasurementRecordEntity extends CreatedRecord {
   @Column('varchar', { length: 60, nullable: true })
   nodeId: string | null
 
-  @Column('int')
-  ownerId: number
+  declare ownerId: number
 
-  @ManyToOne('UserEntity', { onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'ownerId' })
+  @ReferenceTo('UserEntity', { onDelete: 'RESTRICT' })
   owner: Relation<UserEntity>
 
   @Column('varchar', { length: 200 })

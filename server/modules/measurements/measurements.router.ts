@@ -17,7 +17,7 @@ import {
   RecordUploadSchema,
 } from '../../../shared/schemas/measurement'
 import type { ApiRegistry } from '../../http/api-registry'
-import { route } from '../../http/route'
+import { routesFor } from '../../http/route'
 import { singleUpload } from '../../http/upload'
 import type { Measurements } from './calibrate.service'
 import { recordAnalysesRoutes } from './record-analyses.router'
@@ -27,15 +27,12 @@ const WRITERS = ACCESS.measurements.write
 
 export function measurementsRouter(api: ApiRegistry, m: Measurements) {
   const router = Router()
-  const tag = 'Measurements'
-  route(
-    router,
-    api,
+  const add = routesFor(router, api, 'Measurements')
+  add(
     {
       method: 'post',
       path: '/api/sites/:id/records',
       response: MeasurementRecordSchema,
-      tag,
       summary: 'Upload an acceleration record (multipart field "record") and identify its modes',
       access: WRITERS,
       params: IdParamSchema,
@@ -47,55 +44,43 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     ({ user, params, body, req, res }) =>
       m.upload(user, params.id, body, req.file, closedSignal(res)),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'get',
       path: '/api/sites/:id/records',
       response: z.array(MeasurementRecordSummarySchema),
-      tag,
       summary: 'Records of a site',
       access: READERS,
       params: IdParamSchema,
     },
     ({ params }) => m.list(params.id),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'get',
       path: '/api/records/:id',
       response: MeasurementRecordSchema,
-      tag,
       summary: 'One record with its spectrum and peaks',
       access: READERS,
       params: IdParamSchema,
     },
     ({ params }) => m.get(params.id),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'delete',
       path: '/api/records/:id',
-      tag,
       summary: 'Delete a record, its file and its analyses',
       access: WRITERS,
       params: IdParamSchema,
     },
     ({ user, params }) => m.remove(user, params.id),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'post',
       path: '/api/records/:id/peaks',
       response: AddedPeakSchema,
-      tag,
       summary: 'Identify a peak near a frequency and add it',
       access: WRITERS,
       params: IdParamSchema,
@@ -104,28 +89,22 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     },
     ({ user, params, body }) => m.addPeak(user, params.id, body.frequencyHz),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'delete',
       path: '/api/records/:id/peaks/:index',
       response: MeasurementRecordSchema,
-      tag,
       summary: 'Drop a false peak (0-based index in the list)',
       access: WRITERS,
       params: PeakIndexParamsSchema,
     },
     ({ user, params }) => m.dropPeak(user, params.id, params.index),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'post',
       path: '/api/models/:id/calibrate',
       response: HostModelSchema,
-      tag,
       summary: 'Scale a model’s springs to a measured frequency; saves a new revision',
       access: WRITERS,
       params: IdParamSchema,

@@ -12,12 +12,11 @@ import {
   RecordTimeHistorySchema,
 } from '../../../shared/schemas/record-analysis'
 import type { ApiRegistry } from '../../http/api-registry'
-import { route } from '../../http/route'
+import { routesFor } from '../../http/route'
 import type { Measurements } from './calibrate.service'
 
 const READERS = ACCESS.measurements.read
 const WRITERS = ACCESS.measurements.write
-const tag = 'Measurements'
 
 const HistoryQuerySchema = z.object({
   /** most points per channel in the chart */
@@ -26,10 +25,9 @@ const HistoryQuerySchema = z.object({
 
 /** Channels, time histories, modal analyses of records and model updating from them. */
 export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measurements) {
-  const common = { tag, params: IdParamSchema }
-  route(
-    router,
-    api,
+  const add = routesFor(router, api, 'Measurements')
+  const common = { params: IdParamSchema }
+  add(
     {
       ...common,
       method: 'put',
@@ -41,9 +39,7 @@ export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measur
     },
     ({ user, params, body }) => m.mapChannels(user, params.id, body),
   )
-  route(
-    router,
-    api,
+  add(
     {
       ...common,
       method: 'get',
@@ -55,9 +51,7 @@ export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measur
     },
     ({ params, query }) => m.analyses.history(params.id, query.points),
   )
-  route(
-    router,
-    api,
+  add(
     {
       ...common,
       method: 'post',
@@ -70,9 +64,7 @@ export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measur
     },
     ({ user, params, body }) => m.analyses.run(user, params.id, body),
   )
-  route(
-    router,
-    api,
+  add(
     {
       ...common,
       method: 'get',
@@ -83,9 +75,7 @@ export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measur
     },
     ({ params }) => m.analyses.list(params.id),
   )
-  route(
-    router,
-    api,
+  add(
     {
       ...common,
       method: 'delete',
@@ -95,9 +85,7 @@ export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measur
     },
     ({ user, params }) => m.analyses.remove(user, params.id),
   )
-  route(
-    router,
-    api,
+  add(
     {
       ...common,
       method: 'post',
@@ -109,9 +97,7 @@ export function recordAnalysesRoutes(router: Router, api: ApiRegistry, m: Measur
     },
     ({ params, body }) => m.updates.preview(params.id, body),
   )
-  route(
-    router,
-    api,
+  add(
     {
       ...common,
       method: 'post',

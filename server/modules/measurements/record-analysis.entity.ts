@@ -1,35 +1,25 @@
-import {
-  Column,
-  Entity,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from 'typeorm'
+import { Column, Entity, type Relation } from 'typeorm'
+import { ReferenceTo } from '../../db/reference-column'
 import type { RecordAnalysis } from '../../../shared/schemas/record-analysis'
 import { jsonColumn } from '../../http/json-column'
-import { CreatedRecord } from '../../db/record-columns'
+import { NumberedCreatedRecord } from '../../db/record-columns'
 import type { UserEntity } from '../users/user.entity'
-import { MeasurementRecordEntity } from './measurement-record.entity'
+import type { MeasurementRecordEntity } from './measurement-record.entity'
 
 /** One identification of a record's modes from all its channels; goes with its record. */
 @Entity('record_analyses')
-export class RecordAnalysisEntity extends CreatedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
+export class RecordAnalysisEntity extends NumberedCreatedRecord {
+  declare recordId: number
 
-  @Column('int')
-  recordId: number
-
-  @ManyToOne(() => MeasurementRecordEntity, { onDelete: 'CASCADE' })
-  @JoinColumn({ name: 'recordId' })
+  @ReferenceTo('MeasurementRecordEntity', {
+    onDelete: 'CASCADE',
+    constraintName: 'FK_record_analyses_record',
+  })
   record: Relation<MeasurementRecordEntity>
 
-  @Column('int')
-  ownerId: number
+  declare ownerId: number
 
-  @ManyToOne('UserEntity', { onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'ownerId' })
+  @ReferenceTo('UserEntity', { onDelete: 'RESTRICT', constraintName: 'FK_record_analyses_owner' })
   owner: Relation<UserEntity>
 
   @Column('varchar', { length: 10 })

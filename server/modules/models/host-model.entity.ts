@@ -1,33 +1,20 @@
-import {
-  Column,
-  Entity,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from 'typeorm'
-import { TrackedRecord } from '../../db/record-columns'
+import { Column, Entity, type Relation } from 'typeorm'
+import { ReferenceTo } from '../../db/reference-column'
+import { NumberedTrackedRecord } from '../../db/record-columns'
 import type { SiteEntity } from '../sites/site.entity'
 import type { UserEntity } from '../users/user.entity'
 
 /** A host structure model of a site; its content lives in numbered revisions. */
 @Entity('host_models')
-export class HostModelEntity extends TrackedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
+export class HostModelEntity extends NumberedTrackedRecord {
+  declare siteId: number
 
-  @Column('int')
-  siteId: number
-
-  @ManyToOne('SiteEntity', { onDelete: 'CASCADE' })
-  @JoinColumn({ name: 'siteId' })
+  @ReferenceTo('SiteEntity', { onDelete: 'CASCADE' })
   site: Relation<SiteEntity>
 
-  @Column('int')
-  ownerId: number
+  declare ownerId: number
 
-  @ManyToOne('UserEntity', { onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'ownerId' })
+  @ReferenceTo('UserEntity', { onDelete: 'RESTRICT' })
   owner: Relation<UserEntity>
 
   @Column('varchar', { length: 160 })

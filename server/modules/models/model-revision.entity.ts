@@ -1,13 +1,6 @@
-import {
-  Column,
-  Entity,
-  Index,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from 'typeorm'
-import { CreatedRecord } from '../../db/record-columns'
+import { Column, Entity, Index, type Relation } from 'typeorm'
+import { ReferenceTo } from '../../db/reference-column'
+import { NumberedCreatedRecord } from '../../db/record-columns'
 import type { ModelDefinition } from '../../../shared/schemas/sizing'
 import { jsonColumn } from '../../http/json-column'
 import type { HostModelEntity } from './host-model.entity'
@@ -15,15 +8,10 @@ import type { HostModelEntity } from './host-model.entity'
 /** One immutable state of a model, with why it was made (edit, calibration…). */
 @Entity('model_revisions')
 @Index(['modelId', 'revision'], { unique: true })
-export class ModelRevisionEntity extends CreatedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
+export class ModelRevisionEntity extends NumberedCreatedRecord {
+  declare modelId: number
 
-  @Column('int')
-  modelId: number
-
-  @ManyToOne('HostModelEntity', { onDelete: 'CASCADE' })
-  @JoinColumn({ name: 'modelId' })
+  @ReferenceTo('HostModelEntity', { onDelete: 'CASCADE' })
   model: Relation<HostModelEntity>
 
   @Column('int')

@@ -10,7 +10,7 @@ import {
   ModelRevisionParamsSchema,
 } from '../../../shared/schemas/host-model'
 import type { ApiRegistry } from '../../http/api-registry'
-import { route } from '../../http/route'
+import { routesFor } from '../../http/route'
 import type { ModelsService } from './models.service'
 
 const READERS = ACCESS.models.read
@@ -18,29 +18,23 @@ const WRITERS = ACCESS.models.write
 
 export function modelsRouter(api: ApiRegistry, models: ModelsService) {
   const router = Router()
-  const tag = 'Models'
-  route(
-    router,
-    api,
+  const add = routesFor(router, api, 'Models')
+  add(
     {
       method: 'get',
       path: '/api/models',
       response: z.array(HostModelSchema),
-      tag,
       summary: 'Host models, optionally of one site',
       access: READERS,
       query: ModelListQuerySchema,
     },
     ({ query }) => models.list(query.siteId),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'post',
       path: '/api/models',
       response: HostModelSchema,
-      tag,
       summary: 'Create a host model (revision 1)',
       access: WRITERS,
       body: ModelCreateSchema,
@@ -48,42 +42,33 @@ export function modelsRouter(api: ApiRegistry, models: ModelsService) {
     },
     ({ user, body }) => models.create(user, body),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'get',
       path: '/api/models/:id',
       response: HostModelSchema,
-      tag,
       summary: 'A model at its current revision, with the revision list',
       access: READERS,
       params: IdParamSchema,
     },
     ({ params }) => models.get(params.id),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'get',
       path: '/api/models/:id/revisions/:revision',
       response: ModelRevisionSchema,
-      tag,
       summary: 'One revision of a model with its structure (a sizing may use an older one)',
       access: READERS,
       params: ModelRevisionParamsSchema,
     },
     ({ params }) => models.revision(params.id, params.revision),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'post',
       path: '/api/models/:id/revisions',
       response: HostModelSchema,
-      tag,
       summary: 'Save a new revision',
       access: WRITERS,
       params: IdParamSchema,

@@ -1,25 +1,14 @@
-import {
-  Column,
-  Entity,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from 'typeorm'
-import { CreatedRecord } from '../../db/record-columns'
+import { Column, Entity, type Relation } from 'typeorm'
+import { ReferenceTo } from '../../db/reference-column'
+import { NumberedCreatedRecord } from '../../db/record-columns'
 import type { SiteEntity } from './site.entity'
 
 /** A photo taken at the site; the bytes live on disk under the upload directory. */
 @Entity('site_photos')
-export class SitePhotoEntity extends CreatedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
+export class SitePhotoEntity extends NumberedCreatedRecord {
+  declare siteId: number
 
-  @Column('int')
-  siteId: number
-
-  @ManyToOne('SiteEntity', 'photos', { onDelete: 'CASCADE' })
-  @JoinColumn({ name: 'siteId' })
+  @ReferenceTo('SiteEntity', { onDelete: 'CASCADE', inverse: 'photos' })
   site: Relation<SiteEntity>
 
   @Column('varchar', { length: 200 })

@@ -1,14 +1,6 @@
-import {
-  Index,
-  Column,
-  Entity,
-  JoinColumn,
-  ManyToOne,
-  OneToMany,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from 'typeorm'
-import { TrackedRecord } from '../../db/record-columns'
+import { Index, Column, Entity, OneToMany, type Relation } from 'typeorm'
+import { ReferenceTo } from '../../db/reference-column'
+import { NumberedTrackedRecord } from '../../db/record-columns'
 import type { StructureKind } from '../../../shared/schemas/site'
 import type { CompanyEntity } from '../companies/company.entity'
 import type { UserEntity } from '../users/user.entity'
@@ -16,25 +8,18 @@ import type { SitePhotoEntity } from './site-photo.entity'
 
 @Index('IDX_sites_updated', ['updatedAt'])
 @Entity('sites')
-export class SiteEntity extends TrackedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
+export class SiteEntity extends NumberedTrackedRecord {
   @Column('varchar', { length: 160 })
   name: string
 
-  @Column('int')
-  companyId: number
+  declare companyId: number
 
-  @ManyToOne('CompanyEntity', { onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'companyId' })
+  @ReferenceTo('CompanyEntity', { onDelete: 'RESTRICT' })
   company: Relation<CompanyEntity>
 
-  @Column('int')
-  ownerId: number
+  declare ownerId: number
 
-  @ManyToOne('UserEntity', { onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'ownerId' })
+  @ReferenceTo('UserEntity', { onDelete: 'RESTRICT' })
   owner: Relation<UserEntity>
 
   @Column('varchar', { length: 300, default: '' })

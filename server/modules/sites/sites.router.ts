@@ -5,7 +5,7 @@ import { ACCESS } from '../../../shared/access'
 import { IdParamSchema, IdSchema } from '../../../shared/schemas/ids'
 import { SiteInputSchema, SiteListQuerySchema } from '../../../shared/schemas/site'
 import type { ApiRegistry } from '../../http/api-registry'
-import { route } from '../../http/route'
+import { routesFor } from '../../http/route'
 import { singleUpload } from '../../http/upload'
 import { MAX_PHOTO_BYTES, type SitesService } from './sites.service'
 
@@ -15,29 +15,23 @@ const WRITERS = ACCESS.sites.write
 
 export function sitesRouter(api: ApiRegistry, sites: SitesService) {
   const router = Router()
-  const tag = 'Sites'
-  route(
-    router,
-    api,
+  const add = routesFor(router, api, 'Sites')
+  add(
     {
       method: 'get',
       path: '/api/sites',
       response: z.array(SiteSchema),
-      tag,
       summary: 'Sites, with search and filters',
       access: READERS,
       query: SiteListQuerySchema,
     },
     ({ query }) => sites.list(query),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'post',
       path: '/api/sites',
       response: SiteSchema,
-      tag,
       summary: 'Create a site',
       access: WRITERS,
       body: SiteInputSchema,
@@ -45,28 +39,22 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     },
     ({ user, body }) => sites.create(user, body),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'get',
       path: '/api/sites/:id',
       response: SiteSchema,
-      tag,
       summary: 'One site',
       access: READERS,
       params: IdParamSchema,
     },
     ({ params }) => sites.get(params.id),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'put',
       path: '/api/sites/:id',
       response: SiteSchema,
-      tag,
       summary: 'Change a site',
       access: WRITERS,
       params: IdParamSchema,
@@ -74,14 +62,11 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     },
     ({ user, params, body }) => sites.update(user, params.id, body),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'post',
       path: '/api/sites/:id/photos',
       response: SiteSchema,
-      tag,
       summary: 'Add a photo (multipart field "photo")',
       access: WRITERS,
       params: IdParamSchema,
@@ -91,13 +76,10 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     },
     ({ user, params, req }) => sites.addPhoto(user, params.id, req.file),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'get',
       path: '/api/sites/:id/photos/:photoId',
-      tag,
       summary: 'A photo',
       access: READERS,
       params: PhotoParams,

@@ -1,12 +1,6 @@
-import {
-  Column,
-  Entity,
-  Index,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from 'typeorm'
+import { Column, Entity, Index, type Relation } from 'typeorm'
+import { NumberedRecord } from '../../db/record-columns'
+import { ReferenceTo } from '../../db/reference-column'
 import type { DesignCheck } from '../../../shared/schemas/design-checks'
 import { jsonColumn } from '../../http/json-column'
 import type { UserEntity } from '../users/user.entity'
@@ -18,15 +12,10 @@ import type { SizingEntity } from './sizing.entity'
  */
 @Entity('sizing_acknowledgements')
 @Index(['sizingId', 'revision'])
-export class SizingAcknowledgementEntity {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
+export class SizingAcknowledgementEntity extends NumberedRecord {
+  declare sizingId: number
 
-  @Column('int')
-  sizingId: number
-
-  @ManyToOne('SizingEntity', { onDelete: 'CASCADE' })
-  @JoinColumn({ name: 'sizingId' })
+  @ReferenceTo('SizingEntity', { onDelete: 'CASCADE' })
   sizing: Relation<SizingEntity>
 
   @Column('int')
@@ -39,11 +28,9 @@ export class SizingAcknowledgementEntity {
   @Column('varchar', { length: 1000 })
   reason: string
 
-  @Column('int')
-  acknowledgedById: number
+  declare acknowledgedById: number
 
-  @ManyToOne('UserEntity', { onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'acknowledgedById' })
+  @ReferenceTo('UserEntity', { onDelete: 'RESTRICT' })
   acknowledgedBy: Relation<UserEntity>
 
   @Column('datetime', { precision: 3 })

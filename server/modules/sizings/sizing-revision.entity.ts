@@ -1,13 +1,6 @@
-import {
-  Column,
-  Entity,
-  Index,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from 'typeorm'
-import { CreatedRecord } from '../../db/record-columns'
+import { Column, Entity, Index, type Relation } from 'typeorm'
+import { ReferenceTo } from '../../db/reference-column'
+import { NumberedCreatedRecord } from '../../db/record-columns'
 import type { SizingInput, SizingSummary } from '../../../shared/schemas/sizing'
 import type { SizingEvaluation } from '../../../shared/sizing/evaluate-sizing'
 import { jsonColumn } from '../../http/json-column'
@@ -16,15 +9,10 @@ import type { SizingEntity } from './sizing.entity'
 /** One saved state of a sizing: the choices and the server's authoritative result. */
 @Entity('sizing_revisions')
 @Index(['sizingId', 'revision'], { unique: true })
-export class SizingRevisionEntity extends CreatedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
+export class SizingRevisionEntity extends NumberedCreatedRecord {
+  declare sizingId: number
 
-  @Column('int')
-  sizingId: number
-
-  @ManyToOne('SizingEntity', { onDelete: 'CASCADE' })
-  @JoinColumn({ name: 'sizingId' })
+  @ReferenceTo('SizingEntity', { onDelete: 'CASCADE' })
   sizing: Relation<SizingEntity>
 
   @Column('int')

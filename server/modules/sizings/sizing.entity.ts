@@ -1,13 +1,6 @@
-import {
-  Index,
-  Column,
-  Entity,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from 'typeorm'
-import { TrackedRecord } from '../../db/record-columns'
+import { Index, Column, Entity, type Relation } from 'typeorm'
+import { ReferenceTo } from '../../db/reference-column'
+import { NumberedTrackedRecord } from '../../db/record-columns'
 import type { SizingState } from '../../../shared/schemas/sizing'
 import type { SizingAcknowledgementEntity } from './sizing-acknowledgement.entity'
 import type { HostModelEntity } from '../models/host-model.entity'
@@ -16,29 +9,20 @@ import type { UserEntity } from '../users/user.entity'
 
 @Index('IDX_sizings_updated', ['updatedAt'])
 @Entity('sizings')
-export class SizingEntity extends TrackedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
+export class SizingEntity extends NumberedTrackedRecord {
+  declare siteId: number
 
-  @Column('int')
-  siteId: number
-
-  @ManyToOne('SiteEntity', { onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'siteId' })
+  @ReferenceTo('SiteEntity', { onDelete: 'RESTRICT' })
   site: Relation<SiteEntity>
 
-  @Column('int')
-  modelId: number
+  declare modelId: number
 
-  @ManyToOne('HostModelEntity', { onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'modelId' })
+  @ReferenceTo('HostModelEntity', { onDelete: 'RESTRICT' })
   model: Relation<HostModelEntity>
 
-  @Column('int')
-  ownerId: number
+  declare ownerId: number
 
-  @ManyToOne('UserEntity', { onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'ownerId' })
+  @ReferenceTo('UserEntity', { onDelete: 'RESTRICT' })
   owner: Relation<UserEntity>
 
   @Column('varchar', { length: 160 })
@@ -57,10 +41,8 @@ export class SizingEntity extends TrackedRecord {
   handoverNote: string
 
   /** The acknowledgement of failed checks made at the current handover; null when none was needed. */
-  @Column('int', { nullable: true })
-  acknowledgementId: number | null
+  declare acknowledgementId: number | null
 
-  @ManyToOne('SizingAcknowledgementEntity', { nullable: true, onDelete: 'SET NULL' })
-  @JoinColumn({ name: 'acknowledgementId' })
+  @ReferenceTo('SizingAcknowledgementEntity', { nullable: true, onDelete: 'SET NULL' })
   acknowledgement: Relation<SizingAcknowledgementEntity> | null
 }

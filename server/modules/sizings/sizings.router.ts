@@ -11,7 +11,7 @@ import {
   SizingSubmitSchema,
 } from '../../../shared/schemas/sizing'
 import type { ApiRegistry } from '../../http/api-registry'
-import { route } from '../../http/route'
+import { routesFor } from '../../http/route'
 import type { SizingsService } from './sizings.service'
 
 const READERS = ACCESS.sizings.read
@@ -20,29 +20,23 @@ const RevisionQuery = z.object({ revision: IdSchema.optional() })
 
 export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
   const router = Router()
-  const tag = 'Sizings'
-  route(
-    router,
-    api,
+  const add = routesFor(router, api, 'Sizings')
+  add(
     {
       method: 'get',
       path: '/api/sizings',
       response: z.array(SizingListItemSchema),
-      tag,
       summary: 'Sizings visible to the caller',
       access: READERS,
       query: SizingListQuerySchema,
     },
     ({ user, query }) => sizings.list(user, query),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'post',
       path: '/api/sizings',
       response: SizingViewSchema,
-      tag,
       summary: 'Create a sizing; the server solves it in the worker pool',
       access: WRITERS,
       body: SizingCreateSchema,
@@ -50,14 +44,11 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     },
     ({ user, body, res }) => sizings.create(user, body.input, { signal: closedSignal(res) }),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'get',
       path: '/api/sizings/:id',
       response: SizingViewSchema,
-      tag,
       summary: 'A sizing with its stored result (current or a given revision)',
       access: READERS,
       params: IdParamSchema,
@@ -65,14 +56,11 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     },
     ({ user, params, query }) => sizings.view(user, params.id, query.revision),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'put',
       path: '/api/sizings/:id',
       response: SizingViewSchema,
-      tag,
       summary: 'Save a new revision from a base revision',
       access: WRITERS,
       params: IdParamSchema,
@@ -81,14 +69,11 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     ({ user, params, body, res }) =>
       sizings.save(user, params.id, body, { signal: closedSignal(res) }),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'post',
       path: '/api/sizings/:id/submit',
       response: SizingViewSchema,
-      tag,
       summary:
         'Hand the sizing over to sales; a design that fails its checks needs them acknowledged with a reason (422 design-checks-failed)',
       access: WRITERS,
@@ -97,14 +82,11 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
     },
     ({ user, params, body }) => sizings.submit(user, params.id, body),
   )
-  route(
-    router,
-    api,
+  add(
     {
       method: 'post',
       path: '/api/sizings/:id/reopen',
       response: SizingViewSchema,
-      tag,
       summary: 'Reopen a handed-over sizing to revise it',
       access: WRITERS,
       params: IdParamSchema,

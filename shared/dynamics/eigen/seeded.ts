@@ -1,6 +1,6 @@
 /**
  * Deterministic pseudo-random numbers in [0, 1) (mulberry32, T. Ettinger 2017, public domain):
- * the engine never calls Math.random, so every run repeats exactly.
+ * the engine draws only from a generator seeded here, so every run repeats exactly.
  * @param seed any integer
  */
 export function seeded(seed: number): () => number {
