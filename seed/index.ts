@@ -8,6 +8,7 @@ import { createSizingPool } from '../server/workers/pool'
 import { seedPeople } from './seed-people'
 import { seedCatalogue } from './seed-catalogue'
 import { seedSizings } from './seed-sizings'
+import { seedTaxRates } from './seed-tax'
 
 /** Loads the demo scenario through the services. Idempotent: safe to run on every start. */
 async function main() {
@@ -24,6 +25,7 @@ async function main() {
     })
     const { companyIds } = await seedPeople(services)
     await seedCatalogue(services)
+    await seedTaxRates(services)
     await seedSizings(services, { companyIds })
     console.log('demo data loaded')
   } finally {

@@ -22,6 +22,7 @@ import { QuoteEntity } from './modules/quotes/quote.entity'
 import { QuoteLineEntity } from './modules/quotes/quote-line.entity'
 import { QuoteEventEntity } from './modules/quotes/quote-event.entity'
 import { OutboxMailEntity } from './modules/outbox/outbox-mail.entity'
+import { CompanyTaxRateEntity, TaxRateEntity } from './modules/tax/tax-rate.entity'
 
 /** Every entity class, listed (no globs: esbuild-built code has no stable file layout). */
 export const entities = [
@@ -49,4 +50,6 @@ export const entities = [
   QuoteLineEntity,
   QuoteEventEntity,
   OutboxMailEntity,
+  TaxRateEntity,
+  CompanyTaxRateEntity,
 ]

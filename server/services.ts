@@ -25,6 +25,8 @@ import { productionRepository } from './modules/production/production.repository
 import { productionService } from './modules/production/production.service'
 import { quotesRepository } from './modules/quotes/quotes.repository'
 import { quotesService } from './modules/quotes/quotes.service'
+import { taxRepository } from './modules/tax/tax.repository'
+import { taxService } from './modules/tax/tax.service'
 import { sitesRepository } from './modules/sites/sites.repository'
 import { sitesService } from './modules/sites/sites.service'
 import { sizingHandoverRepository } from './modules/sizings/sizing-handover.repository'
@@ -103,7 +105,9 @@ export function buildServices(deps: AppDeps) {
   const sizingSource = deps.sizingSource ?? sizings
   const pdf = deps.pdf ?? pdfRenderer(deps.config.CHROMIUM_PATH)
   const customers = customersService({ customers: customersRepository(ds), companies, usersAdmin })
+  const tax = taxService({ repo: taxRepository(ds), companies })
   const quotes = quotesService({
+    taxRate: tax.rateFor,
     quotes: quotesRepository(ds),
     catalogue,
     customers,
@@ -126,6 +130,7 @@ export function buildServices(deps: AppDeps) {
   const payments = buildPayments(deps, { now, outbox, users: usersAdmin, production, quotes })
   const audit = auditService({ quotes, production })
   return {
+    tax,
     now,
     outbox,
     users,

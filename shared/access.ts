@@ -33,6 +33,8 @@ export const ACCESS = {
   refunds: { read: ADMIN },
   workOrders: { read: BUILDERS, write: BUILDERS },
   audit: { read: ADMIN },
+  /** named tax rates: read by those who quote, set by the admin */
+  tax: { read: SELLERS, write: ADMIN },
   users: { read: ADMIN, write: ADMIN },
 } as const satisfies Record<string, Record<string, readonly Role[]>>
 
@@ -57,6 +59,8 @@ export const PAGE_ACCESS = {
   catalogue: ACCESS.catalogue.write,
   'admin-users': ACCESS.users.write,
   'admin-refunds': ACCESS.refunds.read,
+  'admin-tax': ACCESS.tax.write,
+  'admin-audit': ACCESS.audit.read,
   portal: ACCESS.quotes.accept,
   'portal-quote': ACCESS.quotes.accept,
   'portal-payment-done': ACCESS.quotes.accept,
@@ -77,6 +81,8 @@ export const MENU = [
   'catalogue',
   'admin-users',
   'admin-refunds',
+  'admin-tax',
+  'admin-audit',
   'portal',
   'work-orders',
 ] as const satisfies readonly PageName[]

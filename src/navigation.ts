@@ -17,6 +17,8 @@ const LOOKS: Record<MenuPage, Omit<NavItem, 'name'>> = {
   catalogue: { label: 'Catalogue', icon: 'pi pi-box' },
   'admin-users': { label: 'Users', icon: 'pi pi-users' },
   'admin-refunds': { label: 'Refunds', icon: 'pi pi-replay' },
+  'admin-tax': { label: 'Tax rates', icon: 'pi pi-percentage' },
+  'admin-audit': { label: 'Audit trail', icon: 'pi pi-history' },
   portal: { label: 'My quotes', icon: 'pi pi-file' },
   'work-orders': { label: 'Work orders', icon: 'pi pi-wrench' },
 }

@@ -9,6 +9,7 @@ import { DesignGates1796267311937 } from './1796267311937-DesignGates'
 import { Resilience1796300000000 } from './1796300000000-Resilience'
 import { ListIndexes1796400000000 } from './1796400000000-ListIndexes'
 import { RecordChannels1796400000001 } from './1796400000001-RecordChannels'
+import { TaxRates1796400000002 } from './1796400000002-TaxRates'
 
 /** Every migration class in order; a new migration is added here too. */
 export const migrations = [
@@ -23,4 +24,5 @@ export const migrations = [
   Resilience1796300000000,
   ListIndexes1796400000000,
   RecordChannels1796400000001,
+  TaxRates1796400000002,
 ]

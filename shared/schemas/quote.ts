@@ -34,8 +34,11 @@ export const QuoteDraftSchema = z.object({
   currency: CurrencySchema.default('EUR'),
   /** basis points, 100 = 1 % */
   discountBp: z.number().int('whole basis points').min(0).max(10_000).default(0),
-  /** basis points, 2000 = 20 % */
-  taxBp: z.number().int('whole basis points').min(0).max(10_000).default(0),
+  /**
+   * A named tax rate; null prices with the customer company's own rate or the default. The
+   * server looks the rate up: a percentage sent by the browser is never used.
+   */
+  taxRateId: z.number().int().positive().nullable().default(null),
   validUntil: isoDate,
   terms: z.string().max(4000).default(''),
   lines: z.array(QuoteLineInputSchema).min(1, 'add at least one line').max(40),
@@ -128,6 +131,8 @@ export const QuoteSchema = QuoteSummarySchema.extend({
   contactEmail: z.string().nullable(),
   discountBp: z.number().int(),
   taxBp: z.number().int(),
+  taxRateId: z.number().int().nullable(),
+  taxRateName: z.string().nullable(),
   terms: z.string(),
   lines: z.array(QuoteLineSchema),
   subtotal: z.number().int(),
@@ -199,6 +204,7 @@ export const CustomerQuoteSchema = QuoteSchema.pick({
   contactEmail: true,
   discountBp: true,
   taxBp: true,
+  taxRateName: true,
   terms: true,
   lines: true,
   subtotal: true,

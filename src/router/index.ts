@@ -50,6 +50,18 @@ const routes: (RouteRecordRaw & { name: RouteName })[] = [
     meta: { title: 'Second payments' },
   },
   {
+    path: '/admin/tax',
+    name: 'admin-tax',
+    component: () => import('@/views/AdminTaxView.vue'),
+    meta: { title: 'Tax rates' },
+  },
+  {
+    path: '/admin/audit',
+    name: 'admin-audit',
+    component: () => import('@/views/AdminAuditView.vue'),
+    meta: { title: 'Audit trail' },
+  },
+  {
     path: '/portal',
     name: 'portal',
     component: () => import('@/views/PortalView.vue'),

@@ -9,6 +9,7 @@ import {
   daysFromNow,
   makeQuoteApp,
   sizingSummary,
+  taxRate,
 } from './quotes-rig'
 
 let t: TestApp
@@ -30,7 +31,7 @@ async function quote() {
   const res = await sales.post('/api/quotes').send({
     sizingId: sizing.id,
     contactId: contact.id,
-    taxBp: 2000,
+    taxRateId: await taxRate(t, 2000),
     validUntil: daysFromNow(t, 30),
     terms: 'Delivery ex works; payment 30 days net.',
     lines: [

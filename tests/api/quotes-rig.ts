@@ -142,3 +142,9 @@ export async function catalogueIds(agent: AgentLike) {
   const option = (code: string) => options.find((o) => o.code === code)!.id
   return { unit, option }
 }
+
+/** A fresh named tax rate (not the default), made as the admin would; answers its id. */
+export async function taxRate(t: TestApp, rateBp: number) {
+  const name = `Rate ${rateBp} ${randomBytes(3).toString('hex')}`
+  return (await t.services.tax.save(null, { name, rateBp, isDefault: false })).id
+}

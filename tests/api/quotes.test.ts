@@ -8,6 +8,7 @@ import {
   daysFromNow,
   makeQuoteApp,
   sizingSummary,
+  taxRate,
 } from './quotes-rig'
 
 let t: TestApp
@@ -45,7 +46,7 @@ describe('quote totals, priced on the server', () => {
     // tax 19 % = 324 346.53 → 324 347; total 2 031 434 ¢ (all by hand)
     const { res } = await draftFor({
       discountBp: 750,
-      taxBp: 1900,
+      taxRateId: await taxRate(t, 1900),
       lines: [
         { kind: 'unit', productLineId: ids.unit('FLR-S'), quantity: 2 },
         { kind: 'option', optionId: ids.option('SITE-TUNE'), quantity: 1 },
@@ -77,7 +78,7 @@ describe('quote totals, priced on the server', () => {
     // subtotal 768 200; no discount; tax 20 % = 153 640; total 921 840 (by hand)
     const { res } = await draftFor({
       currency: 'GBP',
-      taxBp: 2000,
+      taxRateId: await taxRate(t, 2000),
       lines: [
         { kind: 'unit', productLineId: ids.unit('FLR-S'), quantity: 1 },
         { kind: 'option', optionId: ids.option('FALL-RESTRAINT'), quantity: 1 },

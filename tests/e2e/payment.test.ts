@@ -55,3 +55,24 @@ it('lets a customer accept a quote, pay on the payment page and see the order co
   ).toBe(true)
   await page.browserContext().close()
 })
+
+it('tells a customer who opens the payment return page without a quote where to look, and does not wait', async () => {
+  const customer = await makeUser(rig.t, 'customer')
+  const page = await newPage({ browser })
+  const errors: string[] = []
+  page.on('pageerror', (e) => errors.push(String(e)))
+  await signInAs(page, rig.appUrl, customer.email, PASSWORD)
+  for (const path of ['/portal/payment/done', '/portal/payment/done?quote=abc&session_id=x']) {
+    await page.goto(`${rig.appUrl}${path}`)
+    await page.waitForSelector('::-p-text(does not say which quote was paid)')
+    expect(await page.$('[aria-label="Waiting for the confirmation"]')).toBeNull()
+    await page.locator('nav[aria-label="Where next"] a ::-p-text(My quotes)').wait()
+  }
+  // another company's quote: the page says so instead of waiting
+  const { quote } = await rig.sentQuote()
+  await page.goto(`${rig.appUrl}/portal/payment/done?quote=${quote.id}`)
+  await page.waitForSelector('::-p-text(not yours or does not exist)')
+  expect(errors).toEqual([])
+  await shot(page, 'payment-return-without-quote')
+  await page.browserContext().close()
+})

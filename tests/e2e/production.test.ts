@@ -36,6 +36,20 @@ it('takes a paid order through build and tuning to shipping, and the customer se
   )
   const wo = (await rig.t.services.production.list()).find((w) => w.quoteId === quote.id)!
   expect(links).toContain(`/work-orders/${wo.id}`)
+  // found by its quote's number, its state said in words
+  await enter(page, '#wo-search', quote.number)
+  await page.waitForFunction(
+    (href) =>
+      [...document.querySelectorAll('a[href^="/work-orders/"]')]
+        .map((a) => a.getAttribute('href'))
+        .join() === href,
+    {},
+    `/work-orders/${wo.id}`,
+  )
+  await page.waitForSelector('::-p-text(Waiting to start)')
+  await shot(page, 'production-1-queue-found')
+  await enter(page, '#wo-search', 'no such order anywhere')
+  await page.waitForSelector('::-p-text(No work order matches.)')
   await page.goto(`${rig.appUrl}/work-orders/${wo.id}`)
   // A double tap moves one step: the second tap must not take the next step's button.
   await page.locator('button:not([disabled]) ::-p-text(Move to in-build)').click({ count: 2 })

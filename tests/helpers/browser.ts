@@ -77,10 +77,10 @@ export async function newPage(
   return page
 }
 
-export async function shot(page: Page, name: string) {
+export async function shot(page: Page, name: string, fullPage = true) {
   await page.screenshot({
     path: path.join(SHOTS_DIR, `${name}.png`) as `${string}.png`,
-    fullPage: true,
+    fullPage,
   })
 }
 
@@ -90,6 +90,14 @@ export async function signInAs(page: Page, url: string, email: string, password:
   await page.locator('#password').fill(password)
   await page.locator('button[type="submit"]').click()
   await page.waitForSelector('nav[aria-label="Main"]')
+}
+
+/** Follows a main-menu entry, opening the menu first where the bar is too narrow for the links. */
+export async function navigate(page: Page, label: string) {
+  const toggle = await page.$('header button[aria-controls="main-nav"]')
+  if (toggle && (await toggle.evaluate((b) => b.getAttribute('aria-expanded'))) !== 'true')
+    await toggle.click()
+  await page.locator(`nav[aria-label="Main"] a ::-p-text(${label})`).click()
 }
 
 /** The visible labels of the main navigation, in order. */

@@ -6,6 +6,7 @@ import {
   type QuoteDraft,
 } from '../../../shared/schemas/quote'
 import type { SizingSummary } from '../../../shared/schemas/sizing'
+import type { AppliedTaxRate } from '../../../shared/schemas/tax'
 import { AppError, notFound } from '../../http/app-error'
 import type { AuthUser } from '../../middleware/authenticate'
 import type { Mailer } from '../../integrations/mail'
@@ -25,6 +26,8 @@ export interface QuotesDeps {
   catalogue: CatalogueService
   customers: CustomersService
   sizings: SizingSource
+  /** the named tax rate of a customer's quote, chosen on the server */
+  taxRate: (companyId: number, chosenId: number | null) => Promise<AppliedTaxRate>
   now: () => Date
 }
 
@@ -107,8 +110,9 @@ export function quotesCore(deps: QuotesDeps) {
       })
     }
     const lines = await priceLines(deps.catalogue, draft.lines, sizing, draft.currency)
-    const { lines: _l, ...head } = draft
-    return { ...head, ...totalsOf(lines, draft.discountBp, draft.taxBp), lines }
+    const rate = await deps.taxRate(sizing.companyId, draft.taxRateId)
+    const { lines: _l, taxRateId: _t, ...head } = draft
+    return { ...head, ...rate, ...totalsOf(lines, draft.discountBp, rate.taxBp), lines }
   }
 
   return { row, visibleRow, view, fullView, submittedSizing, priced, fresh }

@@ -30,6 +30,8 @@ export type QuoteWrite = Pick<
   | 'currency'
   | 'discountBp'
   | 'taxBp'
+  | 'taxRateId'
+  | 'taxRateName'
   | 'validUntil'
   | 'terms'
   | 'subtotal'

@@ -60,6 +60,8 @@ export function quoteOf(r: QuoteRow, latest: boolean, events: QuoteEvent[]): Quo
     contactEmail: r.contactEmail,
     discountBp: r.discountBp,
     taxBp: r.taxBp,
+    taxRateId: r.taxRateId,
+    taxRateName: r.taxRateName,
     terms: r.terms,
     lines: r.lines,
     subtotal: r.subtotal,

@@ -74,6 +74,13 @@ export class QuoteEntity extends TrackedRecord {
   @Column('int')
   taxBp: number
 
+  /** the named rate the quote was priced with, as it was then (null: no rate set up, 0 %) */
+  @Column('int', { nullable: true })
+  taxRateId: number | null
+
+  @Column('varchar', { length: 60, nullable: true })
+  taxRateName: string | null
+
   /** YYYY-MM-DD; a string, because a calendar date has no time zone to shift it. */
   @Column('varchar', { length: 10 })
   validUntil: string

@@ -34,7 +34,7 @@ export async function seedBench(s: Services, quotes: number, modelNodes: number)
     contactId: null,
     currency: 'EUR' as const,
     discountBp: 0,
-    taxBp: 2000,
+    taxRateId: null,
     validUntil,
     terms: '',
     lines: [{ kind: 'unit' as const, productLineId: unit.productLineId, quantity: 1 }],

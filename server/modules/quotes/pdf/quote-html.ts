@@ -70,7 +70,7 @@ function linesSection(q: Quote) {
     : ''
   return `<h2>Prices</h2><table><thead><tr><th>#</th><th>Code</th><th>Item</th><th class="num">Qty</th><th class="num">Unit price</th><th class="num">Amount</th></tr></thead><tbody>${rows}</tbody></table>
 <table class="totals"><tr><td>Subtotal</td><td class="num">${m(q.subtotal)}</td></tr>${discount}
-<tr><td>Tax ${esc(formatBasisPoints(q.taxBp))}</td><td class="num">${m(q.tax)}</td></tr>
+<tr><td>Tax${q.taxRateName ? ` (${esc(q.taxRateName)})` : ''} ${esc(formatBasisPoints(q.taxBp))}</td><td class="num">${m(q.tax)}</td></tr>
 <tr class="grand"><td>Total (${esc(q.currency)})</td><td class="num">${m(q.total)}</td></tr></table>`
 }
 
