@@ -1,3 +1,4 @@
+import { randomBytes } from 'node:crypto'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { toAuthUser } from '../../server/modules/auth/auth.service'
 import { closePdfRenderers } from '../../server/integrations/pdf/renderer'
@@ -23,6 +24,8 @@ import {
 let rig: BrowserRig
 let sizingId: number
 let salesUser: ReturnType<typeof toAuthUser>
+/** This file's own handed-over sizing: other browser files of the run may quote the demo one. */
+const TITLE = `${DEMO_OFFICE_SIZING}, desk run ${randomBytes(3).toString('hex')}`
 beforeAll(async () => {
   rig = await startBrowserRig()
   const s = rig.t.services
@@ -30,8 +33,12 @@ beforeAll(async () => {
   await seedCatalogue(s)
   await seedSizings(s, { companyIds })
   const admin = toAuthUser((await s.users.findByEmail('admin@quellnode.test'))!)
+  const engineer = toAuthUser((await s.users.findByEmail('engineer@quellnode.test'))!)
   const [demo] = await s.sizings.list(admin, { search: DEMO_OFFICE_SIZING })
-  sizingId = demo!.id
+  const { input } = await s.sizings.view(admin, demo!.id)
+  const own = await s.sizings.create(engineer, { ...input, title: TITLE })
+  await s.sizings.submit(engineer, own.id, { revision: own.currentRevision, note: '' })
+  sizingId = own.id
   salesUser = toAuthUser((await s.users.findByEmail('sales@quellnode.test'))!)
 })
 afterAll(async () => {
@@ -72,7 +79,9 @@ describe('sales quote the demo sizing in Chromium on a tablet', () => {
     const page = await newPage(rig)
     await signInAs(page, rig.url, sales.email, sales.password)
     await navigate(page, 'Quotes')
-    const start = `::-p-aria([name="Start a quote for ${DEMO_OFFICE_SIZING}"][role="button"])`
+    await page.waitForSelector('#ready-title')
+    await page.locator('input[aria-label="Search sizings ready to quote"]').fill(TITLE)
+    const start = `::-p-aria([name="Start a quote for ${TITLE}"][role="button"])`
     await page.waitForSelector(start)
     await shot(page, 'quotes-1-ready-list')
     await page.locator(start).click()
@@ -80,7 +89,7 @@ describe('sales quote the demo sizing in Chromium on a tablet', () => {
     await page.waitForSelector('section[aria-label="Units that can carry the sizing"] button')
     expect(page.url()).toContain(`/quotes/new?sizing=${sizingId}`)
     expect(await page.$('#sizing-no')).toBeNull()
-    await page.waitForSelector(`::-p-text(${DEMO_OFFICE_SIZING})`)
+    await page.waitForSelector(`::-p-text(${TITLE})`)
     // The first unit offered is one the matcher found able to carry the sizing.
     const add = await page.waitForSelector(
       'section[aria-label="Units that can carry the sizing"] button',
@@ -124,10 +133,16 @@ describe('sales quote the demo sizing in Chromium on a tablet', () => {
     await page.waitForFunction(() => !document.body.textContent?.includes('Discount: at most'))
     await shot(page, 'quotes-3-builder')
     // a double tap on save makes one quote and no error
+    // other browser tests in this run may have quoted the same demo sizing: count only new ones
+    const quotesOfSizing = async () =>
+      (await rig.t.services.quotes.list(salesUser, { limit: 200 })).items.filter(
+        (q) => q.sizingId === sizingId,
+      )
+    const before = new Set((await quotesOfSizing()).map((q) => q.id))
     const save = await page.waitForSelector('::-p-xpath(//button[normalize-space(.)="Save draft"])')
     await save!.click({ count: 2 })
     await page.waitForSelector('[data-state="draft"]')
-    const drafts = await quoted()
+    const drafts = (await quotesOfSizing()).filter((q) => !before.has(q.id))
     expect(drafts).toHaveLength(1)
     expect((await rig.t.services.quotes.get(salesUser, drafts[0]!.id)).discountBp).toBe(5)
     const heading = await page.$eval('h1', (h) => h.textContent ?? '')
