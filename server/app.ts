@@ -21,6 +21,7 @@ import { modelsRouter } from './modules/models/models.router'
 import { paymentsRouter, paymentsWebhookRouter } from './modules/payments/payments.router'
 import { productionRouter } from './modules/production/production.router'
 import { quotesRouter } from './modules/quotes/quotes.router'
+import { quotesFlowRouter } from './modules/quotes/quotes-flow.router'
 import { taxRouter } from './modules/tax/tax.router'
 import { sitesRouter } from './modules/sites/sites.router'
 import { sizingsRouter } from './modules/sizings/sizings.router'
@@ -103,6 +104,7 @@ function expressApp(deps: AppDeps, services: Services): Express {
   app.use(measurementsRouter(api, services.measurements))
   app.use(catalogueRouter(api, services.catalogue, services.sizingSource))
   app.use(customersRouter(api, services.customers))
+  app.use(quotesFlowRouter(api, services.quotes))
   app.use(quotesRouter(api, services.quotes))
   app.use(taxRouter(api, services.tax))
   app.use(paymentsRouter(api, services.payments))

@@ -25,11 +25,13 @@ import { productionRepository } from './modules/production/production.repository
 import { productionService } from './modules/production/production.service'
 import { quotesRepository } from './modules/quotes/quotes.repository'
 import { quotesService } from './modules/quotes/quotes.service'
+import { quoteReadyRepository } from './modules/quotes/quote-ready.repository'
 import { taxRepository } from './modules/tax/tax.repository'
 import { taxService } from './modules/tax/tax.service'
 import { sitesRepository } from './modules/sites/sites.repository'
 import { sitesService } from './modules/sites/sites.service'
 import { sizingHandoverRepository } from './modules/sizings/sizing-handover.repository'
+import { handedOverRepository } from './modules/sizings/handed-over.repository'
 import { sizingsRepository } from './modules/sizings/sizings.repository'
 import { sizingsService } from './modules/sizings/sizings.service'
 import { usersRepository } from './modules/users/users.repository'
@@ -95,6 +97,7 @@ export function buildServices(deps: AppDeps) {
   const sizings = sizingsService({
     sizings: sizingsRepository(ds),
     handover: sizingHandoverRepository(ds),
+    handedOver: handedOverRepository(ds),
     catalogueUnits: () => catalogue.activeUnits(),
     models,
     sites,
@@ -109,6 +112,7 @@ export function buildServices(deps: AppDeps) {
   const quotes = quotesService({
     taxRate: tax.rateFor,
     quotes: quotesRepository(ds),
+    ready: quoteReadyRepository(ds),
     catalogue,
     customers,
     sizings: sizingSource,

@@ -33,7 +33,12 @@ export const QuoteDraftSchema = z.object({
   contactId: z.number().int().positive().nullable().default(null),
   currency: CurrencySchema.default('EUR'),
   /** basis points, 100 = 1 % */
-  discountBp: z.number().int('whole basis points').min(0).max(10_000).default(0),
+  discountBp: z
+    .number()
+    .int('at most two decimals of a per cent')
+    .min(0, 'not below 0 %')
+    .max(10_000, 'at most 100 %')
+    .default(0),
   /**
    * A named tax rate; null prices with the customer company's own rate or the default. The
    * server looks the rate up: a percentage sent by the browser is never used.
@@ -42,6 +47,8 @@ export const QuoteDraftSchema = z.object({
   validUntil: isoDate,
   terms: z.string().max(4000).default(''),
   lines: z.array(QuoteLineInputSchema).min(1, 'add at least one line').max(40),
+  /** sales confirm a total of zero or less (422 total-unconfirmed without it); not stored */
+  confirmTotal: z.boolean().optional(),
 })
 export type QuoteDraft = z.infer<typeof QuoteDraftSchema>
 
@@ -71,6 +78,8 @@ export const QuoteNoteSchema = z.object({ note: z.string().trim().max(500).defau
 export const QuoteSendSchema = z.object({
   /** sales have read the acknowledged failed design checks and send the quote with them */
   confirmDesignChecks: z.boolean().default(false),
+  /** a personal word from sales, put into the mail above the standard text */
+  message: z.string().trim().max(2000, 'at most 2000 characters').default(''),
 })
 export type QuoteSend = z.infer<typeof QuoteSendSchema>
 export const QuoteAcceptSchema = z.object({

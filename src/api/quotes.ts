@@ -6,6 +6,13 @@ import type {
   QuoteListQuery,
   QuoteSummary,
 } from '@shared/schemas/quote'
+import type {
+  MailPreview,
+  PricedDraft,
+  PricePreview,
+  ReadyQuery,
+  ReadySizing,
+} from '@shared/schemas/quote-flow'
 import type { SizingSummary } from '@shared/schemas/sizing'
 import { api, queryString } from './client'
 
@@ -16,9 +23,19 @@ export const quotesApi = {
   get: (id: number) => api.get<Quote>(`/api/quotes/${id}`),
   create: (body: QuoteCreate) => api.post<Quote>('/api/quotes', body),
   update: (id: number, body: QuoteDraft) => api.put<Quote>(`/api/quotes/${id}`, body),
-  /** confirmDesignChecks: sales have read the failed checks the sizing was handed over with */
-  send: (id: number, confirmDesignChecks = false) =>
-    api.post<Quote>(`/api/quotes/${id}/send`, { confirmDesignChecks }),
+  /**
+   * confirmDesignChecks: sales have read the failed checks the sizing was handed over with;
+   * message: a personal word put into the mail
+   */
+  send: (id: number, confirmDesignChecks = false, message = '') =>
+    api.post<Quote>(`/api/quotes/${id}/send`, { confirmDesignChecks, message }),
+  /** The mail a send would make with this message (subject, text, the PDF's name). */
+  mailPreview: (id: number, message: string) =>
+    api.post<MailPreview>(`/api/quotes/${id}/mail-preview`, { message }),
+  /** Handed-over sizings with no live quote, one page, newest hand-over first. */
+  ready: (q: ReadyQuery) => api.page<ReadySizing>(`/api/quotes/ready${queryString(q)}`),
+  /** The server's prices of a draft's lines, without saving. */
+  pricePreview: (body: PricePreview) => api.post<PricedDraft>('/api/quotes/price-preview', body),
   revise: (id: number) => api.post<Quote>(`/api/quotes/${id}/revise`),
   withdraw: (id: number, note = '') => api.post<Quote>(`/api/quotes/${id}/withdraw`, { note }),
   accept: (id: number, body: QuoteAccept) => api.post<Quote>(`/api/quotes/${id}/accept`, body),

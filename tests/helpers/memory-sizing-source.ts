@@ -1,3 +1,4 @@
+import type { ReadyQuery } from '../../shared/schemas/quote-flow'
 import type { SizingSummary } from '../../shared/schemas/sizing'
 import { notFound } from '../../server/http/app-error'
 import type { AuthUser } from '../../server/middleware/authenticate'
@@ -16,6 +17,28 @@ export function memorySizingSource(initial: SizingSummary[] = []) {
       const found = await this.summary(id)
       if (found.state !== 'submitted' && user.role !== 'admin') throw notFound('sizing')
       return found
+    },
+    /** The held submitted sizings not excluded, newest hand-over first, as the real source pages them. */
+    async handedOver(q: ReadyQuery & { exclude: readonly number[] }) {
+      const found = [...byId.values()]
+        .filter((s) => s.state === 'submitted' && !q.exclude.includes(s.id))
+        .filter((s) => !q.search || `${s.title} ${s.siteName} ${s.companyName}`.includes(q.search))
+        .sort((a, b) => (b.submittedAt ?? '').localeCompare(a.submittedAt ?? '') || b.id - a.id)
+      const offset = q.offset ?? 0
+      const items = found.slice(offset, offset + (q.limit ?? 25)).map((s) => ({
+        id: s.id,
+        revision: s.revision,
+        title: s.title,
+        siteName: s.siteName,
+        companyName: s.companyName,
+        ownerName: s.ownerName,
+        submittedAt: s.submittedAt,
+        absorberMass: s.absorber.mass,
+        hostFrequencyHz: s.hostFrequencyHz,
+        passes: s.acceptance.passes,
+        acknowledged: !!s.designAcknowledgement,
+      }))
+      return { total: found.length, items }
     },
     put(s: SizingSummary) {
       byId.set(s.id, structuredClone(s))

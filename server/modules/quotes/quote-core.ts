@@ -5,6 +5,7 @@ import {
   type Quote,
   type QuoteDraft,
 } from '../../../shared/schemas/quote'
+import { formatMoney, type Currency } from '../../../shared/money'
 import type { SizingSummary } from '../../../shared/schemas/sizing'
 import type { AppliedTaxRate } from '../../../shared/schemas/tax'
 import { AppError, notFound } from '../../http/app-error'
@@ -39,6 +40,17 @@ export interface QuotesServiceDeps extends QuotesDeps {
 }
 
 export const isCustomer = (u: AuthUser) => u.role === 'customer'
+
+/** What pricing reads of a draft. */
+type PriceInput = Pick<QuoteDraft, 'lines' | 'currency' | 'discountBp' | 'taxRateId'>
+
+/** A total of zero or less is saved only when sales confirm it: it is seldom meant. */
+function unconfirmedTotal(total: number, currency: Currency) {
+  const message = `the quote comes to ${formatMoney(total, currency)}; confirm a total of zero or less to save it`
+  return new AppError('total-unconfirmed', `Total: ${message}.`, 422, [
+    { path: 'body.confirmTotal', message },
+  ])
+}
 
 /** Reading, pricing and the lazy expiry of quotes, shared by the service's operations. */
 export function quotesCore(deps: QuotesDeps) {
@@ -96,6 +108,13 @@ export function quotesCore(deps: QuotesDeps) {
     return s
   }
 
+  /** Prices lines, discount and tax from the catalogue and the sizing; nothing is stored. */
+  async function price(draft: PriceInput, sizing: SizingSummary) {
+    const lines = await priceLines(deps.catalogue, draft.lines, sizing, draft.currency)
+    const rate = await deps.taxRate(sizing.companyId, draft.taxRateId)
+    return { lines, rate, totals: totalsOf(lines, draft.discountBp, rate.taxBp) }
+  }
+
   /** Checks the draft fields against the sizing and prices it; the result is ready to store. */
   async function priced(draft: QuoteDraft, sizing: SizingSummary) {
     if (draft.validUntil < dayOf(deps.now()))
@@ -109,13 +128,14 @@ export function quotesCore(deps: QuotesDeps) {
         ])
       })
     }
-    const lines = await priceLines(deps.catalogue, draft.lines, sizing, draft.currency)
-    const rate = await deps.taxRate(sizing.companyId, draft.taxRateId)
-    const { lines: _l, taxRateId: _t, ...head } = draft
-    return { ...head, ...rate, ...totalsOf(lines, draft.discountBp, rate.taxBp), lines }
+    const { lines, rate, totals } = await price(draft, sizing)
+    if (totals.total <= 0 && !draft.confirmTotal)
+      throw unconfirmedTotal(totals.total, draft.currency)
+    const { lines: _l, taxRateId: _t, confirmTotal: _c, ...head } = draft
+    return { ...head, ...rate, ...totals, lines }
   }
 
-  return { row, visibleRow, view, fullView, submittedSizing, priced, fresh }
+  return { row, visibleRow, view, fullView, submittedSizing, price, priced, fresh }
 }
 export type QuotesCore = ReturnType<typeof quotesCore>
 

@@ -5,14 +5,27 @@ import type { MailMessage } from '../../integrations/mail'
 /** The portal page of a quote; the customer signs in to read, accept and pay it. */
 export const portalLink = (publicUrl: string, id: number) => `${publicUrl}/portal/quotes/${id}`
 
-/** The "quote sent" message: the PDF attached and the portal link. */
-export function quoteMail(q: Quote, pdf: Buffer, link: string, supplierName: string): MailMessage {
+/** The name of the quote's PDF as attached to the mail and downloaded. */
+export const pdfName = (reference: string) => `${reference.replace(/\s+/g, '-')}.pdf`
+
+/**
+ * The "quote sent" message: the PDF attached and the portal link, with the personal message of
+ * sales (if any) under the greeting. The send preview renders this same function.
+ */
+export function quoteMail(
+  q: Quote,
+  pdf: Buffer,
+  link: string,
+  supplierName: string,
+  message = '',
+): MailMessage {
   const total = formatMoney(q.total, q.currency)
   const greeting = q.contactName ? `Dear ${q.contactName},` : 'Hello,'
   const text = [
     greeting,
     '',
-    `please find attached our quotation ${q.reference} for ${q.siteName}: ${total} including tax, valid until ${q.validUntil}.`,
+    ...(message ? [message, ''] : []),
+    `Please find attached our quotation ${q.reference} for ${q.siteName}: ${total} including tax, valid until ${q.validUntil}.`,
     '',
     `You can read and accept it in the customer portal:`,
     link,
@@ -35,7 +48,7 @@ export function quoteMail(q: Quote, pdf: Buffer, link: string, supplierName: str
     text,
     attachments: [
       {
-        filename: `${q.reference.replace(/\s+/g, '-')}.pdf`,
+        filename: pdfName(q.reference),
         content: pdf,
         contentType: 'application/pdf',
       },

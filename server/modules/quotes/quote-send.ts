@@ -1,3 +1,4 @@
+import type { MailPreview } from '../../../shared/schemas/quote-flow'
 import {
   toCustomerQuote,
   type CustomerQuote,
@@ -9,7 +10,7 @@ import { inlineFontCss } from '../../integrations/pdf/renderer'
 import type { AuthUser } from '../../middleware/authenticate'
 import { quoteFooter, quoteHtml, type Supplier } from './pdf/quote-html'
 import type { QuotesCore } from './quote-core'
-import { portalLink, quoteMail } from './quote-mail'
+import { pdfName, portalLink, quoteMail } from './quote-mail'
 import type { QuoteRow } from './quote-rows'
 import { dayOf } from './quote-states'
 import type { QuotesServiceDeps } from './quote-core'
@@ -43,7 +44,25 @@ export function quoteSending(deps: QuotesServiceDeps, core: QuotesCore) {
     const bytes = await deps.pdf.render(quoteHtml(q, await supplier(), inlineFontCss()), {
       footer: quoteFooter(q.reference),
     })
-    return { quote: q, bytes, filename: `${q.reference.replace(/\s+/g, '-')}.pdf` }
+    return { quote: q, bytes, filename: pdfName(q.reference) }
+  }
+
+  /** Refuses a quote that cannot go out as it stands (409 naming what to change). */
+  function assertSendable(r: QuoteRow) {
+    if (r.state !== 'draft') throw conflict('quote-not-draft', `A ${r.state} quote cannot be sent.`)
+    if (!r.contactEmail) throw conflict('no-contact', 'Choose the customer contact to send it to.')
+    if (r.validUntil < dayOf(deps.now()))
+      throw conflict('quote-lapsed', 'The validity date has passed; change it first.')
+  }
+
+  /** The mail a send would make with this message, without the PDF: the same template. */
+  async function mailPreview(id: number, message: string): Promise<MailPreview> {
+    const r = await core.row(id)
+    assertSendable(r)
+    const q = toCustomerQuote(await core.fullView(r))
+    const link = portalLink(deps.publicUrl(), id)
+    const m = quoteMail(q, Buffer.alloc(0), link, (await supplier()).name, message)
+    return { to: m.to, subject: m.subject, text: m.text, attachmentName: pdfName(q.reference) }
   }
 
   /** Earlier revisions give way when a later one is sent; an accepted one blocks it. */
@@ -72,19 +91,14 @@ export function quoteSending(deps: QuotesServiceDeps, core: QuotesCore) {
       const r = await repo.findById(id)
       if (!r) throw notFound('quote')
       if (r.sentAt) return
-      if (r.state !== 'draft')
-        throw conflict('quote-not-draft', `A ${r.state} quote cannot be sent.`)
-      if (!r.contactEmail)
-        throw conflict('no-contact', 'Choose the customer contact to send it to.')
-      if (r.validUntil < dayOf(deps.now()))
-        throw conflict('quote-lapsed', 'The validity date has passed; change it first.')
+      assertSendable(r)
       const ack = r.sizing.designAcknowledgement
       if (ack && !body.confirmDesignChecks) throw unconfirmed(r)
       await supersedeEarlier(r, user.id)
       const pdf = await renderPdf(r)
       const s = await supplier()
       await deps.mailer.send(
-        quoteMail(pdf.quote, pdf.bytes, portalLink(deps.publicUrl(), id), s.name),
+        quoteMail(pdf.quote, pdf.bytes, portalLink(deps.publicUrl(), id), s.name, body.message),
       )
       const at = deps.now()
       const confirmed = ack
@@ -95,7 +109,7 @@ export function quoteSending(deps: QuotesServiceDeps, core: QuotesCore) {
         to: 'sent',
         actorId: user.id,
         at,
-        note: `mailed to ${r.contactEmail}${confirmed}`,
+        note: `mailed to ${r.contactEmail}${body.message ? ' with a personal message' : ''}${confirmed}`,
         patch: { sentAt: at, ...(ack && { designConfirmedById: user.id, designConfirmedAt: at }) },
       })
       if (!moved) throw conflict('quote-state', 'The quote changed while it was being sent.')
@@ -103,5 +117,5 @@ export function quoteSending(deps: QuotesServiceDeps, core: QuotesCore) {
     return core.view(user, await core.row(id))
   }
 
-  return { renderPdf, send }
+  return { renderPdf, send, mailPreview }
 }

@@ -7,7 +7,8 @@ import type {
 import { CUSTOMER_VISIBLE_STATES } from '../../../shared/schemas/quote'
 import { AppError } from '../../http/app-error'
 import type { AuthUser } from '../../middleware/authenticate'
-import { expireDue, isCustomer, quotesCore, type QuotesServiceDeps } from './quote-core'
+import { expireDue, isCustomer, quotesCore } from './quote-core'
+import { quoteFlow, type QuoteFlowDeps } from './quote-flow'
 import { quoteSending } from './quote-send'
 import { insertNumbered } from './quote-numbers'
 import type { QuoteRow } from './quote-rows'
@@ -30,10 +31,11 @@ function acceptedAs(r: QuoteRow, body: QuoteAccept) {
   )
 }
 
-export function quotesService(deps: QuotesServiceDeps) {
+export function quotesService(deps: QuoteFlowDeps) {
   const repo = deps.quotes
   const core = quotesCore(deps)
   const sending = quoteSending(deps, core)
+  const flow = quoteFlow(deps, core)
 
   async function move(r: QuoteRow, to: QuoteRow['state'], actorId: number | null, extra = {}) {
     const ok = await repo.transition(r.id, {
@@ -101,6 +103,12 @@ export function quotesService(deps: QuotesServiceDeps) {
     },
 
     send: sending.send,
+    /** The mail a send would make with this personal message, for sales to read first. */
+    mailPreview: sending.mailPreview,
+    /** Submitted sizings waiting for a quote, one page at a time. */
+    ready: flow.ready,
+    /** A draft's lines priced by the server without saving. */
+    pricePreview: flow.pricePreview,
 
     /** A new draft revision copying the lines of the latest one, with the sizing frozen anew. */
     async revise(user: AuthUser, id: number) {

@@ -15,6 +15,7 @@ import { designChecks } from '../../../shared/sizing/design-checks'
 import { sizingHandover, type HandoverDeps } from './sizing-handover.service'
 import { summarise } from './sizing-summary'
 import type { SizingRecord } from './sizings.repository'
+import type { HandedOverRepository } from './handed-over.repository'
 
 export interface SizingsDeps extends HandoverDeps {
   models: ModelsService
@@ -22,6 +23,8 @@ export interface SizingsDeps extends HandoverDeps {
   /** ids of the measurement records of a site, to check the records a sizing links */
   siteRecordIds: (siteId: number) => Promise<number[]>
   pool: SizingPool
+  /** submitted sizings for the sales desk's list of sizings ready to quote */
+  handedOver: HandedOverRepository
 }
 
 /** Engineers see their own sizings and every submitted one; sales the submitted; admin all. */
@@ -107,6 +110,7 @@ export function sizingsService(deps: SizingsDeps) {
 
   return {
     view,
+    handedOver: deps.handedOver,
     list(user: AuthUser, q: SizingListQuery) {
       if (user.role === 'admin') return deps.sizings.list(q)
       if (user.role === 'sales') return deps.sizings.list({ ...q, onlyState: 'submitted' })

@@ -1,0 +1,83 @@
+import type { DataSource } from 'typeorm'
+import type { HandedOverSizing, ReadyQuery } from '../../../shared/schemas/quote-flow'
+import { SizingRevisionEntity } from './sizing-revision.entity'
+import { SizingEntity } from './sizing.entity'
+
+interface Raw {
+  id: number
+  revision: number
+  title: string
+  siteName: string
+  companyName: string
+  ownerName: string | null
+  submittedAt: Date | null
+  /** JSON_VALUE answers text: numbers as digits, booleans as "true" / "false" */
+  mass: string | null
+  frequency: string | null
+  passes: string | null
+  ack: number | null
+}
+
+const DEFAULT_PAGE = 25
+
+const num = (v: string | null) => (v === null ? null : Number(v))
+
+function toItem(r: Raw): HandedOverSizing {
+  return {
+    id: Number(r.id),
+    revision: Number(r.revision),
+    title: r.title,
+    siteName: r.siteName,
+    companyName: r.companyName,
+    ownerName: r.ownerName ?? '',
+    submittedAt: r.submittedAt ? new Date(r.submittedAt).toISOString() : null,
+    absorberMass: num(r.mass),
+    hostFrequencyHz: num(r.frequency),
+    passes: r.passes === null ? null : r.passes === 'true',
+    acknowledged: r.ack !== null,
+  }
+}
+
+/**
+ * Submitted sizings, most recently handed over first, one page at a time, leaving out the ids
+ * given (those the quotes module has a live quote for).
+ */
+export function handedOverRepository(ds: DataSource) {
+  return async (q: ReadyQuery & { exclude: readonly number[] }) => {
+    const qb = ds
+      .getRepository(SizingEntity)
+      .createQueryBuilder('s')
+      .leftJoin('s.owner', 'owner')
+      .innerJoin('s.site', 'site')
+      .innerJoin('site.company', 'company')
+      .innerJoin(SizingRevisionEntity, 'r', 'r.sizingId = s.id AND r.revision = s.currentRevision')
+      .where('s.state = :state', { state: 'submitted' })
+    if (q.exclude.length) qb.andWhere('s.id NOT IN (:...exclude)', { exclude: q.exclude })
+    if (q.search)
+      qb.andWhere('(s.title LIKE :q OR site.name LIKE :q OR company.name LIKE :q)', {
+        q: `%${q.search.replace(/[%_\\]/g, '\\$&')}%`,
+      })
+    const total = await qb.getCount()
+    const rows = await qb
+      .select([
+        's.id AS id',
+        's.currentRevision AS revision',
+        's.title AS title',
+        'site.name AS siteName',
+        'company.name AS companyName',
+        'owner.name AS ownerName',
+        's.submittedAt AS submittedAt',
+        's.acknowledgementId AS ack',
+        "JSON_VALUE(r.summary, '$.absorber.mass') AS mass",
+        "JSON_VALUE(r.summary, '$.hostFrequencyHz') AS frequency",
+        "JSON_VALUE(r.summary, '$.acceptance.passes') AS passes",
+      ])
+      .orderBy('s.submittedAt', 'DESC')
+      .addOrderBy('s.id', 'DESC')
+      .limit(q.limit ?? DEFAULT_PAGE)
+      .offset(q.offset ?? 0)
+      .getRawMany<Raw>()
+    return { total, items: rows.map(toItem) }
+  }
+}
+export type HandedOverRepository = ReturnType<typeof handedOverRepository>
