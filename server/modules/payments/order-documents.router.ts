@@ -1,0 +1,47 @@
+import { Router } from 'express'
+import { ACCESS } from '../../../shared/access'
+import { IdParamSchema } from '../../../shared/schemas/ids'
+import { OrderTimelineSchema } from '../../../shared/schemas/order-progress'
+import type { ApiRegistry } from '../../http/api-registry'
+import { route } from '../../http/route'
+import type { OrderDocuments } from './order-documents'
+
+/** A paid order's timeline and receipt; a customer reaches only their company's (404 else). */
+export function orderDocumentsRouter(api: ApiRegistry, docs: OrderDocuments) {
+  const router = Router()
+  const common = { tag: 'Payments', params: IdParamSchema, access: ACCESS.orders.read }
+  route(
+    router,
+    api,
+    {
+      ...common,
+      method: 'get',
+      path: '/api/quotes/:id/order/timeline',
+      response: OrderTimelineSchema,
+      summary:
+        'The order of a paid quote step by step (paid, in build, tuning, ready, shipped) with dates and the expected delivery; 404 while unpaid',
+    },
+    ({ user, params }) => docs.timeline(user, params.id),
+  )
+  route(
+    router,
+    api,
+    {
+      ...common,
+      method: 'get',
+      path: '/api/quotes/:id/order/receipt',
+      summary: 'The receipt of a paid quote as a PDF; 404 while unpaid',
+      produces: 'application/pdf',
+    },
+    async ({ user, params, res }) => {
+      const pdf = await docs.receipt(user, params.id)
+      res
+        .type('application/pdf')
+        .set('content-disposition', `attachment; filename="${pdf.filename}"`)
+        .set('cache-control', 'private, no-store')
+        .send(pdf.bytes)
+      return undefined
+    },
+  )
+  return router
+}
