@@ -152,6 +152,22 @@ describe('the receipt of a paid order', () => {
   })
 })
 
+describe('a double press of Pay on the payment page', () => {
+  it('takes both presses to the return page, the second one paying nothing', async () => {
+    const { quote, customer } = await rig.acceptedQuote()
+    const { body } = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)
+    const [first, second] = [await rig.payOnPage(body.url), await rig.payOnPage(body.url)]
+    expect(first).toEqual({
+      status: 303,
+      location: expect.stringContaining('/portal/payment/done'),
+    })
+    expect(second).toEqual(first)
+    const { agent: admin } = await signedIn(rig.t, 'admin')
+    const orders = (await admin.get('/api/orders')).body as { quoteId: number }[]
+    expect(orders.filter((o) => o.quoteId === quote.id)).toHaveLength(1)
+  })
+})
+
 describe('a link to an old revision', () => {
   it('answers 410 naming the current revision to its customer, and 404 to another company', async () => {
     const { quote, company } = await rig.sentQuote()
