@@ -1,20 +1,11 @@
-import { afterAll, beforeAll, expect, it } from 'vitest'
-import type { Browser, Page } from 'puppeteer-core'
+import { expect, it } from 'vitest'
+import type { Page } from 'puppeteer-core'
 import { PASSWORD, makeUser, signedIn } from '../helpers/factories'
-import { launchBrowser, newPage, shot, signInAs } from '../helpers/browser'
+import { newPage, shot, signInAs } from '../helpers/browser'
 import { pdfText } from '../helpers/pdf'
-import { makePaymentRig, type PaymentRig } from '../api/payments-rig'
+import { paymentBrowserRigPerFile } from './payment-browser-rig'
 
-let rig: PaymentRig
-let browser: Browser
-beforeAll(async () => {
-  rig = await makePaymentRig({ CLIENT_DIR: 'dist/client' })
-  browser = await launchBrowser()
-})
-afterAll(async () => {
-  await browser?.close()
-  await rig?.close()
-})
+const rig = paymentBrowserRigPerFile()
 
 const DAY = 86_400_000
 /** A date as the timeline should print it: "3 Dec 2026" (the UTC day). */
@@ -50,7 +41,7 @@ it('customer timeline and receipt: the order shows its steps with dates, the rec
   }
   const order = (await customer.agent.get(`/api/quotes/${quote.id}/order`)).body.order
 
-  const page = await newPage({ browser })
+  const page = await newPage(rig)
   await signInAs(page, rig.appUrl, customer.user.email, PASSWORD)
   await page.goto(`${rig.appUrl}/portal/quotes/${quote.id}`)
   await page.waitForSelector('li[data-step="paid"]')
@@ -98,7 +89,7 @@ it('customer timeline and receipt: the order shows its steps with dates, the rec
   const rev = await rig.sales.post(`/api/quotes/${old.id}/revise`).expect(201)
   await rig.sales.post(`/api/quotes/${rev.body.id}/send`).expect(200)
   const other = await makeUser(rig.t, 'customer', { companyId: company.id })
-  const mail = await newPage({ browser })
+  const mail = await newPage(rig)
   await signInAs(mail, rig.appUrl, other.email, PASSWORD)
   await mail.goto(`${rig.appUrl}/portal/quotes/${old.id}`)
   await mail.waitForSelector(`::-p-text(Quote ${old.number} was replaced)`)

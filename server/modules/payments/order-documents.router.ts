@@ -4,6 +4,7 @@ import { IdParamSchema } from '../../../shared/schemas/ids'
 import { OrderTimelineSchema } from '../../../shared/schemas/order-progress'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
+import { sendPdf } from '../../http/send-pdf'
 import type { OrderDocuments } from './order-documents'
 
 /** A paid order's timeline and receipt; a customer reaches only their company's (404 else). */
@@ -33,15 +34,8 @@ export function orderDocumentsRouter(api: ApiRegistry, docs: OrderDocuments) {
       summary: 'The receipt of a paid quote as a PDF; 404 while unpaid',
       produces: 'application/pdf',
     },
-    async ({ user, params, res }) => {
-      const pdf = await docs.receipt(user, params.id)
-      res
-        .type('application/pdf')
-        .set('content-disposition', `attachment; filename="${pdf.filename}"`)
-        .set('cache-control', 'private, no-store')
-        .send(pdf.bytes)
-      return undefined
-    },
+    async ({ user, params, res }) =>
+      sendPdf(res, await docs.receipt(user, params.id), 'attachment'),
   )
   return router
 }
