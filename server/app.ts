@@ -18,6 +18,7 @@ import { customersRouter } from './modules/customers/customers.router'
 import { healthRouter } from './modules/health/health.router'
 import { measurementsRouter } from './modules/measurements/measurements.router'
 import { modelsRouter } from './modules/models/models.router'
+import { orderDocumentsRouter } from './modules/payments/order-documents.router'
 import { paymentsRouter, paymentsWebhookRouter } from './modules/payments/payments.router'
 import { productionRouter } from './modules/production/production.router'
 import { quotesRouter } from './modules/quotes/quotes.router'
@@ -108,6 +109,7 @@ function expressApp(deps: AppDeps, services: Services): Express {
   app.use(quotesRouter(api, services.quotes))
   app.use(taxRouter(api, services.tax))
   app.use(paymentsRouter(api, services.payments))
+  app.use(orderDocumentsRouter(api, services.orders))
   app.use(productionRouter(api, services.production))
   app.use(auditRouter(api, services.audit))
 

@@ -19,6 +19,8 @@ import { recordAnalysesService } from './modules/measurements/record-analyses.se
 import { recordChannelsService } from './modules/measurements/record-channels.service'
 import { modelsRepository } from './modules/models/models.repository'
 import { modelsService } from './modules/models/models.service'
+import { orderDocuments } from './modules/payments/order-documents'
+import { paymentsRepository } from './modules/payments/payments.repository'
 import { outboxRepository } from './modules/outbox/outbox.repository'
 import { outboxService } from './modules/outbox/outbox.service'
 import { productionRepository } from './modules/production/production.repository'
@@ -133,6 +135,15 @@ export function buildServices(deps: AppDeps) {
   })
   const payments = buildPayments(deps, { now, outbox, users: usersAdmin, production, quotes })
   const audit = auditService({ quotes, production })
+  const orders = orderDocuments({
+    payments: paymentsRepository(ds),
+    orders: payments,
+    quotes,
+    catalogue,
+    companies,
+    progress: (quoteId) => production.progressForQuote(quoteId),
+    pdf,
+  })
   return {
     tax,
     now,
@@ -152,6 +163,7 @@ export function buildServices(deps: AppDeps) {
     sizingSource,
     pdf,
     payments,
+    orders,
     production,
     audit,
   }

@@ -1,5 +1,5 @@
 import { escapeHtml, htmlDocument } from '../shared/html'
-import { TEST_CARDS } from './actions'
+import { successRedirect, TEST_CARDS } from './actions'
 import { formatMinor } from './money'
 import type { SessionRecord } from './types'
 
@@ -31,9 +31,13 @@ function lines(record: SessionRecord): string {
   return `<table aria-label="What you are paying for"><tbody>${rows.join('')}</tbody></table>`
 }
 
+/** A closed request says so and leads back to the shop: where a payment lands, or its exit. */
 function closedBody(record: SessionRecord): string {
-  const word = record.session.status === 'complete' ? 'has been paid' : 'has expired'
-  return `<main><h1>Test payment desk</h1><p role="status">This payment request ${word}. Nothing more to do here.</p></main>`
+  const paid = record.session.status === 'complete'
+  const word = paid ? 'has been paid' : 'has expired'
+  const back = paid ? successRedirect(record.session) : record.session.cancel_url
+  const link = back ? `<p><a href="${escapeHtml(back)}">Back to the shop</a></p>` : ''
+  return `<main><h1>Test payment desk</h1><p role="status">This payment request ${word}. Nothing more to do here.</p>${link}</main>`
 }
 
 /**

@@ -33,6 +33,12 @@ export function payRouter(ctx: FakeContext): Router {
   router.post('/:id', async (req, res) => {
     const record = await loadSession(ctx, req.params.id)
     const body = (req.body ?? {}) as Record<string, unknown>
+    // The second press of a double-pressed Pay lands here after the first one paid: it goes
+    // where the first one went, so the customer is not left on a dead end.
+    if (record.session.status === 'complete') {
+      res.redirect(303, successRedirect(record.session))
+      return
+    }
     if (record.session.status !== 'open') {
       res.status(409).type('html').send(renderPayPage(record))
       return

@@ -1,25 +1,15 @@
-import { afterAll, beforeAll, expect, it } from 'vitest'
-import type { Browser } from 'puppeteer-core'
+import { expect, it } from 'vitest'
 import { TEST_CARDS } from '../../fakes/payments'
 import { PASSWORD, makeUser, signedIn } from '../helpers/factories'
-import { launchBrowser, newPage, shot, signInAs } from '../helpers/browser'
-import { makePaymentRig, type PaymentRig } from '../api/payments-rig'
+import { newPage, shot, signInAs } from '../helpers/browser'
+import { paymentBrowserRigPerFile } from './payment-browser-rig'
 
-let rig: PaymentRig
-let browser: Browser
-beforeAll(async () => {
-  rig = await makePaymentRig({ CLIENT_DIR: 'dist/client' })
-  browser = await launchBrowser()
-})
-afterAll(async () => {
-  await browser?.close()
-  await rig?.close()
-})
+const rig = paymentBrowserRigPerFile()
 
 it('lets a customer accept a quote, pay on the payment page and see the order confirmed; double taps change it once', async () => {
   const { quote, company } = await rig.sentQuote()
   const customer = await makeUser(rig.t, 'customer', { companyId: company.id })
-  const page = await newPage({ browser })
+  const page = await newPage(rig)
   await signInAs(page, rig.appUrl, customer.email, PASSWORD)
   await page.goto(`${rig.appUrl}/portal/quotes/${quote.id}`)
   await page.locator('#accept-name').fill('Dana Whitlock')
@@ -58,7 +48,7 @@ it('lets a customer accept a quote, pay on the payment page and see the order co
 
 it('tells a customer who opens the payment return page without a quote where to look, and does not wait', async () => {
   const customer = await makeUser(rig.t, 'customer')
-  const page = await newPage({ browser })
+  const page = await newPage(rig)
   const errors: string[] = []
   page.on('pageerror', (e) => errors.push(String(e)))
   await signInAs(page, rig.appUrl, customer.email, PASSWORD)
@@ -74,5 +64,20 @@ it('tells a customer who opens the payment return page without a quote where to 
   await page.waitForSelector('::-p-text(not yours or does not exist)')
   expect(errors).toEqual([])
   await shot(page, 'payment-return-without-quote')
+  await page.browserContext().close()
+})
+
+it('tells a customer back on the return page with a payment this quote never had that nothing is waited for, with the way back', async () => {
+  const { quote, customer } = await rig.acceptedQuote()
+  const page = await newPage(rig)
+  await signInAs(page, rig.appUrl, customer.user.email, PASSWORD)
+  for (const session of ['', '&session_id=cs_never_made', '&session_id=not-a-session']) {
+    await page.goto(`${rig.appUrl}/portal/payment/done?quote=${quote.id}${session}`)
+    await page.waitForSelector('::-p-text(does not name a payment of this quote)')
+    expect(await page.$('[aria-label="Waiting for the confirmation"]')).toBeNull()
+  }
+  await page.locator('nav[aria-label="Where next"] a ::-p-text(Back to the quote)').click()
+  await page.waitForSelector('::-p-text(Pay )')
+  await shot(page, 'payment-return-unknown-session')
   await page.browserContext().close()
 })

@@ -77,7 +77,8 @@ it('takes a paid order through build and tuning to shipping, and the customer se
   const portal = await newPage({ browser })
   await signInAs(portal, rig.appUrl, customer.user.email, PASSWORD)
   await portal.goto(`${rig.appUrl}/portal/quotes/${quote.id}`)
-  await portal.waitForSelector('::-p-text(production: shipped)')
+  await portal.waitForSelector('li[data-step="shipped"][aria-current="step"].reached')
+  await portal.waitForSelector('::-p-text(Your unit has shipped.)')
   await shot(portal, 'production-4-customer-sees-shipped')
   const mailbox = (await (await fetch(`${rig.t.mail.httpUrl}/api/messages`)).json()) as {
     subject: string

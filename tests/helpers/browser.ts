@@ -78,6 +78,7 @@ export async function newPage(
 }
 
 export async function shot(page: Page, name: string, fullPage = true) {
+  mkdirSync(SHOTS_DIR, { recursive: true })
   await page.screenshot({
     path: path.join(SHOTS_DIR, `${name}.png`) as `${string}.png`,
     fullPage,

@@ -118,6 +118,12 @@ export function productionService(deps: {
       return (await deps.repo.findByQuote(quoteId))?.state ?? null
     },
 
+    /** A quote's work order state and its changes, for the customer's order timeline. */
+    async progressForQuote(quoteId: number) {
+      const w = await deps.repo.findByQuote(quoteId)
+      return w ? { state: w.state, events: await deps.repo.events(w.id) } : null
+    },
+
     /** Every work order's changes and tuning records, oldest first. */
     allEvents: () => deps.repo.events(),
 

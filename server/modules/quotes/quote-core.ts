@@ -18,6 +18,7 @@ import type { CustomersService } from '../customers/customers.service'
 import { priceLines, totalsOf } from './price-lines'
 import type { QuoteRow } from './quote-rows'
 import { dayOf, hasLapsed } from './quote-states'
+import { hiddenFromCustomer } from './quote-successor'
 import { quoteOf } from './quote-view'
 import type { QuotesRepository } from './quotes.repository'
 import type { SizingSource } from '../sizings/sizing-source'
@@ -75,14 +76,15 @@ export function quotesCore(deps: QuotesDeps) {
     return fresh(r)
   }
 
-  /** A row the user may see: customers only their own company's sent or later quotes. */
+  /**
+   * A row the user may see: customers only their own company's sent or later quotes; an old
+   * revision of theirs answers 410 naming the current one.
+   */
   async function visibleRow(user: AuthUser, id: number) {
     const r = await row(id)
-    if (
-      isCustomer(user) &&
-      (r.companyId !== user.companyId || !CUSTOMER_VISIBLE_STATES.includes(r.state))
-    )
-      throw notFound('quote')
+    if (!isCustomer(user)) return r
+    if (r.companyId !== user.companyId) throw notFound('quote')
+    if (!CUSTOMER_VISIBLE_STATES.includes(r.state)) throw await hiddenFromCustomer(repo, r)
     return r
   }
 

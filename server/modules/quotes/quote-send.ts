@@ -32,11 +32,7 @@ function unconfirmed(q: QuoteRow) {
 export function quoteSending(deps: QuotesServiceDeps, core: QuotesCore) {
   const repo = deps.quotes
 
-  async function supplier(): Promise<Supplier> {
-    // The first supplier made (the seed's) is us; later ones are test or archive records.
-    const [s] = (await deps.companies.list('supplier')).sort((a, b) => a.id - b.id)
-    return s ? { name: s.name, address: s.address } : { name: 'Quellnode', address: '' }
-  }
+  const supplier = (): Promise<Supplier> => deps.companies.supplier()
 
   /** The quote document goes to the customer: it is always built from the customer's view. */
   async function renderPdf(r: QuoteRow) {

@@ -14,6 +14,7 @@ import {
 } from '../../../shared/schemas/quote'
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
+import { sendPdf } from '../../http/send-pdf'
 import type { QuotesService } from './quotes.service'
 
 const SELLERS = ACCESS.quotes.write
@@ -166,15 +167,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       access: READERS,
       produces: 'application/pdf',
     },
-    async ({ user, params, res }) => {
-      const pdf = await quotes.pdf(user, params.id)
-      res
-        .type('application/pdf')
-        .set('content-disposition', `inline; filename="${pdf.filename}"`)
-        .set('cache-control', 'private, no-store')
-        .send(pdf.bytes)
-      return undefined
-    },
+    async ({ user, params, res }) => sendPdf(res, await quotes.pdf(user, params.id)),
   )
   return router
 }

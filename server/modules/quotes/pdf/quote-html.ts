@@ -56,7 +56,8 @@ function sizingSection(q: Quote) {
 <div class="chart">${responseChartSvg(s.chart)}</div>`
 }
 
-function linesSection(q: Quote) {
+/** The priced lines and the totals of a quote; the receipt prints them too. */
+export function linesSection(q: Quote, title = 'Prices') {
   const m = (v: number) => esc(formatMoney(v, q.currency))
   const rows = q.lines
     .map(
@@ -68,7 +69,7 @@ function linesSection(q: Quote) {
     ? `<tr><td>Discount ${esc(formatBasisPoints(q.discountBp))}</td><td class="num">−${m(q.discount)}</td></tr>
 <tr><td>After discount</td><td class="num">${m(q.discountedSubtotal)}</td></tr>`
     : ''
-  return `<h2>Prices</h2><table><thead><tr><th>#</th><th>Code</th><th>Item</th><th class="num">Qty</th><th class="num">Unit price</th><th class="num">Amount</th></tr></thead><tbody>${rows}</tbody></table>
+  return `<h2>${esc(title)}</h2><table><thead><tr><th>#</th><th>Code</th><th>Item</th><th class="num">Qty</th><th class="num">Unit price</th><th class="num">Amount</th></tr></thead><tbody>${rows}</tbody></table>
 <table class="totals"><tr><td>Subtotal</td><td class="num">${m(q.subtotal)}</td></tr>${discount}
 <tr><td>Tax${q.taxRateName ? ` (${esc(q.taxRateName)})` : ''} ${esc(formatBasisPoints(q.taxBp))}</td><td class="num">${m(q.tax)}</td></tr>
 <tr class="grand"><td>Total (${esc(q.currency)})</td><td class="num">${m(q.total)}</td></tr></table>`
