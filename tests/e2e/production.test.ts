@@ -15,10 +15,13 @@ afterAll(async () => {
   await rig?.close()
 })
 
-/** Moves one step; the button is off for a moment after each answer, so wait until it is on. */
-async function move(page: Page, to: string) {
-  await page.locator(`button:not([disabled]) ::-p-text(Move to ${to})`).click()
-  await page.waitForSelector(`::-p-text(→ ${to})`)
+/**
+ * Moves one step by the button's words; the button is off for a moment after each answer, so
+ * wait until it is on. The history says the new state in words.
+ */
+async function move(page: Page, button: string, toWords: string) {
+  await page.locator(`button:not([disabled]) ::-p-text(${button})`).click()
+  await page.waitForSelector(`::-p-text(→ ${toWords})`)
 }
 
 it('takes a paid order through build and tuning to shipping, and the customer sees it shipped', async () => {
@@ -36,6 +39,7 @@ it('takes a paid order through build and tuning to shipping, and the customer se
   )
   const wo = (await rig.t.services.production.list()).find((w) => w.quoteId === quote.id)!
   expect(links).toContain(`/work-orders/${wo.id}`)
+  // the queue searches on the server: wait for the page of one row
   // found by its quote's number, its state said in words
   await enter(page, '#wo-search', quote.number)
   await page.waitForFunction(
@@ -52,13 +56,13 @@ it('takes a paid order through build and tuning to shipping, and the customer se
   await page.waitForSelector('::-p-text(No work order matches.)')
   await page.goto(`${rig.appUrl}/work-orders/${wo.id}`)
   // A double tap moves one step: the second tap must not take the next step's button.
-  await page.locator('button:not([disabled]) ::-p-text(Move to in-build)').click({ count: 2 })
-  await page.waitForSelector('::-p-text(→ in-build)')
-  await page.waitForSelector('button:not([disabled]) ::-p-text(Move to tuning)')
+  await page.locator('button:not([disabled]) ::-p-text(Start the build)').click({ count: 2 })
+  await page.waitForSelector('::-p-text(→ Being built)')
+  await page.waitForSelector('button:not([disabled]) ::-p-text(Start tuning)')
   expect(await page.$$('.p-toast-message-error')).toHaveLength(0)
   const once = (await rig.t.services.production.get(wo.id)).events
   expect(once.map((e) => e.toState)).toEqual(['in-build'])
-  await move(page, 'tuning')
+  await move(page, 'Start tuning', 'Being tuned')
   // the measured frequency typed as on the workshop floor: a decimal comma and its unit
   const target = wo.specification.targetFrequencyHz
   const typed = Number(target.toFixed(2))
@@ -69,8 +73,12 @@ it('takes a paid order through build and tuning to shipping, and the customer se
   const tuned = await rig.t.services.production.get(wo.id)
   expect(tuned.latestTuning?.measuredHz).toBe(typed)
   await shot(page, 'production-2-tuned')
-  await move(page, 'ready')
-  await move(page, 'shipped')
+  await move(page, 'Mark ready to ship', 'Ready to ship')
+  await page.locator('#ship-carrier').fill('Northway Freight')
+  await page.locator('#ship-tracking').fill('NWF-2231')
+  await page.locator('#ship-serial-0').fill('TDW-0001')
+  await page.locator('button ::-p-text(Record shipment and mark shipped)').click()
+  await page.waitForSelector('::-p-text(→ Shipped)')
   await shot(page, 'production-3-shipped')
   await page.browserContext().close()
 
