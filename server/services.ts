@@ -25,6 +25,8 @@ import { outboxRepository } from './modules/outbox/outbox.repository'
 import { outboxService } from './modules/outbox/outbox.service'
 import { productionRepository } from './modules/production/production.repository'
 import { productionService } from './modules/production/production.service'
+import { orderFacts } from './modules/production/order-facts'
+import { workOrderQueueRepository } from './modules/production/work-order-queue.repository'
 import { quotesRepository } from './modules/quotes/quotes.repository'
 import { quotesService } from './modules/quotes/quotes.service'
 import { quoteReadyRepository } from './modules/quotes/quote-ready.repository'
@@ -127,6 +129,8 @@ export function buildServices(deps: AppDeps) {
   })
   const production = productionService({
     repo: productionRepository(ds),
+    queue: workOrderQueueRepository(ds),
+    facts: orderFacts({ catalogue, sites, customers }),
     quotes,
     users: usersAdmin,
     mailer,

@@ -1,18 +1,31 @@
 import { z } from 'zod'
 import { DesignAcknowledgementSchema } from './design-checks'
+import { DeliveryContactSchema, ShipmentInputSchema, ShipmentSchema } from './shipment'
 
 /** The build flow of a unit, in order; every step is recorded with who and when. */
 export const WORK_ORDER_STATES = ['queued', 'in-build', 'tuning', 'ready', 'shipped'] as const
 export const WorkOrderStateSchema = z.enum(WORK_ORDER_STATES)
 export type WorkOrderState = z.infer<typeof WorkOrderStateSchema>
 
-export const StatusChangeSchema = z.object({
-  to: WorkOrderStateSchema,
-  /** the state the caller saw; a move from a state the work order has left is a 409 */
-  from: WorkOrderStateSchema.optional(),
-  /** required when going back a step */
-  note: z.string().trim().max(500).default(''),
-})
+export const StatusChangeSchema = z
+  .object({
+    to: WorkOrderStateSchema,
+    /** the state the caller saw; a move from a state the work order has left is a 409 */
+    from: WorkOrderStateSchema.optional(),
+    /** required when going back a step */
+    note: z.string().trim().max(500).default(''),
+    /** required when marking the work order shipped */
+    shipment: ShipmentInputSchema.optional(),
+  })
+  .superRefine((c, ctx) => {
+    if (c.to !== 'shipped' || c.shipment) return
+    for (const [field, what] of [
+      ['carrier', 'the carrier'],
+      ['trackingNumber', 'the tracking number'],
+      ['serialNumbers', 'the serial number of each unit'],
+    ] as const)
+      ctx.addIssue({ code: 'custom', path: ['shipment', field], message: `required: ${what}` })
+  })
 export type StatusChange = z.infer<typeof StatusChangeSchema>
 
 export const TuningRecordInputSchema = z.object({
@@ -50,6 +63,8 @@ export const BuildSpecificationSchema = z.object({
   stroke: z.number().optional(),
   /** m, the stroke limit the sizing was made to, or null */
   strokeLimit: z.number().nullable().optional(),
+  /** m, the catalogue unit's travel to its end stops, frozen at payment; absent on older ones */
+  unitTravel: z.number().optional(),
   /** the failed design checks the sizing was handed over with; absent on older work orders */
   designAcknowledgement: DesignAcknowledgementSchema.nullable().optional(),
   /** sales' confirmation of those checks when the quote was sent */
@@ -67,6 +82,12 @@ export const WorkOrderRowSchema = z.object({
   dueDate: z.string(),
   specification: BuildSpecificationSchema,
   specHash: z.string(),
+  /** ORD-2026-0001; '' on a work order whose order was not found */
+  orderNumber: z.string(),
+  /** who takes delivery on site; null on older work orders */
+  delivery: DeliveryContactSchema.nullable(),
+  /** carrier, tracking and serial numbers once shipped, else null */
+  shipment: ShipmentSchema.nullable(),
   createdAt: z.string(),
   updatedAt: z.string(),
 })

@@ -87,7 +87,10 @@ describe('work orders', () => {
       .send({ measuredHz: target * 1.01 })
     expect(pass.body.latestTuning.passes).toBe(true)
     await agent.post(`/api/work-orders/${wo.id}/state`).send({ to: 'ready' }).expect(200)
-    const shipped = await agent.post(`/api/work-orders/${wo.id}/state`).send({ to: 'shipped' })
+    const shipped = await agent.post(`/api/work-orders/${wo.id}/state`).send({
+      to: 'shipped',
+      shipment: { carrier: 'Northway Freight', trackingNumber: 'NWF-1', serialNumbers: ['S-1'] },
+    })
     expect(shipped.body.state).toBe('shipped')
     expect(shipped.body.events.filter((e: { kind: string }) => e.kind === 'tuning')).toHaveLength(2)
     expect((await mailTo(rig.t, customer.user.email, /shipped/)).subject).toMatch(/shipped/)

@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm'
 import type { BuildSpecification, WorkOrderState } from '../../../shared/schemas/work-order'
+import type { DeliveryContact } from '../../../shared/schemas/shipment'
 import { WorkOrderEventEntity } from './work-order-event.entity'
 import { WorkOrderEntity } from './work-order.entity'
 import type { Tx } from '../../db/tx'
@@ -16,7 +17,14 @@ export interface NewWorkOrder {
   specification: BuildSpecification
   specHash: string
   dueDate: string
+  orderNumber: string
+  delivery: DeliveryContact
 }
+
+/** Columns set together with a state change (the shipment with `shipped`). */
+export type MovePatch = Partial<
+  Pick<WorkOrderEntity, 'carrier' | 'trackingNumber' | 'serialNumbers' | 'shippedAt'>
+>
 
 export function productionRepository(ds: DataSource) {
   const orders = ds.getRepository(WorkOrderEntity)
@@ -51,9 +59,10 @@ export function productionRepository(ds: DataSource) {
       from: WorkOrderState,
       to: WorkOrderState,
       e: { actorId: number; at: Date; note: string },
+      patch: MovePatch = {},
     ) {
       return ds.transaction(async (m) => {
-        const r = await m.update(WorkOrderEntity, { id, state: from }, { state: to })
+        const r = await m.update(WorkOrderEntity, { id, state: from }, { state: to, ...patch })
         if (!r.affected) return false
         await m.insert(WorkOrderEventEntity, {
           workOrderId: id,

@@ -7,6 +7,7 @@ import { StatusChangeSchema, TuningRecordInputSchema } from '../../../shared/sch
 import type { ApiRegistry } from '../../http/api-registry'
 import { route } from '../../http/route'
 import type { ProductionService } from './production.service'
+import { QuoteShipmentSchema, WorkOrderListQuerySchema } from '../../../shared/schemas/shipment'
 
 const BUILDERS = ACCESS.workOrders.write
 
@@ -21,10 +22,30 @@ export function productionRouter(api: ApiRegistry, production: ProductionService
       path: '/api/work-orders',
       response: z.array(WorkOrderRowSchema),
       tag,
-      summary: 'The production queue',
+      summary:
+        'One page of the production queue (limit, offset), searched by order and quote number, customer, site and unit, filtered by state and sorted; the total matching is in X-Total-Count',
       access: BUILDERS,
+      query: WorkOrderListQuerySchema,
     },
-    () => production.list(),
+    async ({ query, res }) => {
+      const page = await production.page(query)
+      res.set('x-total-count', String(page.total))
+      return page.items
+    },
+  )
+  route(
+    router,
+    api,
+    {
+      method: 'get',
+      path: '/api/quotes/:id/shipment',
+      response: QuoteShipmentSchema,
+      tag,
+      summary: 'Carrier, tracking and serial numbers of a quote’s unit once shipped, or null',
+      access: ACCESS.orders.read,
+      params: IdParamSchema,
+    },
+    ({ user, params }) => production.shipmentFor(user, params.id),
   )
   route(
     router,

@@ -5,11 +5,17 @@ import type { Mailer } from '../../integrations/mail'
 import type { AuthUser } from '../../middleware/authenticate'
 import type { QuotesService } from '../quotes/quotes.service'
 import type { UsersService } from '../users/users.service'
-import type { ProductionRepository } from './production.repository'
+import type { MovePatch, ProductionRepository } from './production.repository'
 import { buildSpecification, specificationHash } from './specification'
 import { inlineFontCss, type PdfRenderer } from '../../integrations/pdf/renderer'
 import { workOrderHtml } from './work-order-html'
 import type { Tx } from '../../db/tx'
+import type { WorkOrderListQuery } from '../../../shared/schemas/shipment'
+import { orderNumber } from '../payments/format'
+import type { OrderFactsOf } from './order-facts'
+import { shippingPatch } from './shipping'
+import type { WorkOrderQueuePage } from './work-order-queue.repository'
+import { shipmentOf, workOrderRow } from './work-order-view'
 
 const moved = (state: string) =>
   new AppError('state-changed', `Someone else moved this work order to ${state}; reload it.`, 409, {
@@ -18,6 +24,8 @@ const moved = (state: string) =>
 
 export function productionService(deps: {
   repo: ProductionRepository
+  queue: WorkOrderQueuePage
+  facts: OrderFactsOf
   quotes: QuotesService
   users: Pick<UsersService, 'list'>
   mailer: Mailer
@@ -29,7 +37,7 @@ export function productionService(deps: {
     if (!w) throw notFound('work-order')
     const latest = await deps.repo.latestTuning(id)
     return {
-      ...w,
+      ...workOrderRow(w),
       number: `WO-${String(w.id).padStart(5, '0')}`,
       latestTuning: latest,
       events: await deps.repo.events(id),
@@ -38,22 +46,39 @@ export function productionService(deps: {
 
   return {
     get,
-    list: () => deps.repo.list(),
+    /** Every work order, soonest due first (for the server's own use; the API pages). */
+    list: async () => (await deps.repo.list()).map(workOrderRow),
+    /** One page of the queue as the search, filter and sort ask, and the total matching. */
+    async page(q: WorkOrderListQuery) {
+      const { items, total } = await deps.queue(q)
+      return { items: items.map(workOrderRow), total }
+    },
 
     /**
      * The frozen build values of a quote about to be paid, read before the payment's
-     * transaction; `createIn` then writes the work order inside it, with the order's id.
+     * transaction; `createIn` then writes the work order inside it, with the order's id. Due
+     * the catalogue unit's lead time after payment.
      */
-    async prepare(quoteId: number, paidAt: Date, leadDays = 28) {
+    async prepare(quoteId: number, paidAt: Date) {
       const quote = await deps.quotes.internal(quoteId)
-      const specification = buildSpecification(quote)
-      const dueDate = new Date(paidAt.getTime() + leadDays * 86_400_000).toISOString().slice(0, 10)
-      const values = { specification, specHash: specificationHash(specification), dueDate }
+      const facts = await deps.facts(quote)
+      const specification = {
+        ...buildSpecification(quote),
+        ...(facts.unitTravel !== undefined && { unitTravel: facts.unitTravel }),
+      }
+      const due = new Date(paidAt.getTime() + facts.leadWeeks * 7 * 86_400_000)
+      const values = {
+        specification,
+        specHash: specificationHash(specification),
+        dueDate: due.toISOString().slice(0, 10),
+        delivery: facts.delivery,
+      }
       return {
         createIn: (tx: Tx, order: { id: number; quoteId: number; companyId: number }) =>
           deps.repo.createIn(tx, {
             ...values,
             orderId: order.id,
+            orderNumber: orderNumber(order.id, paidAt),
             quoteId: order.quoteId,
             companyId: order.companyId,
           }),
@@ -73,18 +98,23 @@ export function productionService(deps: {
         tuningPasses: w.latestTuning?.passes ?? null,
       })
       if (!check.ok) throw new AppError(check.code, check.message, 409)
-      const done = await deps.repo.move(id, w.state, change.to, {
-        actorId: user.id,
-        at: deps.now(),
-        note: change.note,
-      })
+      const at = deps.now()
+      const patch =
+        change.to === 'shipped' ? shippingPatch(w.specification, change.shipment, at) : {}
+      const done = await deps.repo.move(
+        id,
+        w.state,
+        change.to,
+        { actorId: user.id, at, note: change.note },
+        patch,
+      )
       if (!done) {
         const now = await get(id)
         if (now.state === change.to) return now
         throw moved(now.state)
       }
       if (change.to === 'shipped')
-        await notifyShipped(w.companyId, w.specification.quoteReference, w.number)
+        await notifyShipped(w.companyId, w.specification.quoteReference, w.number, patch)
       return get(id)
     },
 
@@ -113,6 +143,18 @@ export function productionService(deps: {
       return get(id)
     },
 
+    /**
+     * Carrier, tracking and serial numbers of a quote's unit once shipped; a customer reads
+     * only their own company's (another's is a 404, as if it did not exist).
+     */
+    async shipmentFor(user: AuthUser, quoteId: number) {
+      const q = await deps.quotes.internal(quoteId).catch(() => null)
+      if (!q || (user.role === 'customer' && q.companyId !== user.companyId))
+        throw notFound('quote')
+      const w = await deps.repo.findByQuote(quoteId)
+      return { shipment: w ? shipmentOf(w) : null }
+    },
+
     /** What the customer sees of their order's progress. */
     async stateForQuote(quoteId: number) {
       return (await deps.repo.findByQuote(quoteId))?.state ?? null
@@ -137,7 +179,8 @@ export function productionService(deps: {
     },
   }
 
-  async function notifyShipped(companyId: number, reference: string, number: string) {
+  async function notifyShipped(companyId: number, reference: string, number: string, s: MovePatch) {
+    const carried = `Carrier: ${s.carrier}, tracking number ${s.trackingNumber}.\nSerial numbers: ${(s.serialNumbers ?? []).join(', ')}.`
     const users = (await deps.users.list()).filter(
       (u) => u.active && u.role === 'customer' && u.companyId === companyId,
     )
@@ -145,7 +188,7 @@ export function productionService(deps: {
       await deps.mailer.send({
         to: u.email,
         subject: `Your absorber has shipped (${reference})`,
-        text: `Hello ${u.name},\n\nthe unit of work order ${number} for quote ${reference} has left our works, tuned and tested.\n\nInstallation, anchorage and the fall restraint of the moving mass are for a licensed engineer under the local codes.\n\nTessera Damping Works Ltd`,
+        text: `Hello ${u.name},\n\nthe unit of work order ${number} for quote ${reference} has left our works, tuned and tested.\n${carried}\n\nInstallation, anchorage and the fall restraint of the moving mass are for a licensed engineer under the local codes.\n\nTessera Damping Works Ltd`,
       })
     }
   }
