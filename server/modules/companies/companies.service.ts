@@ -10,6 +10,7 @@ export function companiesService(deps: { companies: CompaniesRepository }) {
     findById: (id: number) => companies.findById(id),
     findByName: (name: string) => companies.findByName(name),
     list: (kind?: 'supplier' | 'customer') => companies.list(kind),
+    page: companies.page,
     create: (data: { name: string; kind: 'supplier' | 'customer'; address?: string }) =>
       companies.create(data),
     /** Name and address only; the kind of a company never changes. */
