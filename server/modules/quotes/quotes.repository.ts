@@ -1,6 +1,7 @@
 import { withNamedLock } from '../../db/named-lock'
 import { Brackets, In, type DataSource, type EntityManager } from 'typeorm'
 import type { QuoteListQuery, QuoteState } from '../../../shared/schemas/quote'
+import { likeText } from '../../db/list-page'
 import { QuoteEventEntity } from './quote-event.entity'
 import { QuoteLineEntity } from './quote-line.entity'
 import { QuoteEntity } from './quote.entity'
@@ -118,7 +119,7 @@ export function quotesRepository(ds: DataSource) {
       if (q.from) qb.andWhere('q.createdAt >= :from', { from: `${q.from} 00:00:00` })
       if (q.to) qb.andWhere('q.createdAt < DATE_ADD(:to, INTERVAL 1 DAY)', { to: q.to })
       if (q.search) {
-        const like = `%${q.search.replace(/[%_\\]/g, '\\$&')}%`
+        const like = likeText(q.search)
         qb.andWhere(
           new Brackets((w) =>
             w.where('q.number LIKE :like', { like }).orWhere('company.name LIKE :like', { like }),
