@@ -36,5 +36,5 @@ describe('the optimiser against its earlier answers on the seed models', () => {
         }
       })
     }
-  })
+  }, 120_000)
 })
