@@ -87,6 +87,8 @@ export async function benchServer(progress: (s: string) => void): Promise<Server
           `${busy.count} requests in ${((performance.now() - t0) / 1000).toFixed(1)} s ` +
           `(longest ${busy.max.toFixed(0)} ms)`,
       )
+      if (idle.errors + busy.errors > 0)
+        progress(`health: ${idle.errors + busy.errors} probes lost to failed connections`)
       if (failures.length) throw new Error(`busy requests failed: ${failures.join('; ')}`)
       health.close()
       progress(`quotes list at ${CONNECTIONS} connections for ${LIST_SECONDS} s`)
@@ -95,15 +97,14 @@ export async function benchServer(progress: (s: string) => void): Promise<Server
       const load = await concurrentP95(list, '/api/quotes', CONNECTIONS, LIST_SECONDS, LIST_GRACE)
       list.close()
       progress(`quotes list p95 ${load.p95.toFixed(0)} ms over ${load.count} requests`)
+      if (load.errors) progress(`quotes list: connections failed: ${load.errors.note}`)
       return {
         health: { idleP95Ms: idle.p95, busyP95Ms: busy.p95 },
         list: {
           rows,
           connections: CONNECTIONS,
           p95Ms: load.p95,
-          ...(load.stopped > 0 && {
-            note: `${load.stopped} requests still open ${LIST_SECONDS + LIST_GRACE} s after the start were cut off there: the p95 is a lower bound`,
-          }),
+          ...(listNote(load) && { note: listNote(load) }),
         },
       }
     } finally {
@@ -115,4 +116,18 @@ export async function benchServer(progress: (s: string) => void): Promise<Server
     await db.drop()
     rmSync(uploads, { recursive: true, force: true })
   }
+}
+
+/** What qualifies the list's p95: requests cut off at the end, connections that failed. */
+function listNote(load: {
+  stopped: number
+  errors: { count: number; note: string } | null
+}): string | undefined {
+  const notes = [
+    load.stopped > 0 &&
+      `${load.stopped} requests still open ${LIST_SECONDS + LIST_GRACE} s after the start were cut off there: the p95 is a lower bound`,
+    load.errors &&
+      `${load.errors.count} requests failed on their connection (${load.errors.note}) and are not in the p95`,
+  ].filter(Boolean)
+  return notes.length ? notes.join('; ') : undefined
 }

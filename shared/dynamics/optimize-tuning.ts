@@ -1,5 +1,6 @@
 import { closedForms, type ClosedFormName, type Tuning } from './closed-forms'
-import { nelderMead } from './nelder-mead'
+import { nelderMead, type Minimum, type NelderMeadOptions } from './nelder-mead'
+import { searchProblem } from './search-grid'
 import { absorberValues, meanSquareWith, peakWith, type TuningProblem } from './tuning-objective'
 
 /** Options of `optimizeTuning`. */
@@ -22,6 +23,11 @@ export type StartName = ClosedFormName | 'running-speed'
 /** Smallest damping ratio a search starts from: the search works on ln ζ_a. */
 const MIN_START_DAMPING = 1e-3
 
+/** Relative spread of the simplex's values at which the rough search and the fine one stop: the
+ * fine one converges past the kink where two peaks are equal, to about 1e-9 of the optimum. */
+const ROUGH_TOLERANCE = 1e-2
+const FINE_TOLERANCE = 1e-9
+
 /** An optimised tuning and its objective value. */
 export interface OptimizedTuning extends Tuning {
   /** m/N for 'hinf', (m/N)²·rad/s for 'h2' */
@@ -40,8 +46,10 @@ const DEFAULT_STARTS: Record<'hinf' | 'h2', ClosedFormName[]> = {
 
 /**
  * Numerical optimum of (f, ζ_a) for a given absorber mass on the full host model, by Nelder–Mead
- * in (ln f, ln ζ_a) from the best closed form, restarted once from its own result (a standard
- * remedy for simplex stalls). Never returns worse than its starting closed form.
+ * in (ln f, ln ζ_a) from the best closed form: a rough search, then a fine one restarted from its
+ * result with a small simplex (a restart is the standard remedy for simplex stalls). The peak is
+ * searched on a thinner grid (search-grid.ts) and the optimum checked on the full one. Never
+ * returns worse than its starting closed form.
  * @param pb host receptances over the band and the absorber mass (kg)
  * @param mu mass ratio m_a/m_eff, for the closed-form starts
  * @param options see OptimizeOptions
@@ -52,10 +60,57 @@ export function optimizeTuning(
   options: OptimizeOptions = {},
 ): OptimizedTuning {
   const { objective = 'hinf', zetaHost = 0, maxEvaluations = 300 } = options
-  const cost = (t: Tuning): number => {
-    const a = absorberValues(pb.mass, pb.omegaTarget, t)
-    return objective === 'hinf' ? peakWith(pb, a).value : meanSquareWith(pb, a)
+  const costOn = (p: TuningProblem) => (t: Tuning) => {
+    const a = absorberValues(p.mass, p.omegaTarget, t)
+    return objective === 'hinf' ? peakWith(p, a).value : meanSquareWith(p, a)
   }
+  const cost = costOn(pb)
+  // The peak is searched for on a thinner grid and the result checked on the full one; the mean
+  // square is an integral over the grid itself, so it keeps the full grid.
+  const search = objective === 'hinf' ? costOn(searchProblem(pb)) : cost
+  const { start, count } = bestStart(cost, mu, zetaHost, objective, options)
+  const found = (t: Tuning, value: number, evaluations: number): OptimizedTuning => ({
+    ...t,
+    objective: value,
+    startedFrom: start.name,
+    startObjective: start.value,
+    evaluations,
+  })
+  // Nothing beats a response of zero (an undamped absorber at a single running speed).
+  if (start.value === 0) return found(start.t, 0, count)
+  const toTuning = (x: number[]): Tuning => ({
+    frequencyRatio: Math.exp(x[0] ?? 0),
+    dampingRatio: Math.exp(x[1] ?? 0),
+  })
+  const f = (x: number[]): number => search(toTuning(x))
+  const x0 = [
+    Math.log(start.t.frequencyRatio),
+    Math.log(Math.max(start.t.dampingRatio, MIN_START_DAMPING)),
+  ]
+  // A rough search that only finds the basin, then a fine one restarted from it with a small
+  // simplex: fewer evaluations than two searches to 1e-7, and a tighter optimum.
+  const rough = { maxEvaluations, tolerance: ROUGH_TOLERANCE }
+  const first = nelderMead(f, x0, { step: [0.02, 0.15], ...rough })
+  const fine = { maxEvaluations, tolerance: FINE_TOLERANCE }
+  const second = nelderMead(f, first.x, { step: [0.002, 0.02], ...fine })
+  const searched = second.value <= first.value ? second : first
+  const full = (x: number[]): number => cost(toTuning(x))
+  const best = search === cost ? searched : onFullGrid(full, searched, fine)
+  const evaluations = count + first.evaluations + second.evaluations
+  const spent = search === cost ? 0 : best.evaluations
+  return best.value < start.value
+    ? found(toTuning(best.x), best.value, evaluations + spent)
+    : found(start.t, start.value, evaluations + spent)
+}
+
+/** The best of the closed forms (and extra starts) on the full model, by the objective. */
+function bestStart(
+  cost: (t: Tuning) => number,
+  mu: number,
+  zetaHost: number,
+  objective: 'hinf' | 'h2',
+  options: OptimizeOptions,
+): { start: { name: StartName; t: Tuning; value: number }; count: number } {
   const starts: { name: StartName; tuning: Tuning }[] = [
     ...(options.starts ?? DEFAULT_STARTS[objective]).map((name) => ({
       name,
@@ -69,29 +124,23 @@ export function optimizeTuning(
     return { name, t, value: Number.isNaN(value) ? Infinity : value }
   })
   const start = candidates.reduce((b, c) => (c.value < b.value ? c : b))
-  const found = (t: Tuning, value: number, evaluations: number): OptimizedTuning => ({
-    ...t,
-    objective: value,
-    startedFrom: start.name,
-    startObjective: start.value,
-    evaluations,
-  })
-  // Nothing beats a response of zero (an undamped absorber at a single running speed).
-  if (start.value === 0) return found(start.t, 0, candidates.length)
-  const toTuning = (x: number[]): Tuning => ({
-    frequencyRatio: Math.exp(x[0] ?? 0),
-    dampingRatio: Math.exp(x[1] ?? 0),
-  })
-  const f = (x: number[]): number => cost(toTuning(x))
-  const x0 = [
-    Math.log(start.t.frequencyRatio),
-    Math.log(Math.max(start.t.dampingRatio, MIN_START_DAMPING)),
-  ]
-  const first = nelderMead(f, x0, { step: [0.02, 0.15], maxEvaluations, tolerance: 1e-7 })
-  const second = nelderMead(f, first.x, { step: [0.005, 0.05], maxEvaluations, tolerance: 1e-7 })
-  const best = second.value <= first.value ? second : first
-  const evaluations = first.evaluations + second.evaluations + candidates.length
-  return best.value < start.value
-    ? found(toTuning(best.x), best.value, evaluations)
-    : found(start.t, start.value, evaluations)
+  return { start, count: candidates.length }
+}
+
+/**
+ * The dense check: the thin grid's optimum evaluated on the full grid. Were a peak missed between
+ * the thin grid's samples the full grid reads higher, and the search goes on from there on the
+ * full grid. Returns the optimum with its full-grid value and the evaluations spent here.
+ */
+function onFullGrid(
+  full: (x: number[]) => number,
+  searched: Minimum,
+  fine: NelderMeadOptions,
+): Minimum {
+  const value = full(searched.x)
+  if (value <= searched.value * (1 + 1e-12)) return { x: searched.x, value, evaluations: 1 }
+  const again = nelderMead(full, searched.x, { step: [0.002, 0.02], ...fine })
+  return again.value < value
+    ? { ...again, evaluations: again.evaluations + 1 }
+    : { x: searched.x, value, evaluations: again.evaluations + 1 }
 }

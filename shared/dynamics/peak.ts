@@ -68,15 +68,29 @@ function brentMax(
     }
     const u = Math.abs(d) >= tol1 ? x + d : x + (d > 0 ? tol1 : -tol1)
     const fu = -f(u)
+    // Plain assignments rather than array destructuring: this runs for every refined peak of
+    // every candidate tuning.
     if (fu <= fx) {
       if (u < x) b = x
       else a = x
-      ;[v, fv, w, fw, x, fx] = [w, fw, x, fx, u, fu]
+      v = w
+      fv = fw
+      w = x
+      fw = fx
+      x = u
+      fx = fu
     } else {
       if (u < x) a = u
       else b = u
-      if (fu <= fw || w === x) [v, fv, w, fw] = [w, fw, u, fu]
-      else if (fu <= fv || v === x || v === w) [v, fv] = [u, fu]
+      if (fu <= fw || w === x) {
+        v = w
+        fv = fw
+        w = u
+        fw = fu
+      } else if (fu <= fv || v === x || v === w) {
+        v = u
+        fv = fu
+      }
     }
   }
   return { value: -fx, omega: x }

@@ -22,7 +22,10 @@ export interface ResolvedTuning extends Tuning {
  * range), undamped for a single speed — the classical neutraliser that nulls the response there
  * (Den Hartog, Mechanical Vibrations, 1956) — and with Den Hartog's damping for a range.
  */
-function speedStarts(ctx: SizingContext, mu: number): { name: 'running-speed'; tuning: Tuning }[] {
+export function speedStarts(
+  ctx: SizingContext,
+  mu: number,
+): { name: 'running-speed'; tuning: Tuning }[] {
   if (ctx.bandSource !== 'speed') return []
   const centre = Math.sqrt(ctx.band.min * ctx.band.max)
   const single = ctx.band.max === ctx.band.min

@@ -57,8 +57,12 @@ export function secularPoles(lambda: ArrayLike<number>, c: ArrayLike<number>): P
   return out
 }
 
-/** g and g′ at λ. */
-function secular(p: Poles, invK: number, mass: number, x: number): [number, number] {
+/** g′ at the λ of the last `secular` call: a module scratch rather than a tuple, as the root
+ * search calls `secular` for every candidate absorber of an optimisation. */
+let slope = 0
+
+/** g at λ; g′ goes to `slope`. */
+function secular(p: Poles, invK: number, mass: number, x: number): number {
   let g = invK - 1 / (x * mass)
   let d = 1 / (x * x * mass)
   for (let i = 0; i < p.lambda.length; i++) {
@@ -67,7 +71,8 @@ function secular(p: Poles, invK: number, mass: number, x: number): [number, numb
     g += w * t
     d += w * t * t
   }
-  return [g, d]
+  slope = d
+  return g
 }
 
 /** The root of the increasing g in (a, b), g(a⁺) < 0 < g(b⁻): Newton kept inside the bracket,
@@ -77,7 +82,8 @@ function root(p: Poles, invK: number, mass: number, a: number, b: number, tol: n
   let hi = b
   let x = 0.5 * (lo + hi)
   for (let it = 0; it < 200; it++) {
-    const [g, d] = secular(p, invK, mass, x)
+    const g = secular(p, invK, mass, x)
+    const d = slope
     if (g === 0) return x
     if (g < 0) lo = x
     else hi = x
@@ -124,13 +130,13 @@ export function coupledEigenvalues(
       if (invK === 0) break
       // Above the last pole g rises from −∞ to 1/k_a > 0: double until g > 0.
       b = Math.max(2 * a, (2 * stiffness) / mass, 1e-300)
-      while (secular(p, invK, mass, b)[0] <= 0 && b < 1e300) b *= 2
+      while (secular(p, invK, mass, b) <= 0 && b < 1e300) b *= 2
     }
     const lo = Math.max(a, min)
     const hi = Math.min(b, max)
     if (!(hi > lo)) continue
-    if (lo > a && secular(p, invK, mass, lo)[0] > 0) continue
-    if (hi < b && secular(p, invK, mass, hi)[0] < 0) continue
+    if (lo > a && secular(p, invK, mass, lo) > 0) continue
+    if (hi < b && secular(p, invK, mass, hi) < 0) continue
     out.push(root(p, invK, mass, lo, hi, tolerance))
   }
   return out.sort((x, y) => x - y)

@@ -98,11 +98,23 @@ export function coupledFrequencies(pb: TuningProblem, a: AbsorberValues): number
   const max = (omega[omega.length - 1] ?? 0) ** 2
   // A point within 1e-8 of a natural frequency is as good a sample as the frequency itself.
   const options = { min, max, tolerance: 1e-8, unchanged: false }
-  return [
-    ...coupledEigenvalues(pb.poles, a.mass, a.stiffness, options),
-    ...coupledEigenvalues(pb.poles, a.mass, Infinity, options),
-  ].map(Math.sqrt)
+  // The locked limit depends on the mass alone, not on the tuning: solved once per search.
+  let locked = lockedRoots.get(pb.poles)
+  if (!locked || locked.mass !== a.mass || locked.min !== min || locked.max !== max) {
+    const roots = coupledEigenvalues(pb.poles, a.mass, Infinity, options).map(Math.sqrt)
+    locked = { mass: a.mass, min, max, roots }
+    lockedRoots.set(pb.poles, locked)
+  }
+  const free = coupledEigenvalues(pb.poles, a.mass, a.stiffness, options).map(Math.sqrt)
+  return free.concat(locked.roots)
 }
+
+/** Natural frequencies of the host with the absorber locked, per set of poles, for one mass and
+ * band: the last asked for (a search asks for the same again and again). */
+const lockedRoots = new WeakMap<
+  Poles,
+  { mass: number; min: number; max: number; roots: number[] }
+>()
 
 /**
  * Largest measured response over the band with the absorber (m/N for the receptance): every local

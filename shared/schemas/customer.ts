@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { IdSchema } from './ids'
+import { IdSchema, PAGE_QUERY } from './ids'
 import { EmailSchema } from './auth'
 
 export const CustomerInputSchema = z.object({
@@ -31,6 +31,13 @@ export const CustomerSchema = z.object({
   contacts: z.array(ContactSchema),
 })
 export type Customer = z.infer<typeof CustomerSchema>
+
+/** The customers list: by name, with a search over name and address, one page at a time. */
+export const CustomerListQuerySchema = z.object({
+  search: z.string().trim().max(100).optional(),
+  ...PAGE_QUERY,
+})
+export type CustomerListQuery = z.infer<typeof CustomerListQuerySchema>
 
 export const ContactParamsSchema = z.object({
   id: IdSchema,

@@ -22,6 +22,17 @@ export const IndexSchema = canonical(/^(0|[1-9][0-9]{0,9})$/, 'a whole number �
 /** Rows per page of a list: "1" … "200". */
 export const PageSizeSchema = IdSchema.refine((n) => n <= 200, 'at most 200')
 
+/**
+ * limit and offset of a paged list, to spread into its query schema; the total matching the
+ * filters goes in the X-Total-Count header. Without a limit such a list answers every row.
+ */
+export const PAGE_QUERY = {
+  /** rows per page, 1–200 */
+  limit: PageSizeSchema.optional(),
+  /** rows skipped, in the list's order */
+  offset: IndexSchema.optional(),
+}
+
 /** `:id` in a path: every route with one uses this. */
 export const IdParamSchema = z.object({ id: IdSchema })
 

@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { IdSchema } from './ids'
+import { IdSchema, PAGE_QUERY } from './ids'
 
 export const STRUCTURE_KINDS = [
   'floor',
@@ -27,6 +27,7 @@ export const SiteListQuerySchema = z.object({
   search: z.string().trim().max(100).optional(),
   structureKind: StructureKindSchema.optional(),
   companyId: IdSchema.optional(),
+  ...PAGE_QUERY,
 })
 export type SiteListQuery = z.infer<typeof SiteListQuerySchema>
 
@@ -48,3 +49,18 @@ export const SiteSchema = SiteInputSchema.extend({
   photos: z.array(SitePhotoSchema),
 })
 export type Site = z.infer<typeof SiteSchema>
+
+/** A row of the sites list: the columns the list shows, not the notes or the photos. */
+export const SiteListItemSchema = z.object({
+  id: z.number().int(),
+  name: z.string(),
+  companyId: z.number().int(),
+  companyName: z.string(),
+  address: z.string(),
+  structureKind: StructureKindSchema,
+  ownerId: z.number().int(),
+  ownerName: z.string(),
+  photoCount: z.number().int(),
+  updatedAt: z.string(),
+})
+export type SiteListItem = z.infer<typeof SiteListItemSchema>

@@ -5,7 +5,7 @@ import {
   DesignAcknowledgementSchema,
   DesignCheckSchema,
 } from './design-checks'
-import { IdSchema } from './ids'
+import { IdSchema, PAGE_QUERY } from './ids'
 import {
   bandSchema,
   explicitTuningSchema,
@@ -224,6 +224,7 @@ export const SizingListQuerySchema = z.object({
   siteId: IdSchema.optional(),
   state: z.enum(SIZING_STATES).optional(),
   search: z.string().trim().max(100).optional(),
+  ...PAGE_QUERY,
 })
 export type SizingListQuery = z.infer<typeof SizingListQuerySchema>
 

@@ -15,6 +15,8 @@ export type HandoverRequest = Omit<SizingSubmit, 'revision'>
 export const sizingsApi = {
   list: (q: Partial<SizingListQuery> = {}) =>
     api.get<SizingListItem[]>(`/api/sizings${queryString(q)}`),
+  /** one page, last changed first, with the total matching the filters */
+  page: (q: Partial<SizingListQuery>) => api.page<SizingListItem>(`/api/sizings${queryString(q)}`),
   get: (id: number) => api.get<SizingView>(`/api/sizings/${id}`),
   create: (input: SizingInput) => api.post<SizingView>('/api/sizings', { input }),
   save: (id: number, baseRevision: number, input: SizingInput) =>

@@ -226,6 +226,31 @@ describe('quote revisions and states', () => {
     }
   })
 
+  it('lists a lapsed sent quote as expired, filters by that state, and writes nothing on the read', async () => {
+    const { res, company } = await draftFor({ validUntil: daysFromNow(t, 3) })
+    const id = res.body.id
+    await sales.post(`/api/quotes/${id}/send`).expect(200)
+    const stored = async () =>
+      (await t.ds.query('SELECT state FROM quotes WHERE id = ?', [id]))[0]?.state
+    try {
+      t.clock.offsetMs = 4 * 86_400_000
+      const list = await sales.get('/api/quotes').query({ companyId: company.id })
+      expect(list.body.map((q: { state: string }) => q.state)).toEqual(['expired'])
+      const expired = await sales
+        .get('/api/quotes')
+        .query({ companyId: company.id, state: 'expired' })
+      expect(expired.headers['x-total-count']).toBe('1')
+      const sent = await sales.get('/api/quotes').query({ companyId: company.id, state: 'sent' })
+      expect(sent.body).toEqual([])
+      expect(await stored()).toBe('sent')
+      // Reading the quote itself records the expiry, as the system.
+      expect((await sales.get(`/api/quotes/${id}`)).body.state).toBe('expired')
+      expect(await stored()).toBe('expired')
+    } finally {
+      t.clock.offsetMs = 0
+    }
+  })
+
   it('expireDue expires every lapsed sent quote and leaves drafts alone', async () => {
     const sent = await draftFor({ validUntil: daysFromNow(t, 2) })
     await sales.post(`/api/quotes/${sent.res.body.id}/send`).expect(200)

@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm'
 import type { Company } from '../../../shared/schemas/auth'
+import { likeText, type Page } from '../../db/list-page'
 import { CompanyEntity } from './company.entity'
 
 const toCompany = (c: CompanyEntity): Company & { address: string } => ({
@@ -23,6 +24,22 @@ export function companiesRepository(ds: DataSource) {
     async list(kind?: 'supplier' | 'customer') {
       const rows = await repo.find({ where: kind ? { kind } : {}, order: { name: 'ASC' } })
       return rows.map(toCompany)
+    },
+    /** One page of companies of a kind by name, searched in name and address, and the total. */
+    async page(q: {
+      kind: 'supplier' | 'customer'
+      search?: string
+      limit?: number
+      offset?: number
+    }): Promise<Page<Company & { address: string }>> {
+      const qb = repo.createQueryBuilder('c').where('c.kind = :kind', { kind: q.kind })
+      if (q.search) qb.andWhere('(c.name LIKE :q OR c.address LIKE :q)', { q: likeText(q.search) })
+      const [rows, total] = await qb
+        .orderBy('c.name', 'ASC')
+        .take(q.limit)
+        .skip(q.offset)
+        .getManyAndCount()
+      return { total, items: rows.map(toCompany) }
     },
     async create(data: { name: string; kind: 'supplier' | 'customer'; address?: string }) {
       return toCompany(await repo.save(repo.create({ address: '', ...data })))

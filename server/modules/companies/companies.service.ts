@@ -16,6 +16,7 @@ export function companiesService(deps: { companies: CompaniesRepository }) {
       const [s] = (await companies.list('supplier')).sort((a, b) => a.id - b.id)
       return s ? { name: s.name, address: s.address } : { name: 'Quellnode', address: '' }
     },
+    page: companies.page,
     create: (data: { name: string; kind: 'supplier' | 'customer'; address?: string }) =>
       companies.create(data),
     /** Name and address only; the kind of a company never changes. */

@@ -8,8 +8,10 @@ import {
   ContactInputSchema,
   ContactParamsSchema,
   CustomerInputSchema,
+  CustomerListQuerySchema,
 } from '../../../shared/schemas/customer'
 import type { ApiRegistry } from '../../http/api-registry'
+import { answerPage } from '../../http/page'
 import { route } from '../../http/route'
 import { clientAddress } from '../../http/client-address'
 import type { CustomersService } from './customers.service'
@@ -28,9 +30,11 @@ export function customersRouter(api: ApiRegistry, customers: CustomersService) {
       method: 'get',
       path: '/api/customers',
       response: z.array(CustomerSchema),
-      summary: 'Customer companies and contacts',
+      summary:
+        'Customer companies and contacts by name, with a search; one page with limit and offset, the total matching in X-Total-Count',
+      query: CustomerListQuerySchema,
     },
-    () => customers.list(),
+    async ({ query, res }) => answerPage(res, await customers.list(query)),
   )
   route(
     router,

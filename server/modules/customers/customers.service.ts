@@ -1,4 +1,10 @@
-import type { ContactInput, Customer, CustomerInput } from '../../../shared/schemas/customer'
+import type {
+  ContactInput,
+  Customer,
+  CustomerInput,
+  CustomerListQuery,
+} from '../../../shared/schemas/customer'
+import type { Page } from '../../db/list-page'
 import type { UserSummary } from '../../../shared/schemas/auth'
 import { AppError, notFound } from '../../http/app-error'
 import type { CompaniesService } from '../companies/companies.service'
@@ -40,9 +46,19 @@ export function customersService(deps: {
   return {
     get,
     contactOf,
-    async list(): Promise<Customer[]> {
-      const all = await deps.companies.list('customer')
-      return Promise.all(all.map((c) => get(c.id)))
+    /** One page of customers by name with their contacts, in two queries, and the total. */
+    async list(q: CustomerListQuery = {}): Promise<Page<Customer>> {
+      const page = await deps.companies.page({ ...q, kind: 'customer' })
+      const contacts = await deps.customers.contactsOfMany(page.items.map((c) => c.id))
+      return {
+        total: page.total,
+        items: page.items.map((c) => ({
+          id: c.id,
+          name: c.name,
+          address: c.address,
+          contacts: contacts.get(c.id) ?? [],
+        })),
+      }
     },
     async create(input: CustomerInput) {
       await nameFree(input.name)

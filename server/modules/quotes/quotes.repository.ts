@@ -1,6 +1,7 @@
 import { withNamedLock } from '../../db/named-lock'
 import { Brackets, In, type DataSource, type EntityManager } from 'typeorm'
 import type { QuoteListQuery, QuoteState } from '../../../shared/schemas/quote'
+import { likeText } from '../../db/list-page'
 import { QuoteEventEntity } from './quote-event.entity'
 import { QuoteLineEntity } from './quote-line.entity'
 import { QuoteEntity } from './quote.entity'
@@ -34,6 +35,14 @@ const relations = {
   designConfirmedBy: true,
   lines: true,
 } as const
+
+/**
+ * A quote's state as of :today in the list: a sent quote whose last valid day has passed reads as
+ * expired, so listing never writes; the stored state follows when the quote itself is read or
+ * `expireDue` runs (quote-core.ts).
+ */
+const LIST_STATE =
+  "(CASE WHEN q.state = 'sent' AND q.validUntil < :today THEN 'expired' ELSE q.state END)"
 
 /** Rows per page of the quotes list when the query does not say. */
 export const DEFAULT_PAGE = 50
@@ -97,17 +106,20 @@ export function quotesRepository(ds: DataSource) {
     /**
      * One page of quotes, newest first, with only the columns a list shows (the frozen sizing's
      * title and site, not the whole summary) and whether each is its number's latest revision,
-     * in one query; the total matching goes with it.
+     * in one query; the total matching goes with it. States are as of `today` (LIST_STATE).
      */
-    async listPage(q: QuoteListQuery & { states?: readonly QuoteState[] }) {
-      const qb = quotes.createQueryBuilder('q').leftJoin('q.company', 'company')
-      if (q.states) qb.andWhere('q.state IN (:...states)', { states: q.states })
-      if (q.state) qb.andWhere('q.state = :state', { state: q.state })
+    async listPage(q: QuoteListQuery & { states?: readonly QuoteState[]; today: string }) {
+      const qb = quotes
+        .createQueryBuilder('q')
+        .leftJoin('q.company', 'company')
+        .setParameter('today', q.today)
+      if (q.states) qb.andWhere(`${LIST_STATE} IN (:...states)`, { states: q.states })
+      if (q.state) qb.andWhere(`${LIST_STATE} = :state`, { state: q.state })
       if (q.companyId) qb.andWhere('q.companyId = :c', { c: q.companyId })
       if (q.from) qb.andWhere('q.createdAt >= :from', { from: `${q.from} 00:00:00` })
       if (q.to) qb.andWhere('q.createdAt < DATE_ADD(:to, INTERVAL 1 DAY)', { to: q.to })
       if (q.search) {
-        const like = `%${q.search.replace(/[%_\\]/g, '\\$&')}%`
+        const like = likeText(q.search)
         qb.andWhere(
           new Brackets((w) =>
             w.where('q.number LIKE :like', { like }).orWhere('company.name LIKE :like', { like }),
@@ -120,7 +132,7 @@ export function quotesRepository(ds: DataSource) {
           'q.id AS id',
           'q.number AS number',
           'q.revision AS revision',
-          'q.state AS state',
+          `${LIST_STATE} AS state`,
           'q.sizingId AS sizingId',
           "JSON_VALUE(q.sizing, '$.title') AS sizingTitle",
           "JSON_VALUE(q.sizing, '$.siteName') AS siteName",

@@ -13,6 +13,7 @@ import {
   QuoteSendSchema,
 } from '../../../shared/schemas/quote'
 import type { ApiRegistry } from '../../http/api-registry'
+import { answerPage } from '../../http/page'
 import { route } from '../../http/route'
 import { sendPdf } from '../../http/send-pdf'
 import type { QuotesService } from './quotes.service'
@@ -38,11 +39,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
       access: READERS,
       query: QuoteListQuerySchema,
     },
-    async ({ user, query, res }) => {
-      const page = await quotes.list(user, query)
-      res.set('x-total-count', String(page.total))
-      return page.items
-    },
+    async ({ user, query, res }) => answerPage(res, await quotes.list(user, query)),
   )
   route(
     router,

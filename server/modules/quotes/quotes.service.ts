@@ -13,7 +13,7 @@ import { quoteSending } from './quote-send'
 import { insertNumbered } from './quote-numbers'
 import type { QuoteRow } from './quote-rows'
 import type { Tx } from '../../db/tx'
-import { REVISABLE, sourcesOf } from './quote-states'
+import { dayOf, REVISABLE, sourcesOf } from './quote-states'
 import { listSummary, referenceOf, summaryOf } from './quote-view'
 
 const conflict = (code: string, message: string) => new AppError(code, message, 409)
@@ -49,13 +49,14 @@ export function quotesService(deps: QuoteFlowDeps) {
   }
 
   return {
-    /** One page of the list, newest first, and the total matching the filters. */
+    /** One page of the list, newest first, and the total matching the filters (as of today). */
     list: async (user: AuthUser, q: QuoteListQuery) => {
-      await expireDue(repo, deps.now())
+      // Lapsed quotes read as expired in the list itself: a read never runs the expiry update.
+      const today = dayOf(deps.now())
       const page = await repo.listPage(
         isCustomer(user)
-          ? { ...q, companyId: user.companyId ?? -1, states: CUSTOMER_VISIBLE_STATES }
-          : q,
+          ? { ...q, today, companyId: user.companyId ?? -1, states: CUSTOMER_VISIBLE_STATES }
+          : { ...q, today },
       )
       return { total: page.total, items: page.rows.map(listSummary) }
     },

@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm'
-import type { Site, SiteInput, SiteListQuery } from '../../../shared/schemas/site'
+import type { Site, SiteInput, SiteListItem, SiteListQuery } from '../../../shared/schemas/site'
+import { likeText, type Page } from '../../db/list-page'
 import { SitePhotoEntity } from './site-photo.entity'
 import { SiteEntity } from './site.entity'
 
@@ -27,6 +28,23 @@ function toSite(s: SiteEntity): Site {
   }
 }
 
+/** A sites list row as the database returns it (numbers and dates may come as strings). */
+interface SiteListRow extends Omit<SiteListItem, 'photoCount' | 'updatedAt'> {
+  photoCount: number | string
+  updatedAt: Date | string
+}
+
+const toListItem = (r: SiteListRow): SiteListItem => ({
+  ...r,
+  id: Number(r.id),
+  companyId: Number(r.companyId),
+  companyName: r.companyName ?? '',
+  ownerId: Number(r.ownerId),
+  ownerName: r.ownerName ?? '',
+  photoCount: Number(r.photoCount),
+  updatedAt: new Date(r.updatedAt).toISOString(),
+})
+
 export function sitesRepository(ds: DataSource) {
   const repo = ds.getRepository(SiteEntity)
   const photos = ds.getRepository(SitePhotoEntity)
@@ -36,21 +54,42 @@ export function sitesRepository(ds: DataSource) {
       const s = await repo.findOne({ where: { id }, relations })
       return s ? toSite(s) : null
     },
-    async list(q: SiteListQuery) {
+    /**
+     * One page of sites, last changed first, with only the columns the list shows (a photo count,
+     * not the photos), and the total matching the filters.
+     */
+    async page(q: SiteListQuery): Promise<Page<SiteListItem>> {
       const qb = repo
         .createQueryBuilder('s')
-        .leftJoinAndSelect('s.company', 'company')
-        .leftJoinAndSelect('s.owner', 'owner')
-        .leftJoinAndSelect('s.photos', 'photos')
-        .orderBy('s.updatedAt', 'DESC')
+        .leftJoin('s.company', 'company')
+        .leftJoin('s.owner', 'owner')
       if (q.search) {
         qb.andWhere('(s.name LIKE :q OR s.address LIKE :q OR company.name LIKE :q)', {
-          q: `%${q.search.replace(/[%_\\]/g, '\\$&')}%`,
+          q: likeText(q.search),
         })
       }
       if (q.structureKind) qb.andWhere('s.structureKind = :k', { k: q.structureKind })
       if (q.companyId) qb.andWhere('s.companyId = :c', { c: q.companyId })
-      return (await qb.getMany()).map(toSite)
+      const total = await qb.getCount()
+      const rows = await qb
+        .select([
+          's.id AS id',
+          's.name AS name',
+          's.companyId AS companyId',
+          'company.name AS companyName',
+          's.address AS address',
+          's.structureKind AS structureKind',
+          's.ownerId AS ownerId',
+          'owner.name AS ownerName',
+          's.updatedAt AS updatedAt',
+        ])
+        .addSelect('(SELECT COUNT(*) FROM site_photos p WHERE p.siteId = s.id)', 'photoCount')
+        .orderBy('s.updatedAt', 'DESC')
+        .addOrderBy('s.id', 'DESC')
+        .limit(q.limit)
+        .offset(q.offset)
+        .getRawMany<SiteListRow>()
+      return { total, items: rows.map(toListItem) }
     },
     async create(ownerId: number, input: SiteInput) {
       const saved = await repo.save(repo.create({ ...input, ownerId }))

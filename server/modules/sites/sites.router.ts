@@ -1,10 +1,11 @@
 import { z } from 'zod'
-import { SiteSchema } from '../../../shared/schemas/site'
+import { SiteListItemSchema, SiteSchema } from '../../../shared/schemas/site'
 import { Router } from 'express'
 import { ACCESS } from '../../../shared/access'
 import { IdParamSchema, IdSchema } from '../../../shared/schemas/ids'
 import { SiteInputSchema, SiteListQuerySchema } from '../../../shared/schemas/site'
 import type { ApiRegistry } from '../../http/api-registry'
+import { answerPage } from '../../http/page'
 import { routesFor } from '../../http/route'
 import { singleUpload } from '../../http/upload'
 import { MAX_PHOTO_BYTES, type SitesService } from './sites.service'
@@ -20,12 +21,13 @@ export function sitesRouter(api: ApiRegistry, sites: SitesService) {
     {
       method: 'get',
       path: '/api/sites',
-      response: z.array(SiteSchema),
-      summary: 'Sites, with search and filters',
+      response: z.array(SiteListItemSchema),
+      summary:
+        'Sites, last changed first, with search and filters; one page with limit and offset, the total matching in X-Total-Count',
       access: READERS,
       query: SiteListQuerySchema,
     },
-    ({ query }) => sites.list(query),
+    async ({ query, res }) => answerPage(res, await sites.page(query)),
   )
   add(
     {

@@ -36,7 +36,10 @@ export function sitesService(deps: {
 
   return {
     get,
-    list: (q: SiteListQuery) => deps.sites.list(q),
+    /** One page of the list (every row without a limit) and the total matching. */
+    page: (q: SiteListQuery) => deps.sites.page(q),
+    /** The rows of `page` alone. */
+    list: async (q: SiteListQuery) => (await deps.sites.page(q)).items,
     async create(user: AuthUser, input: SiteInput) {
       await customerCompany(input.companyId)
       return deps.sites.create(user.id, input)

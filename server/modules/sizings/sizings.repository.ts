@@ -6,6 +6,7 @@ import type {
   SizingState,
 } from '../../../shared/schemas/sizing'
 import type { SizingEvaluation } from '../../../shared/sizing/evaluate-sizing'
+import { likeText, type Page } from '../../db/list-page'
 import { SizingRevisionEntity } from './sizing-revision.entity'
 import { SizingEntity } from './sizing.entity'
 import type { StoredSummary } from './sizing-summary'
@@ -46,6 +47,30 @@ const toRecord = (s: SizingEntity): SizingRecord => ({
   updatedAt: s.updatedAt,
 })
 
+/** A sizings list row as the database returns it: JSON values as text, numbers maybe as text. */
+type SizingListRow = { [K in keyof SizingListItem]: string | number | Date | null }
+
+/** A figure read from the stored summary as text; null when the summary has none. */
+const figure = (v: unknown) => (v === null || v === undefined ? null : Number(v))
+
+const toListItem = (r: SizingListRow): SizingListItem => ({
+  id: Number(r.id),
+  title: String(r.title),
+  state: r.state as SizingState,
+  revision: Number(r.revision),
+  siteId: Number(r.siteId),
+  siteName: String(r.siteName ?? ''),
+  companyName: String(r.companyName ?? ''),
+  ownerId: Number(r.ownerId),
+  ownerName: String(r.ownerName ?? ''),
+  absorberMass: figure(r.absorberMass),
+  hostFrequencyHz: figure(r.hostFrequencyHz),
+  reduction: figure(r.reduction),
+  // JSON_VALUE gives a JSON true as 'true' or '1' depending on the server version.
+  passes: r.passes === null ? null : ['true', '1'].includes(String(r.passes)),
+  updatedAt: new Date(r.updatedAt as string | Date).toISOString(),
+})
+
 export function sizingsRepository(ds: DataSource) {
   const sizings = ds.getRepository(SizingEntity)
   const revisions = ds.getRepository(SizingRevisionEntity)
@@ -58,16 +83,19 @@ export function sizingsRepository(ds: DataSource) {
       const r = await revisions.findOneBy({ sizingId, revision })
       return r ? { input: r.input, evaluation: r.evaluation, summary: r.summary } : null
     },
-    /** Lists with a few summary figures read from the current revision. */
-    async list(
+    /**
+     * One page of sizings, last changed first, with a few summary figures read from the current
+     * revision in the query itself (not the whole stored summary), and the total matching.
+     */
+    async page(
       q: SizingListQuery & {
         visibleTo?: { ownerId: number; orState?: SizingState }
         onlyState?: SizingState
       },
-    ): Promise<SizingListItem[]> {
+    ): Promise<Page<SizingListItem>> {
       const qb = sizings
         .createQueryBuilder('s')
-        .leftJoinAndSelect('s.owner', 'owner')
+        .leftJoin('s.owner', 'owner')
         .innerJoin('s.site', 'site')
         .innerJoin('site.company', 'company')
         .innerJoin(
@@ -75,8 +103,6 @@ export function sizingsRepository(ds: DataSource) {
           'r',
           'r.sizingId = s.id AND r.revision = s.currentRevision',
         )
-        .addSelect(['site.name AS siteName', 'company.name AS companyName', 'r.summary AS summary'])
-        .orderBy('s.updatedAt', 'DESC')
       if (q.siteId) qb.andWhere('s.siteId = :siteId', { siteId: q.siteId })
       if (q.state) qb.andWhere('s.state = :state', { state: q.state })
       if (q.onlyState) qb.andWhere('s.state = :only', { only: q.onlyState })
@@ -87,29 +113,32 @@ export function sizingsRepository(ds: DataSource) {
         })
       if (q.search)
         qb.andWhere('(s.title LIKE :q OR site.name LIKE :q OR company.name LIKE :q)', {
-          q: `%${q.search.replace(/[%_\\]/g, '\\$&')}%`,
+          q: likeText(q.search),
         })
-      const { entities, raw } = await qb.getRawAndEntities()
-      return entities.map((s, i) => {
-        const row = raw[i] as { siteName: string; companyName: string; summary: string }
-        const sum = JSON.parse(row.summary) as StoredSummary
-        return {
-          id: s.id,
-          title: s.title,
-          state: s.state,
-          revision: s.currentRevision,
-          siteId: s.siteId,
-          siteName: row.siteName,
-          companyName: row.companyName,
-          ownerId: s.ownerId,
-          ownerName: s.owner?.name ?? '',
-          absorberMass: sum.absorber.mass,
-          hostFrequencyHz: sum.hostFrequencyHz,
-          reduction: sum.reduction,
-          passes: sum.acceptance.passes,
-          updatedAt: s.updatedAt.toISOString(),
-        }
-      })
+      const total = await qb.getCount()
+      const rows = await qb
+        .select([
+          's.id AS id',
+          's.title AS title',
+          's.state AS state',
+          's.currentRevision AS revision',
+          's.siteId AS siteId',
+          'site.name AS siteName',
+          'company.name AS companyName',
+          's.ownerId AS ownerId',
+          'owner.name AS ownerName',
+          "JSON_VALUE(r.summary, '$.absorber.mass') AS absorberMass",
+          "JSON_VALUE(r.summary, '$.hostFrequencyHz') AS hostFrequencyHz",
+          "JSON_VALUE(r.summary, '$.reduction') AS reduction",
+          "JSON_VALUE(r.summary, '$.acceptance.passes') AS passes",
+          's.updatedAt AS updatedAt',
+        ])
+        .orderBy('s.updatedAt', 'DESC')
+        .addOrderBy('s.id', 'DESC')
+        .limit(q.limit)
+        .offset(q.offset)
+        .getRawMany<SizingListRow>()
+      return { total, items: rows.map(toListItem) }
     },
     async create(
       data: { siteId: number; modelId: number; ownerId: number; title: string } & RevisionData,

@@ -11,6 +11,7 @@ import {
   SizingSubmitSchema,
 } from '../../../shared/schemas/sizing'
 import type { ApiRegistry } from '../../http/api-registry'
+import { answerPage } from '../../http/page'
 import { routesFor } from '../../http/route'
 import type { SizingsService } from './sizings.service'
 
@@ -26,11 +27,12 @@ export function sizingsRouter(api: ApiRegistry, sizings: SizingsService) {
       method: 'get',
       path: '/api/sizings',
       response: z.array(SizingListItemSchema),
-      summary: 'Sizings visible to the caller',
+      summary:
+        'Sizings visible to the caller, last changed first; one page with limit and offset, the total matching in X-Total-Count',
       access: READERS,
       query: SizingListQuerySchema,
     },
-    ({ user, query }) => sizings.list(user, query),
+    async ({ user, query, res }) => answerPage(res, await sizings.page(user, query)),
   )
   add(
     {

@@ -88,6 +88,13 @@ export function sizingsService(deps: SizingsDeps) {
     return { input, evaluation: out.evaluation, summary: summarise(site, input, out.evaluation) }
   }
 
+  /** One page of the sizings the user may see (every row without a limit) and the total. */
+  function page(user: AuthUser, q: SizingListQuery) {
+    if (user.role === 'admin') return deps.sizings.page(q)
+    if (user.role === 'sales') return deps.sizings.page({ ...q, onlyState: 'submitted' })
+    return deps.sizings.page({ ...q, visibleTo: { ownerId: user.id } })
+  }
+
   async function view(user: AuthUser | null, id: number, revision?: number) {
     const s = await record(user, id)
     const rev = await deps.sizings.revision(id, revision ?? s.currentRevision)
@@ -111,11 +118,9 @@ export function sizingsService(deps: SizingsDeps) {
   return {
     view,
     handedOver: deps.handedOver,
-    list(user: AuthUser, q: SizingListQuery) {
-      if (user.role === 'admin') return deps.sizings.list(q)
-      if (user.role === 'sales') return deps.sizings.list({ ...q, onlyState: 'submitted' })
-      return deps.sizings.list({ ...q, visibleTo: { ownerId: user.id } })
-    },
+    page,
+    /** The rows of `page` alone. */
+    list: async (user: AuthUser, q: SizingListQuery) => (await page(user, q)).items,
 
     async create(user: AuthUser, input: SizingInput, job?: JobOptions) {
       const data = await evaluate(input, job)

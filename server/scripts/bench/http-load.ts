@@ -3,11 +3,23 @@ import { setMaxListeners } from 'node:events'
 import http from 'node:http'
 import { quantile } from './models'
 
+/** An answer; status 0 when `signal` aborted the request first, and -1 with `error` when the
+ * connection failed (a keep-alive socket the server reset, say). */
+export interface Answer {
+  status: number
+  ms: number
+  body: string
+  error?: string
+}
+
 export interface Client {
-  /** status 0 when `signal` aborted the request first */
-  get(path: string, signal?: AbortSignal): Promise<{ status: number; ms: number; body: string }>
+  /** never rejects: a failed connection is an answer with status -1 */
+  get(path: string, signal?: AbortSignal): Promise<Answer>
   close(): void
 }
+
+/** Status of an answer whose connection failed. */
+export const FAILED = -1
 
 /**
  * @param base e.g. http://127.0.0.1:4301
@@ -18,28 +30,41 @@ export function client(base: string, cookie: string, connections: number): Clien
   const agent = new http.Agent({ keepAlive: true, maxSockets: connections })
   return {
     get: (path, signal) =>
-      new Promise((resolve, reject) => {
+      new Promise((resolve) => {
         const t0 = performance.now()
+        // A socket can fail after the answer began (the server resets a kept-alive socket): the
+        // first outcome counts, later events are ignored.
+        let done = false
+        const settle = (a: Answer) => {
+          if (!done) resolve(a)
+          done = true
+        }
+        const failed = (e: Error) =>
+          settle(
+            signal?.aborted
+              ? { status: 0, ms: performance.now() - t0, body: '' }
+              : { status: FAILED, ms: performance.now() - t0, body: '', error: errorName(e) },
+          )
         const req = http.get(`${base}${path}`, { agent, headers: { cookie }, signal }, (res) => {
           const chunks: Buffer[] = []
           res.on('data', (c: Buffer) => chunks.push(c))
           res.on('end', () =>
-            resolve({
+            settle({
               status: res.statusCode ?? 0,
               ms: performance.now() - t0,
               body: Buffer.concat(chunks).toString('utf8'),
             }),
           )
-          res.on('error', reject)
+          res.on('error', failed)
         })
-        req.on('error', (e) =>
-          signal?.aborted
-            ? resolve({ status: 0, ms: performance.now() - t0, body: '' })
-            : reject(e),
-        )
+        req.on('error', failed)
       }),
     close: () => agent.destroy(),
   }
+}
+
+function errorName(e: Error): string {
+  return (e as NodeJS.ErrnoException).code ?? e.message
 }
 
 /**
@@ -55,26 +80,30 @@ export async function scheduledP95(
   done = () => true,
 ) {
   const start = performance.now()
-  const answers: Promise<number>[] = []
+  const answers: Promise<number | null>[] = []
   for (let k = 0; k < min || !done(); k++) {
     const due = start + k * everyMs
     const wait = due - performance.now()
     if (wait > 0) await new Promise((res) => setTimeout(res, wait))
     answers.push(
       c.get(path).then((r) => {
+        if (r.status === FAILED) return null
         if (r.status !== 200) throw new Error(`GET ${path}: ${r.status}`)
         return performance.now() - due
       }),
     )
   }
-  const times = await Promise.all(answers)
-  return { p95: quantile(times, 0.95), count: times.length, max: Math.max(...times) }
+  const all = await Promise.all(answers)
+  const times = all.filter((t) => t !== null)
+  const errors = all.length - times.length
+  return { p95: quantile(times, 0.95), count: times.length, max: Math.max(...times), errors }
 }
 
 /**
  * `connections` loops each GETting the path back to back for `seconds`; requests still open
  * `graceSeconds` later are stopped and counted at the time they had run (so the p95 is then a
- * lower bound, and `stopped` says how many). p95 in ms over every request.
+ * lower bound, and `stopped` says how many). A connection that fails (a reset keep-alive socket)
+ * is not timed: `errors` counts them by cause. p95 in ms over every other request.
  */
 export async function concurrentP95(
   c: Client,
@@ -88,14 +117,28 @@ export async function concurrentP95(
   const stop = AbortSignal.timeout((seconds + graceSeconds) * 1000)
   setMaxListeners(connections + 1, stop) // one listener per open request
   let stopped = 0
+  const errors = new Map<string, number>()
   const loop = async () => {
     while (performance.now() < end && !stop.aborted) {
       const r = await c.get(path, stop)
+      if (r.status === FAILED) {
+        // A failed connection is counted and the loop goes on (on a new socket).
+        errors.set(r.error ?? '?', (errors.get(r.error ?? '?') ?? 0) + 1)
+        continue
+      }
       if (r.status === 0) stopped++
       else if (r.status !== 200) throw new Error(`GET ${path}: ${r.status}`)
       times.push(r.ms)
     }
   }
   await Promise.all(Array.from({ length: connections }, loop))
-  return { p95: quantile(times, 0.95), count: times.length, stopped }
+  return { p95: quantile(times, 0.95), count: times.length, stopped, errors: errorNote(errors) }
+}
+
+/** "3 ECONNRESET, 1 EPIPE", or null when there were none. */
+function errorNote(errors: Map<string, number>): { count: number; note: string } | null {
+  let count = 0
+  for (const n of errors.values()) count += n
+  if (count === 0) return null
+  return { count, note: [...errors].map(([code, n]) => `${n} ${code}`).join(', ') }
 }
