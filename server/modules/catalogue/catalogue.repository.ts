@@ -5,6 +5,7 @@ import type {
   FindOptionsWhere,
   Repository,
 } from 'typeorm'
+import { findOneAs } from '../../db/find-one'
 import type {
   CatalogueOption,
   CatalogueOptionInput,
@@ -58,10 +59,7 @@ function codedTable<E extends { id: number; code: string }, R, I>(
   columns: (input: I) => DeepPartial<E>,
   order: FindOptionsOrder<E>,
 ) {
-  const findBy = async (where: FindOptionsWhere<E>) => {
-    const e = await repo.findOneBy(where)
-    return e ? toRecord(e) : null
-  }
+  const findBy = findOneAs(repo, toRecord)
   return {
     async list(activeOnly: boolean) {
       const where = (activeOnly ? { active: true } : {}) as FindOptionsWhere<E>
