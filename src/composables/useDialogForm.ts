@@ -40,5 +40,11 @@ export function useDialogForm<F, B>(options: DialogFormOptions<F, B>) {
     },
     { form: errors, failure: options.failure },
   )
-  return { form, errors, save }
+  /** what BaseFormDialog shows and runs */
+  const dialog = {
+    visible: options.visible,
+    show: (open: boolean) => (options.visible.value = open),
+    action: save,
+  }
+  return { form, errors, save, dialog }
 }
