@@ -34,3 +34,16 @@ export function axisTitle(text: string) {
 export function ticks(formatter?: (v: number) => string) {
   return { style: { fontSize: '14px', colors: INK }, ...(formatter && { formatter }) }
 }
+
+/**
+ * One axis in the charts' style: its title and tick labels, with anything else the chart sets
+ * (type, tickAmount, min, max…).
+ */
+export function axis<T extends object>(title: string, format: (v: number) => string, more?: T) {
+  return { ...more, labels: ticks(format), title: axisTitle(title) }
+}
+
+/** A numeric x axis of a chart: the title, the tick labels and how many ticks at most. */
+export function numericAxis(title: string, format: (v: number) => string, tickAmount?: number) {
+  return axis(title, format, { type: 'numeric' as const, ...(tickAmount && { tickAmount }) })
+}

@@ -1,24 +1,14 @@
-import { randomBytes } from 'node:crypto'
-import { existsSync, readdirSync, readFileSync, rmSync } from 'node:fs'
+import { existsSync, readdirSync, readFileSync } from 'node:fs'
 import path from 'node:path'
-import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { describe, expect, it } from 'vitest'
 import { MAX_RECORD_BYTES } from '../../shared/schemas/measurement'
-import { makeTestApp, type TestApp } from '../helpers/app'
+import { appWithOwnUploads } from '../helpers/app'
 import { signedIn } from '../helpers/factories'
 import { buildingDefinition, makeCompany, siteBody } from '../helpers/records'
 
 const HEEL_DROP = readFileSync(path.resolve('seed/records/heel-drop-office-floor.csv'))
 
-// A directory of this file's own, so counting stored files is not upset by other test files.
-const UPLOAD_DIR = `.local/test-uploads-records-${randomBytes(4).toString('hex')}`
-let t: TestApp
-beforeAll(async () => {
-  t = await makeTestApp({ UPLOAD_DIR })
-})
-afterAll(async () => {
-  await t.close()
-  rmSync(UPLOAD_DIR, { recursive: true, force: true })
-})
+const t = appWithOwnUploads('records')
 
 const storedFiles = () =>
   existsSync(t.config.UPLOAD_DIR) ? readdirSync(t.config.UPLOAD_DIR).length : 0

@@ -1,9 +1,7 @@
-import { randomBytes } from 'node:crypto'
-import { rmSync } from 'node:fs'
 import request from 'supertest'
-import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { describe, expect, it } from 'vitest'
 import { mac } from '../../shared/measurements'
-import { makeTestApp, type TestApp } from '../helpers/app'
+import { appWithOwnUploads } from '../helpers/app'
 import { chainDefinition, chainRecordCsv, chainTruth, TRUE_SCALE } from '../helpers/chain-record'
 import { signedIn } from '../helpers/factories'
 import { siteWithModel } from '../helpers/records'
@@ -13,16 +11,8 @@ import { siteWithModel } from '../helpers/records'
 // SSI-COV (Peeters & De Roeck 1999), MAC (Allemang & Brown 1982), updating on eigenvalue
 // sensitivities (Fox & Kapoor 1968). The app's tolerances here are looser than the engine's own
 // tests (a 300 s record): frequency 1 %, MAC ≥ 0.95.
-const UPLOAD_DIR = `.local/test-uploads-oma-${randomBytes(4).toString('hex')}`
 const CSV = chainRecordCsv()
-let t: TestApp
-beforeAll(async () => {
-  t = await makeTestApp({ UPLOAD_DIR })
-})
-afterAll(async () => {
-  await t.close()
-  rmSync(UPLOAD_DIR, { recursive: true, force: true })
-})
+const t = appWithOwnUploads('oma')
 
 type Agent = Awaited<ReturnType<typeof signedIn>>['agent']
 

@@ -1,4 +1,9 @@
+import { createServer, type Server } from 'node:http'
 import Stripe from 'stripe'
+import { afterAll, beforeAll } from 'vitest'
+import { createPaymentsFake } from '../../fakes/payments'
+import { closeServer, listen } from '../../fakes/shared/listen'
+import { startWebhookReceiver, type WebhookReceiver } from './webhook-receiver'
 
 export const SECRET_KEY = 'sk_test_fake_suite'
 export const WEBHOOK_SECRET = 'whsec_fake_suite'
@@ -59,4 +64,57 @@ export function submitPayForm(
     body: new URLSearchParams(fields).toString(),
     redirect: 'manual',
   })
+}
+
+/**
+ * The types of the webhooks a receiver got, each signature checked with the official SDK at the
+ * fake's hand-set clock (receivedAt in milliseconds), not the host's.
+ */
+export function verifiedTypes(
+  stripe: Stripe,
+  received: { rawBody: string | Buffer; signature: string }[],
+  nowMs: number,
+) {
+  return received.map(
+    (h) =>
+      stripe.webhooks.constructEvent(h.rawBody, h.signature, WEBHOOK_SECRET, 300, undefined, nowMs)
+        .type,
+  )
+}
+
+export interface ClockedFake {
+  /** the fake's clock, ms since the epoch: the tests move it by hand */
+  nowMs: number
+  receiver: WebhookReceiver
+  baseUrl: string
+  stripe: Stripe
+}
+
+/**
+ * The fake on loopback for one test file, with a hand-set clock and a webhook receiver; started
+ * before the file's tests and closed after them.
+ * @param startMs where the clock starts
+ */
+export function clockedFakePerFile(startMs: number): ClockedFake {
+  const rig = { nowMs: startMs } as ClockedFake
+  let server: Server
+  beforeAll(async () => {
+    rig.receiver = await startWebhookReceiver()
+    server = createServer()
+    rig.baseUrl = `http://127.0.0.1:${await listen(server, 0, '127.0.0.1')}`
+    const app = createPaymentsFake({
+      secretKey: SECRET_KEY,
+      webhookSecret: WEBHOOK_SECRET,
+      webhookUrl: rig.receiver.url,
+      publicUrl: rig.baseUrl,
+      now: () => rig.nowMs,
+    })
+    server.on('request', app)
+    rig.stripe = sdkFor(rig.baseUrl)
+  })
+  afterAll(async () => {
+    await closeServer(server)
+    await rig.receiver.close()
+  })
+  return rig
 }

@@ -1,6 +1,8 @@
 import 'reflect-metadata'
 import { pino } from 'pino'
-import { inject } from 'vitest'
+import { randomBytes } from 'node:crypto'
+import { rmSync } from 'node:fs'
+import { afterAll, beforeAll, inject } from 'vitest'
 import type { DataSource } from 'typeorm'
 import { createApp, type AppDeps, type Services } from '../../server/app'
 import { loadConfig, type Config } from '../../server/config'
@@ -75,4 +77,22 @@ export async function anotherInstance(t: TestApp, extra: Pick<AppDeps, 'pool'> &
   }
   const { app, services } = createApp(deps)
   return { app, services, ds, close: () => ds.destroy() }
+}
+
+/**
+ * The test app of one file with an upload directory of its own, so counting stored files is not
+ * upset by other files' tests; started before the file's tests, closed and removed after them.
+ * @param name a word for the directory (`.local/test-uploads-<name>-<random>`)
+ */
+export function appWithOwnUploads(name: string): TestApp {
+  const t = {} as TestApp
+  const dir = `.local/test-uploads-${name}-${randomBytes(4).toString('hex')}`
+  beforeAll(async () => {
+    Object.assign(t, await makeTestApp({ UPLOAD_DIR: dir }))
+  })
+  afterAll(async () => {
+    await t.close?.()
+    rmSync(dir, { recursive: true, force: true })
+  })
+  return t
 }

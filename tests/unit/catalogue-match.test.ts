@@ -1,21 +1,9 @@
 import { describe, expect, it } from 'vitest'
 import { builtMass, matchUnits, type UnitDemand, type UnitRanges } from '../../shared/catalogue'
+import { floorUnitRanges } from '../helpers/unit-ranges'
 
 // Invented product lines for the test; the checks are interval arithmetic done by hand.
-const floorUnit: UnitRanges = {
-  id: 1,
-  code: 'FL-200',
-  name: 'Floor unit 200',
-  orientation: 'vertical',
-  massMin: 50,
-  massMax: 400,
-  massStep: 25,
-  frequencyMin: 3,
-  frequencyMax: 12,
-  strokeLimit: 0.02,
-  dampingMin: 0.03,
-  dampingMax: 0.2,
-}
+const floorUnit = floorUnitRanges()
 const sideUnit: UnitRanges = { ...floorUnit, id: 2, code: 'SW-100', orientation: 'horizontal' }
 const demand: UnitDemand = {
   mass: 212.4,

@@ -1,22 +1,10 @@
 import { describe, expect, it } from 'vitest'
 import type { UnitRanges } from '../../shared/catalogue'
 import { designChecks, type DesignFacts } from '../../shared/sizing/design-checks'
+import { floorUnitRanges } from '../helpers/unit-ranges'
 
 // Invented units and sizing figures; every check below is a comparison done by hand.
-const floor: UnitRanges = {
-  id: 1,
-  code: 'FL-400',
-  name: 'Floor unit 400',
-  orientation: 'vertical',
-  massMin: 50,
-  massMax: 400,
-  massStep: 25,
-  frequencyMin: 3,
-  frequencyMax: 12,
-  strokeLimit: 0.02,
-  dampingMin: 0.03,
-  dampingMax: 0.2,
-}
+const floor = floorUnitRanges({ code: 'FL-400', name: 'Floor unit 400' })
 const deep: UnitRanges = { ...floor, id: 2, code: 'FL-DEEP', massMax: 100, strokeLimit: 0.05 }
 const side: UnitRanges = { ...floor, id: 3, code: 'SW-100', orientation: 'horizontal' }
 

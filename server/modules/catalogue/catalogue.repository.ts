@@ -1,4 +1,11 @@
-import type { DataSource } from 'typeorm'
+import type {
+  DataSource,
+  DeepPartial,
+  FindOptionsOrder,
+  FindOptionsWhere,
+  Repository,
+} from 'typeorm'
+import { findOneAs } from '../../db/find-one'
 import type {
   CatalogueOption,
   CatalogueOptionInput,
@@ -42,54 +49,41 @@ function optionColumns(input: CatalogueOptionInput) {
   return { ...rest, priceEur: prices.EUR, priceGbp: prices.GBP }
 }
 
-export function catalogueRepository(ds: DataSource) {
-  const lines = ds.getRepository(ProductLineEntity)
-  const options = ds.getRepository(CatalogueOptionEntity)
+/**
+ * A catalogue table whose rows have a unique code (product lines, options): the same reads and
+ * writes, each row turned into its record on the way out and into its columns on the way in.
+ */
+function codedTable<E extends { id: number; code: string }, R, I>(
+  repo: Repository<E>,
+  toRecord: (e: E) => R,
+  columns: (input: I) => DeepPartial<E>,
+  order: FindOptionsOrder<E>,
+) {
+  const findBy = findOneAs(repo, toRecord)
   return {
-    async listLines(activeOnly: boolean) {
-      const rows = await lines.find({
-        where: activeOnly ? { active: true } : {},
-        order: { code: 'ASC' },
-      })
-      return rows.map(toLine)
+    async list(activeOnly: boolean) {
+      const where = (activeOnly ? { active: true } : {}) as FindOptionsWhere<E>
+      return (await repo.find({ where, order })).map(toRecord)
     },
-    async findLine(id: number) {
-      const e = await lines.findOneBy({ id })
-      return e ? toLine(e) : null
+    find: (id: number) => findBy({ id } as FindOptionsWhere<E>),
+    findByCode: (code: string) => findBy({ code } as FindOptionsWhere<E>),
+    async create(input: I) {
+      return toRecord(await repo.save(repo.create(columns(input))))
     },
-    async findLineByCode(code: string) {
-      const e = await lines.findOneBy({ code })
-      return e ? toLine(e) : null
+    async update(id: number, input: I) {
+      await repo.update(id, columns(input) as Parameters<Repository<E>['update']>[1])
+      return (await findBy({ id } as FindOptionsWhere<E>)) as R
     },
-    async createLine(input: ProductLineInput) {
-      return toLine(await lines.save(lines.create(lineColumns(input))))
-    },
-    async updateLine(id: number, input: ProductLineInput) {
-      await lines.update({ id }, lineColumns(input))
-      return (await this.findLine(id)) as ProductLineRecord
-    },
-    async listOptions(activeOnly: boolean) {
-      const rows = await options.find({
-        where: activeOnly ? { active: true } : {},
-        order: { kind: 'ASC', code: 'ASC' },
-      })
-      return rows.map(toOption)
-    },
-    async findOption(id: number) {
-      const e = await options.findOneBy({ id })
-      return e ? toOption(e) : null
-    },
-    async findOptionByCode(code: string) {
-      const e = await options.findOneBy({ code })
-      return e ? toOption(e) : null
-    },
-    async createOption(input: CatalogueOptionInput) {
-      return toOption(await options.save(options.create(optionColumns(input))))
-    },
-    async updateOption(id: number, input: CatalogueOptionInput) {
-      await options.update({ id }, optionColumns(input))
-      return (await this.findOption(id)) as CatalogueOption
-    },
+  }
+}
+
+export function catalogueRepository(ds: DataSource) {
+  return {
+    lines: codedTable(ds.getRepository(ProductLineEntity), toLine, lineColumns, { code: 'ASC' }),
+    options: codedTable(ds.getRepository(CatalogueOptionEntity), toOption, optionColumns, {
+      kind: 'ASC',
+      code: 'ASC',
+    }),
   }
 }
 export type CatalogueRepository = ReturnType<typeof catalogueRepository>

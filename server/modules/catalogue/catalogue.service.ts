@@ -35,15 +35,25 @@ export function demandOf(s: SizingSummary) {
   }
 }
 
+/** Two rows may not share a code: a new one, or a changed one (`id`) taking another's. */
+async function checkCodeFree(
+  table: { findByCode: (code: string) => Promise<{ id: number } | null> },
+  code: string,
+  id?: number,
+) {
+  const other = await table.findByCode(code)
+  if (other && other.id !== id) throw codeTaken(code)
+}
+
 export function catalogueService(deps: { catalogue: CatalogueRepository }) {
-  const repo = deps.catalogue
+  const { lines, options } = deps.catalogue
   async function line(id: number) {
-    const found = await repo.findLine(id)
+    const found = await lines.find(id)
     if (!found) throw notFound('product-line')
     return found
   }
   async function option(id: number) {
-    const found = await repo.findOption(id)
+    const found = await options.find(id)
     if (!found) throw notFound('catalogue-option')
     return found
   }
@@ -51,38 +61,36 @@ export function catalogueService(deps: { catalogue: CatalogueRepository }) {
     line,
     option,
     /** The active product lines in full, for the server's own design checks. */
-    activeUnits: () => repo.listLines(true),
+    activeUnits: () => lines.list(true),
     async listLines(role: Role, includeInactive = false) {
-      const all = await repo.listLines(!(includeInactive && role === 'admin'))
+      const all = await lines.list(!(includeInactive && role === 'admin'))
       return all.map((l) => forRole(l, role))
     },
     async getLine(role: Role, id: number) {
       return forRole(await line(id), role)
     },
     async createLine(input: ProductLineInput) {
-      if (await repo.findLineByCode(input.code)) throw codeTaken(input.code)
-      return repo.createLine(input)
+      await checkCodeFree(lines, input.code)
+      return lines.create(input)
     },
     async updateLine(id: number, input: ProductLineInput) {
       await line(id)
-      const other = await repo.findLineByCode(input.code)
-      if (other && other.id !== id) throw codeTaken(input.code)
-      return repo.updateLine(id, input)
+      await checkCodeFree(lines, input.code, id)
+      return lines.update(id, input)
     },
-    listOptions: (includeInactive = false) => repo.listOptions(!includeInactive),
+    listOptions: (includeInactive = false) => options.list(!includeInactive),
     async createOption(input: CatalogueOptionInput) {
-      if (await repo.findOptionByCode(input.code)) throw codeTaken(input.code)
-      return repo.createOption(input)
+      await checkCodeFree(options, input.code)
+      return options.create(input)
     },
     async updateOption(id: number, input: CatalogueOptionInput) {
       await option(id)
-      const other = await repo.findOptionByCode(input.code)
-      if (other && other.id !== id) throw codeTaken(input.code)
-      return repo.updateOption(id, input)
+      await checkCodeFree(options, input.code, id)
+      return options.update(id, input)
     },
     /** Every active product line judged against a sizing, fitting ones first. */
     async match(sizing: SizingSummary): Promise<UnitMatch[]> {
-      return matchUnits(demandOf(sizing), await repo.listLines(true))
+      return matchUnits(demandOf(sizing), await lines.list(true))
     },
   }
 }

@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm'
+import { findOneAs } from '../../db/find-one'
 import type { Company } from '../../../shared/schemas/auth'
 import { likeText, type Page } from '../../db/list-page'
 import { CompanyEntity } from './company.entity'
@@ -12,15 +13,10 @@ const toCompany = (c: CompanyEntity): Company & { address: string } => ({
 
 export function companiesRepository(ds: DataSource) {
   const repo = ds.getRepository(CompanyEntity)
+  const findOne = findOneAs(repo, toCompany)
   return {
-    async findById(id: number) {
-      const c = await repo.findOneBy({ id })
-      return c ? toCompany(c) : null
-    },
-    async findByName(name: string) {
-      const c = await repo.findOneBy({ name })
-      return c ? toCompany(c) : null
-    },
+    findById: (id: number) => findOne({ id }),
+    findByName: (name: string) => findOne({ name }),
     async list(kind?: 'supplier' | 'customer') {
       const rows = await repo.find({ where: kind ? { kind } : {}, order: { name: 'ASC' } })
       return rows.map(toCompany)

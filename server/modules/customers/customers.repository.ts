@@ -1,4 +1,5 @@
 import { In, type DataSource } from 'typeorm'
+import { findOneAs } from '../../db/find-one'
 import type { Contact, ContactInput } from '../../../shared/schemas/customer'
 import { ContactEntity } from './contact.entity'
 
@@ -14,6 +15,7 @@ const toContact = (c: ContactEntity): Contact => ({
 
 export function customersRepository(ds: DataSource) {
   const contacts = ds.getRepository(ContactEntity)
+  const findOne = findOneAs(contacts, toContact)
   return {
     async contactsOf(companyId: number) {
       const rows = await contacts.find({ where: { companyId }, order: { name: 'ASC' } })
@@ -30,10 +32,7 @@ export function customersRepository(ds: DataSource) {
       for (const c of rows) by.get(c.companyId)?.push(toContact(c))
       return by
     },
-    async findContact(id: number) {
-      const c = await contacts.findOneBy({ id })
-      return c ? toContact(c) : null
-    },
+    findContact: (id: number) => findOne({ id }),
     async createContact(companyId: number, input: ContactInput) {
       return toContact(await contacts.save(contacts.create({ ...input, companyId })))
     },

@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm'
+import { findOneAs } from '../../db/find-one'
 import type { RecordAnalysis } from '../../../shared/schemas/record-analysis'
 import { RecordAnalysisEntity } from './record-analysis.entity'
 
@@ -17,15 +18,13 @@ function toAnalysis(a: RecordAnalysisEntity): RecordAnalysis {
 /** Modal analyses of records; they are removed with their record (foreign key cascade). */
 export function analysesRepository(ds: DataSource) {
   const repo = ds.getRepository(RecordAnalysisEntity)
+  const findOne = findOneAs(repo, toAnalysis)
   return {
     async create(input: Omit<RecordAnalysis, 'id' | 'createdAt'>) {
       const saved = await repo.save(repo.create(input))
       return toAnalysis(await repo.findOneByOrFail({ id: saved.id }))
     },
-    async findById(id: number) {
-      const a = await repo.findOneBy({ id })
-      return a ? toAnalysis(a) : null
-    },
+    findById: (id: number) => findOne({ id }),
     async listByRecord(recordId: number) {
       const rows = await repo.find({
         where: { recordId },

@@ -10,33 +10,25 @@ export interface DueMail {
   message: MailMessage
 }
 
-function toStored(m: MailMessage): StoredMail {
+/** A message with its attachments' contents changed by `convert` (to base64 text and back). */
+function withAttachments<A, B>(
+  m: { attachments?: (A & { filename: string; contentType?: string })[] },
+  convert: (a: A) => B,
+) {
   const { attachments, ...rest } = m
-  return {
-    ...rest,
-    ...(attachments && {
-      attachments: attachments.map((a) => ({
-        filename: a.filename,
-        contentType: a.contentType,
-        base64: a.content.toString('base64'),
-      })),
-    }),
-  }
+  const converted = attachments?.map((a) => ({
+    filename: a.filename,
+    contentType: a.contentType,
+    ...convert(a),
+  }))
+  return { ...rest, ...(converted && { attachments: converted }) }
 }
 
-function fromStored(m: StoredMail): MailMessage {
-  const { attachments, ...rest } = m
-  return {
-    ...rest,
-    ...(attachments && {
-      attachments: attachments.map((a) => ({
-        filename: a.filename,
-        contentType: a.contentType,
-        content: Buffer.from(a.base64, 'base64'),
-      })),
-    }),
-  }
-}
+const toStored = (m: MailMessage): StoredMail =>
+  withAttachments(m, (a) => ({ base64: a.content.toString('base64') })) as StoredMail
+
+const fromStored = (m: StoredMail): MailMessage =>
+  withAttachments(m, (a) => ({ content: Buffer.from(a.base64, 'base64') })) as MailMessage
 
 export function outboxRepository(ds: DataSource) {
   const row = (m: MailMessage, at: Date) => ({

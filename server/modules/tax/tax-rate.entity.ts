@@ -1,11 +1,9 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm'
+import { Column, Entity } from 'typeorm'
+import { NumberedTrackedRecord } from '../../db/record-columns'
 
 /** A named tax rate; at most one is the default (enforced by the service under a lock). */
 @Entity('tax_rates')
-export class TaxRateEntity {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
+export class TaxRateEntity extends NumberedTrackedRecord {
   @Column('varchar', { length: 60, unique: true })
   name: string
 
@@ -15,17 +13,6 @@ export class TaxRateEntity {
 
   @Column('boolean', { default: false })
   isDefault: boolean
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
-  createdAt: Date
-
-  @UpdateDateColumn({
-    type: 'datetime',
-    precision: 3,
-    default: () => 'CURRENT_TIMESTAMP(3)',
-    onUpdate: 'CURRENT_TIMESTAMP(3)',
-  })
-  updatedAt: Date
 }
 
 /** A customer company's own tax rate, instead of the default. */

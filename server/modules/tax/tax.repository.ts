@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm'
+import { findOneAs } from '../../db/find-one'
 import type { TaxRate, TaxRateInput } from '../../../shared/schemas/tax'
 import { CompanyTaxRateEntity, TaxRateEntity } from './tax-rate.entity'
 
@@ -13,22 +14,14 @@ const toRate = (e: TaxRateEntity): TaxRate => ({
 export function taxRepository(ds: DataSource) {
   const rates = ds.getRepository(TaxRateEntity)
   const links = ds.getRepository(CompanyTaxRateEntity)
+  const findOne = findOneAs(rates, toRate)
   return {
     async list() {
       return (await rates.find({ order: { name: 'ASC' } })).map(toRate)
     },
-    async findById(id: number) {
-      const e = await rates.findOneBy({ id })
-      return e ? toRate(e) : null
-    },
-    async findByName(name: string) {
-      const e = await rates.findOneBy({ name })
-      return e ? toRate(e) : null
-    },
-    async findDefault() {
-      const e = await rates.findOneBy({ isDefault: true })
-      return e ? toRate(e) : null
-    },
+    findById: (id: number) => findOne({ id }),
+    findByName: (name: string) => findOne({ name }),
+    findDefault: () => findOne({ isDefault: true }),
     /** Saves a rate; a new default takes the flag from the old one in the same transaction. */
     async save(id: number | null, input: TaxRateInput) {
       return ds.transaction(async (m) => {

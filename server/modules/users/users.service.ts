@@ -1,6 +1,6 @@
 import type { Invite, UserPatch, UserSummary } from '../../../shared/schemas/auth'
 import { AppError, notFound } from '../../http/app-error'
-import { hashPassword, type AuthService } from '../auth/auth.service'
+import { hashPassword, toAuthUser, type AuthService } from '../auth/auth.service'
 import type { CompaniesService } from '../companies/companies.service'
 import type { Throttle } from '../../integrations/rate-limits'
 import type { UserRecord, UsersRepository } from './users.repository'
@@ -8,16 +8,12 @@ import type { UserRecord, UsersRepository } from './users.repository'
 export const INVITE_TTL_HOURS = 72
 
 function summary(u: UserRecord): UserSummary {
+  const { active, passwordHash, createdAt } = u
   return {
-    id: u.id,
-    email: u.email,
-    name: u.name,
-    role: u.role,
-    companyId: u.companyId,
-    companyName: u.companyName,
-    active: u.active,
-    invited: u.passwordHash === null,
-    createdAt: u.createdAt.toISOString(),
+    ...toAuthUser(u),
+    active,
+    invited: passwordHash === null,
+    createdAt: createdAt.toISOString(),
   }
 }
 
