@@ -10,6 +10,7 @@ import {
   type SweepPoint,
 } from '../dynamics'
 import type { ModelDefinition, ResponseQuantity, SizingInput } from '../schemas/sizing'
+import { evaluateSetSizing, type SetStudyResult } from './evaluate-set-sizing'
 import { loadAmplitude, toModelInput } from './model-input'
 
 /** Mass ratios of the achievable-reduction curve (common practice spans 0.5–10 %). */
@@ -40,6 +41,8 @@ export interface SizingEvaluation {
   sweep: SweepPoint[]
   robustness: { curve: DetuningPoint[]; worst: DetuningPoint }
   checks: SizingChecks
+  /** with further units (`input.absorbers`): the whole set; `result` is then its first unit */
+  set?: SetStudyResult
 }
 
 /**
@@ -50,6 +53,7 @@ export interface SizingEvaluation {
  * @throws ModelError naming the field when the model or the choices are invalid
  */
 export function evaluateSizing(model: ModelDefinition, input: SizingInput): SizingEvaluation {
+  if (input.absorbers?.length) return evaluateSetSizing(model, input)
   const request = toModelInput(model, input)
   // One host preparation and one sizing, shared by every part of the study.
   const prepared = prepareSizing(request)
