@@ -10,6 +10,7 @@ import { Resilience1796300000000 } from './1796300000000-Resilience'
 import { ListIndexes1796400000000 } from './1796400000000-ListIndexes'
 import { RecordChannels1796400000001 } from './1796400000001-RecordChannels'
 import { TaxRates1796400000002 } from './1796400000002-TaxRates'
+import { AbsorberSets1796510000000 } from './1796510000000-AbsorberSets'
 
 /** Every migration class in order; a new migration is added here too. */
 export const migrations = [
@@ -25,4 +26,5 @@ export const migrations = [
   ListIndexes1796400000000,
   RecordChannels1796400000001,
   TaxRates1796400000002,
+  AbsorberSets1796510000000,
 ]

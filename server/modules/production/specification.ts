@@ -1,6 +1,7 @@
 import { createHash } from 'node:crypto'
 import type { Quote } from '../../../shared/schemas/quote'
 import type { BuildSpecification } from '../../../shared/schemas/work-order'
+import { buildUnits } from './unit-specification'
 
 /** ±2 % on the absorber frequency: a usual works tolerance (common practice), re-tuned on site. */
 export const FREQUENCY_TOLERANCE = 0.02
@@ -12,6 +13,7 @@ export const FREQUENCY_TOLERANCE = 0.02
  */
 export function buildSpecification(q: Quote): BuildSpecification {
   const unit = q.lines.find((l) => l.kind === 'unit')
+  const units = buildUnits(q, FREQUENCY_TOLERANCE)
   const a = q.sizing.absorber
   const mass = unit?.builtMass ?? a.mass
   const w = 2 * Math.PI * a.frequencyHz
@@ -38,6 +40,7 @@ export function buildSpecification(q: Quote): BuildSpecification {
     strokeLimit: q.sizing.strokeLimit ?? null,
     designAcknowledgement: q.sizing.designAcknowledgement ?? null,
     designConfirmation: q.designConfirmation,
+    ...(units && { units }),
   }
 }
 
