@@ -9,6 +9,10 @@ export const productionApi = {
   /** from: the state the page shows; a move from a state the order has left is refused */
   move: (id: number, from: WorkOrderState, to: WorkOrderState, note = '') =>
     api.post<WorkOrder>(`/api/work-orders/${id}/state`, { from, to, note }),
-  tuning: (id: number, measuredHz: number) =>
-    api.post<WorkOrder>(`/api/work-orders/${id}/tuning`, { measuredHz }),
+  /** absorber: on a work order of several, the one measured (1-based) */
+  tuning: (id: number, measuredHz: number, absorber?: number) =>
+    api.post<WorkOrder>(`/api/work-orders/${id}/tuning`, {
+      measuredHz,
+      ...(absorber !== undefined && { absorber }),
+    }),
 }

@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { SizingSummary } from '../../shared/schemas/sizing'
 import type { SummaryUnit } from '../../shared/schemas/sizing-units'
 import { signedIn } from '../helpers/factories'
+import { fetchPdf, pdfText } from '../helpers/pdf'
 import { makePaymentRig, type PaymentRig } from './payments-rig'
 import { customerWithContact, daysFromNow, sizingSummary } from './quotes-rig'
 
@@ -138,6 +139,30 @@ describe('work orders of a sizing with several absorbers', () => {
       expect(u.frequencyTolerance).toBe(0.02)
     }
     expect(units[1].targetFrequencyHz).toBe(10.5)
+  })
+
+  it('prints each absorber with its own tuning target on the workshop sheet', async () => {
+    const { agent, wo } = await paid()
+    const text = await pdfText((await fetchPdf(agent, `/api/work-orders/${wo.id}/pdf`)).body)
+    expect(text).toMatch(/Absorber 1 \(mode 1, node-3\)/)
+    expect(text).toMatch(/Absorber 2 \(mode 2, node-5\)/)
+    expect(text).toContain('tune to 10.5 Hz')
+    expect(text).toContain('tune to 6.75 Hz')
+  })
+
+  it('matches the catalogue per absorber, and refuses an absorber the sizing lacks', async () => {
+    const { res } = await draft([{ quantity: 1 }, { quantity: 1 }])
+    const id = res.body.sizingId
+    const second = await rig.sales
+      .get('/api/catalogue/matches')
+      .query({ sizingId: id, absorber: 2 })
+    const flr = second.body.find((m: { code: string }) => m.code === 'FLR-S')
+    expect(flr).toMatchObject({ fits: true, builtMass: 150 })
+    const first = await rig.sales.get('/api/catalogue/matches').query({ sizingId: id, absorber: 1 })
+    expect(first.body.find((m: { code: string }) => m.code === 'FLR-S').builtMass).toBe(220)
+    const third = await rig.sales.get('/api/catalogue/matches').query({ sizingId: id, absorber: 3 })
+    expect(third.status).toBe(400)
+    expect(third.body.error.details[0].path).toBe('query.absorber')
   })
 
   it('records a tuning per absorber and ships only when both pass, naming the one that does not', async () => {

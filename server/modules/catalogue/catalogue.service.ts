@@ -1,4 +1,5 @@
 import { ACCESS } from '../../../shared/access'
+import { demandOfUnit } from '../../../shared/catalogue/unit-demand'
 import { matchUnits } from '../../../shared/catalogue'
 import type {
   CatalogueOptionInput,
@@ -22,17 +23,6 @@ function codeTaken(code: string) {
   return new AppError('code-taken', `The code ${code} is in use already.`, 409, [
     { path: 'body.code', message: 'already in use' },
   ])
-}
-
-/** The absorber values of a sizing as the matcher reads them. */
-export function demandOf(s: SizingSummary) {
-  return {
-    mass: s.absorber.mass,
-    frequencyHz: s.absorber.frequencyHz,
-    stroke: s.stroke,
-    dampingRatio: s.absorber.dampingRatio,
-    orientation: s.orientation,
-  }
 }
 
 export function catalogueService(deps: { catalogue: CatalogueRepository }) {
@@ -80,9 +70,15 @@ export function catalogueService(deps: { catalogue: CatalogueRepository }) {
       if (other && other.id !== id) throw codeTaken(input.code)
       return repo.updateOption(id, input)
     },
-    /** Every active product line judged against a sizing, fitting ones first. */
-    async match(sizing: SizingSummary): Promise<UnitMatch[]> {
-      return matchUnits(demandOf(sizing), await repo.listLines(true))
+    /** Every active product line judged against a sizing (or its absorber n of a set),
+     * fitting ones first. */
+    async match(sizing: SizingSummary, absorber?: number): Promise<UnitMatch[]> {
+      const count = sizing.absorbers?.length ?? 1
+      if (absorber !== undefined && absorber > count)
+        throw new AppError('invalid-absorber', `The sizing has ${count} absorber(s).`, 400, [
+          { path: 'query.absorber', message: `1 to ${count}` },
+        ])
+      return matchUnits(demandOfUnit(sizing, absorber), await repo.listLines(true))
     },
   }
 }

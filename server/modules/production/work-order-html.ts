@@ -4,6 +4,7 @@ import {
   acknowledgementHtml,
 } from '../../integrations/pdf/acknowledgement-html'
 import type { BuildSpecification } from '../../../shared/schemas/work-order'
+import { workOrderUnitsHtml } from './work-order-units-html'
 
 interface Printable {
   number: string
@@ -53,6 +54,7 @@ table{border-collapse:collapse;width:100%}tr{border-bottom:0.3mm solid #d9ddd6}
 <p>Due ${esc(w.dueDate)} · state ${esc(w.state)}</p>
 <table><tbody>${rows.map(([k, v]) => `<tr><th>${esc(k)}</th><td>${esc(v)}</td></tr>`).join('')}</tbody></table>
 ${acknowledgementHtml(s.designAcknowledgement, { names: true, confirmedBy: s.designConfirmation })}
+${workOrderUnitsHtml(s)}
 <h2>Tuning record</h2><p>Measured frequency (Hz), tuned by, date:</p><div class="box"></div>
 <p class="hash">Specification hash ${esc(w.specHash)}</p>
 <p class="caution">Build to this frozen specification only. Fit end stops at the maximum stroke and the

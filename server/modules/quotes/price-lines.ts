@@ -4,7 +4,8 @@ import type { QuoteLineInput } from '../../../shared/schemas/quote'
 import type { SizingSummary } from '../../../shared/schemas/sizing'
 import type { CatalogueService } from '../catalogue/catalogue.service'
 import type { LineWrite } from './quote-rows'
-import { assignUnits, demandOfUnit, lineError, unitsText } from './unit-lines'
+import { assignUnits, lineError, unitsText } from './unit-lines'
+import { demandOfUnit } from '../../../shared/catalogue/unit-demand'
 
 async function priceUnit(
   catalogue: CatalogueService,

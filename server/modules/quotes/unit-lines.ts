@@ -1,27 +1,12 @@
-import type { UnitDemand } from '../../../shared/catalogue/match-units'
 import type { QuoteLineInput } from '../../../shared/schemas/quote'
 import type { SizingSummary } from '../../../shared/schemas/sizing'
 import { AppError } from '../../http/app-error'
-import { demandOf } from '../catalogue/catalogue.service'
 
 type UnitLine = Extract<QuoteLineInput, { kind: 'unit' }>
 
 export function lineError(index: number, field: string, message: string) {
   const path = `body.lines.${index}.${field}`
   return new AppError('invalid-line', `${path}: ${message}`, 400, [{ path, message }])
-}
-
-/** What absorber n (1-based) of a sizing asks of a unit; the one absorber when there is no set. */
-export function demandOfUnit(sizing: SizingSummary, n: number): UnitDemand {
-  const u = sizing.absorbers?.[n - 1]
-  if (!u) return demandOf(sizing)
-  return {
-    mass: u.mass,
-    frequencyHz: u.frequencyHz,
-    stroke: u.stroke ?? Infinity,
-    dampingRatio: u.dampingRatio,
-    orientation: sizing.orientation,
-  }
 }
 
 /**
