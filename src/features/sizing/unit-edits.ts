@@ -7,14 +7,16 @@ const NEW_UNIT_RATIO = 0.02
 /**
  * A further absorber, at the first absorber's node and the next mode up (a second mode is the
  * usual reason for a second unit), 2 % of that mode's effective mass, tuned with the others.
- * @param modeCount the number of modes of the host, so the new unit aims at one it has
+ * @param modeCount the number of modes of the host, so the new unit aims at one it has (0 when
+ *   not known yet)
  */
 export function addUnit(form: SizingForm, modeCount: number) {
   const units = (form.absorbers ??= [])
   const taken = Math.max(form.targetMode, ...units.map((u) => u.targetMode))
   units.push({
     node: form.absorberNode,
-    targetMode: Math.min(taken + 1, Math.max(1, modeCount)),
+    // the modes may not be known yet (preview still running): then the next mode up anyway
+    targetMode: modeCount > 0 ? Math.min(taken + 1, modeCount) : taken + 1,
     massRatio: NEW_UNIT_RATIO,
   })
 }
