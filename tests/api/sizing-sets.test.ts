@@ -58,8 +58,8 @@ describe('a sizing with several absorbers', () => {
     const [first, second] = s.absorbers
     expect(first).toMatchObject({ node: 'storey-5', targetMode: 1, massRatio: 0.02 })
     expect(second).toMatchObject({ node: 'storey-5', targetMode: 2, mass: 12_000 })
-    // Effective mass of mode r at node j is 1/φ_{j,r}² for mass-normalised φ (design.md's
-    // definition, common practice); the modes from ml-matrix's symmetric eigen solver.
+    // Effective mass of mode r at node j is 1/φ_{j,r}² for mass-normalised φ
+    // (docs/engineering/host-model.md#effective-mass); the modes from ml-matrix's symmetric solver.
     expect(second.effectiveMass / roofEffectiveMass(1)).toBeCloseTo(1, 9)
     expect(first.effectiveMass / roofEffectiveMass(0)).toBeCloseTo(1, 9)
     expect(second.massRatio).toBeCloseTo(12_000 / second.effectiveMass, 9)
@@ -71,7 +71,7 @@ describe('a sizing with several absorbers', () => {
       expect.objectContaining({ mode: 2, mass: 12_000 }),
     ])
     // Each unit's spring rate and damper follow from its frequency and damping ratio:
-    // k = m ω_a², c = 2 ζ m ω_a (definitions, docs/engineering/tuning.md).
+    // k = m ω_a², c = 2 ζ m ω_a (definitions, docs/engineering/tuning.md#absorber-values).
     for (const u of s.absorbers) {
       const w = 2 * Math.PI * u.frequencyHz
       expect(u.stiffness).toBeCloseTo(u.mass * w * w, 3)
