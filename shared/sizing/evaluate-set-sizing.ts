@@ -4,8 +4,9 @@ import { sizingContext } from '../dynamics/sizing-context'
 import { setResponse, solveSetStudy } from '../dynamics/multi'
 import type { SetSizingResult } from '../dynamics/multi'
 import type { ModelDefinition, SizingInput } from '../schemas/sizing'
-import type { SizingChecks, SizingEvaluation } from './evaluate-sizing'
-import { loadAmplitude, toModelInput, toSetModelInput } from './model-input'
+import type { SizingEvaluation } from './evaluate-sizing'
+import { sizingChecks, type SizingChecks } from './sizing-checks'
+import { toModelInput, toSetModelInput } from './model-input'
 
 /** What a sizing with several units stores of the set: the result without the host's modes,
  * which `result` already carries. */
@@ -25,21 +26,14 @@ function robustness(set: SetSizingResult, tolerance: number) {
 
 /** The checks of a set: its peak, and the worst unit's stroke against the smallest limit. */
 function setChecks(set: SetSizingResult, input: SizingInput): SizingChecks {
-  const amplitude = loadAmplitude(input)
-  const responseWith = (set.peak.with ?? Infinity) * amplitude
-  const strokes = set.absorbers.map((u) => u.maxStroke ?? Infinity)
   const limits = set.absorbers.flatMap((u) => (u.strokeLimit === null ? [] : [u.strokeLimit]))
-  return {
-    forceAmplitude: amplitude,
-    loadUnit: set.excitation.unit,
-    quantity: input.acceptance.quantity,
-    responseWithout: set.peak.without === null ? null : set.peak.without * amplitude,
-    responseWith,
-    limit: input.acceptance.limit,
-    passes: responseWith <= input.acceptance.limit,
-    stroke: Math.max(...strokes),
+  return sizingChecks(input, {
+    without: set.peak.without,
+    with: set.peak.with,
+    unit: set.excitation.unit,
+    stroke: Math.max(...set.absorbers.map((u) => u.maxStroke ?? Infinity)),
     strokeLimit: limits.length ? Math.min(...limits) : null,
-  }
+  })
 }
 
 /**

@@ -144,7 +144,8 @@ it('an engineer adds a second absorber for mode 2, sales quote two units, and th
   await quoting.browserContext().close()
 
   // The customer accepts and pays.
-  const quoteId = (await rig.t.services.quotes.list(toAuthUser(salesUser), {})).items.find(
+  const seller = toAuthUser((await rig.t.services.users.findByEmail(salesUser.email))!)
+  const quoteId = (await rig.t.services.quotes.list(seller, {})).items.find(
     (q) => q.sizingId === sizing.id,
   )!.id
   const customer = await signedIn(rig.t, 'customer', { companyId: company.id })
