@@ -112,7 +112,7 @@ describe('a sizing with several absorbers', () => {
     const cli = JSON.parse(stdout)
     expect(cli.absorbers).toEqual(res.body.evaluation.set.absorbers)
     expect(cli.peak).toEqual(res.body.evaluation.set.peak)
-  })
+  }, 60_000)
 
   it('reopens the units exactly as typed, and an older revision keeps its own', async () => {
     const { agent } = await signedIn(t, 'engineer')

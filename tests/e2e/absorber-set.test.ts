@@ -111,6 +111,11 @@ it('an engineer adds a second absorber for mode 2, sales quote two units, and th
   await openStep(page, 'Hand over')
   await clickButton(page, 'Save sizing')
   await waitForText(page, 'Saved as revision 2, computed on the server')
+  // The saved set's catalogue units, matched absorber by absorber.
+  await openStep(page, 'Results')
+  await page.waitForSelector('[aria-label="Catalogue units"] ::-p-text(Absorber 2)')
+  await shot(page, 'set-2b-catalogue')
+  await openStep(page, 'Hand over')
   await clickButton(page, 'Submit to sales')
   await waitForText(page, 'Handed over to sales')
   const stored = await rig.t.services.sizings.summary(sizing.id)
