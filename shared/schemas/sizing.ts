@@ -248,7 +248,7 @@ export const SizingListItemSchema = z.object({
   companyName: z.string(),
   ownerId: z.number().int(),
   ownerName: z.string(),
-  /** kg */
+  /** kg, of every absorber together */
   absorberMass: z.number().nullable(),
   hostFrequencyHz: z.number().nullable(),
   reduction: z.number().nullable(),

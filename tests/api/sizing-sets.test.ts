@@ -51,7 +51,7 @@ async function saved(agent: Agent, overrides: Record<string, unknown> = {}) {
 describe('a sizing with several absorbers', () => {
   it('sizes every unit with the whole set in place and states the set against each target mode', async () => {
     const { agent } = await signedIn(t, 'engineer')
-    const { res } = await saved(agent)
+    const { res, site } = await saved(agent)
     expect(res.status).toBe(201)
     const s = res.body.summary
     expect(s.absorbers).toHaveLength(2)
@@ -79,6 +79,9 @@ describe('a sizing with several absorbers', () => {
       expect(u.stroke).toBeGreaterThan(0)
     }
     expect(s.stroke).toBe(Math.max(first.stroke, second.stroke))
+    // the sizings list shows the mass of the whole set
+    const [row] = (await agent.get('/api/sizings').query({ siteId: site.id })).body
+    expect(row.absorberMass).toBe(s.totalMass)
   })
 
   it('reports the peak with the whole set as the largest response over both target bands', async () => {

@@ -103,7 +103,7 @@ export function sizingsRepository(ds: DataSource) {
           companyName: row.companyName,
           ownerId: s.ownerId,
           ownerName: s.owner?.name ?? '',
-          absorberMass: sum.absorber.mass,
+          absorberMass: sum.totalMass ?? sum.absorber.mass,
           hostFrequencyHz: sum.hostFrequencyHz,
           reduction: sum.reduction,
           passes: sum.acceptance.passes,
