@@ -78,6 +78,8 @@ describe('the admin on a tablet', () => {
     await page.waitForSelector('::-p-text(= 10 %)')
     await clickButton(page, 'Save rate')
     await waitForText(page, 'Harbour works')
+    // the dialog's closing mask takes taps until it has gone
+    await page.waitForSelector('.p-dialog-mask', { hidden: true })
     const company = CUSTOMERS[0].name
     const marlow = (await rig.t.services.companies.findByName(company))!.id
     await choose(page, `tax-company-${marlow}`, 'Harbour works')

@@ -77,10 +77,10 @@ export async function newPage(
   return page
 }
 
-export async function shot(page: Page, name: string) {
+export async function shot(page: Page, name: string, fullPage = true) {
   await page.screenshot({
     path: path.join(SHOTS_DIR, `${name}.png`) as `${string}.png`,
-    fullPage: true,
+    fullPage,
   })
 }
 
