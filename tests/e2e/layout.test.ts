@@ -78,7 +78,6 @@ async function visit(page: Page, url: string) {
   await page.waitForFunction(() => !document.querySelector('.p-datatable-mask, .p-skeleton'))
 }
 
-
 /** Visits a route, saves its screenshot and answers what does not fit, in words. */
 async function problemsOf(page: Page, path: string, label: string, tablet: boolean) {
   await visit(page, `${rig.appUrl}${path}`)
@@ -86,8 +85,7 @@ async function problemsOf(page: Page, path: string, label: string, tablet: boole
   // what the person sees first (a full-page capture of every route costs a minute per role)
   await shot(page, `layout-${label}-${path.replace(/\W+/g, '_')}`, false)
   const found: string[] = []
-  if (m.scrollWidth > m.width)
-    found.push(`${path}: page ${m.scrollWidth} px on ${m.width} px`)
+  if (m.scrollWidth > m.width) found.push(`${path}: page ${m.scrollWidth} px on ${m.width} px`)
   for (const c of m.offscreen) found.push(`${path}: ${c} off-screen`)
   // one row of header: the touch-size controls and the bar's padding, nothing wrapped
   if (m.headerHeight > 72) found.push(`${path}: header ${m.headerHeight} px high`)
