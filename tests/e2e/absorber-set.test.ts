@@ -20,6 +20,7 @@ import {
 import { makePaymentRig, type PaymentRig } from '../api/payments-rig'
 import { customerWithContact } from '../api/quotes-rig'
 
+// One flow across four roles (about 45 s alone on a 2-core machine, so it allows three minutes).
 // The order has to be paid to reach production, so this file runs on the payment rig (the
 // payment fake beside the built client) with the real sizing engine, as tests/e2e/production does.
 let rig: PaymentRig
@@ -194,4 +195,4 @@ it('an engineer adds a second absorber for mode 2, sales quote two units, and th
   await shot(shop, 'set-6-shipped')
   expect((await rig.t.services.production.get(wo.id)).state).toBe('shipped')
   await shop.browserContext().close()
-})
+}, 180_000)
