@@ -11,6 +11,7 @@ import { ListIndexes1796400000000 } from './1796400000000-ListIndexes'
 import { RecordChannels1796400000001 } from './1796400000001-RecordChannels'
 import { TaxRates1796400000002 } from './1796400000002-TaxRates'
 import { WorkOrderShipping1796500000000 } from './1796500000000-WorkOrderShipping'
+import { AbsorberSets1796510000000 } from './1796510000000-AbsorberSets'
 
 /** Every migration class in order; a new migration is added here too. */
 export const migrations = [
@@ -27,4 +28,5 @@ export const migrations = [
   RecordChannels1796400000001,
   TaxRates1796400000002,
   WorkOrderShipping1796500000000,
+  AbsorberSets1796510000000,
 ]

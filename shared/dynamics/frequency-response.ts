@@ -41,7 +41,8 @@ export interface FrequencyResponse {
   strokePerForce: number[] | null
 }
 
-function curve(n: number): ResponseCurve {
+/** An empty curve of n points. */
+export function curve(n: number): ResponseCurve {
   return {
     receptance: new Array(n),
     mobility: new Array(n),
@@ -51,7 +52,7 @@ function curve(n: number): ResponseCurve {
 }
 
 /** The three measures of a request's load, one per quantity. */
-function measures(m: Measure, base: boolean): [Measure, Measure, Measure] {
+export function measures(m: Measure, base: boolean): [Measure, Measure, Measure] {
   return [0, 1, 2].map((power) => ({
     ...m,
     power,
@@ -59,7 +60,15 @@ function measures(m: Measure, base: boolean): [Measure, Measure, Measure] {
   })) as [Measure, Measure, Measure]
 }
 
-function put(c: ResponseCurve, ms: Measure[], k: number, w: number, re: number, im: number): void {
+/** Puts point k of every measure of a complex response into c. */
+export function put(
+  c: ResponseCurve,
+  ms: Measure[],
+  k: number,
+  w: number,
+  re: number,
+  im: number,
+): void {
   c.receptance[k] = measured(ms[0] ?? RECEPTANCE, w, re, im)
   c.mobility[k] = measured(ms[1] ?? RECEPTANCE, w, re, im)
   c.accelerance[k] = measured(ms[2] ?? RECEPTANCE, w, re, im)

@@ -63,3 +63,8 @@ export function mountingWords(orientation: BuildSpecification['orientation']): s
     ? 'Vertical: the mass moves up and down; the spring carries its weight'
     : 'Lateral: the mass moves sideways; the spring carries no weight'
 }
+
+/** How many units leave the works: one per absorber of a set, else the unit line's quantity. */
+export function unitsToShip(spec: Pick<BuildSpecification, 'quantity' | 'units'>): number {
+  return spec.units?.length ?? spec.quantity
+}

@@ -49,34 +49,48 @@ export function deliveryLines(d: DeliveryContact | null): Line[] {
   ]
 }
 
-/** One tuning reading with its deviation from the target frequency. */
+/** One tuning reading with its deviation from its target frequency. */
 export interface TuningReading {
   id: number
+  /** the absorber measured, on a work order of several; else null */
+  absorber: number | null
   at: string
   by: string
   measuredHz: number
+  targetHz: number
   deviation: string
   passes: boolean
   note: string
 }
 
-/** The tuning record: every reading, oldest first, with its deviation in % of the target. */
+/**
+ * The tuning record: every reading, oldest first, with its deviation in % of its target (on a
+ * work order of several absorbers, the target of the absorber the reading names).
+ */
 export function tuningReadings(
   events: Pick<
     WorkOrderEvent,
-    'id' | 'kind' | 'at' | 'actorName' | 'measuredHz' | 'passes' | 'note'
+    'id' | 'kind' | 'at' | 'actorName' | 'measuredHz' | 'passes' | 'note' | 'absorber'
   >[],
-  targetHz: number,
+  spec: Pick<BuildSpecification, 'targetFrequencyHz' | 'units'>,
 ): TuningReading[] {
+  const targetOf = (absorber: number | null) =>
+    spec.units?.find((u) => u.absorber === absorber)?.targetFrequencyHz ?? spec.targetFrequencyHz
   return events
     .filter((e) => e.kind === 'tuning' && e.measuredHz !== null)
-    .map((e) => ({
-      id: e.id,
-      at: e.at.slice(0, 16).replace('T', ' '),
-      by: e.actorName ?? '—',
-      measuredHz: e.measuredHz as number,
-      deviation: formatDeviation(deviationPercent(e.measuredHz as number, targetHz)),
-      passes: e.passes === true,
-      note: e.note,
-    }))
+    .map((e) => {
+      const absorber = e.absorber ?? null
+      const targetHz = targetOf(absorber)
+      return {
+        id: e.id,
+        absorber,
+        at: e.at.slice(0, 16).replace('T', ' '),
+        by: e.actorName ?? '—',
+        measuredHz: e.measuredHz as number,
+        targetHz,
+        deviation: formatDeviation(deviationPercent(e.measuredHz as number, targetHz)),
+        passes: e.passes === true,
+        note: e.note,
+      }
+    })
 }

@@ -94,4 +94,8 @@ export const UnitMatchSchema = z.object({
 })
 export type UnitMatch = z.infer<typeof UnitMatchSchema>
 
-export const MatchQuerySchema = z.object({ sizingId: IdSchema })
+export const MatchQuerySchema = z.object({
+  sizingId: IdSchema,
+  /** with a sizing of several absorbers: the one (1-based) to match */
+  absorber: IdSchema.optional(),
+})

@@ -19,6 +19,9 @@ export const QuoteLineInputSchema = z.discriminatedUnion('kind', [
     kind: z.literal('unit'),
     productLineId: z.number().int().positive(),
     quantity: z.number().int('whole units').min(1, 'at least 1').max(999),
+    /** with a sizing of several absorbers: the ones (1-based) this line supplies, one each;
+     * absent, the next ones not yet on a line */
+    absorbers: z.array(z.number().int().min(1).max(12)).min(1).max(12).optional(),
   }),
   z.object({
     kind: z.literal('option'),
@@ -97,6 +100,8 @@ export const QuoteLineSchema = z.object({
   description: z.string(),
   /** kg as built, for a unit line */
   builtMass: z.number().nullable(),
+  /** the sizing's absorbers (1-based) a unit line supplies; absent with a single absorber */
+  absorbers: z.array(z.number().int()).optional(),
   quantity: z.number().int(),
   unitPrice: z.number().int(),
   lineTotal: z.number().int(),
@@ -179,6 +184,9 @@ export const CustomerSizingSchema = SizingSummarySchema.pick({
   effectiveMass: true,
   orientation: true,
   absorber: true,
+  absorbers: true,
+  totalMass: true,
+  massRatios: true,
   stroke: true,
   strokeLimit: true,
   load: true,

@@ -19,6 +19,7 @@ import {
   type LoadKind,
 } from './model'
 import { SizingRecordLinkSchema } from './measurement'
+import { SetMassRatioSchema, SizingUnitsSchema, SummaryUnitSchema } from './sizing-units'
 import { strictObject } from './strict'
 
 /**
@@ -114,6 +115,8 @@ const SizingInputFields = strictObject({
   strokeLimit: z.number().positive('must be above zero').max(10, 'at most 10 m').optional(),
   /** a second node: the absorber acts on the relative motion of absorberNode against it */
   relativeToNode: z.string().min(1, 'required').optional(),
+  /** further absorbers beside the first (the fields above), each at its own node and mode */
+  absorbers: SizingUnitsSchema.optional(),
 })
 
 /** Which sizing fields each load kind uses; a field given for another kind is refused. */
@@ -179,7 +182,14 @@ export const SizingSummarySchema = z.object({
     frequencyRatio: z.number(),
     dampingRatio: z.number(),
   }),
-  /** m, peak relative displacement of the absorber mass at the design load */
+  /** with several units: every unit, the first being `absorber`; absent for a single absorber */
+  absorbers: z.array(SummaryUnitSchema).optional(),
+  /** kg, Σ of the units' masses (with several units) */
+  totalMass: z.number().optional(),
+  /** with several units: the mass of the units of each target mode against its effective mass */
+  massRatios: z.array(SetMassRatioSchema).optional(),
+  /** m, peak relative displacement of the absorber mass at the design load (the largest of any
+   * unit with several) */
   stroke: z.number(),
   /** m, the stroke limit the sizing was made to; absent on older sizings */
   strokeLimit: z.number().nullable().optional(),
@@ -239,7 +249,7 @@ export const SizingListItemSchema = z.object({
   companyName: z.string(),
   ownerId: z.number().int(),
   ownerName: z.string(),
-  /** kg */
+  /** kg, of every absorber together */
   absorberMass: z.number().nullable(),
   hostFrequencyHz: z.number().nullable(),
   reduction: z.number().nullable(),

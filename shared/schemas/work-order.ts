@@ -33,8 +33,32 @@ export const TuningRecordInputSchema = z.object({
   measuredHz: z.number().positive('must be above zero').max(1000),
   dampingRatio: z.number().min(0).max(1).optional(),
   note: z.string().trim().max(500).default(''),
+  /** on a work order of several absorbers: the one measured (1-based) */
+  absorber: z.number().int().min(1).max(12).optional(),
 })
 export type TuningRecordInput = z.infer<typeof TuningRecordInputSchema>
+
+/** One absorber of a work order of several, with its own tuning target and tolerance. */
+export const BuildUnitSchema = z.object({
+  /** 1-based, as in the sizing */
+  absorber: z.number().int(),
+  node: z.string(),
+  targetMode: z.number().int(),
+  unitCode: z.string(),
+  /** kg, as built */
+  movingMass: z.number(),
+  /** N/m */
+  springRate: z.number(),
+  /** N·s/m */
+  damperCoefficient: z.number(),
+  dampingRatio: z.number(),
+  targetFrequencyHz: z.number(),
+  /** ± fraction */
+  frequencyTolerance: z.number(),
+  /** m, its peak stroke at the design load, or null when unbounded */
+  stroke: z.number().nullable(),
+})
+export type BuildUnit = z.infer<typeof BuildUnitSchema>
 
 /** What production builds: copied when the quote is paid and never changed afterwards. */
 export const BuildSpecificationSchema = z.object({
@@ -69,6 +93,8 @@ export const BuildSpecificationSchema = z.object({
   designAcknowledgement: DesignAcknowledgementSchema.nullable().optional(),
   /** sales' confirmation of those checks when the quote was sent */
   designConfirmation: z.object({ at: z.string(), byName: z.string() }).nullable().optional(),
+  /** with several absorbers: each one, tuned and recorded on its own; absent for one */
+  units: z.array(BuildUnitSchema).optional(),
 })
 export type BuildSpecification = z.infer<typeof BuildSpecificationSchema>
 
@@ -104,6 +130,8 @@ export const WorkOrderEventSchema = z.object({
   measuredHz: z.number().nullable(),
   dampingRatio: z.number().nullable(),
   passes: z.boolean().nullable(),
+  /** the absorber a tuning record is of, on a work order of several; else null */
+  absorber: z.number().int().nullable().optional(),
   actorId: z.number().int().nullable(),
   actorName: z.string().nullable(),
   at: z.string(),

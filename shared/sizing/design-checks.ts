@@ -1,9 +1,12 @@
-import { matchUnits, type UnitRanges } from '../catalogue/match-units'
+import { matchUnits, type UnitDemand, type UnitRanges } from '../catalogue/match-units'
 import type { DesignCheck } from '../schemas/design-checks'
 import type { SizingSummary } from '../schemas/sizing'
 
 /** The stored figures a sizing is judged on (SI units): a subset of its summary. */
-export type DesignFacts = Pick<SizingSummary, 'absorber' | 'stroke' | 'orientation' | 'acceptance'>
+export type DesignFacts = Pick<
+  SizingSummary,
+  'absorber' | 'absorbers' | 'stroke' | 'orientation' | 'acceptance'
+>
 
 const fmt = (v: number) => v.toLocaleString('en-GB', { maximumSignificantDigits: 3 })
 
@@ -44,45 +47,52 @@ function strokeCheck(s: DesignFacts, units: readonly UnitRanges[]): DesignCheck 
   return { check: 'stroke', passes, title: 'Absorber stroke', message, details: [] }
 }
 
-function catalogueCheck(s: DesignFacts, units: readonly UnitRanges[]): DesignCheck {
-  const a = s.absorber
-  const base = { check: 'catalogue' as const, title: 'Catalogue unit' }
-  const demand = `${fmt(a.mass)} kg at ${fmt(a.frequencyHz)} Hz, ${s.orientation}`
-  let matches
+/** One unit's demand on the catalogue: the fitting codes, or why none fits. */
+function unitFit(demand: UnitDemand, units: readonly UnitRanges[]) {
   try {
-    matches = matchUnits(
-      {
-        mass: a.mass,
-        frequencyHz: a.frequencyHz,
-        stroke: s.stroke,
-        dampingRatio: a.dampingRatio,
-        orientation: s.orientation,
-      },
-      units,
-    )
+    const matches = matchUnits(demand, units)
+    const fitting = matches.filter((m) => m.fits).map((m) => m.code)
+    const reasons = matches.map((m) => `${m.code}: ${m.reasons.map((r) => r.message).join('; ')}`)
+    return { fitting, reasons }
   } catch (e) {
     // An absorber the matcher cannot judge (no damping, say) is one no unit is known to carry.
-    const why = e instanceof RangeError ? e.message : 'values out of range'
-    return {
-      ...base,
-      passes: false,
-      message: `No catalogue unit can carry this absorber (${demand}).`,
-      details: [why],
-    }
+    return { fitting: [], reasons: [e instanceof RangeError ? e.message : 'values out of range'] }
   }
-  const fitting = matches.filter((m) => m.fits)
-  if (fitting.length)
+}
+
+/** What each unit asks of the catalogue: the set's units, or the one absorber. */
+function demands(s: DesignFacts): UnitDemand[] {
+  const one = { ...s.absorber, stroke: s.stroke, orientation: s.orientation }
+  if (!s.absorbers?.length) return [one]
+  return s.absorbers.map((u) => ({
+    ...u,
+    stroke: u.stroke ?? Infinity,
+    orientation: s.orientation,
+  }))
+}
+
+function catalogueCheck(s: DesignFacts, units: readonly UnitRanges[]): DesignCheck {
+  const base = { check: 'catalogue' as const, title: 'Catalogue unit' }
+  const asked = demands(s)
+  const several = asked.length > 1
+  const fits = asked.map((d) => unitFit(d, units))
+  const name = (i: number) => (several ? `absorber ${i + 1}` : 'this absorber')
+  const bad = fits.findIndex((f) => !f.fitting.length)
+  if (bad < 0)
     return {
       ...base,
       passes: true,
-      message: `Catalogue units that can carry this absorber: ${fitting.map((m) => m.code).join(', ')}.`,
+      message: several
+        ? `Catalogue units that can carry each absorber: ${fits.map((f, i) => `${name(i)}: ${f.fitting.join(', ')}`).join('; ')}.`
+        : `Catalogue units that can carry this absorber: ${fits[0]?.fitting.join(', ')}.`,
       details: [],
     }
+  const d = asked[bad]!
   return {
     ...base,
     passes: false,
-    message: `No catalogue unit can carry this absorber (${demand}).`,
-    details: matches.map((m) => `${m.code}: ${m.reasons.map((r) => r.message).join('; ')}`),
+    message: `No catalogue unit can carry ${name(bad)} (${fmt(d.mass)} kg at ${fmt(d.frequencyHz)} Hz, ${s.orientation}).`,
+    details: fits[bad]?.reasons ?? [],
   }
 }
 

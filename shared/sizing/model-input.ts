@@ -1,3 +1,4 @@
+import type { SetModelInput } from '../schemas/absorber-set'
 import type { ExcitationInput, ModelInput } from '../schemas/model'
 import type { ModelDefinition, SizingInput } from '../schemas/sizing'
 
@@ -45,5 +46,26 @@ export function toModelInput(model: ModelDefinition, s: SizingInput): ModelInput
     targetMode: s.targetMode,
     ...(s.band && { band: s.band }),
     ...(s.speed && { speed: s.speed }),
+  }
+}
+
+/**
+ * The engine's request for a sizing with further units (`absorbers`): the sizing's own absorber
+ * is the first unit, at the sizing's target mode; the others follow in their order. The same
+ * JSON the `solve` command line reads with `absorbers`.
+ */
+export function toSetModelInput(model: ModelDefinition, s: SizingInput): SetModelInput {
+  const { absorber, ...rest } = toModelInput(model, s)
+  const more = (s.absorbers ?? []).map((u) => ({
+    node: u.node,
+    ...(u.relativeToNode && { relativeTo: u.relativeToNode }),
+    ...(u.mass === undefined ? { massRatio: u.massRatio } : { mass: u.mass }),
+    tuning: u.tuning ?? 'optimize',
+    ...(u.strokeLimit && { strokeLimit: u.strokeLimit }),
+    targetMode: u.targetMode,
+  }))
+  return {
+    ...rest,
+    absorbers: [{ ...absorber, node: s.absorberNode, targetMode: s.targetMode }, ...more],
   }
 }

@@ -21,6 +21,9 @@ export const catalogueApi = {
     api.post<CatalogueOption>('/api/catalogue/options', body),
   updateOption: (id: number, body: CatalogueOptionInput) =>
     api.put<CatalogueOption>(`/api/catalogue/options/${id}`, body),
-  matches: (sizingId: number) =>
-    api.get<UnitMatch[]>(`/api/catalogue/matches?sizingId=${sizingId}`),
+  /** product lines against a sizing, or against its absorber n (1-based) of a set */
+  matches: (sizingId: number, absorber?: number) =>
+    api.get<UnitMatch[]>(
+      `/api/catalogue/matches?sizingId=${sizingId}${absorber ? `&absorber=${absorber}` : ''}`,
+    ),
 }

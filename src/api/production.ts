@@ -15,8 +15,12 @@ export const productionApi = {
   /** ready → shipped with the carrier, tracking number and the units' serial numbers */
   ship: (id: number, shipment: ShipmentInput) =>
     api.post<WorkOrder>(`/api/work-orders/${id}/state`, { from: 'ready', to: 'shipped', shipment }),
-  tuning: (id: number, measuredHz: number) =>
-    api.post<WorkOrder>(`/api/work-orders/${id}/tuning`, { measuredHz }),
+  /** absorber: on a work order of several, the one measured (1-based) */
+  tuning: (id: number, measuredHz: number, absorber?: number) =>
+    api.post<WorkOrder>(`/api/work-orders/${id}/tuning`, {
+      measuredHz,
+      ...(absorber !== undefined && { absorber }),
+    }),
   /** the customer's view of a quote's shipment (null until shipped) */
   shipment: (quoteId: number) => api.get<QuoteShipment>(`/api/quotes/${quoteId}/shipment`),
 }

@@ -120,7 +120,8 @@ export function catalogueRouter(
       access: ACCESS.catalogue.match,
       query: MatchQuerySchema,
     },
-    async ({ user, query }) => catalogue.match(await sizings.visibleSummary(user, query.sizingId)),
+    async ({ user, query }) =>
+      catalogue.match(await sizings.visibleSummary(user, query.sizingId), query.absorber),
   )
   return router
 }

@@ -1,4 +1,5 @@
 import { ACCESS } from '../../../shared/access'
+import { demandOfUnit } from '../../../shared/catalogue/unit-demand'
 import { matchUnits } from '../../../shared/catalogue'
 import type {
   CatalogueOptionInput,
@@ -22,17 +23,6 @@ function codeTaken(code: string) {
   return new AppError('code-taken', `The code ${code} is in use already.`, 409, [
     { path: 'body.code', message: 'already in use' },
   ])
-}
-
-/** The absorber values of a sizing as the matcher reads them. */
-export function demandOf(s: SizingSummary) {
-  return {
-    mass: s.absorber.mass,
-    frequencyHz: s.absorber.frequencyHz,
-    stroke: s.stroke,
-    dampingRatio: s.absorber.dampingRatio,
-    orientation: s.orientation,
-  }
 }
 
 /** Two rows may not share a code: a new one, or a changed one (`id`) taking another's. */
@@ -88,9 +78,15 @@ export function catalogueService(deps: { catalogue: CatalogueRepository }) {
       await checkCodeFree(options, input.code, id)
       return options.update(id, input)
     },
-    /** Every active product line judged against a sizing, fitting ones first. */
-    async match(sizing: SizingSummary): Promise<UnitMatch[]> {
-      return matchUnits(demandOf(sizing), await lines.list(true))
+    /** Every active product line judged against a sizing (or its absorber n of a set),
+     * fitting ones first. */
+    async match(sizing: SizingSummary, absorber?: number): Promise<UnitMatch[]> {
+      const count = sizing.absorbers?.length ?? 1
+      if (absorber !== undefined && absorber > count)
+        throw new AppError('invalid-absorber', `The sizing has ${count} absorber(s).`, 400, [
+          { path: 'query.absorber', message: `1 to ${count}` },
+        ])
+      return matchUnits(demandOfUnit(sizing, absorber), await lines.list(true))
     },
   }
 }

@@ -77,6 +77,7 @@ export function productionRepository(ds: DataSource) {
     async addTuning(
       id: number,
       t: {
+        absorber?: number
         measuredHz: number
         dampingRatio: number | null
         passes: boolean

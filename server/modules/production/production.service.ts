@@ -1,5 +1,5 @@
 import type { StatusChange, TuningRecordInput } from '../../../shared/schemas/work-order'
-import { checkStep, withinTolerance } from '../../../shared/production/flow'
+import { checkStep } from '../../../shared/production/flow'
 import { AppError, notFound } from '../../http/app-error'
 import type { Mailer } from '../../integrations/mail'
 import type { AuthUser } from '../../middleware/authenticate'
@@ -16,6 +16,7 @@ import type { OrderFactsOf } from './order-facts'
 import { shippingPatch } from './shipping'
 import type { WorkOrderQueuePage } from './work-order-queue.repository'
 import { shipmentOf, workOrderRow } from './work-order-view'
+import { tuningPasses, tuningTarget, unitOutOfTolerance } from './unit-tuning'
 
 const moved = (state: string) =>
   new AppError('state-changed', `Someone else moved this work order to ${state}; reload it.`, 409, {
@@ -93,6 +94,9 @@ export function productionService(deps: {
       const w = await get(id)
       if (w.state === change.to) return w
       if (change.from && change.from !== w.state) throw moved(w.state)
+      const forward = `${w.state}>${change.to}`
+      const unitFails = unitOutOfTolerance(w.specification, w.events)
+      if (unitFails && (forward === 'tuning>ready' || forward === 'ready>shipped')) throw unitFails
       const check = checkStep(w.state, change.to, {
         note: change.note,
         tuningPasses: w.latestTuning?.passes ?? null,
@@ -127,12 +131,10 @@ export function productionService(deps: {
           'Move the work order to tuning before recording a measurement.',
           409,
         )
-      const passes = withinTolerance(
-        t.measuredHz,
-        w.specification.targetFrequencyHz,
-        w.specification.frequencyTolerance,
-      )
+      const target = tuningTarget(w.specification, t.absorber)
+      const passes = tuningPasses(t.measuredHz, target)
       await deps.repo.addTuning(id, {
+        ...(target.absorber !== null && { absorber: target.absorber }),
         measuredHz: t.measuredHz,
         dampingRatio: t.dampingRatio ?? null,
         passes,

@@ -1,5 +1,6 @@
 import type { ShipmentInput } from '../../../shared/schemas/shipment'
 import type { BuildSpecification } from '../../../shared/schemas/work-order'
+import { unitsToShip } from '../../../shared/production/work-order-figures'
 import { AppError } from '../../http/app-error'
 import type { MovePatch } from './production.repository'
 
@@ -17,7 +18,7 @@ export function shippingPatch(
     throw new AppError('shipment-required', 'Record the carrier, tracking and serials.', 400, [
       { path: 'body.shipment.carrier', message: 'required: the carrier' },
     ])
-  const units = spec.quantity
+  const units = unitsToShip(spec)
   if (shipment.serialNumbers.length !== units)
     throw new AppError(
       'serial-numbers-count',

@@ -1,6 +1,7 @@
 import { createHash } from 'node:crypto'
 import type { Quote } from '../../../shared/schemas/quote'
 import type { BuildSpecification } from '../../../shared/schemas/work-order'
+import { buildUnits, buildValues } from './unit-specification'
 
 /** ±2 % on the absorber frequency: a usual works tolerance (common practice), re-tuned on site. */
 export const FREQUENCY_TOLERANCE = 0.02
@@ -12,9 +13,9 @@ export const FREQUENCY_TOLERANCE = 0.02
  */
 export function buildSpecification(q: Quote): BuildSpecification {
   const unit = q.lines.find((l) => l.kind === 'unit')
+  const units = buildUnits(q, FREQUENCY_TOLERANCE)
   const a = q.sizing.absorber
   const mass = unit?.builtMass ?? a.mass
-  const w = 2 * Math.PI * a.frequencyHz
   return {
     quoteReference: q.reference,
     companyName: q.companyName,
@@ -25,8 +26,7 @@ export function buildSpecification(q: Quote): BuildSpecification {
     orientation: q.sizing.orientation,
     movingMass: mass,
     massPlates: null,
-    springRate: mass * w * w,
-    damperCoefficient: 2 * a.dampingRatio * mass * w,
+    ...buildValues(mass, a.frequencyHz, a.dampingRatio),
     dampingRatio: a.dampingRatio,
     targetFrequencyHz: a.frequencyHz,
     frequencyTolerance: FREQUENCY_TOLERANCE,
@@ -38,6 +38,7 @@ export function buildSpecification(q: Quote): BuildSpecification {
     strokeLimit: q.sizing.strokeLimit ?? null,
     designAcknowledgement: q.sizing.designAcknowledgement ?? null,
     designConfirmation: q.designConfirmation,
+    ...(units && { units }),
   }
 }
 

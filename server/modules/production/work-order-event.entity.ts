@@ -28,6 +28,10 @@ export class WorkOrderEventEntity {
   @Column('boolean', { nullable: true })
   passes: boolean | null
 
+  /** the absorber (1-based) a tuning record is of, on a work order of several; else null */
+  @Column('int', { nullable: true })
+  absorber: number | null
+
   @Column('int', { nullable: true })
   actorId: number | null
 

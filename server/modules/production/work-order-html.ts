@@ -12,6 +12,7 @@ import {
   tuningReadings,
 } from '../../../shared/production/work-order-lines'
 import { tuningRecordHtml } from './tuning-record-html'
+import { workOrderUnitsHtml } from './work-order-units-html'
 
 interface Printable {
   number: string
@@ -69,8 +70,9 @@ table{border-collapse:collapse;width:100%}tr{border-bottom:0.3mm solid #d9ddd6}
 ${table(rows)}
 <h2>Delivery</h2>${table(deliveryLines(w.delivery))}
 ${acknowledgementHtml(s.designAcknowledgement, { names: true, confirmedBy: s.designConfirmation })}
-<h2>Tuning record</h2><p>Target ${esc(sig(s.targetFrequencyHz, 4))} Hz ± ${esc(sig(s.frequencyTolerance * 100, 2))} %; deviation = (measured − target) / target.</p>
-${tuningRecordHtml(tuningReadings(w.events, s.targetFrequencyHz))}
+${workOrderUnitsHtml(s)}
+<h2>Tuning record</h2><p>${s.units ? 'Each absorber’s target is in the table above,' : `Target ${esc(sig(s.targetFrequencyHz, 4))} Hz`} ± ${esc(sig(s.frequencyTolerance * 100, 2))} %; deviation = (measured − target) / target.</p>
+${tuningRecordHtml(tuningReadings(w.events, s))}
 <p class="hash">Specification hash ${esc(w.specHash)}</p>
 <p class="caution">Build to this frozen specification only. Fit end stops at the maximum stroke and the
 restraint of the moving mass against falling; installation and anchorage are for a licensed engineer

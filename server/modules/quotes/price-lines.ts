@@ -2,14 +2,10 @@ import { builtMass, matchUnits, quoteTotals, unitPrice } from '../../../shared/c
 import type { Currency } from '../../../shared/money'
 import type { QuoteLineInput } from '../../../shared/schemas/quote'
 import type { SizingSummary } from '../../../shared/schemas/sizing'
-import { AppError } from '../../http/app-error'
-import { demandOf, type CatalogueService } from '../catalogue/catalogue.service'
+import type { CatalogueService } from '../catalogue/catalogue.service'
 import type { LineWrite } from './quote-rows'
-
-function lineError(index: number, field: string, message: string) {
-  const path = `body.lines.${index}.${field}`
-  return new AppError('invalid-line', `${path}: ${message}`, 400, [{ path, message }])
-}
+import { assignUnits, lineError, unitsText } from './unit-lines'
+import { demandOfUnit } from '../../../shared/catalogue/unit-demand'
 
 async function priceUnit(
   catalogue: CatalogueService,
@@ -17,23 +13,32 @@ async function priceUnit(
   i: number,
   sizing: SizingSummary,
   currency: Currency,
+  units: number[] | null,
 ): Promise<LineWrite> {
   const unit = await catalogue.line(l.productLineId).catch(() => null)
   if (!unit || !unit.active) throw lineError(i, 'productLineId', 'no such product line')
-  const [match] = matchUnits(demandOf(sizing), [unit])
-  if (!match?.fits) {
+  const demands = (units ?? [1]).map((n) => demandOfUnit(sizing, n))
+  for (const [j, demand] of demands.entries()) {
+    const [match] = matchUnits(demand, [unit])
+    if (match?.fits) continue
     const why = match?.reasons.map((r) => r.message).join('; ') ?? ''
-    throw lineError(i, 'productLineId', `${unit.code} cannot carry this sizing: ${why}`)
+    const what = units ? `absorber ${units[j]}` : 'this sizing'
+    throw lineError(i, 'productLineId', `${unit.code} cannot carry ${what}: ${why}`)
   }
-  const mass = builtMass(sizing.absorber.mass, unit.massStep)
-  const price = unitPrice(unit.prices[currency], sizing.absorber.mass, unit.massStep)
+  const masses = demands.map((d) => builtMass(d.mass, unit.massStep))
+  const mass = masses[0] ?? 0
+  if (masses.some((m) => m !== mass))
+    throw lineError(i, 'absorbers', 'these absorbers differ in built mass: put each on a line')
+  const price = unitPrice(unit.prices[currency], demands[0]?.mass ?? 0, unit.massStep)
+  const text = `${unit.name}, ${mass} kg moving mass, ${unit.orientation}, ${unit.damperType} damper`
   return {
     kind: 'unit',
     productLineId: unit.id,
     optionId: null,
     code: unit.code,
-    description: `${unit.name}, ${mass} kg moving mass, ${unit.orientation}, ${unit.damperType} damper`,
+    description: units ? `${text}, for ${unitsText(sizing, units)}` : text,
     builtMass: mass,
+    ...(units && { absorbers: units }),
     quantity: l.quantity,
     unitPrice: price,
     lineTotal: price * l.quantity,
@@ -51,9 +56,10 @@ export async function priceLines(
   currency: Currency,
 ): Promise<LineWrite[]> {
   const out: LineWrite[] = []
+  const units = assignUnits(inputs, sizing)
   for (const [i, l] of inputs.entries()) {
     if (l.kind === 'unit') {
-      out.push(await priceUnit(catalogue, l, i, sizing, currency))
+      out.push(await priceUnit(catalogue, l, i, sizing, currency, units[i] ?? null))
       continue
     }
     const opt = await catalogue.option(l.optionId).catch(() => null)

@@ -42,6 +42,10 @@ export class QuoteLineEntity {
   @Column('double', { nullable: true })
   builtMass: number | null
 
+  /** the sizing's absorbers (1-based) a unit line supplies, as "1,2"; null for one absorber */
+  @Column('varchar', { length: 60, nullable: true })
+  absorbers: string | null
+
   @Column('int')
   quantity: number
 

@@ -61,6 +61,7 @@ export function toRow(e: QuoteEntity): QuoteRow {
         code: l.code,
         description: l.description,
         builtMass: l.builtMass,
+        ...(l.absorbers && { absorbers: l.absorbers.split(',').map(Number) }),
         quantity: l.quantity,
         unitPrice: l.unitPrice,
         lineTotal: l.lineTotal,

@@ -67,7 +67,12 @@ export interface QuoteListRow {
 }
 
 function linesOf(quoteId: number, lines: LineWrite[]) {
-  return lines.map((l, i) => ({ ...l, quoteId, position: i + 1 }))
+  return lines.map((l, i) => ({
+    ...l,
+    absorbers: l.absorbers?.join(',') ?? null,
+    quoteId,
+    position: i + 1,
+  }))
 }
 
 export function quotesRepository(ds: DataSource) {

@@ -2,6 +2,7 @@ import type { Site } from '../../../shared/schemas/site'
 import type { SizingInput, SizingSummary } from '../../../shared/schemas/sizing'
 import type { SizingEvaluation } from '../../../shared/sizing/evaluate-sizing'
 import { describeLoad } from '../../../shared/sizing/load-description'
+import { summariseSet } from './set-summary'
 
 export type StoredSummary = Omit<
   SizingSummary,
@@ -12,6 +13,11 @@ export type StoredSummary = Omit<
 function thin(values: number[], n: number) {
   const step = Math.max(1, Math.ceil(values.length / n))
   return values.filter((_, i) => i % step === 0 || i === values.length - 1)
+}
+
+/** Peak without ÷ with, or null when either is unbounded. */
+function reductionFactor(p: { without: number | null; with: number | null }) {
+  return p.without !== null && p.with ? p.without / p.with : null
 }
 
 /** What sales, quotes and production read of a saved revision. */
@@ -38,11 +44,12 @@ export function summarise(site: Site, input: SizingInput, ev: SizingEvaluation):
       frequencyRatio: a.frequencyRatio,
       dampingRatio: a.dampingRatio,
     },
+    ...summariseSet(ev),
     stroke: checks.stroke,
     strokeLimit: input.strokeLimit ?? null,
     load: describeLoad(input),
     staticDeflection: result.design.staticDeflection,
-    reduction: result.peak.reductionFactor,
+    reduction: ev.set ? reductionFactor(ev.set.peak) : result.peak.reductionFactor,
     acceptance: { ...input.acceptance, responseWith: checks.responseWith, passes: checks.passes },
     chart: {
       frequencyHz: thin(response.frequencyHz, 120),

@@ -127,7 +127,8 @@ export function sizingsRepository(ds: DataSource) {
           'company.name AS companyName',
           's.ownerId AS ownerId',
           'owner.name AS ownerName',
-          "JSON_VALUE(r.summary, '$.absorber.mass') AS absorberMass",
+          // a set of absorbers shows its total mass
+          "COALESCE(JSON_VALUE(r.summary, '$.totalMass'), JSON_VALUE(r.summary, '$.absorber.mass')) AS absorberMass",
           "JSON_VALUE(r.summary, '$.hostFrequencyHz') AS hostFrequencyHz",
           "JSON_VALUE(r.summary, '$.reduction') AS reduction",
           "JSON_VALUE(r.summary, '$.acceptance.passes') AS passes",

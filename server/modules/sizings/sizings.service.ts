@@ -8,10 +8,11 @@ import type {
 import { AppError, forbidden, notFound } from '../../http/app-error'
 import type { AuthUser } from '../../middleware/authenticate'
 import type { JobOptions, SizingPool } from '../../workers/pool'
-import { checkModel, dotted } from '../models/check-model'
+import { checkModel } from '../models/check-model'
 import type { ModelsService } from '../models/models.service'
 import type { SitesService } from '../sites/sites.service'
 import { designChecks } from '../../../shared/sizing/design-checks'
+import { sizingFieldPath } from './engine-field'
 import { sizingHandover, type HandoverDeps } from './sizing-handover.service'
 import { summarise } from './sizing-summary'
 import type { SizingRecord } from './sizings.repository'
@@ -75,14 +76,7 @@ export function sizingsService(deps: SizingsDeps) {
         { path: 'model', message: out.message },
       ])
     if (!out.ok) {
-      const path = `body.input.${dotted(out.field)
-        .replace(/^absorber\.node$/, 'absorberNode')
-        .replace(/^absorber\.relativeTo$/, 'relativeToNode')
-        .replace(/^absorber\.strokeLimit$/, 'strokeLimit')
-        .replace(/^excitation\.node$/, 'excitationNode')
-        .replace(/^excitation\.forces/, 'forces')
-        .replace(/^excitation\.mode$/, 'loadMode')
-        .replace(/^response\.node$/, 'responseNode')}`
+      const path = sizingFieldPath(out.field)
       throw new AppError('invalid-model', out.message, 400, [{ path, message: out.message }])
     }
     return { input, evaluation: out.evaluation, summary: summarise(site, input, out.evaluation) }

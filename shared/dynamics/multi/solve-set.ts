@@ -4,7 +4,9 @@ import { sizingContext } from '../sizing-context'
 import { excitationReport, loadUnit, modeReports, responseReport } from '../sizing-report'
 import { hostSetPeak } from './host-set-peak'
 import { optimizeSet, setValues } from './optimize-set'
-import { setContext } from './set-context'
+import type { PreparedHost } from '../host'
+import type { AbsorberValues } from '../tuning-objective'
+import { setContext, type SetContext } from './set-context'
 import { evaluateSet } from './set-peak'
 import { peakPair, setNotes, targetReports, unitReports } from './set-report'
 import type { SetSizingResult } from './set-result'
@@ -28,7 +30,24 @@ export const SET_SCOPE =
  * @throws ModelError (a RangeError) naming the offending field when the model is invalid
  */
 export function solveSet(model: SetModelInput): SetSizingResult {
-  const ctx = setContext(model)
+  return solveSetStudy(model).result
+}
+
+/** A set's sizing with the context and the units' values it was computed with (for curves). */
+export interface SetStudy {
+  result: SetSizingResult
+  ctx: SetContext
+  /** per unit as tuned (kg, N/m, N·s/m) */
+  values: AbsorberValues[]
+}
+
+/**
+ * `solveSet`, keeping its context and values for further curves on the same host.
+ * @param model the model with `absorbers`
+ * @param prepared the host of this model when already prepared (e.g. by prepareSizing)
+ */
+export function solveSetStudy(model: SetModelInput, prepared?: PreparedHost): SetStudy {
+  const ctx = setContext(model, prepared)
   const t = optimizeSet(ctx)
   const values = setValues(ctx, t.tunings)
   const ev = evaluateSet(ctx, values)
@@ -49,7 +68,7 @@ export function solveSet(model: SetModelInput): SetSizingResult {
   )
   const units = unitReports(ctx, values, t, ev)
   const modes = ctx.prep.modes.omega
-  return {
+  const result: SetSizingResult = {
     nodeIds: ids,
     modes: modeReports(view),
     excitation: excitationReport(view),
@@ -79,4 +98,5 @@ export function solveSet(model: SetModelInput): SetSizingResult {
     notes: setNotes(ctx, units, t),
     cautions: SIZING_CAUTIONS,
   }
+  return { result, ctx, values }
 }

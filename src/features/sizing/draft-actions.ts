@@ -3,6 +3,8 @@ import type { NodeInput, SpringInput } from '@shared/schemas/model'
 import type { ModelDefinition } from '@shared/schemas/sizing'
 import type { SizingDraft, SizingForm } from './draft'
 import * as structure from './structure-edits'
+import * as units from './unit-edits'
+import type { SizingUnit } from '@shared/schemas/sizing-units'
 
 /**
  * The named edits of the draft being worked on. Each marks it unsaved; none runs on a read-only
@@ -50,6 +52,11 @@ export function draftActions(current: ComputedRef<SizingDraft | undefined>, lock
           if (!d.form[key] || !nodeIds.has(d.form[key])) d.form[key] = id
       })
     },
+    /** Adds a further absorber (see unit-edits.ts). */
+    addUnit: (modeCount: number) => edit((d) => units.addUnit(d.form, modeCount)),
+    setUnit: (index: number, change: Partial<SizingUnit>) =>
+      edit((d) => units.setUnit(d.form, index, change)),
+    removeUnit: (index: number) => edit((d) => units.removeUnit(d.form, index)),
     setModelName: (name: string) => edit((d) => (d.modelName = name)),
     setRevisionReason: (reason: string) => edit((d) => (d.revisionReason = reason)),
     /** Moves onto a stored revision of the model (the engineer says so, never by itself). */

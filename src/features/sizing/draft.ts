@@ -1,5 +1,6 @@
 import type { BandInput, ExplicitTuning, TuningName } from '@shared/schemas/model'
 import type { SizingRecordLink } from '@shared/schemas/measurement'
+import type { SizingUnit } from '@shared/schemas/sizing-units'
 import type { Acceptance, ModelDefinition, Orientation, SizingInput } from '@shared/schemas/sizing'
 import { acceptancePreset } from '@shared/acceptance-presets'
 import { LOAD_PRESETS } from '@shared/load-presets'
@@ -35,6 +36,8 @@ export interface SizingForm extends Pick<SizingInput, LoadFields> {
   band?: BandInput
   /** site records linked as evidence, with their peaks paired with modes */
   records: SizingRecordLink[]
+  /** further absorbers beside the first, each at its node and mode; absent for one absorber */
+  absorbers?: SizingUnit[]
 }
 
 /** One sizing being edited, as kept in the browser until the server has it. */

@@ -1,3 +1,4 @@
+import { setRows } from '../../../../shared/sizing/set-rows'
 import { formatBasisPoints, formatMoney } from '../../../../shared/money'
 import type { CustomerQuote as Quote } from '../../../../shared/schemas/quote'
 import { esc, sig } from '../../../integrations/pdf/html'
@@ -34,6 +35,7 @@ function sizingSection(q: Quote) {
     ['Absorber tuning', `${sig(a.frequencyHz)} Hz, frequency ratio ${sig(a.frequencyRatio)}`],
     ['Damping ratio', sig(a.dampingRatio)],
     ['Spring rate / damper', `${sig(a.stiffness)} N/m / ${sig(a.damping)} N·s/m`],
+    ...setRows(s),
     ...(s.load ? [['Design load', s.load] as [string, string]] : []),
     [
       'Stroke at design load',
