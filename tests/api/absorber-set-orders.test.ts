@@ -183,7 +183,19 @@ describe('work orders of a sizing with several absorbers', () => {
     expect(blocked.body.error.message).toMatch(/^Absorber 2 \(mode 2, FLR-S\)/)
     await tune({ absorber: 2, measuredHz: 10.5 * 1.01 }).expect(201)
     await move('ready').expect(200)
-    const shipped = await move('shipped')
+    // one serial number per absorber: the set leaves as two units
+    const shipment = {
+      carrier: 'Northway Freight',
+      trackingNumber: 'NWF-2',
+      serialNumbers: ['S-1'],
+    }
+    const short = await agent
+      .post(`/api/work-orders/${wo.id}/state`)
+      .send({ to: 'shipped', shipment })
+    expect(short.body.error.code).toBe('serial-numbers-count')
+    const shipped = await agent
+      .post(`/api/work-orders/${wo.id}/state`)
+      .send({ to: 'shipped', shipment: { ...shipment, serialNumbers: ['S-1', 'S-2'] } })
     expect(shipped.body.state).toBe('shipped')
   })
 })

@@ -48,8 +48,17 @@ describe("a customer's order timeline", () => {
       ['shipped', false, null],
     ])
 
+    // shipping carries the carrier, tracking and one serial number (one unit here)
+    const shipment = {
+      carrier: 'Northway Freight',
+      trackingNumber: 'NWF-9',
+      serialNumbers: ['S-9'],
+    }
     const move = (to: string, note = '') =>
-      production.post(`/api/work-orders/${woId}/state`).send({ to, note }).expect(200)
+      production
+        .post(`/api/work-orders/${woId}/state`)
+        .send({ to, note, ...(to === 'shipped' && { shipment }) })
+        .expect(200)
     try {
       rig.t.clock.offsetMs = 2 * DAY
       await move('in-build')

@@ -51,6 +51,9 @@ export async function makeQuoteApp(
   t.services = rebuilt.services
   t.app = rebuilt.app
   await seedCatalogue(t.services)
+  // The test database is shared by the files of a run: held sizings take ids no quote has yet.
+  const [{ top }] = await t.ds.query('SELECT COALESCE(MAX(sizingId), 0) AS top FROM quotes')
+  nextId = Math.max(nextId, Number(top) + 1)
   return { t, sizings }
 }
 
