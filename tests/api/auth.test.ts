@@ -107,6 +107,7 @@ describe('sign-in', () => {
 })
 
 describe('invitations and password reset', () => {
+  // the mail goes through the outbox's worker: under a full parallel run it can take seconds
   it('mails a single-use link that sets the password once', async () => {
     const { agent: admin } = await signedIn(t, 'admin')
     const email = `invitee-${Date.now()}@example.test`
@@ -131,7 +132,7 @@ describe('invitations and password reset', () => {
       .post('/api/auth/sign-in')
       .send({ email, password: 'a-new-password-1' })
     expect(signIn.status).toBe(200)
-  })
+  }, 20_000)
 
   it('refuses an invitation link after it has expired', async () => {
     const { agent: admin } = await signedIn(t, 'admin')
