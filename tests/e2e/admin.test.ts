@@ -117,8 +117,6 @@ describe('the admin on a tablet', () => {
     await signInAs(page, rig.url, admin.email, admin.password)
     await page.goto(`${rig.url}/admin/users`)
     await waitForText(page, target.name)
-    // the list has loaded and settled (a tap during its first render may land on a row being replaced)
-    await page.waitForNetworkIdle({ idleTime: 300 })
     const deactivate = async () => {
       await page.locator(`button[aria-label="Deactivate ${target.email}"]`).click()
       await page.waitForSelector('[role="alertdialog"] ::-p-text(signed out everywhere)')
