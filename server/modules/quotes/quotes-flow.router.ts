@@ -11,6 +11,7 @@ import {
   ReadySizingSchema,
 } from '../../../shared/schemas/quote-flow'
 import type { ApiRegistry } from '../../http/api-registry'
+import { answerPage } from '../../http/page'
 import { route } from '../../http/route'
 import type { QuotesService } from './quotes.service'
 
@@ -36,9 +37,7 @@ export function quotesFlowRouter(api: ApiRegistry, quotes: QuotesService) {
       query: ReadyQuerySchema,
     },
     async ({ query, res }) => {
-      const page = await quotes.ready(query)
-      res.set('x-total-count', String(page.total))
-      return page.items
+      return answerPage(res, await quotes.ready(query))
     },
   )
   route(
