@@ -1,5 +1,6 @@
 import { randomBytes } from 'node:crypto'
 import request from 'supertest'
+import { In } from 'typeorm'
 import type { Role } from '../../shared/schemas/auth'
 import { OutboxMailEntity } from '../../server/modules/outbox/outbox-mail.entity'
 import type { TestApp } from './app'
@@ -46,19 +47,21 @@ export async function mailTo(t: TestApp, to: string, subject?: RegExp, timeoutMs
       .messages()
       .filter((m) => JSON.stringify(m.to).includes(to) && (!subject || subject.test(m.subject)))
     if (found.length) return found[found.length - 1]!
-    // The test files of a run share one database, so another file's outbox worker may have
-    // sent this mail to its own catcher: the outbox row keeps the message as it was sent.
-    const sent = await sentThroughOutbox(t, to, subject)
+    // The test files of a run share one database, so another file's outbox sender may have
+    // taken this mail (sent it to its own catcher, or holds it leased while that file closes):
+    // the outbox row keeps the message as the service wrote it. Delivery itself is tested in
+    // tests/api/two-instances.test.ts and tests/api/payments-db-outage.test.ts.
+    const sent = await takenThroughOutbox(t, to, subject)
     if (sent) return sent as unknown as (typeof found)[number]
     if (Date.now() > end) throw new Error(`no mail to ${to}`)
     await new Promise((r) => setTimeout(r, 50))
   }
 }
 
-async function sentThroughOutbox(t: TestApp, to: string, subject?: RegExp) {
+async function takenThroughOutbox(t: TestApp, to: string, subject?: RegExp) {
   const rows = await t.ds
     .getRepository(OutboxMailEntity)
-    .find({ where: { toAddress: to, state: 'sent' }, order: { id: 'DESC' } })
+    .find({ where: { toAddress: to, state: In(['sent', 'pending']) }, order: { id: 'DESC' } })
   const row = rows.find((r) => !subject || subject.test(r.subject))
   return row ? { ...row.message, to: [to] } : null
 }
