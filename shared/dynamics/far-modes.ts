@@ -26,7 +26,8 @@ export interface FoldedModes {
   degree: number
   /** the proven bound on the correction's error, relative to Σ|modal terms| (≤ the tolerance) */
   bound: number
-  /** adds the far modes' [rp, ru, up, uu] (re, im) at ω (rad/s, inside the band) into out */
+  /** adds the far modes' [rp, ru, up, uu] (re, im) at ω (rad/s, inside the band) into out; with
+   * `src`, only the components q with src[q] = q */
   add(w: number, out: Float64Array): void
 }
 
@@ -123,7 +124,8 @@ function termScale(
  * @param zeta modal damping ratio per mode
  * @param prod per mode the four numerators [rp, ru, up, uu] of the modal terms
  * @param min band edges, rad/s
- * @param tolerance relative to Σ|modal terms| (default 1e-10)
+ * @param options.tolerance relative to Σ|modal terms| (default 1e-10)
+ * @param options.src per component, the component it repeats (only the others are added)
  */
 export function foldFarModes(
   omega: Float64Array,
@@ -131,8 +133,9 @@ export function foldFarModes(
   prod: Float64Array,
   min: number,
   max: number,
-  tolerance = 1e-10,
+  options: { tolerance?: number; src?: Int8Array } = {},
 ): FoldedModes | null {
+  const { tolerance = 1e-10, src = Int8Array.of(0, 1, 2, 3) } = options
   const n = omega.length
   if (!(max > min * (1 + 1e-6)) || n < 24) return null
   const c = 0.5 * (min + max)
@@ -146,7 +149,10 @@ export function foldFarModes(
     const p = plan(far, axes, prod, h, scale, tolerance)
     if (!p) continue
     if (far.length < 2 * (p.degree + 1)) return null
-    return build(omega, zeta, prod, far, Int32Array.from(near), min, max, p)
+    const lanes = Int8Array.from(
+      [0, 1, 2, 3].filter((q) => src[q] === q).flatMap((q) => [2 * q, 2 * q + 1]),
+    )
+    return build(omega, zeta, prod, far, Int32Array.from(near), min, max, p, lanes)
   }
   return null
 }
@@ -160,6 +166,7 @@ function build(
   min: number,
   max: number,
   p: Plan,
+  lanes: Int8Array,
 ): FoldedModes {
   const N = p.degree
   const c = 0.5 * (min + max)
@@ -200,14 +207,23 @@ function build(
       for (let j = 0; j <= N; j++) {
         const dt = t - (nodes[j] ?? 0)
         if (dt === 0) {
-          for (let k = 0; k < 8; k++) out[k] = (out[k] ?? 0) + (values[8 * j + k] ?? 0)
+          for (let l = 0; l < lanes.length; l++) {
+            const k = lanes[l] ?? 0
+            out[k] = (out[k] ?? 0) + (values[8 * j + k] ?? 0)
+          }
           return
         }
         const x = (weights[j] ?? 0) / dt
         den += x
-        for (let k = 0; k < 8; k++) sum[k] = (sum[k] ?? 0) + x * (values[8 * j + k] ?? 0)
+        for (let l = 0; l < lanes.length; l++) {
+          const k = lanes[l] ?? 0
+          sum[k] = (sum[k] ?? 0) + x * (values[8 * j + k] ?? 0)
+        }
       }
-      for (let k = 0; k < 8; k++) out[k] = (out[k] ?? 0) + (sum[k] ?? 0) / den
+      for (let l = 0; l < lanes.length; l++) {
+        const k = lanes[l] ?? 0
+        out[k] = (out[k] ?? 0) + (sum[k] ?? 0) / den
+      }
     },
   }
 }

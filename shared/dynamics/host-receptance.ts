@@ -61,9 +61,27 @@ export function nodeVectors(n: number, t: NodeTriple): ReceptanceVectors {
 /** Relative distance to an undamped natural frequency below which the sum steps aside. */
 const POLE_GAP = 1e-8
 
+/**
+ * Per component q of [rp, ru, up, uu], the first component whose modal numerators are the same
+ * numbers mode by mode: with the response, load and absorber on one node the four sums are one,
+ * and are summed once (the same operations, so the same values).
+ */
+function repeatedComponents(prod: Float64Array, n: number): Int8Array {
+  const src = Int8Array.of(0, 1, 2, 3)
+  for (let q = 1; q < 4; q++) {
+    for (let s = 0; s < q && src[q] === q; s++) {
+      let same = src[s] === s
+      for (let i = 0; same && i < n; i++) same = Object.is(prod[4 * i + q], prod[4 * i + s])
+      if (same) src[q] = s
+    }
+  }
+  return src
+}
+
 function modalAt(
   prep: PreparedHost,
   prod: Float64Array,
+  src: Int8Array,
   w: number,
   out: Receptance4,
   folded: FoldedModes | null,
@@ -86,12 +104,19 @@ function modalAt(
     const ur = dr / d
     const ui = -di / d
     for (let q = 0; q < 4; q++) {
+      if (src[q] !== q) continue
       const p = prod[i * 4 + q] ?? 0
       out[2 * q] = (out[2 * q] ?? 0) + p * ur
       out[2 * q + 1] = (out[2 * q + 1] ?? 0) + p * ui
     }
   }
   fold?.add(w, out)
+  for (let q = 1; q < 4; q++) {
+    const s = src[q] ?? q
+    if (s === q) continue
+    out[2 * q] = out[2 * s] ?? 0
+    out[2 * q + 1] = out[2 * s + 1] ?? 0
+  }
   return true
 }
 
@@ -158,14 +183,15 @@ export function hostReceptance(
     parts.set([a, b, c], 3 * i)
   }
   const last = omega[omega.length - 1] ?? 0
+  const src = repeatedComponents(prod, n)
   const folded = prep.classical
-    ? foldFarModes(prep.modes.omega, prep.zeta, prod, omega[0] ?? 0, last)
+    ? foldFarModes(prep.modes.omega, prep.zeta, prod, omega[0] ?? 0, last, { src })
     : null
   const exact = (w: number, out: Receptance4): void => {
     let at = w
     // Step aside from a singular point (an undamped mode's own frequency) until the sum is finite.
     for (let tries = 0; tries < 4; tries++) {
-      if (prep.classical ? modalAt(prep, prod, at, out, folded) : directAt(prep, v, at, out)) {
+      if (prep.classical ? modalAt(prep, prod, src, at, out, folded) : directAt(prep, v, at, out)) {
         for (let q = 0; q < 4; q++) out[2 * q] = (out[2 * q] ?? 0) + (fixed[q] ?? 0)
         return
       }

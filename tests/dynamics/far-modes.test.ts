@@ -96,6 +96,23 @@ describe('modes far from the band folded into one correction', () => {
     }
   }, 60_000)
 
+  it('match it with the absorber, load and response on one node (one sum for all four)', () => {
+    // Same reference as above; the engine then sums the four equal receptances once.
+    for (const [n, node] of [
+      [80, 'm27'],
+      [200, 'm100'],
+    ] as const) {
+      const model: ModelInput = {
+        ...chainModel(n, 800, 2e7, true),
+        hostDampingRatio: 0.02,
+        absorber: { node, massRatio: 0.02 },
+        excitation: { node },
+        response: { node },
+      }
+      expect(worstError(model, 1500), `n=${n}`).toBeLessThanOrEqual(1e-10)
+    }
+  })
+
   it('fold most modes of a long chain, with a proven bound under the tolerance', () => {
     const ctx = sizingContext({
       ...chainModel(400, 800, 2e7, true),
