@@ -1,6 +1,6 @@
 import type { ModelInput } from '../schemas/model'
 import { ModelError } from './errors'
-import { evaluateAbsorber } from './evaluate-absorber'
+import { absorberPeak } from './evaluate-absorber'
 import { scaledContext } from './scaled-context'
 import { prepareSizing, type PreparedSizing } from './size-absorber'
 
@@ -55,7 +55,7 @@ export function detuningRobustness(
   const h = new Float64Array(8)
   const at = (offset: number): { peak: number; amplification: number } => {
     const ctx = Math.abs(offset) < 1e-12 ? nominal : scaledContext(nominal, (1 + offset) ** 2)
-    const peak = evaluateAbsorber(ctx, sized.values).peak.value
+    const peak = absorberPeak(ctx, sized.values).value
     ctx.rec.at(0, h)
     return { peak, amplification: peak / Math.hypot(h[0] ?? 0, h[1] ?? 0) }
   }

@@ -66,6 +66,21 @@ export function evaluateAbsorber(ctx: SizingContext, a: AbsorberValues): Absorbe
 }
 
 /**
+ * The peak of `evaluateAbsorber` alone, without the strokes (detuning studies read only the peak):
+ * the same samples and refinement, so the same value.
+ * @param ctx sizing context
+ * @param a absorber values (kg, N/m, N·s/m)
+ */
+export function absorberPeak(ctx: SizingContext, a: AbsorberValues): Peak {
+  const unbounded = unboundedWith(ctx, a)
+  if (unbounded) return { value: Infinity, omega: unbounded.omega }
+  const mag = new Float64Array(ctx.rec.omega.length)
+  absorberOnGrid(ctx.rec, a, ctx.measure, mag)
+  const extra = coupledFrequencies(tuningProblem(ctx.rec, ctx.omegaTarget, a.mass), a)
+  return findPeak(ctx.rec.omega, mag, exactMagnitude(ctx.rec, a, ctx.measure), { extra })
+}
+
+/**
  * Peak receptance of the host alone over the band (m/N), or Infinity when a host mode in the band
  * resonates without damping.
  * @param ctx sizing context
