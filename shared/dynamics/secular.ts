@@ -57,38 +57,90 @@ export function secularPoles(lambda: ArrayLike<number>, c: ArrayLike<number>): P
   return out
 }
 
-/** g′ at the λ of the last `secular` call: a module scratch rather than a tuple, as the root
- * search calls `secular` for every candidate absorber of an optimisation. */
-let slope = 0
-
-/** g at λ; g′ goes to `slope`. */
+/** g at λ. */
 function secular(p: Poles, invK: number, mass: number, x: number): number {
   let g = invK - 1 / (x * mass)
-  let d = 1 / (x * x * mass)
-  for (let i = 0; i < p.lambda.length; i++) {
-    const t = 1 / ((p.lambda[i] ?? 0) - x)
-    const w = p.weight[i] ?? 0
-    g += w * t
-    d += w * t * t
-  }
-  slope = d
+  for (let i = 0; i < p.lambda.length; i++) g += (p.weight[i] ?? 0) / ((p.lambda[i] ?? 0) - x)
   return g
 }
 
-/** The root of the increasing g in (a, b), g(a⁺) < 0 < g(b⁻): Newton kept inside the bracket,
- * bisection when it leaves it (safeguarded Newton, e.g. Press et al., Numerical Recipes §9.4). */
-function root(p: Poles, invK: number, mass: number, a: number, b: number, tol: number): number {
-  let lo = a
-  let hi = b
+/** The parts of g from the poles at or below the gap (the absorber's −1/(λm_a) is a pole at 0
+ * of weight 1/m_a) and from those above it, with their slopes, at the λ of the last `split`: a
+ * module scratch rather than a tuple, as the root search runs for every candidate absorber of an
+ * optimisation. */
+const parts = { below: 0, belowSlope: 0, above: 0, aboveSlope: 0 }
+
+/** g − 1/k_a at λ = x split at the gap above pole k − 1 (k = 0: the gap above 0), into `parts`. */
+function split(p: Poles, mass: number, k: number, x: number): void {
+  let below = -1 / (x * mass)
+  let belowSlope = 1 / (x * x * mass)
+  let above = 0
+  let aboveSlope = 0
+  for (let i = 0; i < p.lambda.length; i++) {
+    const t = 1 / ((p.lambda[i] ?? 0) - x)
+    const w = p.weight[i] ?? 0
+    if (i < k) {
+      below += w * t
+      belowSlope += w * t * t
+    } else {
+      above += w * t
+      aboveSlope += w * t * t
+    }
+  }
+  parts.below = below
+  parts.belowSlope = belowSlope
+  parts.above = above
+  parts.aboveSlope = aboveSlope
+}
+
+/**
+ * The next λ of the root search in the gap (a, b) between two poles: each side's part of g
+ * replaced by one pole at the gap's edge plus a constant that match its value and slope at x, and
+ * the root of that model taken (the rational approximation of Bunch, Nielsen & Sorensen, "Rank-one
+ * modification of the symmetric eigenproblem", Numer. Math. 31, 1978); NaN when it has none.
+ */
+function rationalStep(invK: number, a: number, b: number, x: number): number {
+  const q = parts.belowSlope * (a - x) * (a - x)
+  const c0 = invK + parts.below - q / (a - x)
+  if (b === Infinity) return a + q / (c0 + parts.above)
+  const s = parts.aboveSlope * (b - x) * (b - x)
+  const c = c0 + parts.above - s / (b - x)
+  // c(a − λ)(b − λ) + q(b − λ) + s(a − λ) = 0
+  const B = -(c * (a + b) + q + s)
+  const C = c * a * b + q * b + s * a
+  if (c === 0) return -C / B
+  const disc = B * B - 4 * c * C
+  if (!(disc >= 0)) return NaN
+  const h = -0.5 * (B + (B < 0 ? -1 : 1) * Math.sqrt(disc))
+  const r1 = h / c
+  const r2 = C / h
+  return Math.abs(r1 - x) < Math.abs(r2 - x) ? r1 : r2
+}
+
+/** The root of the increasing g in the gap (a, b) of pole k, searched in (lo, hi) ⊂ (a, b) where
+ * g(lo⁺) < 0 < g(hi⁻): rational steps kept inside the bracket, bisection when one leaves it,
+ * until the bracket is under the tolerance. */
+function root(
+  p: Poles,
+  invK: number,
+  mass: number,
+  gap: { k: number; a: number; b: number },
+  bracket: [number, number],
+  tol: number,
+): number {
+  let [lo, hi] = bracket
   let x = 0.5 * (lo + hi)
   for (let it = 0; it < 200; it++) {
-    const g = secular(p, invK, mass, x)
-    const d = slope
+    split(p, mass, gap.k, x)
+    const g = invK + parts.below + parts.above
     if (g === 0) return x
     if (g < 0) lo = x
     else hi = x
     if (hi - lo <= tol * hi) break
-    const next = x - g / d
+    let next = rationalStep(invK, gap.a, gap.b, x)
+    // The model's steps close in on the root from one side: once a step is under the tolerance,
+    // one step of half the tolerance past it (toward the root, g < 0 below it) closes the bracket.
+    if (Math.abs(next - x) < 0.5 * tol * x) next = x + (g < 0 ? 0.5 : -0.5) * tol * x
     x = next > lo && next < hi ? next : 0.5 * (lo + hi)
   }
   return 0.5 * (lo + hi)
@@ -137,7 +189,7 @@ export function coupledEigenvalues(
     if (!(hi > lo)) continue
     if (lo > a && secular(p, invK, mass, lo) > 0) continue
     if (hi < b && secular(p, invK, mass, hi) < 0) continue
-    out.push(root(p, invK, mass, lo, hi, tolerance))
+    out.push(root(p, invK, mass, { k, a, b }, [lo, hi], tolerance))
   }
   return out.sort((x, y) => x - y)
 }
