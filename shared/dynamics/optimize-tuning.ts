@@ -1,4 +1,5 @@
 import { closedForms, type ClosedFormName, type Tuning } from './closed-forms'
+import { equalPeaks } from './equal-peaks'
 import { nelderMead, type Minimum, type NelderMeadOptions } from './nelder-mead'
 import { searchProblem } from './search-grid'
 import { absorberValues, meanSquareWith, peakWith, type TuningProblem } from './tuning-objective'
@@ -46,8 +47,9 @@ const DEFAULT_STARTS: Record<'hinf' | 'h2', ClosedFormName[]> = {
 
 /**
  * Numerical optimum of (f, ζ_a) for a given absorber mass on the full host model, by Nelder–Mead
- * in (ln f, ln ζ_a) from the best closed form: a rough search, then a fine one restarted from its
- * result with a small simplex (a restart is the standard remedy for simplex stalls). The peak is
+ * in (ln f, ln ζ_a) from the best closed form: a rough search, then for the peak Newton's method on
+ * the equal-peak conditions (equal-peaks.ts), else — and for the mean square — a fine simplex
+ * restarted from the rough result (a restart is the standard remedy for simplex stalls). The peak is
  * searched on a thinner grid (search-grid.ts) and the optimum checked on the full one. Never
  * returns worse than its starting closed form.
  * @param pb host receptances over the band and the absorber mass (kg)
@@ -87,20 +89,34 @@ export function optimizeTuning(
     Math.log(start.t.frequencyRatio),
     Math.log(Math.max(start.t.dampingRatio, MIN_START_DAMPING)),
   ]
-  // A rough search that only finds the basin, then a fine one restarted from it with a small
-  // simplex: fewer evaluations than two searches to 1e-7, and a tighter optimum.
+  // A rough search that only finds the basin, then the optimum from there (below).
   const rough = { maxEvaluations, tolerance: ROUGH_TOLERANCE }
   const first = nelderMead(f, x0, { step: [0.02, 0.15], ...rough })
   const fine = { maxEvaluations, tolerance: FINE_TOLERANCE }
-  const second = nelderMead(f, first.x, { step: [0.002, 0.02], ...fine })
+  // The peak: Newton's method on the equal-peak conditions from the rough optimum; where it does
+  // not converge (those conditions do not describe the optimum) the fine simplex as before, and
+  // the lower of the two.
+  const newton = objective === 'hinf' ? equalPeaks(searchProblem(pb), first) : null
+  const simplex = newton?.converged
+    ? null
+    : nelderMead(f, first.x, { step: [0.002, 0.02], ...fine })
+  const second = lowest([simplex, newton], first)
   const searched = second.value <= first.value ? second : first
   const full = (x: number[]): number => cost(toTuning(x))
   const best = search === cost ? searched : onFullGrid(full, searched, fine)
-  const evaluations = count + first.evaluations + second.evaluations
+  const evaluations =
+    count + first.evaluations + (newton?.evaluations ?? 0) + (simplex?.evaluations ?? 0)
   const spent = search === cost ? 0 : best.evaluations
   return best.value < start.value
     ? found(toTuning(best.x), best.value, evaluations + spent)
     : found(start.t, start.value, evaluations + spent)
+}
+
+/** The lowest of some minima, or the fallback when there is none. */
+function lowest(minima: (Minimum | null)[], fallback: Minimum): Minimum {
+  let best: Minimum | null = null
+  for (const m of minima) if (m && (!best || m.value < best.value)) best = m
+  return best ?? fallback
 }
 
 /** The best of the closed forms (and extra starts) on the full model, by the objective. */

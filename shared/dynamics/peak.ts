@@ -14,6 +14,8 @@ export interface PeakOptions {
   /** relative accuracy of each refined frequency (default 3e-9, about √ of the double precision:
    * below it the curve's values no longer differ) */
   tolerance?: number
+  /** receives every refined local maximum, in band order */
+  maxima?: Peak[]
 }
 
 const GOLDEN = (3 - Math.sqrt(5)) / 2
@@ -151,6 +153,7 @@ export function findPeak(
       const hi = k < total ? nw : cw
       const lo = k > 1 ? pw : cw
       const p = hi > lo ? brentMax(exact, lo, hi, here, tolerance) : here
+      options.maxima?.push(p)
       if (p.value > best.value) best = p
     }
     pw = cw

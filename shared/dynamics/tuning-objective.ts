@@ -124,10 +124,11 @@ const lockedRoots = new WeakMap<
  * @param pb the problem
  * @param a absorber values
  */
-export function peakWith(pb: TuningProblem, a: AbsorberValues): Peak {
+export function peakWith(pb: TuningProblem, a: AbsorberValues, maxima?: Peak[]): Peak {
   absorberOnGrid(pb.rec, a, pb.measure, pb.mag)
   return findPeak(pb.rec.omega, pb.mag, exactMagnitude(pb.rec, a, pb.measure), {
     extra: coupledFrequencies(pb, a),
+    ...(maxima && { maxima }),
   })
 }
 

@@ -1,0 +1,197 @@
+import { absorberAt, type AbsorberPoint } from './absorber-response'
+import { measured } from './measure'
+import type { Minimum } from './nelder-mead'
+import type { Peak } from './peak'
+import { absorberValues, peakWith, type TuningProblem } from './tuning-objective'
+
+/**
+ * The last digits of an H∞ tuning by Newton's method on the optimality conditions of the peaks
+ * that are equal at the optimum, instead of a simplex shrinking onto a kink.
+ *
+ * With x = (ln f, ln ζ_a), each peak P_k(x) = F(ω_k(x), x) of the response F is a smooth function
+ * of x while it stays a peak: its gradient is ∂F/∂x at ω_k (the envelope theorem, since ∂F/∂ω = 0
+ * there) and its Hessian F_xx − F_xω F_ωx / F_ωω. The minimum of max(P₁, P₂) with both peaks
+ * active satisfies P₁ = P₂ and λ∇P₁ + (1 − λ)∇P₂ = 0, 0 ≤ λ ≤ 1 (the minimax optimality conditions,
+ * e.g. Nocedal & Wright, Numerical Optimization, 2006, §12.3 on the equivalent constrained
+ * problem); with one active peak ∇P₁ = 0. Newton's method on these equations converges
+ * quadratically near the optimum (equal peaks are the H∞ optimum's signature: Den Hartog 1956,
+ * Nishihara & Asami 2002). Every step must lower the objective, which stays the exact peak over
+ * the band; when the equations do not describe the optimum (three peaks, a peak vanishing, a
+ * singular system) the search gives up and the caller's simplex carries on.
+ */
+
+/** Relative gap under which a second peak may be active: its equal-peak step is tried first, the
+ * first peak's own step next. */
+const ACTIVE = 0.25
+/** Finite-difference steps in x (ln f, ln ζ) and in ln ω. */
+const HX = 1e-4
+const HW = 1e-5
+const MAX_ITERATIONS = 12
+
+const toValues = (pb: TuningProblem, x: number[]) =>
+  absorberValues(pb.mass, pb.omegaTarget, {
+    frequencyRatio: Math.exp(x[0] ?? 0),
+    dampingRatio: Math.exp(x[1] ?? 0),
+  })
+
+/** The response at ω(1+s) around a tuning x, from one exact host receptance per ω. */
+function responseNear(pb: TuningProblem, w: number): (s: number, x: number[]) => number {
+  const h = new Float64Array(24)
+  for (let k = 0; k < 3; k++) pb.rec.at(w * (1 + (k - 1) * HW), h.subarray(8 * k))
+  const p: AbsorberPoint = { re: 0, im: 0, strokeRe: 0, strokeIm: 0 }
+  return (s, x) => {
+    const k = s < 0 ? 0 : s > 0 ? 2 : 1
+    const at = w * (1 + (k - 1) * HW)
+    const a = toValues(pb, x)
+    absorberAt(h, 8 * k, at, a.mass, a.stiffness, a.damping, pb.measure.absorberLoad * a.mass, p)
+    return measured(pb.measure, at, p.re, p.im)
+  }
+}
+
+/** Gradient and Hessian (row-major 2×2) of a peak's value as a function of x. */
+function peakDerivatives(pb: TuningProblem, peak: Peak, x: number[]) {
+  const F = responseNear(pb, peak.omega)
+  const e = (i: number, t: number) => x.map((v, k) => (k === i ? v + t : v))
+  const ee = (t0: number, t1: number) => [(x[0] ?? 0) + t0, (x[1] ?? 0) + t1]
+  const f0 = F(0, x)
+  const g = [0, 1].map((i) => (F(0, e(i, HX)) - F(0, e(i, -HX))) / (2 * HX))
+  const fxx = [0, 1].map((i) => (F(0, e(i, HX)) - 2 * f0 + F(0, e(i, -HX))) / (HX * HX))
+  const fxy =
+    (F(0, ee(HX, HX)) - F(0, ee(HX, -HX)) - F(0, ee(-HX, HX)) + F(0, ee(-HX, -HX))) / (4 * HX * HX)
+  const fss = (F(1, x) - 2 * f0 + F(-1, x)) / (HW * HW)
+  const fsx = [0, 1].map(
+    (i) => (F(1, e(i, HX)) - F(1, e(i, -HX)) - F(-1, e(i, HX)) + F(-1, e(i, -HX))) / (4 * HW * HX),
+  )
+  const [s0, s1] = [fsx[0] ?? 0, fsx[1] ?? 0]
+  const hess = [
+    (fxx[0] ?? 0) - (s0 * s0) / fss,
+    fxy - (s0 * s1) / fss,
+    fxy - (s0 * s1) / fss,
+    (fxx[1] ?? 0) - (s1 * s1) / fss,
+  ]
+  return { g, hess, concave: fss < 0 }
+}
+
+/** Solves the n×n system a·z = b (row-major) by Gaussian elimination with partial pivoting. */
+function solve(a: number[], b: number[]): number[] | null {
+  const n = b.length
+  const m = a.slice()
+  const z = b.slice()
+  for (let c = 0; c < n; c++) {
+    let piv = c
+    for (let r = c + 1; r < n; r++)
+      if (Math.abs(m[r * n + c] ?? 0) > Math.abs(m[piv * n + c] ?? 0)) piv = r
+    if (!(Math.abs(m[piv * n + c] ?? 0) > 1e-300)) return null
+    for (let k = 0; k < n; k++)
+      [m[c * n + k], m[piv * n + k]] = [m[piv * n + k] ?? 0, m[c * n + k] ?? 0]
+    ;[z[c], z[piv]] = [z[piv] ?? 0, z[c] ?? 0]
+    for (let r = c + 1; r < n; r++) {
+      const f = (m[r * n + c] ?? 0) / (m[c * n + c] ?? 1)
+      for (let k = c; k < n; k++) m[r * n + k] = (m[r * n + k] ?? 0) - f * (m[c * n + k] ?? 0)
+      z[r] = (z[r] ?? 0) - f * (z[c] ?? 0)
+    }
+  }
+  for (let r = n - 1; r >= 0; r--) {
+    let s = z[r] ?? 0
+    for (let k = r + 1; k < n; k++) s -= (m[r * n + k] ?? 0) * (z[k] ?? 0)
+    z[r] = s / (m[r * n + r] ?? 1)
+  }
+  return z.every(Number.isFinite) ? z : null
+}
+
+/** The objective and its two highest peaks at x. */
+function peaksAt(pb: TuningProblem, x: number[]): { value: number; top: Peak[] } {
+  const maxima: Peak[] = []
+  const best = peakWith(pb, toValues(pb, x), maxima)
+  maxima.sort((p, q) => q.value - p.value)
+  return { value: best.value, top: maxima.slice(0, 3) }
+}
+
+/** Newton steps in x, the likelier first: for the two highest peaks equal, for the highest alone. */
+function newtonSteps(pb: TuningProblem, x: number[], top: Peak[]): number[][] {
+  const [p1, p2, p3] = top
+  if (!p1) return []
+  const d1 = peakDerivatives(pb, p1, x)
+  if (!d1.concave) return []
+  const single = solve(
+    d1.hess,
+    d1.g.map((v) => -v),
+  )
+  const steps = single ? [single] : []
+  if (!p2 || p2.value < p1.value * (1 - ACTIVE)) return steps
+  // A third peak near the top: the two-peak conditions do not describe the optimum.
+  if (p3 && p3.value >= p1.value * (1 - ACTIVE)) return []
+  const pair = pairStep(pb, x, p1, p2, d1)
+  return pair ? [pair, ...steps] : steps
+}
+
+/** The Newton step for two equal peaks, or null. */
+function pairStep(
+  pb: TuningProblem,
+  x: number[],
+  p1: Peak,
+  p2: Peak,
+  d1: ReturnType<typeof peakDerivatives>,
+): number[] | null {
+  const d2 = peakDerivatives(pb, p2, x)
+  if (!d2.concave) return null
+  const dg = [0, 1].map((i) => (d1.g[i] ?? 0) - (d2.g[i] ?? 0))
+  const nn = (dg[0] ?? 0) ** 2 + (dg[1] ?? 0) ** 2
+  const lam = Math.min(
+    1,
+    Math.max(0, -((d2.g[0] ?? 0) * (dg[0] ?? 0) + (d2.g[1] ?? 0) * (dg[1] ?? 0)) / nn),
+  )
+  const h = [0, 1, 2, 3].map((k) => lam * (d1.hess[k] ?? 0) + (1 - lam) * (d2.hess[k] ?? 0))
+  const r = [0, 1].map((i) => lam * (d1.g[i] ?? 0) + (1 - lam) * (d2.g[i] ?? 0))
+  // [dg₀ dg₁ 0; h₀₀ h₀₁ dg₀; h₁₀ h₁₁ dg₁] [dx₀ dx₁ dλ]ᵀ = −[P₁ − P₂, r₀, r₁]ᵀ
+  const j = [
+    dg[0] ?? 0,
+    dg[1] ?? 0,
+    0,
+    h[0] ?? 0,
+    h[1] ?? 0,
+    dg[0] ?? 0,
+    h[2] ?? 0,
+    h[3] ?? 0,
+    dg[1] ?? 0,
+  ]
+  const z = solve(j, [-(p1.value - p2.value), -(r[0] ?? 0), -(r[1] ?? 0)])
+  return z ? z.slice(0, 2) : null
+}
+
+/**
+ * Newton's method on the equal-peak optimality conditions from x (a rough optimum).
+ * @param pb the problem (the search's grid)
+ * @param start x = (ln f, ln ζ_a) and its objective value
+ * @returns the optimum with its value and the evaluations spent, converged: false when the method
+ *   gave up (the best point reached is still returned, never worse than the start)
+ */
+export function equalPeaks(pb: TuningProblem, start: Minimum): Minimum & { converged: boolean } {
+  let x = start.x
+  let current = peaksAt(pb, x)
+  let evaluations = 1
+  // Quadratic convergence: after a step under 1e-7 the next would be about 1e-14, below what the
+  // peaks' values can tell apart.
+  let last = Infinity
+  for (let it = 0; it < MAX_ITERATIONS; it++) {
+    let moved = false
+    for (const dx of newtonSteps(pb, x, current.top)) {
+      const size = Math.hypot(dx[0] ?? 0, dx[1] ?? 0)
+      if (size < 1e-9) return { x, value: current.value, evaluations, converged: true }
+      let t = size > 0.05 ? 0.05 / size : 1
+      for (let half = 0; half < 4 && !moved; half++, t /= 2) {
+        const y = x.map((v, k) => v + t * (dx[k] ?? 0))
+        const next = peaksAt(pb, y)
+        evaluations++
+        if (next.value > current.value) continue
+        x = y
+        current = next
+        moved = true
+        last = t * size
+      }
+      if (moved) break
+    }
+    if (!moved || last < 1e-7) break
+  }
+  return { x, value: current.value, evaluations, converged: last < 1e-7 }
+}
