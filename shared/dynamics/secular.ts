@@ -172,11 +172,11 @@ export function coupledEigenvalues(
 ): number[] {
   const { min = 0, max = Infinity, tolerance = 1e-14, unchanged = true } = options
   const invK = 1 / stiffness
-  const edges = [0, ...p.lambda]
   const out: number[] = unchanged ? p.unchanged.filter((x) => x >= min && x <= max) : []
-  for (let k = 0; k < edges.length; k++) {
-    const a = edges[k] ?? 0
-    let b = edges[k + 1] ?? Infinity
+  // Gap k lies between the poles 0, λ_1, λ_2, … numbered from 0 (the absorber's pole at 0).
+  for (let k = 0; k <= p.lambda.length; k++) {
+    const a = k === 0 ? 0 : (p.lambda[k - 1] ?? 0)
+    let b = p.lambda[k] ?? Infinity
     if (a >= max) break // every later gap lies above the range
     if (b === Infinity) {
       if (invK === 0) break
