@@ -160,24 +160,23 @@ function pairStep(
 }
 
 /**
- * Newton's method on the equal-peak optimality conditions from x (a rough optimum).
+ * Newton's method on the equal-peak optimality conditions from x (a start or a rough optimum).
  * @param pb the problem (the search's grid)
- * @param start x = (ln f, ln ζ_a) and its objective value
+ * @param start x = (ln f, ln ζ_a)
  * @returns the optimum with its value and the evaluations spent, converged: false when the method
  *   gave up (the best point reached is still returned, never worse than the start)
  */
-export function equalPeaks(pb: TuningProblem, start: Minimum): Minimum & { converged: boolean } {
-  let x = start.x
+export function equalPeaks(pb: TuningProblem, start: number[]): Minimum & { converged: boolean } {
+  let x = start
   let current = peaksAt(pb, x)
   let evaluations = 1
-  // Quadratic convergence: after a step under 1e-7 the next would be about 1e-14, below what the
-  // peaks' values can tell apart.
+  // Quadratic convergence: after a full step under 1e-8 the next would be about 1e-16, below what
+  // the peaks' values can tell apart.
   let last = Infinity
-  for (let it = 0; it < MAX_ITERATIONS; it++) {
+  for (let it = 0; it < MAX_ITERATIONS && last >= 1e-8; it++) {
     let moved = false
     for (const dx of newtonSteps(pb, x, current.top)) {
       const size = Math.hypot(dx[0] ?? 0, dx[1] ?? 0)
-      if (size < 1e-9) return { x, value: current.value, evaluations, converged: true }
       let t = size > 0.05 ? 0.05 / size : 1
       for (let half = 0; half < 4 && !moved; half++, t /= 2) {
         const y = x.map((v, k) => v + t * (dx[k] ?? 0))
@@ -187,11 +186,19 @@ export function equalPeaks(pb: TuningProblem, start: Minimum): Minimum & { conve
         x = y
         current = next
         moved = true
-        last = t * size
+        // a shortened step says nothing about convergence
+        last = t === 1 ? size : Infinity
       }
       if (moved) break
     }
-    if (!moved || last < 1e-7) break
+    if (!moved) break
   }
-  return { x, value: current.value, evaluations, converged: last < 1e-7 }
+  return { x, value: current.value, evaluations, converged: last < 1e-8 && balanced(current.top) }
+}
+
+/** The optimum's signature: no second peak near the top, or the top two equal to 1e-10. */
+function balanced(top: Peak[]): boolean {
+  const [p1, p2] = top
+  if (!p1 || !p2 || p2.value < p1.value * (1 - ACTIVE)) return true
+  return p1.value - p2.value <= 1e-10 * p1.value
 }

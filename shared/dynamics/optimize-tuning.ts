@@ -89,23 +89,30 @@ export function optimizeTuning(
     Math.log(start.t.frequencyRatio),
     Math.log(Math.max(start.t.dampingRatio, MIN_START_DAMPING)),
   ]
-  // A rough search that only finds the basin, then the optimum from there (below).
   const rough = { maxEvaluations, tolerance: ROUGH_TOLERANCE }
-  const first = nelderMead(f, x0, { step: [0.02, 0.15], ...rough })
   const fine = { maxEvaluations, tolerance: FINE_TOLERANCE }
-  // The peak: Newton's method on the equal-peak conditions from the rough optimum; where it does
-  // not converge (those conditions do not describe the optimum) the fine simplex as before, and
-  // the lower of the two.
-  const newton = objective === 'hinf' ? equalPeaks(searchProblem(pb), first) : null
-  const simplex = newton?.converged
-    ? null
-    : nelderMead(f, first.x, { step: [0.002, 0.02], ...fine })
-  const second = lowest([simplex, newton], first)
+  // The peak: Newton's method on the equal-peak conditions straight from the start; where it does
+  // not converge (those conditions do not describe the optimum, or the start is too far), a rough
+  // simplex that only finds the basin and Newton from there; where that does not converge either,
+  // the fine simplex restarted from the rough result. The lowest optimum found is kept.
+  const thin = objective === 'hinf' ? searchProblem(pb) : null
+  const direct = thin ? equalPeaks(thin, x0) : null
+  const first = direct?.converged ? direct : nelderMead(f, x0, { step: [0.02, 0.15], ...rough })
+  const newton = thin && !direct?.converged ? equalPeaks(thin, first.x) : null
+  const simplex =
+    direct?.converged || newton?.converged
+      ? null
+      : nelderMead(f, first.x, { step: [0.002, 0.02], ...fine })
+  const second = lowest([simplex, newton, direct], first)
   const searched = second.value <= first.value ? second : first
   const full = (x: number[]): number => cost(toTuning(x))
   const best = search === cost ? searched : onFullGrid(full, searched, fine)
   const evaluations =
-    count + first.evaluations + (newton?.evaluations ?? 0) + (simplex?.evaluations ?? 0)
+    count +
+    (direct?.evaluations ?? 0) +
+    (first === direct ? 0 : first.evaluations) +
+    (newton?.evaluations ?? 0) +
+    (simplex?.evaluations ?? 0)
   const spent = search === cost ? 0 : best.evaluations
   return best.value < start.value
     ? found(toTuning(best.x), best.value, evaluations + spent)
