@@ -4,9 +4,9 @@
  * takes too long today is reported as null with a note and the benchmark still ends.
  */
 import { fileURLToPath } from 'node:url'
-import type { SizingOutcome } from '../../workers/pool'
 import type { SizingJob } from '../../workers/sizing.worker'
 import type { EigenJob } from './eigen.worker'
+import type { TimedStudy } from './study.worker'
 import { benchNetwork, benchSizing, median } from './models'
 import { timedPool } from './timed-pool'
 
@@ -20,7 +20,10 @@ export interface EigenFigure {
 }
 export interface StudyFigure {
   n: number
+  /** wall time from the caller's side, as the server sees it */
   ms: number | null
+  /** CPU time of the evaluation itself (what other processes on the machine do not inflate) */
+  cpuMs: number | null
   note?: string
 }
 
@@ -55,7 +58,7 @@ export async function benchEigen(progress: (s: string) => void): Promise<EigenFi
 
 /** The worker pool's own task (evaluateSizing), timed from the caller's side as the server sees it. */
 export async function benchStudy(progress: (s: string) => void): Promise<StudyFigure[]> {
-  const pool = timedPool<SizingJob, SizingOutcome>(worker('../../workers/sizing.worker.ts'))
+  const pool = timedPool<SizingJob, TimedStudy>(worker('./study.worker.ts'))
   const job = (n: number): SizingJob => ({
     model: benchNetwork(n),
     input: benchSizing(n, { siteId: 1, modelId: 1 }),
@@ -65,17 +68,26 @@ export async function benchStudy(progress: (s: string) => void): Promise<StudyFi
     await pool.run(job(50), STUDY_BUDGET[50]!) // loads and compiles the worker
     for (const n of SIZES) {
       const times: number[] = []
+      const cpu: number[] = []
       let note: string | undefined
       for (let i = 0; i < RUNS[n]! && !note; i++) {
         const t0 = performance.now()
         const r = await pool.run(job(n), STUDY_BUDGET[n]!)
         if (r === null) note = `stopped after the ${STUDY_BUDGET[n]! / 1000} s budget`
-        else if (!r.ok) throw new Error(`study n=${n}: ${r.field}: ${r.message}`)
-        else times.push(performance.now() - t0)
+        else if (!r.outcome.ok)
+          throw new Error(`study n=${n}: ${r.outcome.field}: ${r.outcome.message}`)
+        else {
+          times.push(performance.now() - t0)
+          cpu.push(r.cpuMs)
+        }
         if (times[0]! > 5000) break // one run of a slow size is enough
       }
-      out.push(note ? { n, ms: null, note } : { n, ms: median(times) })
-      progress(`study n=${n}: ${note ?? `${median(times).toFixed(1)} ms`}`)
+      out.push(
+        note ? { n, ms: null, cpuMs: null, note } : { n, ms: median(times), cpuMs: median(cpu) },
+      )
+      progress(
+        `study n=${n}: ${note ?? `${median(times).toFixed(1)} ms, CPU ${median(cpu).toFixed(1)} ms`}`,
+      )
     }
   } finally {
     await pool.close()
