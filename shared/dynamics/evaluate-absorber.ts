@@ -6,7 +6,7 @@ import type { SizingContext } from './sizing-context'
 import {
   coupledFrequencies,
   exactMagnitude,
-  tuningProblem,
+  polesOf,
   type AbsorberValues,
 } from './tuning-objective'
 import type { UndampedResonance } from './undamped-modes'
@@ -54,7 +54,7 @@ export function evaluateAbsorber(ctx: SizingContext, a: AbsorberValues): Absorbe
   const mag = new Float64Array(omega.length)
   const stroke = new Float64Array(omega.length)
   absorberOnGrid(ctx.rec, a, ctx.measure, mag, stroke)
-  const extra = coupledFrequencies(tuningProblem(ctx.rec, ctx.omegaTarget, a.mass), a)
+  const extra = coupledFrequencies({ rec: ctx.rec, poles: polesOf(ctx.rec) }, a)
   const s = exactMagnitude(ctx.rec, a, ctx.measure, true)
   const peak = findPeak(omega, mag, exactMagnitude(ctx.rec, a, ctx.measure), { extra })
   return {
@@ -76,7 +76,7 @@ export function absorberPeak(ctx: SizingContext, a: AbsorberValues): Peak {
   if (unbounded) return { value: Infinity, omega: unbounded.omega }
   const mag = new Float64Array(ctx.rec.omega.length)
   absorberOnGrid(ctx.rec, a, ctx.measure, mag)
-  const extra = coupledFrequencies(tuningProblem(ctx.rec, ctx.omegaTarget, a.mass), a)
+  const extra = coupledFrequencies({ rec: ctx.rec, poles: polesOf(ctx.rec) }, a)
   return findPeak(ctx.rec.omega, mag, exactMagnitude(ctx.rec, a, ctx.measure), { extra })
 }
 

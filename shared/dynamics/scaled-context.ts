@@ -25,8 +25,11 @@ function scaledReceptance(
     for (let k = 0; k < 8; k++) out[k] = (out[k] ?? 0) / s
   }
   let values: Float64Array
-  if (scaledGrid) values = rec.values.map((x) => x / s)
-  else {
+  if (scaledGrid) {
+    // A plain loop: a typed array's map calls a function per element.
+    values = new Float64Array(rec.values.length)
+    for (let k = 0; k < values.length; k++) values[k] = (rec.values[k] ?? 0) / s
+  } else {
     values = new Float64Array(8 * grid.length)
     const tmp = new Float64Array(8)
     grid.forEach((w, k) => {

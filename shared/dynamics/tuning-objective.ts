@@ -53,10 +53,26 @@ export function tuningProblem(
   mass: number,
   measure: Measure = RECEPTANCE,
 ): TuningProblem {
-  const weight = rec.lambda.map((_, i) => (rec.participation[3 * i + 2] ?? 0) ** 2)
-  const poles = secularPoles(rec.lambda, weight)
   const mag = new Float64Array(rec.omega.length)
+  const poles = polesOf(rec)
   return { rec, omegaTarget, mass, mag, stroke: new Float64Array(mag.length), poles, measure }
+}
+
+const polesByReceptance = new WeakMap<HostReceptance, Poles>()
+
+/**
+ * The secular poles of a host at the attachment, once per set of host receptances (every
+ * candidate absorber and mass of a study reads the same).
+ * @param rec host receptances
+ */
+export function polesOf(rec: HostReceptance): Poles {
+  let poles = polesByReceptance.get(rec)
+  if (!poles) {
+    const weight = rec.lambda.map((_, i) => (rec.participation[3 * i + 2] ?? 0) ** 2)
+    poles = secularPoles(rec.lambda, weight)
+    polesByReceptance.set(rec, poles)
+  }
+  return poles
 }
 
 /**
@@ -92,7 +108,10 @@ export function exactMagnitude(
  * @param pb the problem
  * @param a absorber values
  */
-export function coupledFrequencies(pb: TuningProblem, a: AbsorberValues): number[] {
+export function coupledFrequencies(
+  pb: Pick<TuningProblem, 'rec' | 'poles'>,
+  a: AbsorberValues,
+): number[] {
   const { omega } = pb.rec
   const min = (omega[0] ?? 0) ** 2
   const max = (omega[omega.length - 1] ?? 0) ** 2
