@@ -80,6 +80,22 @@ function undampedBasis(g: Matrix, omega: number): number[][] {
   return out
 }
 
+const damped = new WeakMap<Float64Array, boolean>()
+
+/**
+ * Every modal damping ratio above twice NO_DAMPING: then every cluster's damping matrix, its
+ * modal part plus the dashpots' positive semi-definite one, has all its eigenvalues above the
+ * threshold and no mode can be undamped, whatever the band (a scaled host shares the ratios).
+ */
+function everyModeDamped(zeta: Float64Array): boolean {
+  let known = damped.get(zeta)
+  if (known === undefined) {
+    known = zeta.every((z) => z > 2 * NO_DAMPING)
+    damped.set(zeta, known)
+  }
+  return known
+}
+
 /** aᵀψ for ψ = Σ_k c_k φ_(from+k), with the participations of a given per mode. */
 function project(part: Float64Array, from: number, c: number[]): number {
   return c.reduce((s, x, k) => s + x * (part[from + k] ?? 0), 0)
@@ -101,6 +117,7 @@ export function hostUndampedResonance(
   band: Band,
   absorberActs: boolean,
 ): UndampedResonance | null {
+  if (everyModeDamped(prep.zeta)) return null
   const { n, phi, omega } = prep.modes
   const cr = Float64Array.from({ length: n }, (_, i) => part[3 * i] ?? 0)
   const cp = Float64Array.from({ length: n }, (_, i) => part[3 * i + 1] ?? 0)
