@@ -34,16 +34,21 @@ const toValues = (pb: TuningProblem, x: number[]) =>
     dampingRatio: Math.exp(x[1] ?? 0),
   })
 
-/** The response at ω(1+s) around a tuning x, from one exact host receptance per ω. */
-function responseNear(pb: TuningProblem, w: number): (s: number, x: number[]) => number {
+/**
+ * The response at ω(1 + (k − 1)·HW), k = 0, 1, 2, for the tuning (x₀, x₁), from one exact host
+ * receptance per frequency: plain numbers, as it runs 19 times per peak and Newton step.
+ */
+function responseNear(pb: TuningProblem, w: number): (k: number, x0: number, x1: number) => number {
   const h = new Float64Array(24)
   for (let k = 0; k < 3; k++) pb.rec.at(w * (1 + (k - 1) * HW), h.subarray(8 * k))
   const p: AbsorberPoint = { re: 0, im: 0, strokeRe: 0, strokeIm: 0 }
-  return (s, x) => {
-    const k = s < 0 ? 0 : s > 0 ? 2 : 1
+  const m = pb.mass
+  const pa = pb.measure.absorberLoad * m
+  return (k, x0, x1) => {
     const at = w * (1 + (k - 1) * HW)
-    const a = toValues(pb, x)
-    absorberAt(h, 8 * k, at, a.mass, a.stiffness, a.damping, pb.measure.absorberLoad * a.mass, p)
+    // absorberValues (tuning-objective.ts), inline
+    const wa = Math.exp(x0) * pb.omegaTarget
+    absorberAt(h, 8 * k, at, m, m * wa * wa, 2 * Math.exp(x1) * m * wa, pa, p)
     return measured(pb.measure, at, p.re, p.im)
   }
 }
@@ -51,18 +56,32 @@ function responseNear(pb: TuningProblem, w: number): (s: number, x: number[]) =>
 /** Gradient and Hessian (row-major 2×2) of a peak's value as a function of x. */
 function peakDerivatives(pb: TuningProblem, peak: Peak, x: number[]) {
   const F = responseNear(pb, peak.omega)
-  const e = (i: number, t: number) => x.map((v, k) => (k === i ? v + t : v))
-  const ee = (t0: number, t1: number) => [(x[0] ?? 0) + t0, (x[1] ?? 0) + t1]
-  const f0 = F(0, x)
-  const g = [0, 1].map((i) => (F(0, e(i, HX)) - F(0, e(i, -HX))) / (2 * HX))
-  const fxx = [0, 1].map((i) => (F(0, e(i, HX)) - 2 * f0 + F(0, e(i, -HX))) / (HX * HX))
+  const x0 = x[0] ?? 0
+  const x1 = x[1] ?? 0
+  const f0 = F(1, x0, x1)
+  const [p0, m0, p1, m1] = [
+    F(1, x0 + HX, x1),
+    F(1, x0 - HX, x1),
+    F(1, x0, x1 + HX),
+    F(1, x0, x1 - HX),
+  ]
+  const g = [(p0 - m0) / (2 * HX), (p1 - m1) / (2 * HX)]
+  const fxx = [(p0 - 2 * f0 + m0) / (HX * HX), (p1 - 2 * f0 + m1) / (HX * HX)]
   const fxy =
-    (F(0, ee(HX, HX)) - F(0, ee(HX, -HX)) - F(0, ee(-HX, HX)) + F(0, ee(-HX, -HX))) / (4 * HX * HX)
-  const fss = (F(1, x) - 2 * f0 + F(-1, x)) / (HW * HW)
-  const fsx = [0, 1].map(
-    (i) => (F(1, e(i, HX)) - F(1, e(i, -HX)) - F(-1, e(i, HX)) + F(-1, e(i, -HX))) / (4 * HW * HX),
-  )
-  const [s0, s1] = [fsx[0] ?? 0, fsx[1] ?? 0]
+    (F(1, x0 + HX, x1 + HX) -
+      F(1, x0 + HX, x1 - HX) -
+      F(1, x0 - HX, x1 + HX) +
+      F(1, x0 - HX, x1 - HX)) /
+    (4 * HX * HX)
+  const fss = (F(2, x0, x1) - 2 * f0 + F(0, x0, x1)) / (HW * HW)
+  const mixed = (d0: number, d1: number) =>
+    (F(2, x0 + d0, x1 + d1) -
+      F(2, x0 - d0, x1 - d1) -
+      F(0, x0 + d0, x1 + d1) +
+      F(0, x0 - d0, x1 - d1)) /
+    (4 * HW * HX)
+  const s0 = mixed(HX, 0)
+  const s1 = mixed(0, HX)
   const hess = [
     (fxx[0] ?? 0) - (s0 * s0) / fss,
     fxy - (s0 * s1) / fss,
