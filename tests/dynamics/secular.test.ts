@@ -68,6 +68,39 @@ describe('natural frequencies with the absorber from the secular equation', () =
     }
   })
 
+  // Source: g is increasing between consecutive poles (Golub, SIAM Review 15, 1973), so plain
+  // bisection on its sign is an independent reference for each root, however close the poles.
+  it('match bisection on the secular function to 1e-13 with nearly repeated host frequencies', () => {
+    for (let seed = 51; seed <= 70; seed++) {
+      const rnd = seeded(seed)
+      const lambda: number[] = []
+      let w = 0
+      for (let i = 0; i < 12; i++) {
+        w += (rnd() < 0.3 ? 1e-6 : 1) * (0.5 + 3 * rnd())
+        lambda.push(w * w)
+      }
+      const weight = lambda.map(() => (0.01 + rnd()) / 800)
+      const mass = 5 + 50 * rnd()
+      const stiffness = mass * (lambda[Math.floor(rnd() * 12)] ?? 1) * (0.6 + 0.8 * rnd())
+      const g = (x: number) =>
+        1 / stiffness -
+        1 / (x * mass) +
+        lambda.reduce((s, l, i) => s + (weight[i] ?? 0) / (l - x), 0)
+      const roots = coupledEigenvalues(secularPoles(lambda, weight), mass, stiffness)
+      const edges = [0, ...lambda, Infinity]
+      roots.slice(0, 12).forEach((root, k) => {
+        let lo = edges[k] ?? 0
+        let hi = edges[k + 1] ?? 0
+        for (let it = 0; it < 200 && hi - lo > 1e-15 * hi; it++) {
+          const mid = 0.5 * (lo + hi)
+          if (g(mid) < 0) lo = mid
+          else hi = mid
+        }
+        expect(Math.abs(root / (0.5 * (lo + hi)) - 1), `seed ${seed} root ${k}`).toBeLessThan(1e-13)
+      })
+    }
+  })
+
   // Source: docs/engineering/tuning.md#worked-example-five-masses — node 3 of a 5-mass chain is
   // a node of modes 2 and 4, which the absorber leaves unchanged.
   it('keeps the host modes the absorber does not see, and finds only the roots inside a range', () => {
