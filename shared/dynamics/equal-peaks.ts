@@ -127,7 +127,7 @@ function peaksAt(pb: TuningProblem, x: number[]): { value: number; top: Peak[] }
 }
 
 /** Newton steps in x, the likelier first: for the two highest peaks equal, for the highest alone. */
-function newtonSteps(pb: TuningProblem, x: number[], top: Peak[]): number[][] {
+function newtonSteps(pb: TuningProblem, x: number[], top: Peak[]): Step[] {
   const [p1, p2, p3] = top
   if (!p1) return []
   const d1 = peakDerivatives(pb, p1, x)
@@ -136,12 +136,18 @@ function newtonSteps(pb: TuningProblem, x: number[], top: Peak[]): number[][] {
     d1.hess,
     d1.g.map((v) => -v),
   )
-  const steps = single ? [single] : []
+  const steps: Step[] = single ? [{ dx: single, pair: false }] : []
   if (!p2 || p2.value < p1.value * (1 - ACTIVE)) return steps
   // A third peak near the top: the two-peak conditions do not describe the optimum.
   if (p3 && p3.value >= p1.value * (1 - ACTIVE)) return []
   const pair = pairStep(pb, x, p1, p2, d1)
-  return pair ? [pair, ...steps] : steps
+  return pair ? [{ dx: pair, pair: true }, ...steps] : steps
+}
+
+/** A Newton step, for two equal peaks or for the highest alone. */
+interface Step {
+  dx: number[]
+  pair: boolean
 }
 
 /** The Newton step for two equal peaks, or null. */
@@ -192,9 +198,10 @@ export function equalPeaks(pb: TuningProblem, start: number[]): Minimum & { conv
   // Quadratic convergence: after a full step under 1e-8 the next would be about 1e-16, below what
   // the peaks' values can tell apart.
   let last = Infinity
+  let pair = true
   for (let it = 0; it < MAX_ITERATIONS && last >= 1e-8; it++) {
     let moved = false
-    for (const dx of newtonSteps(pb, x, current.top)) {
+    for (const { dx, pair: both } of newtonSteps(pb, x, current.top)) {
       const size = Math.hypot(dx[0] ?? 0, dx[1] ?? 0)
       let t = size > 0.05 ? 0.05 / size : 1
       for (let half = 0; half < 4 && !moved; half++, t /= 2) {
@@ -207,12 +214,15 @@ export function equalPeaks(pb: TuningProblem, start: number[]): Minimum & { conv
         moved = true
         // a shortened step says nothing about convergence
         last = t === 1 ? size : Infinity
+        pair = both
       }
       if (moved) break
     }
     if (!moved) break
   }
-  return { x, value: current.value, evaluations, converged: last < 1e-8 && balanced(current.top) }
+  // Converged: the highest peak's own minimum (∇P₁ = 0, every step downhill), or equal peaks.
+  const converged = last < 1e-8 && (!pair || balanced(current.top))
+  return { x, value: current.value, evaluations, converged }
 }
 
 /** The optimum's signature: no second peak near the top, or the top two equal to 1e-10. */
