@@ -19,6 +19,13 @@ export interface DialogFormOptions<F, B> {
   failure?: ActionOptions['failure']
 }
 
+/** A dialog's visibility and what submitting its form runs, as BaseFormDialog takes them. */
+export interface DialogBinding {
+  visible: Ref<boolean>
+  show: (open: boolean) => unknown
+  action: { run: () => unknown; error: Ref<string>; pending: Ref<boolean> }
+}
+
 /**
  * A form in a dialog: fresh values and no old messages each time it opens, the shared schema
  * checked before anything is sent, and a 400's messages put beside the fields.
@@ -41,7 +48,7 @@ export function useDialogForm<F, B>(options: DialogFormOptions<F, B>) {
     { form: errors, failure: options.failure },
   )
   /** what BaseFormDialog shows and runs */
-  const dialog = {
+  const dialog: DialogBinding = {
     visible: options.visible,
     show: (open: boolean) => (options.visible.value = open),
     action: save,

@@ -36,3 +36,6 @@ export function usePagedList<T>(
   const total = computed(() => data.value.total)
   return { items, total, first, rows, loading, load, reload, onPage }
 }
+
+/** What `usePagedList` gives: the page shown and the paginator's bindings. */
+export type PagedList<T> = ReturnType<typeof usePagedList<T>>

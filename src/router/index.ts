@@ -1,4 +1,9 @@
-import { createRouter, createWebHistory, type RouteRecordRaw } from 'vue-router'
+import {
+  createRouter,
+  createWebHistory,
+  type RouteComponent,
+  type RouteRecordRaw,
+} from 'vue-router'
 import { isPublicPage, mayOpen, type PageName, type PublicPage } from '@shared/access'
 import { useAuthStore } from '@/stores/auth'
 import { STEP_PATTERN } from '@/features/sizing/steps'
@@ -12,173 +17,53 @@ declare module 'vue-router' {
   }
 }
 
-const routes: (RouteRecordRaw & { name: RouteName })[] = [
-  {
-    path: '/',
-    name: 'home',
-    component: () => import('@/views/HomeView.vue'),
-    meta: { title: 'Overview' },
-  },
-  {
-    path: '/sign-in',
-    name: 'sign-in',
-    component: () => import('@/views/SignInView.vue'),
-    meta: { title: 'Sign in' },
-  },
-  {
-    path: '/set-password',
-    name: 'set-password',
-    component: () => import('@/views/SetPasswordView.vue'),
-    meta: { title: 'Set password' },
-  },
-  {
-    path: '/forgot-password',
-    name: 'forgot-password',
-    component: () => import('@/views/ForgotPasswordView.vue'),
-    meta: { title: 'Forgot password' },
-  },
-  {
-    path: '/admin/users',
-    name: 'admin-users',
-    component: () => import('@/views/AdminUsersView.vue'),
-    meta: { title: 'Users' },
-  },
-  {
-    path: '/admin/refunds',
-    name: 'admin-refunds',
-    component: () => import('@/views/PaymentRefundsView.vue'),
-    meta: { title: 'Second payments' },
-  },
-  {
-    path: '/admin/tax',
-    name: 'admin-tax',
-    component: () => import('@/views/AdminTaxView.vue'),
-    meta: { title: 'Tax rates' },
-  },
-  {
-    path: '/admin/audit',
-    name: 'admin-audit',
-    component: () => import('@/views/AdminAuditView.vue'),
-    meta: { title: 'Audit trail' },
-  },
-  {
-    path: '/portal',
-    name: 'portal',
-    component: () => import('@/views/PortalView.vue'),
-    meta: { title: 'Your quotes' },
-  },
-  {
-    path: '/portal/quotes/:id',
-    name: 'portal-quote',
-    component: () => import('@/views/PortalQuoteView.vue'),
-    meta: { title: 'Quote' },
-  },
-  {
-    path: '/portal/payment/done',
-    name: 'portal-payment-done',
-    component: () => import('@/views/PaymentDoneView.vue'),
-    meta: { title: 'Payment' },
-  },
-  {
-    path: '/sites',
-    name: 'sites',
-    component: () => import('@/views/SitesView.vue'),
-    meta: { title: 'Sites' },
-  },
-  {
-    path: '/sites/:id(\\d+)',
-    name: 'site',
-    component: () => import('@/views/SiteView.vue'),
-    props: true,
-    meta: { title: 'Site' },
-  },
-  {
-    path: '/sites/:id(\\d+)/records',
-    name: 'site-records',
-    component: () => import('@/views/SiteRecordsView.vue'),
-    props: true,
-    meta: { title: 'Measurements' },
-  },
-  {
-    path: '/sizings',
-    name: 'sizings',
-    component: () => import('@/features/sizing/SizingsView.vue'),
-    meta: { title: 'Sizings' },
-  },
-  {
-    path: `/sizings/new/${STEP_PATTERN}`,
-    name: 'sizing-new',
-    component: () => import('@/features/sizing/SizingWorkspaceView.vue'),
-    props: true,
-    meta: { title: 'New sizing' },
-  },
-  {
-    path: `/sizings/:id(\\d+)/${STEP_PATTERN}`,
-    name: 'sizing',
-    component: () => import('@/features/sizing/SizingWorkspaceView.vue'),
-    props: true,
-    meta: { title: 'Sizing' },
-  },
-  {
-    path: '/work-orders',
-    name: 'work-orders',
-    component: () => import('@/views/WorkOrdersView.vue'),
-    meta: { title: 'Work orders' },
-  },
-  {
-    path: '/work-orders/:id',
-    name: 'work-order',
-    component: () => import('@/views/WorkOrderView.vue'),
-    meta: { title: 'Work order' },
-  },
-  {
-    path: '/quotes',
-    name: 'quotes',
-    component: () => import('@/views/QuoteListView.vue'),
-    meta: { title: 'Quotes' },
-  },
-  {
-    path: '/quotes/new',
-    name: 'quote-new',
-    component: () => import('@/views/QuoteBuilderView.vue'),
-    meta: { title: 'New quote' },
-  },
-  {
-    path: '/quotes/:id(\\d+)',
-    name: 'quote',
-    component: () => import('@/views/QuoteDetailView.vue'),
-    meta: { title: 'Quote' },
-  },
-  {
-    path: '/quotes/:id(\\d+)/edit',
-    name: 'quote-edit',
-    component: () => import('@/views/QuoteBuilderView.vue'),
-    meta: { title: 'Change quote' },
-  },
-  {
-    path: '/admin/catalogue',
-    name: 'catalogue',
-    component: () => import('@/views/CatalogueListView.vue'),
-    meta: { title: 'Catalogue' },
-  },
-  {
-    path: '/customers',
-    name: 'customers',
-    component: () => import('@/views/CustomerListView.vue'),
-    meta: { title: 'Customers' },
-  },
-  {
-    path: '/customers/:id(\\d+)',
-    name: 'customer',
-    component: () => import('@/views/CustomerDetailView.vue'),
-    meta: { title: 'Customer' },
-  },
-  {
-    path: '/:rest(.*)*',
-    name: 'not-found',
-    component: () => import('@/views/NotFoundView.vue'),
-    meta: { title: 'Not found' },
-  },
+/** Every view a route shows, by file name, each loaded the first time its page opens. */
+const VIEWS = Object.fromEntries(
+  Object.entries(
+    import.meta.glob<RouteComponent>(['@/views/*View.vue', '@/features/*/*View.vue'], {
+      import: 'default',
+    }),
+  ).map(([file, load]) => [file.replace(/^.*\/|\.vue$/g, ''), load]),
+)
+
+/**
+ * One page: its name, address, title in the browser tab and the view (a file name under
+ * src/views or a feature's folder); `props` hands the address's parameters to the view.
+ */
+function page(name: RouteName, path: string, title: string, view: string, props = false) {
+  const component = VIEWS[view]
+  if (!component) throw new Error(`No view ${view} for the page ${name}`)
+  return { name, path, component, props, meta: { title } } satisfies RouteRecordRaw
+}
+
+const routes = [
+  page('home', '/', 'Overview', 'HomeView'),
+  page('sign-in', '/sign-in', 'Sign in', 'SignInView'),
+  page('set-password', '/set-password', 'Set password', 'SetPasswordView'),
+  page('forgot-password', '/forgot-password', 'Forgot password', 'ForgotPasswordView'),
+  page('admin-users', '/admin/users', 'Users', 'AdminUsersView'),
+  page('admin-refunds', '/admin/refunds', 'Second payments', 'PaymentRefundsView'),
+  page('admin-tax', '/admin/tax', 'Tax rates', 'AdminTaxView'),
+  page('admin-audit', '/admin/audit', 'Audit trail', 'AdminAuditView'),
+  page('portal', '/portal', 'Your quotes', 'PortalView'),
+  page('portal-quote', '/portal/quotes/:id', 'Quote', 'PortalQuoteView'),
+  page('portal-payment-done', '/portal/payment/done', 'Payment', 'PaymentDoneView'),
+  page('sites', '/sites', 'Sites', 'SitesView'),
+  page('site', '/sites/:id(\\d+)', 'Site', 'SiteView', true),
+  page('site-records', '/sites/:id(\\d+)/records', 'Measurements', 'SiteRecordsView', true),
+  page('sizings', '/sizings', 'Sizings', 'SizingsView'),
+  page('sizing-new', `/sizings/new/${STEP_PATTERN}`, 'New sizing', 'SizingWorkspaceView', true),
+  page('sizing', `/sizings/:id(\\d+)/${STEP_PATTERN}`, 'Sizing', 'SizingWorkspaceView', true),
+  page('work-orders', '/work-orders', 'Work orders', 'WorkOrdersView'),
+  page('work-order', '/work-orders/:id', 'Work order', 'WorkOrderView'),
+  page('quotes', '/quotes', 'Quotes', 'QuoteListView'),
+  page('quote-new', '/quotes/new', 'New quote', 'QuoteBuilderView'),
+  page('quote', '/quotes/:id(\\d+)', 'Quote', 'QuoteDetailView'),
+  page('quote-edit', '/quotes/:id(\\d+)/edit', 'Change quote', 'QuoteBuilderView'),
+  page('catalogue', '/admin/catalogue', 'Catalogue', 'CatalogueListView'),
+  page('customers', '/customers', 'Customers', 'CustomerListView'),
+  page('customer', '/customers/:id(\\d+)', 'Customer', 'CustomerDetailView'),
+  page('not-found', '/:rest(.*)*', 'Not found', 'NotFoundView'),
 ]
 
 export const router = createRouter({ history: createWebHistory(), routes })
