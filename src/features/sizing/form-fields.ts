@@ -118,6 +118,24 @@ export function unitQuantities(i: number) {
   }
 }
 
+/** Plausible modal damping ratios of a host structure, 0–20 % (common practice). */
+const HOST_DAMPING_RANGE = [0, 0.2] as const
+
+/** The host's damping: one ratio for every mode, or mode i's (its label names its frequency). */
+export const HOST_DAMPING = {
+  every: field('host-damping', 'Every mode', 'percent', 'definition.hostDampingRatio', {
+    range: HOST_DAMPING_RANGE,
+  }),
+  mode: (i: number, hz: number | undefined) =>
+    field(
+      `host-damping-${i + 1}`,
+      `Damping of mode ${i + 1}${hz ? ` (${hz.toFixed(2)} Hz)` : ''}`,
+      'percent',
+      `definition.hostDampingRatio.${i}`,
+      { range: HOST_DAMPING_RANGE },
+    ),
+}
+
 /** A number cell of a table row: its label is for screen readers and the tests, not shown. */
 export type QuantityCell = Omit<QuantityField, 'inputId'> & { compact: true }
 
@@ -130,6 +148,12 @@ const cell = (label: string, kind: FieldKind, path: string, optional?: true): Qu
 })
 const springPath = (i: number, key: string) => `definition.springs.${i}.${key}`
 
+/** Force i of a force vector (the browser tests find it by its id). */
+export const forceCell = (i: number) => ({
+  ...cell(`Force ${i + 1}`, 'force', `input.forces.${i}.amplitude`),
+  inputId: `force-amplitude-${i + 1}`,
+})
+
 /** The number cells of the structure tables: node i's mass, spring i's stiffness and dashpot. */
 export const STRUCTURE_CELLS = {
   mass: (i: number, id: string) => cell(`Mass of ${id}`, 'mass', `definition.nodes.${i}.mass`),
@@ -140,15 +164,23 @@ export const STRUCTURE_CELLS = {
     cell(`Dashpot of spring ${i + 1}`, 'damping', springPath(i, 'damping'), true),
 }
 
+const choice = (inputId: string, label: string) => ({ inputId, label })
+
 /**
  * The drop-downs of the sizing steps, bound with `v-bind` on a SizingChoice: the id the browser
  * tests find each by, and its label.
  */
 export const SIZING_CHOICES = {
-  loadKind: { inputId: 'load-kind', label: 'Kind of load' },
-  loadPreset: { inputId: 'load-preset', label: 'Force' },
-  loadMode: { inputId: 'load-mode', label: 'Shaped like' },
-  limitQuantity: { inputId: 'limit-quantity', label: 'Quantity' },
-  relativeToNode: { inputId: 'relative-to-node', label: 'The absorber acts on' },
-  tuning: { inputId: 'tuning', label: 'Tuning' },
-} as const
+  loadKind: choice('load-kind', 'Kind of load'),
+  loadPreset: choice('load-preset', 'Force'),
+  loadMode: choice('load-mode', 'Shaped like'),
+  limitQuantity: choice('limit-quantity', 'Quantity'),
+  relativeToNode: choice('relative-to-node', 'The absorber acts on'),
+  tuning: choice('tuning', 'Tuning'),
+  absorberNode: choice('absorber-node', 'Attachment node'),
+  excitationNode: choice('excitation-node', 'Where it acts (excitation node)'),
+  responseNode: choice('response-node', 'Response node'),
+}
+
+/** The structure's nodes as the options of a drop-down, each shown by its id. */
+export const nodeOptions = (ids: readonly string[]) => ids.map((id) => ({ label: id, value: id }))
