@@ -2,29 +2,15 @@ import { beforeEach, describe, expect, it } from 'vitest'
 import { defineComponent, h } from 'vue'
 import { mount } from '@vue/test-utils'
 import PrimeVue from 'primevue/config'
-import { createPinia, setActivePinia } from 'pinia'
-import { newDraft } from '../../src/features/sizing/draft'
-import { useSizingDraftStore } from '../../src/features/sizing/draft-store'
 import { provideFormErrors } from '../../src/forms/form-errors'
-import { useAuthStore } from '../../src/stores/auth'
+import { openNewDraft } from '../helpers/sizing-draft'
 import SizingWorkspaceStructureTable from '../../src/features/sizing/components/SizingWorkspaceStructureTable.vue'
 
 const SpringEnd = { render: () => h('span') }
 
 /** The structure tables of a fresh draft, as the structure step shows them. */
 function tables(readOnly = false) {
-  const pinia = createPinia()
-  setActivePinia(pinia)
-  useAuthStore().user = {
-    id: 52,
-    email: 'engineer52@example.test',
-    name: 'Engineer 52',
-    role: 'engineer',
-    companyId: null,
-    companyName: null,
-  }
-  const store = useSizingDraftStore()
-  store.open(newDraft(4, '2026-01-05T08:00:00.000Z'))
+  const { pinia, store } = openNewDraft(52, 4)
   const selected: string[] = []
   const Host = defineComponent({
     setup() {
