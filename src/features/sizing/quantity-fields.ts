@@ -13,8 +13,7 @@ export interface QuantityField {
   optional?: boolean
 }
 
-/** A number field of the sizing form. */
-export const field = (
+const field = (
   inputId: string,
   label: string,
   kind: FieldKind,
@@ -135,52 +134,3 @@ export const HOST_DAMPING = {
       { range: HOST_DAMPING_RANGE },
     ),
 }
-
-/** A number cell of a table row: its label is for screen readers and the tests, not shown. */
-export type QuantityCell = Omit<QuantityField, 'inputId'> & { compact: true }
-
-const cell = (label: string, kind: FieldKind, path: string, optional?: true): QuantityCell => ({
-  compact: true,
-  label,
-  kind,
-  path,
-  optional,
-})
-const springPath = (i: number, key: string) => `definition.springs.${i}.${key}`
-
-/** Force i of a force vector (the browser tests find it by its id). */
-export const forceCell = (i: number) => ({
-  ...cell(`Force ${i + 1}`, 'force', `input.forces.${i}.amplitude`),
-  inputId: `force-amplitude-${i + 1}`,
-})
-
-/** The number cells of the structure tables: node i's mass, spring i's stiffness and dashpot. */
-export const STRUCTURE_CELLS = {
-  mass: (i: number, id: string) => cell(`Mass of ${id}`, 'mass', `definition.nodes.${i}.mass`),
-  stiffness: (i: number) =>
-    cell(`Stiffness of spring ${i + 1}`, 'stiffness', springPath(i, 'stiffness')),
-  /** an empty dashpot means none */
-  damping: (i: number) =>
-    cell(`Dashpot of spring ${i + 1}`, 'damping', springPath(i, 'damping'), true),
-}
-
-const choice = (inputId: string, label: string) => ({ inputId, label })
-
-/**
- * The drop-downs of the sizing steps, bound with `v-bind` on a SizingChoice: the id the browser
- * tests find each by, and its label.
- */
-export const SIZING_CHOICES = {
-  loadKind: choice('load-kind', 'Kind of load'),
-  loadPreset: choice('load-preset', 'Force'),
-  loadMode: choice('load-mode', 'Shaped like'),
-  limitQuantity: choice('limit-quantity', 'Quantity'),
-  relativeToNode: choice('relative-to-node', 'The absorber acts on'),
-  tuning: choice('tuning', 'Tuning'),
-  absorberNode: choice('absorber-node', 'Attachment node'),
-  excitationNode: choice('excitation-node', 'Where it acts (excitation node)'),
-  responseNode: choice('response-node', 'Response node'),
-}
-
-/** The structure's nodes as the options of a drop-down, each shown by its id. */
-export const nodeOptions = (ids: readonly string[]) => ids.map((id) => ({ label: id, value: id }))
