@@ -10,7 +10,10 @@ import SizingUnitsEditorRow from '../../src/features/sizing/components/SizingUni
 
 /** A drop-down stand-in (jsdom has no matchMedia for PrimeVue's): it shows its id and value. */
 const Choice = defineComponent({
-  props: { inputId: String, modelValue: [String, Number] },
+  props: {
+    inputId: { type: String, default: '' },
+    modelValue: { type: [String, Number], default: '' },
+  },
   emits: ['update:modelValue'],
   setup: (props) => () => h('span', { id: props.inputId }, String(props.modelValue)),
 })
@@ -28,7 +31,7 @@ const sized = {
 function row(unit: SizingUnit) {
   const { pinia, store } = openNewDraft(53, 5)
   store.setChoices({ absorbers: [unit] })
-  const Host = defineComponent({
+  const Host = {
     setup() {
       provideFormErrors()
       return () =>
@@ -41,13 +44,14 @@ function row(unit: SizingUnit) {
           disabled: false,
         })
     },
-  })
+  }
   const wrapper = mount(Host, {
     global: { plugins: [PrimeVue, pinia], stubs: { BaseSelect: Choice } },
     attachTo: document.body,
   })
+  /** the drop-down of the field with this id */
   const choice = (id: string) =>
-    wrapper.findAllComponents(Choice).find((c) => c.props().inputId === id)!
+    wrapper.findAllComponents(Choice).find((c) => c.props('inputId') === id)!
   return { wrapper, choice, unit: () => store.current!.form.absorbers![0] }
 }
 
