@@ -1,4 +1,4 @@
-import { computed } from 'vue'
+import { computed, type WritableComputedRef } from 'vue'
 import type { SizingForm } from './draft'
 import { useSizingDraftStore } from './draft-store'
 
@@ -15,6 +15,16 @@ export function fieldModel<T, K extends keyof T>(
     get: () => read()[key],
     set: (value: T[K]) => write({ [key]: value } as unknown as Partial<T>),
   })
+}
+
+/** `fieldModel` for several fields of one value: `{ [key]: model }`, to destructure. */
+export function fieldModels<T, K extends keyof T>(
+  read: () => T,
+  keys: readonly K[],
+  write: (change: Partial<T>) => void,
+) {
+  const models = keys.map((key) => [key, fieldModel(read, key, write)] as const)
+  return Object.fromEntries(models) as { [P in K]: WritableComputedRef<T[P]> }
 }
 
 /**
