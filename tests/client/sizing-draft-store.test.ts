@@ -1,28 +1,10 @@
 import { beforeEach, describe, expect, it } from 'vitest'
 import { nextTick } from 'vue'
-import { createPinia, setActivePinia } from 'pinia'
-import type { CurrentUser } from '../../shared/schemas/auth'
 import { newDraft } from '../../src/features/sizing/draft'
-import { useSizingDraftStore } from '../../src/features/sizing/draft-store'
-import { useAuthStore } from '../../src/stores/auth'
-
-const engineer = (id: number): CurrentUser => ({
-  id,
-  email: `engineer${id}@example.test`,
-  name: `Engineer ${id}`,
-  role: 'engineer',
-  companyId: null,
-  companyName: null,
-})
+import { openNewDraft } from '../helpers/sizing-draft'
 
 /** A fresh app state signed in as the given user, with the draft of a new sizing open. */
-function signedIn(userId: number) {
-  setActivePinia(createPinia())
-  useAuthStore().user = engineer(userId)
-  const store = useSizingDraftStore()
-  store.open(newDraft(7, '2026-01-05T08:00:00.000Z'))
-  return store
-}
+const signedIn = (userId: number) => openNewDraft(userId, 7).store
 
 const kept = (userId: number) =>
   JSON.parse(localStorage.getItem(`quellnode.sizingDrafts.${userId}`) ?? '{}') as Record<

@@ -1,22 +1,10 @@
 import { beforeEach, describe, expect, it } from 'vitest'
-import { createPinia, setActivePinia } from 'pinia'
 import { SizingInputSchema } from '../../shared/schemas/sizing'
-import { formOf, newDraft, toSizingInput } from '../../src/features/sizing/draft'
-import { useSizingDraftStore } from '../../src/features/sizing/draft-store'
-import { useAuthStore } from '../../src/stores/auth'
+import { formOf, toSizingInput } from '../../src/features/sizing/draft'
+import { openNewDraft } from '../helpers/sizing-draft'
 
 function store() {
-  setActivePinia(createPinia())
-  useAuthStore().user = {
-    id: 51,
-    email: 'engineer51@example.test',
-    name: 'Engineer 51',
-    role: 'engineer',
-    companyId: null,
-    companyName: null,
-  }
-  const s = useSizingDraftStore()
-  s.open(newDraft(3, '2026-01-05T08:00:00.000Z'))
+  const { store: s } = openNewDraft(51, 3)
   s.setChoices({ absorberNode: 'node-2', excitationNode: 'node-2', responseNode: 'node-2' })
   return s
 }

@@ -4,6 +4,7 @@ import type { ModelDefinition } from '@shared/schemas/sizing'
 import type { SizingDraft, SizingForm } from './draft'
 import * as structure from './structure-edits'
 import * as units from './unit-edits'
+import { patch } from './patch'
 import type { SizingUnit } from '@shared/schemas/sizing-units'
 
 /**
@@ -29,12 +30,7 @@ export function draftActions(current: ComputedRef<SizingDraft | undefined>, lock
   return {
     /** Sets choices of the form; a choice given as undefined is removed (the band, say). */
     setChoices(change: Partial<SizingForm>) {
-      edit((d) => {
-        for (const [k, v] of Object.entries(change) as [keyof SizingForm, unknown][]) {
-          if (v === undefined) delete d.form[k]
-          else Object.assign(d.form, { [k]: v })
-        }
-      })
+      edit((d) => patch(d.form, change))
     },
     /** Attaches the absorber at a node; empty excitation and response nodes follow it. */
     attachAt(id: string) {

@@ -2,7 +2,7 @@ import { defineStore } from 'pinia'
 import { computed, ref, watch } from 'vue'
 import { useLocalStorage, useOnline } from '@vueuse/core'
 import { useAuthStore } from '@/stores/auth'
-import type { SizingDraft, SizingForm } from './draft'
+import type { SizingDraft } from './draft'
 import { draftActions } from './draft-actions'
 
 /** Drafts are kept per user, so a tablet passed to a colleague never shows the previous user's. */
@@ -102,15 +102,3 @@ export const useSizingDraftStore = defineStore('sizingDraft', () => {
     ...draftActions(current, locked),
   }
 })
-
-/**
- * One choice of the form, for `v-model` on a child that edits it: it reads the draft shown and
- * writes through the store's `setChoices` (ignored on a read-only sizing).
- */
-export function choiceModel<K extends keyof SizingForm>(draft: () => SizingDraft, key: K) {
-  const store = useSizingDraftStore()
-  return computed({
-    get: () => draft().form[key],
-    set: (value: SizingForm[K]) => store.setChoices({ [key]: value } as Partial<SizingForm>),
-  })
-}

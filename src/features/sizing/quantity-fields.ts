@@ -22,6 +22,12 @@ const field = (
 ): QuantityField => ({ inputId, label, kind, path, ...more })
 
 /**
+ * Usual mass ratios: floors and footbridges 1–5 %, machinery up to about 25 % (common practice);
+ * the schema allows 0.1–50 % and anything else is warned about, not clamped.
+ */
+const MASS_RATIO_RANGE = [0.005, 0.25] as const
+
+/**
  * The number fields of the sizing steps, each written once: its id (the browser tests find it by
  * it), label, unit kind, validation path, hint and plausible range.
  */
@@ -62,6 +68,17 @@ export const SIZING_QUANTITIES = {
       hint: 'e.g. 25 mm; empty for none. The optimiser keeps the stroke at the design load within it',
     },
   ),
+  massRatio: field('mass-ratio', 'Mass ratio', 'percent', 'input.massRatio', {
+    range: MASS_RATIO_RANGE,
+    hint: "of the target mode's effective mass",
+  }),
+  detuningTolerance: field(
+    'detuning-tolerance',
+    'Detuning tolerance of the host frequency (±)',
+    'percent',
+    'input.detuningTolerance',
+    { range: [0, 0.2], hint: 'for the robustness check in the results' },
+  ),
   bandMin: field('band-min', 'From', 'frequency', 'input.band.minHz'),
   bandMax: field('band-max', 'To', 'frequency', 'input.band.maxHz'),
   tuningRatio: field(
@@ -80,3 +97,40 @@ export const SIZING_QUANTITIES = {
     { range: [0, 0.4] },
   ),
 } satisfies Record<string, QuantityField>
+
+/** The number fields of further absorber i: `absorbers[i]`, absorber i + 2 on the screen. */
+export function unitQuantities(i: number) {
+  const n = i + 2
+  const path = (key: string) => `input.absorbers.${i}.${key}`
+  return {
+    massRatio: field(
+      `unit-${n}-ratio`,
+      `Mass ratio of absorber ${n}`,
+      'percent',
+      path('massRatio'),
+      {
+        range: MASS_RATIO_RANGE,
+        hint: "of its mode's effective mass at its node",
+      },
+    ),
+    mass: field(`unit-${n}-mass`, `Mass of absorber ${n}`, 'mass', path('mass')),
+  }
+}
+
+/** Plausible modal damping ratios of a host structure, 0–20 % (common practice). */
+const HOST_DAMPING_RANGE = [0, 0.2] as const
+
+/** The host's damping: one ratio for every mode, or mode i's (its label names its frequency). */
+export const HOST_DAMPING = {
+  every: field('host-damping', 'Every mode', 'percent', 'definition.hostDampingRatio', {
+    range: HOST_DAMPING_RANGE,
+  }),
+  mode: (i: number, hz: number | undefined) =>
+    field(
+      `host-damping-${i + 1}`,
+      `Damping of mode ${i + 1}${hz ? ` (${hz.toFixed(2)} Hz)` : ''}`,
+      'percent',
+      `definition.hostDampingRatio.${i}`,
+      { range: HOST_DAMPING_RANGE },
+    ),
+}

@@ -1,18 +1,11 @@
 import type { NodeInput, SpringInput } from '@shared/schemas/model'
 import type { ModelDefinition } from '@shared/schemas/sizing'
+import { patch } from './patch'
 
 /** Stiffness of a new spring, N/m: a stiff floor-to-floor link, to be edited. */
 const NEW_STIFFNESS = 1e7
 /** Mass of a new node, kg. */
 const NEW_MASS = 1000
-
-/** Sets or, given undefined, removes fields of an object (no `undefined` left in a model). */
-function patch<T extends object>(target: T, change: Partial<T>) {
-  for (const [k, v] of Object.entries(change) as [keyof T, T[keyof T] | undefined][]) {
-    if (v === undefined) delete target[k]
-    else target[k] = v
-  }
-}
 
 /** Renames a node and every spring end that named it. */
 export function renameNode(d: ModelDefinition, index: number, id: string) {

@@ -1,5 +1,6 @@
 import type { SizingUnit } from '@shared/schemas/sizing-units'
 import type { SizingForm } from './draft'
+import { patch } from './patch'
 
 /** Usual mass ratio of a further unit when added (common practice: 1–5 % on floors and spans). */
 const NEW_UNIT_RATIO = 0.02
@@ -24,11 +25,7 @@ export function addUnit(form: SizingForm, modeCount: number) {
 /** Changes unit i; a key given as undefined is removed (a mass ratio when a mass is given). */
 export function setUnit(form: SizingForm, i: number, change: Partial<SizingUnit>) {
   const unit = form.absorbers?.[i]
-  if (!unit) return
-  for (const [k, v] of Object.entries(change) as [keyof SizingUnit, unknown][]) {
-    if (v === undefined) delete unit[k]
-    else Object.assign(unit, { [k]: v })
-  }
+  if (unit) patch(unit, change)
 }
 
 /** Removes unit i; the list goes when empty, so the sizing is a single absorber again. */
