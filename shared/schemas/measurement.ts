@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { IdSchema, IndexSchema } from './ids'
+import { IdSchema, IndexSchema, RowIdSchema, TimestampSchema } from './ids'
 import type {
   ChannelDirection,
   IdentificationResult,
@@ -44,7 +44,7 @@ export const CalibrateSchema = z.object({
   mode: z.number().int().min(1, 'modes are numbered from 1 (the lowest)'),
   /** Hz */
   measuredHz: z.number().positive('must be above zero'),
-  recordId: z.number().int().positive().optional(),
+  recordId: RowIdSchema.positive().optional(),
   dampingRatio: z.number().min(0).lt(1, 'must be below 1').optional(),
 })
 export type CalibrateInput = z.infer<typeof CalibrateSchema>
@@ -55,7 +55,7 @@ export type CalibrateInput = z.infer<typeof CalibrateSchema>
  * does not change what the sizing was based on.
  */
 export const SizingRecordLinkSchema = z.object({
-  recordId: z.number().int().positive(),
+  recordId: RowIdSchema.positive(),
   peaks: z
     .array(
       z.object({
@@ -84,11 +84,11 @@ export type RecordChannelInfo = z.infer<typeof RecordChannelInfoSchema>
 
 /** A stored record as listed. */
 export const MeasurementRecordSummarySchema = z.object({
-  id: z.number().int(),
-  siteId: z.number().int(),
-  modelId: z.number().int().nullable(),
+  id: RowIdSchema,
+  siteId: RowIdSchema,
+  modelId: RowIdSchema.nullable(),
   nodeId: z.string().nullable(),
-  ownerId: z.number().int(),
+  ownerId: RowIdSchema,
   ownerName: z.string(),
   filename: z.string(),
   size: z.number().int(),
@@ -103,7 +103,7 @@ export const MeasurementRecordSummarySchema = z.object({
   timeUnit: z.custom<TimeUnit>((v) => v === 's' || v === 'ms').nullable(),
   timeUnitSource: z.custom<TimeUnitSource>((v) => typeof v === 'string').nullable(),
   analysisCount: z.number().int(),
-  createdAt: z.string(),
+  createdAt: TimestampSchema,
 })
 export type MeasurementRecordSummary = z.infer<typeof MeasurementRecordSummarySchema>
 
