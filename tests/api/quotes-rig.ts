@@ -1,4 +1,6 @@
 import { randomBytes } from 'node:crypto'
+import type { Agent } from 'supertest'
+import { afterAll, beforeAll } from 'vitest'
 import { pino } from 'pino'
 import { createApp } from '../../server/app'
 import { smtpMailer } from '../../server/integrations/mail'
@@ -8,6 +10,7 @@ import type { SizingPool } from '../../server/workers/pool'
 import type { SizingSummary } from '../../shared/schemas/sizing'
 import { seedCatalogue } from '../../seed/seed-catalogue'
 import { makeTestApp, type TestApp } from '../helpers/app'
+import { signedIn } from '../helpers/factories'
 
 /** Quotes never solve a sizing; a call here would be a wiring mistake worth a loud failure. */
 export const noSolving: SizingPool = {
@@ -118,10 +121,8 @@ export function daysFromNow(t: TestApp, n: number) {
   return new Date(Date.now() + t.clock.offsetMs + n * 86_400_000).toISOString().slice(0, 10)
 }
 
-type AgentLike = import('supertest').Agent
-
 /** A fresh customer company with one contact, made through the API as sales would. */
-export async function customerWithContact(agent: AgentLike) {
+export async function customerWithContact(agent: Agent) {
   const tag = randomBytes(3).toString('hex')
   const company = await agent
     .post('/api/customers')
@@ -138,7 +139,7 @@ export async function customerWithContact(agent: AgentLike) {
 }
 
 /** Catalogue ids by code, for building lines. */
-export async function catalogueIds(agent: AgentLike) {
+export async function catalogueIds(agent: Agent) {
   const lines = (await agent.get('/api/catalogue/lines')).body as { id: number; code: string }[]
   const options = (await agent.get('/api/catalogue/options')).body as { id: number; code: string }[]
   const unit = (code: string) => lines.find((l) => l.code === code)!.id
@@ -150,4 +151,32 @@ export async function catalogueIds(agent: AgentLike) {
 export async function taxRate(t: TestApp, rateBp: number) {
   const name = `Rate ${rateBp} ${randomBytes(3).toString('hex')}`
   return (await t.services.tax.save(null, { name, rateBp, isDefault: false })).id
+}
+
+/** What a quotes test file works with; its fields are set before the file's first test. */
+export interface QuoteDesk {
+  t: TestApp
+  /** the sizings the quotes read, held in memory: put one in to quote it */
+  sizings: ReturnType<typeof memorySizingSource>
+  sales: Agent
+  admin: Agent
+  /** the demo catalogue's ids by code */
+  ids: Awaited<ReturnType<typeof catalogueIds>>
+}
+
+/**
+ * The common start of a quotes test file: the quote app (makeQuoteApp) with sales and the admin
+ * signed in, made before the file's tests and closed after them. Read its fields in tests and
+ * hooks, not at the top of the file (they are set in beforeAll).
+ */
+export function quoteDesk(): QuoteDesk {
+  const desk = {} as QuoteDesk
+  beforeAll(async () => {
+    const { t, sizings } = await makeQuoteApp()
+    const sales = (await signedIn(t, 'sales')).agent
+    const admin = (await signedIn(t, 'admin')).agent
+    Object.assign(desk, { t, sizings, sales, admin, ids: await catalogueIds(sales) })
+  })
+  afterAll(() => desk.t.close())
+  return desk
 }

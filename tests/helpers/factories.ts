@@ -3,6 +3,7 @@ import request from 'supertest'
 import { In } from 'typeorm'
 import type { Role } from '../../shared/schemas/auth'
 import { OutboxMailEntity } from '../../server/modules/outbox/outbox-mail.entity'
+import { fromStored } from '../../server/modules/outbox/outbox.repository'
 import type { TestApp } from './app'
 
 export const PASSWORD = 'correct-horse-42'
@@ -63,5 +64,6 @@ async function takenThroughOutbox(t: TestApp, to: string, subject?: RegExp) {
     .getRepository(OutboxMailEntity)
     .find({ where: { toAddress: to, state: In(['sent', 'pending']) }, order: { id: 'DESC' } })
   const row = rows.find((r) => !subject || subject.test(r.subject))
-  return row ? { ...row.message, to: [to] } : null
+  // as the catcher would have it: the attachments' contents back from base64
+  return row ? { ...fromStored(row.message), to: [to] } : null
 }
