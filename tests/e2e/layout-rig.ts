@@ -1,5 +1,5 @@
 import request from 'supertest'
-import type { Page } from 'puppeteer-core'
+import type { HTTPRequest, Page } from 'puppeteer-core'
 import { toAuthUser } from '../../server/modules/auth/auth.service'
 import { seedPeople } from '../../seed/seed-people'
 import { DEMO_OFFICE_SITE, DEMO_OFFICE_SIZING, seedSizings } from '../../seed/seed-sizings'
@@ -113,4 +113,37 @@ export function measureLayout(page: Page) {
       offscreen,
     }
   })
+}
+
+/**
+ * Follows the page's own API requests, so a visit can wait until its data has come. (Chromium's
+ * network-idle wait also counts the service worker's and preview worker's traffic, which in a
+ * long run kept a whole browser context "busy" for its full timeout on every page.)
+ */
+export function apiTraffic(page: Page) {
+  let settled = trackers.get(page)
+  if (!settled) trackers.set(page, (settled = trackApi(page)))
+  return settled
+}
+const trackers = new WeakMap<Page, ReturnType<typeof trackApi>>()
+
+function trackApi(page: Page) {
+  const open = new Set<HTTPRequest>()
+  let lastChange = Date.now()
+  const done = (r: HTTPRequest) => {
+    if (open.delete(r)) lastChange = Date.now()
+  }
+  page.on('request', (r) => {
+    if (!new URL(r.url()).pathname.startsWith('/api/')) return
+    open.add(r)
+    lastChange = Date.now()
+  })
+  page.on('requestfinished', done)
+  page.on('requestfailed', done)
+  /** Resolves once no API request has been open for `quietMs` (or after `timeoutMs` anyway). */
+  return async function settled(quietMs = 250, timeoutMs = 5000) {
+    const end = Date.now() + timeoutMs
+    while (Date.now() < end && (open.size > 0 || Date.now() - lastChange < quietMs))
+      await new Promise((r) => setTimeout(r, 50))
+  }
 }

@@ -14,7 +14,7 @@ import {
   signInAs,
   SHOTS_DIR,
 } from '../helpers/browser'
-import { demoChain, measureLayout, type DemoChain } from './layout-rig'
+import { apiTraffic, demoChain, measureLayout, type DemoChain } from './layout-rig'
 
 let rig: PaymentRig
 let browser: Browser
@@ -69,12 +69,13 @@ function routesFor(role: Role): string[] {
   return ['/', ...byRole[role], '/no-such-page']
 }
 
-/** Opens a route and waits until its heading shows and its tables have loaded. */
+/** Opens a route and waits until its heading shows and its data and tables have loaded. */
 async function visit(page: Page, url: string) {
+  const settled = apiTraffic(page)
   await page.goto(url)
   await page.waitForSelector('main :is(h1, [role="tablist"])')
-  // settle: a page that keeps a request open (a live preview) is measured after 5 s anyway
-  await page.waitForNetworkIdle({ idleTime: 250, timeout: 5000 }).catch(() => undefined)
+  // a page that keeps a request open (a live preview) is measured after 5 s anyway
+  await settled()
   await page.waitForFunction(() => !document.querySelector('.p-datatable-mask, .p-skeleton'))
 }
 
