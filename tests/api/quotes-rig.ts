@@ -11,6 +11,11 @@ import type { SizingSummary } from '../../shared/schemas/sizing'
 import { seedCatalogue } from '../../seed/seed-catalogue'
 import { makeTestApp, type TestApp } from '../helpers/app'
 import { signedIn } from '../helpers/factories'
+import {
+  OFFICE_FLOOR,
+  OFFICE_FLOOR_ABSORBER,
+  OFFICE_FLOOR_ACCEPTANCE,
+} from '../helpers/office-floor'
 
 /** Quotes never solve a sizing; a call here would be a wiring mistake worth a loud failure. */
 export const noSolving: SizingPool = {
@@ -62,13 +67,9 @@ export async function makeQuoteApp(
 
 let nextId = 900_000
 
-/**
- * An invented submitted sizing of an office floor: mode 1 at 6.9 Hz, 10 t modal mass, a
- * 212.4 kg vertical absorber at 6.75 Hz with ζ 0.09 (k = m ω², c = 2 ζ m ω).
- */
+/** A submitted sizing of the invented office floor (tests/helpers/office-floor.ts). */
 export function sizingSummary(companyId: number, overrides: Partial<SizingSummary> = {}) {
-  const mass = 212.4
-  const omega = 2 * Math.PI * 6.75
+  const omega = 2 * Math.PI * OFFICE_FLOOR_ABSORBER.frequencyHz
   const f = Array.from({ length: 41 }, (_, i) => 5 + i * 0.1)
   const s: SizingSummary = {
     id: nextId++,
@@ -81,29 +82,11 @@ export function sizingSummary(companyId: number, overrides: Partial<SizingSummar
     companyName: 'customer',
     ownerName: 'Field engineer',
     targetMode: 1,
-    hostFrequencyHz: 6.9,
-    effectiveMass: 10_000,
-    orientation: 'vertical',
-    absorber: {
-      mass,
-      stiffness: mass * omega * omega,
-      damping: 2 * 0.09 * mass * omega,
-      frequencyHz: 6.75,
-      frequencyRatio: 6.75 / 6.9,
-      dampingRatio: 0.09,
-    },
-    stroke: 0.009,
-    strokeLimit: 0.02,
+    ...OFFICE_FLOOR,
+    absorber: OFFICE_FLOOR_ABSORBER,
     load: 'Harmonic force 280 N at node-3',
     staticDeflection: 9.81 / (omega * omega),
-    reduction: 6.2,
-    acceptance: {
-      label: 'Office floor',
-      quantity: 'acceleration',
-      limit: 0.05,
-      responseWith: 0.03,
-      passes: true,
-    },
+    acceptance: OFFICE_FLOOR_ACCEPTANCE,
     chart: {
       frequencyHz: f,
       without: f.map((x) => 1 / Math.abs(1 - (x / 6.9) ** 2 + 0.02)),
