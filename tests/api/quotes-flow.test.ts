@@ -1,14 +1,12 @@
 import { describe, expect, it } from 'vitest'
 import { mailTo, signedIn } from '../helpers/factories'
-import { customerWithContact, daysFromNow, quoteDesk, sizingSummary, taxRate } from './quotes-rig'
+import { daysFromNow, quoteDesk, taxRate } from './quotes-rig'
 
 const desk = quoteDesk()
 
 /** A submitted sizing of a fresh customer with one contact, handed over at `at`. */
 async function handedOver(at = '2026-02-01T09:00:00.000Z', title = 'Level 3 office floor') {
-  const { company, contact } = await customerWithContact(desk.sales)
-  const sizing = sizingSummary(company.id, { submittedAt: at, title })
-  desk.sizings.put(sizing)
+  const { company, contact, sizing } = await desk.customerSizing({ submittedAt: at, title })
   return { sizing, contact, company }
 }
 

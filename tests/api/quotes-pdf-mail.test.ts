@@ -1,23 +1,14 @@
 import { describe, expect, it } from 'vitest'
 import { mailTo } from '../helpers/factories'
 import { fetchPdf, pdfText } from '../helpers/pdf'
-import {
-  catalogueIds,
-  customerWithContact,
-  daysFromNow,
-  quoteDesk,
-  sizingSummary,
-  taxRate,
-} from './quotes-rig'
+import { catalogueIds, daysFromNow, quoteDesk, taxRate } from './quotes-rig'
 
 const desk = quoteDesk()
 
 /** A draft with one unit and one option: €8 160.00 + €1 850.00 = €10 010.00, 20 % tax → €12 012.00 */
 async function quote() {
   const ids = await catalogueIds(desk.sales)
-  const { company, contact } = await customerWithContact(desk.sales)
-  const sizing = sizingSummary(company.id)
-  desk.sizings.put(sizing)
+  const { company, contact, sizing } = await desk.customerSizing()
   const res = await desk.sales.post('/api/quotes').send({
     sizingId: sizing.id,
     contactId: contact.id,

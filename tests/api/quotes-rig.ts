@@ -145,6 +145,12 @@ export interface QuoteDesk {
   admin: Agent
   /** the demo catalogue's ids by code */
   ids: Awaited<ReturnType<typeof catalogueIds>>
+  /** A fresh customer with one contact, and a submitted sizing of theirs held to quote. */
+  customerSizing: (overrides?: Partial<SizingSummary>) => Promise<{
+    company: { id: number; name: string }
+    contact: { id: number; email: string }
+    sizing: SizingSummary
+  }>
 }
 
 /**
@@ -153,7 +159,14 @@ export interface QuoteDesk {
  * hooks, not at the top of the file (they are set in beforeAll).
  */
 export function quoteDesk(): QuoteDesk {
-  const desk = {} as QuoteDesk
+  const desk = {
+    async customerSizing(overrides = {}) {
+      const { company, contact } = await customerWithContact(desk.sales)
+      const sizing = sizingSummary(company.id, overrides)
+      desk.sizings.put(sizing)
+      return { company, contact, sizing }
+    },
+  } as QuoteDesk
   beforeAll(async () => {
     const { t, sizings } = await makeQuoteApp()
     const sales = (await signedIn(t, 'sales')).agent

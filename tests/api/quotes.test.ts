@@ -5,9 +5,7 @@ import { customerWithContact, daysFromNow, quoteDesk, sizingSummary, taxRate } f
 const desk = quoteDesk()
 
 async function draftFor(overrides: Record<string, unknown> = {}) {
-  const { company, contact } = await customerWithContact(desk.sales)
-  const sizing = sizingSummary(company.id)
-  desk.sizings.put(sizing)
+  const { company, contact, sizing } = await desk.customerSizing()
   const body = {
     sizingId: sizing.id,
     contactId: contact.id,
@@ -121,9 +119,7 @@ describe('quote totals, priced on the server', () => {
   })
 
   it('numbers quotes saved at the same moment one after another, none refused', async () => {
-    const { company, contact } = await customerWithContact(desk.sales)
-    const sizing = sizingSummary(company.id)
-    desk.sizings.put(sizing)
+    const { contact, sizing } = await desk.customerSizing()
     const body = {
       sizingId: sizing.id,
       contactId: contact.id,
@@ -371,9 +367,7 @@ describe('a quote of a sizing handed over with failed checks', () => {
       at: '2026-01-05T10:00:00.000Z',
       byName: 'Field engineer',
     }
-    const { company, contact } = await customerWithContact(desk.sales)
-    const sizing = sizingSummary(company.id, { designAcknowledgement: ack })
-    desk.sizings.put(sizing)
+    const { contact, sizing } = await desk.customerSizing({ designAcknowledgement: ack })
     const draft = await desk.sales.post('/api/quotes').send({
       sizingId: sizing.id,
       contactId: contact.id,

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest'
 import { mac } from '../../shared/measurements'
 import { appWithOwnUploads } from '../helpers/app'
 import { chainDefinition, chainRecordCsv, chainTruth, TRUE_SCALE } from '../helpers/chain-record'
-import { signedIn } from '../helpers/factories'
+import { expectRefusedFields, signedIn } from '../helpers/factories'
 import { siteWithModel } from '../helpers/records'
 
 // The record: ambient response of a uniform three-mass chain whose modes are known in closed
@@ -91,11 +91,7 @@ describe('records with several channels', () => {
       [{ ...MAPPING(model.id), modelId: 2147483647 }, 'body.modelId'],
       [{ ...MAPPING(model.id), modelId: null }, 'body.channels.0.nodeId'],
     ] as const
-    for (const [body, path] of bad) {
-      const res = await agent.put(`/api/records/${record.id}/channels`).send(body)
-      expect(res.status, path).toBe(400)
-      expect(res.body.error.details[0].path).toBe(path)
-    }
+    await expectRefusedFields((b) => agent.put(`/api/records/${record.id}/channels`).send(b), bad)
   })
 
   it('answers a time history of every channel, thinned with the extremes kept', async () => {
@@ -147,11 +143,10 @@ describe('operational modal analysis and model updating', () => {
       [{ method: 'fdd', minFrequencyHz: 5, maxFrequencyHz: 2 }, 'body.maxFrequencyHz'],
       [{ method: 'fdd', minFrequencyHz: -1 }, 'body.minFrequencyHz'],
     ] as const
-    for (const [body, path] of cases) {
-      const res = await agent.post(`/api/records/${record.id}/analyses`).send(body)
-      expect(res.status, path).toBe(400)
-      expect(res.body.error.details[0].path).toBe(path)
-    }
+    await expectRefusedFields(
+      (b) => agent.post(`/api/records/${record.id}/analyses`).send(b),
+      cases,
+    )
   })
 
   it('updates the stiffness group to the measured modes and saves a revision with its reason', async () => {
@@ -217,11 +212,8 @@ describe('operational modal analysis and model updating', () => {
       [{ ...body, baseRevision: 5 }, 'body.baseRevision'],
       [{ ...body, analysisId: 2147483647 }, 'body.analysisId'],
     ] as const
-    for (const [b, path] of cases) {
-      const res = await agent.post(`/api/models/${model.id}/updates/preview`).send(b)
-      expect(res.status, path).toBe(400)
-      expect(res.body.error.details[0].path).toBe(path)
-    }
+    const preview = `/api/models/${model.id}/updates/preview`
+    await expectRefusedFields((b) => agent.post(preview).send(b), cases)
   })
 
   it('lets only the record’s engineer or an admin change it, and sales only read', async () => {

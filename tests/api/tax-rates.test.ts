@@ -97,9 +97,7 @@ describe('tax rates, set by the admin and applied to quotes on the server', () =
     const { quote } = await draftFor(undefined, { taxRateId: reduced.body.id })
     // €8 160.00 × 5 % = €408.00 (by hand)
     expect(quote).toMatchObject({ taxBp: 500, tax: 40_800 })
-    const { company, contact } = await customerWithContact(desk.sales)
-    const sizing = sizingSummary(company.id)
-    desk.sizings.put(sizing)
+    const { contact, sizing } = await desk.customerSizing()
     const res = await desk.sales.post('/api/quotes').send({
       sizingId: sizing.id,
       contactId: contact.id,

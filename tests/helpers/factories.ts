@@ -1,3 +1,4 @@
+import { expect } from 'vitest'
 import { randomBytes } from 'node:crypto'
 import request from 'supertest'
 import { In } from 'typeorm'
@@ -66,4 +67,23 @@ async function takenThroughOutbox(t: TestApp, to: string, subject?: RegExp) {
   const row = rows.find((r) => !subject || subject.test(r.subject))
   // as the catcher would have it: the attachments' contents back from base64
   return row ? { ...fromStored(row.message), to: [to] } : null
+}
+
+interface Refusal {
+  error: { details: { path: string }[] }
+}
+
+/**
+ * Sends each body and expects a 400 whose first detail names the body's field path, as every
+ * input refused at the boundary answers.
+ */
+export async function expectRefusedFields(
+  send: (body: object) => PromiseLike<{ status: number; body: Refusal }>,
+  cases: readonly (readonly [body: object, path: string])[],
+) {
+  for (const [body, path] of cases) {
+    const res = await send(body)
+    expect(res.status, path).toBe(400)
+    expect(res.body.error.details[0]?.path).toBe(path)
+  }
 }
