@@ -1,11 +1,7 @@
 import { z } from 'zod'
 import { IdSchema, IndexSchema, RowIdSchema, TimestampSchema } from './ids'
-import type {
-  ChannelDirection,
-  IdentificationResult,
-  TimeUnit,
-  TimeUnitSource,
-} from '../measurements'
+import { IdentificationResultSchema, IdentifiedPeakSchema } from './identification'
+import type { ChannelDirection, TimeUnit, TimeUnitSource } from '../measurements'
 
 /** The largest record file accepted, bytes (8 MiB; about 400 000 rows of time and acceleration). */
 export const MAX_RECORD_BYTES = 8 * 1024 * 1024
@@ -100,18 +96,14 @@ export const MeasurementRecordSummarySchema = z.object({
   /** every acceleration channel, in column order, with where it was measured */
   channels: z.array(RecordChannelInfoSchema),
   /** unit the time column was read in (null without one) and how it was decided */
-  timeUnit: z.custom<TimeUnit>((v) => v === 's' || v === 'ms').nullable(),
-  timeUnitSource: z.custom<TimeUnitSource>((v) => typeof v === 'string').nullable(),
+  timeUnit: z.enum(['s', 'ms']).nullable() satisfies z.ZodType<TimeUnit | null>,
+  timeUnitSource: z
+    .enum(['option', 'header', 'step'])
+    .nullable() satisfies z.ZodType<TimeUnitSource | null>,
   analysisCount: z.number().int(),
   createdAt: TimestampSchema,
 })
 export type MeasurementRecordSummary = z.infer<typeof MeasurementRecordSummarySchema>
-
-/** The identification of a record (shared/measurements): an object here, typed by the engine. */
-export const IdentificationResultSchema = z.custom<IdentificationResult>(
-  (v) => typeof v === 'object' && v !== null,
-  'an identification result',
-)
 
 /** One record with its identification. */
 export const MeasurementRecordSchema = MeasurementRecordSummarySchema.extend({
@@ -121,10 +113,7 @@ export type MeasurementRecord = z.infer<typeof MeasurementRecordSchema>
 
 /** A peak added by hand, and the record with it. */
 export const AddedPeakSchema = z.object({
-  peak: z.custom<IdentificationResult['peaks'][number]>(
-    (v) => typeof v === 'object' && v !== null && 'frequencyHz' in v,
-    'an identified peak',
-  ),
+  peak: IdentifiedPeakSchema,
   record: MeasurementRecordSchema,
 })
 export type AddedPeak = z.infer<typeof AddedPeakSchema>

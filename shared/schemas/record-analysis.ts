@@ -1,5 +1,6 @@
 import { z } from 'zod'
 import { RowIdSchema, TimestampSchema } from './ids'
+import { ResultFlagSchema } from './identification'
 import type { SsiIdentification } from '../measurements/identify-modes-ssi'
 import type { ModalIdentification } from '../measurements/modal-types'
 import { CHANNEL_DIRECTIONS, type ChannelDirection } from '../measurements/channels'
@@ -131,7 +132,7 @@ export const AnalysisModeSchema: z.ZodType<AnalysisMode> = z.object({
   frequencyHz: z.number(),
   dampingRatio: z.number().nullable(),
   shape: z.array(z.number()),
-  flags: z.array(z.custom<ResultFlag>((v) => typeof v === 'string', 'a flag')),
+  flags: z.array(ResultFlagSchema),
   warnings: z.array(z.string()),
 })
 
