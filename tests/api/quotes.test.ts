@@ -440,6 +440,24 @@ describe('who may see and do what with quotes', () => {
     ).toBe(404)
   })
 
+  it('answers the customer view of a quote on its own route: to the customer and to sales previewing it', async () => {
+    const mine = await draftFor()
+    const id = mine.res.body.id
+    await desk.sales.post(`/api/quotes/${id}/send`).expect(200)
+    const { agent: customer } = await signedIn(desk.t, 'customer', { companyId: mine.company.id })
+    const asCustomer = await customer.get(`/api/quotes/${id}/customer-view`)
+    expect(asCustomer.status).toBe(200)
+    expect(asCustomer.body.events).toBeUndefined()
+    expect(asCustomer.body.sizing).not.toHaveProperty('ownerName')
+    // sales preview exactly what the customer reads
+    const preview = await desk.sales.get(`/api/quotes/${id}/customer-view`)
+    expect(preview.body).toEqual(asCustomer.body)
+    const { agent: engineer } = await signedIn(desk.t, 'engineer')
+    expect((await engineer.get(`/api/quotes/${id}/customer-view`)).status).toBe(403)
+    const other = await signedIn(desk.t, 'customer')
+    expect((await other.agent.get(`/api/quotes/${id}/customer-view`)).status).toBe(404)
+  })
+
   it('filters the list by state, customer and date', async () => {
     const a = await draftFor()
     const b = await draftFor()

@@ -1,5 +1,10 @@
 import { z } from 'zod'
-import { AnyQuoteSchema, QuoteSummarySchema } from '../../../shared/schemas/quote'
+import {
+  AnyQuoteSchema,
+  CustomerQuoteSchema,
+  QuoteSchema,
+  QuoteSummarySchema,
+} from '../../../shared/schemas/quote'
 import { SizingSummarySchema } from '../../../shared/schemas/sizing'
 import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
@@ -31,7 +36,7 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
   })
   routes.post('/api/quotes', {
     summary: 'Make a draft quote from a submitted sizing (priced on the server)',
-    response: AnyQuoteSchema,
+    response: QuoteSchema,
     body: QuoteCreateSchema,
     status: 201,
     answer: ({ user, body }) => quotes.create(user, body),
@@ -49,10 +54,17 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
     response: AnyQuoteSchema,
     answer: ({ user, params }) => quotes.get(user, params.id),
   })
+  routes.get('/api/quotes/:id/customer-view', {
+    summary:
+      'A quote as its customer reads it (no supplier history or staff names); sales may preview it',
+    params: IdParamSchema,
+    response: CustomerQuoteSchema,
+    answer: ({ user, params }) => quotes.customerView(user, params.id),
+  })
   routes.put('/api/quotes/:id', {
     summary: 'Change a draft (re-priced); a sent quote answers 409',
     params: IdParamSchema,
-    response: AnyQuoteSchema,
+    response: QuoteSchema,
     body: QuoteDraftSchema,
     answer: ({ user, params, body }) => quotes.update(user, params.id, body),
   })
@@ -60,28 +72,28 @@ export function quotesRouter(api: ApiRegistry, quotes: QuotesService) {
     summary:
       'Mail the PDF and the portal link to the contact; the quote becomes sent (a repeat answers it as sent). A sizing handed over with failed checks needs confirmDesignChecks (422 design-checks-unconfirmed)',
     params: IdParamSchema,
-    response: AnyQuoteSchema,
+    response: QuoteSchema,
     body: QuoteSendSchema,
     answer: ({ user, params, body }) => quotes.send(user, params.id, body),
   })
   routes.post('/api/quotes/:id/revise', {
     summary: 'Make the next revision as a draft; the old one is kept',
     params: IdParamSchema,
-    response: AnyQuoteSchema,
+    response: QuoteSchema,
     status: 201,
     answer: ({ user, params }) => quotes.revise(user, params.id),
   })
   routes.post('/api/quotes/:id/withdraw', {
     summary: 'Withdraw a draft or sent quote',
     params: IdParamSchema,
-    response: AnyQuoteSchema,
+    response: QuoteSchema,
     body: QuoteNoteSchema,
     answer: ({ user, params, body }) => quotes.withdraw(user, params.id, body.note),
   })
   routes.post('/api/quotes/:id/accept', {
     summary: 'The customer accepts a sent quote with a name and a purchase order',
     params: IdParamSchema,
-    response: AnyQuoteSchema,
+    response: CustomerQuoteSchema,
     access: ACCESS.quotes.accept,
     body: QuoteAcceptSchema,
     answer: ({ user, params, body }) => quotes.accept(user, params.id, body),
