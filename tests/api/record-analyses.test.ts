@@ -109,6 +109,13 @@ describe('records with several channels', () => {
   })
 })
 
+/** An FDD/EFDD analysis of a record, as the engineer runs it. */
+async function fddAnalysis(agent: Agent, recordId: number) {
+  const res = await agent.post(`/api/records/${recordId}/analyses`).send({ method: 'fdd' })
+  expect(res.status).toBe(201)
+  return res.body as { id: number }
+}
+
 describe('operational modal analysis and model updating', () => {
   it('identifies the chain by FDD/EFDD and by SSI-COV, with shapes at the three channels', async () => {
     const { agent } = await signedIn(t, 'engineer')
@@ -153,9 +160,7 @@ describe('operational modal analysis and model updating', () => {
     const { agent } = await signedIn(t, 'engineer')
     const { model, record } = await setUp(agent)
     await agent.put(`/api/records/${record.id}/channels`).send(MAPPING(model.id))
-    const analysis = (
-      await agent.post(`/api/records/${record.id}/analyses`).send({ method: 'fdd' })
-    ).body
+    const analysis = await fddAnalysis(agent, record.id)
     const body = {
       baseRevision: 1,
       analysisId: analysis.id,
@@ -192,9 +197,7 @@ describe('operational modal analysis and model updating', () => {
   it('refuses an update naming the field: unmapped channels, unknown spring, missing mode', async () => {
     const { agent } = await signedIn(t, 'engineer')
     const { model, record } = await setUp(agent)
-    const analysis = (
-      await agent.post(`/api/records/${record.id}/analyses`).send({ method: 'fdd' })
-    ).body
+    const analysis = await fddAnalysis(agent, record.id)
     const body = {
       baseRevision: 1,
       analysisId: analysis.id,
@@ -263,9 +266,7 @@ describe('operational modal analysis and model updating', () => {
   it('deletes a record with its analyses', async () => {
     const { agent } = await signedIn(t, 'engineer')
     const { record } = await setUp(agent)
-    const analysis = (
-      await agent.post(`/api/records/${record.id}/analyses`).send({ method: 'fdd' })
-    ).body
+    const analysis = await fddAnalysis(agent, record.id)
     expect((await agent.delete(`/api/records/${record.id}`)).status).toBe(204)
     expect((await agent.get(`/api/records/${record.id}`)).status).toBe(404)
     expect((await agent.get(`/api/records/${record.id}/analyses`)).status).toBe(404)

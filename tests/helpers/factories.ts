@@ -69,12 +69,10 @@ async function takenThroughOutbox(
   subject: RegExp | undefined,
   pendingToo: boolean,
 ) {
-  const rows = await t.ds
-    .getRepository(OutboxMailEntity)
-    .find({
-      where: { toAddress: to, state: In(pendingToo ? ['sent', 'pending'] : ['sent']) },
-      order: { id: 'DESC' },
-    })
+  const rows = await t.ds.getRepository(OutboxMailEntity).find({
+    where: { toAddress: to, state: In(pendingToo ? ['sent', 'pending'] : ['sent']) },
+    order: { id: 'DESC' },
+  })
   const row = rows.find((r) => !subject || subject.test(r.subject))
   // as the catcher would have it: the attachments' contents back from base64
   return row ? { ...fromStored(row.message), to: [to] } : null
