@@ -1,4 +1,5 @@
-import type { RequestHandler } from 'express'
+import type { Request, RequestHandler, Response } from 'express'
+import type { AuthUser } from '../middleware/authenticate'
 import type { ZodType } from 'zod'
 import type { Role } from '../../shared/schemas/auth'
 
@@ -19,12 +20,9 @@ export type Method = 'get' | 'post' | 'put' | 'patch' | 'delete'
 /** Who may call a route: a list of roles, any signed-in user, or anyone. */
 export type Access = readonly Role[] | 'signed-in' | 'public'
 
-export interface RouteSpec<B, Q, P, R = unknown> {
-  method: Method
-  path: string
+/** What a route declares besides where it is (method, path, tag) and who may call it. */
+export interface RouteDetails<B, Q, P, R = unknown> {
   summary: string
-  tag: string
-  access: Access
   body?: ZodType<B>
   query?: ZodType<Q>
   params?: ZodType<P>
@@ -42,3 +40,24 @@ export interface RouteSpec<B, Q, P, R = unknown> {
   /** Middleware run after the access check and before validation (an upload parser, say). */
   before?: RequestHandler[]
 }
+
+export interface RouteSpec<B, Q, P, R = unknown> extends RouteDetails<B, Q, P, R> {
+  method: Method
+  path: string
+  tag: string
+  access: Access
+}
+
+export interface RouteInput<B, Q, P> {
+  body: B
+  query: Q
+  params: P
+  user: AuthUser
+  req: Request
+  res: Response
+}
+
+/** Answers a route: the JSON answer, or undefined when it wrote the response itself. */
+export type RouteHandler<B, Q, P, R> = (
+  input: RouteInput<B, Q, P>,
+) => Wire<NoInfer<R>> | undefined | Promise<Wire<NoInfer<R>> | undefined>

@@ -5,18 +5,9 @@ import { AppError } from './app-error'
 import { OUT_OF_RANGE } from '../../shared/schemas/model'
 import type { AuthUser } from '../middleware/authenticate'
 import type { ApiRegistry } from './api-registry'
-import type { Access, Method, RouteSpec, Wire } from './route-spec'
+import type { Access, Method, RouteHandler, RouteSpec } from './route-spec'
 
-export type { Access, RouteSpec } from './route-spec'
-
-export interface RouteInput<B, Q, P> {
-  body: B
-  query: Q
-  params: P
-  user: AuthUser
-  req: Request
-  res: Response
-}
+export type { Access, RouteInput, RouteSpec } from './route-spec'
 
 /** Field paths and messages of a failed parse, as the 400 answer lists them. */
 export function issuesOf(error: z.ZodError, where: string) {
@@ -66,11 +57,6 @@ function checkAccess(access: Access, user: AuthUser | undefined): AuthUser {
 }
 
 /**
- * Declares one route: access check, validation of params, query and body against the shared
- * schemas, and an entry in the API document. The handler returns the JSON answer, or undefined
- * when it wrote the response itself.
- */
-/**
  * In the API tests (ApiRegistry.checkResponses): an answer outside the route's response schema
  * is a 500 naming the route and the fields, so a test that sees it fails.
  */
@@ -91,13 +77,16 @@ function checkResponse(spec: RouteSpec<unknown, unknown, unknown>, result: unkno
   )
 }
 
+/**
+ * Declares one route: access check, validation of params, query and body against the shared
+ * schemas, and an entry in the API document. The handler returns the JSON answer, or undefined
+ * when it wrote the response itself.
+ */
 export function route<B = undefined, Q = undefined, P = undefined, R = unknown>(
   router: Router,
   registry: ApiRegistry,
   spec: RouteSpec<B, Q, P, R>,
-  handler: (
-    input: RouteInput<B, Q, P>,
-  ) => Wire<NoInfer<R>> | undefined | Promise<Wire<NoInfer<R>> | undefined>,
+  handler: RouteHandler<B, Q, P, R>,
 ): void {
   registry.add(spec)
   const guard: RequestHandler = (req, _res, next) => {
@@ -124,15 +113,4 @@ export function route<B = undefined, Q = undefined, P = undefined, R = unknown>(
       }
     },
   )
-}
-
-/**
- * The routes of one router under one tag of the API document: `add(spec, handler)` is
- * `route(router, registry, { ...spec, tag }, handler)`.
- */
-export function routesFor(router: Router, registry: ApiRegistry, tag: string) {
-  return <B = undefined, Q = undefined, P = undefined, R = unknown>(
-    spec: Omit<RouteSpec<B, Q, P, R>, 'tag'>,
-    handler: Parameters<typeof route<B, Q, P, R>>[3],
-  ) => route<B, Q, P, R>(router, registry, { ...spec, tag }, handler)
 }

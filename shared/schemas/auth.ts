@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { RowIdSchema, TimestampSchema } from './ids'
 
 export const ROLES = ['engineer', 'sales', 'customer', 'production', 'admin'] as const
 export const RoleSchema = z.enum(ROLES)
@@ -18,11 +19,11 @@ export const SignInSchema = z.object({
 export type SignIn = z.infer<typeof SignInSchema>
 
 export const CurrentUserSchema = z.object({
-  id: z.number().int(),
+  id: RowIdSchema,
   email: z.string(),
   name: z.string(),
   role: RoleSchema,
-  companyId: z.number().int().nullable(),
+  companyId: RowIdSchema.nullable(),
   companyName: z.string().nullable(),
 })
 export type CurrentUser = z.infer<typeof CurrentUserSchema>
@@ -36,7 +37,7 @@ export const InviteSchema = z
     email: EmailSchema,
     name: z.string().trim().min(1, 'required').max(120),
     role: RoleSchema,
-    companyId: z.number().int().positive().nullable().default(null),
+    companyId: RowIdSchema.positive().nullable().default(null),
   })
   .refine((v) => v.role !== 'customer' || v.companyId !== null, {
     message: 'a customer user belongs to a customer company',
@@ -62,12 +63,12 @@ export const ResetRequestSchema = z.object({ email: EmailSchema })
 export const UserSummarySchema = CurrentUserSchema.extend({
   active: z.boolean(),
   invited: z.boolean(),
-  createdAt: z.string(),
+  createdAt: TimestampSchema,
 })
 export type UserSummary = z.infer<typeof UserSummarySchema>
 
 export const CompanySchema = z.object({
-  id: z.number().int(),
+  id: RowIdSchema,
   name: z.string(),
   kind: z.enum(['supplier', 'customer']),
 })

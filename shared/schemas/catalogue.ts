@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { IdSchema } from './ids'
+import { IdSchema, RowIdSchema } from './ids'
 import { OrientationSchema } from './sizing'
 
 /** How a unit dissipates energy; names of the trade. */
@@ -55,7 +55,7 @@ export type ProductLineInput = z.infer<typeof ProductLineInputSchema>
 
 export const ProductLineSchema = z.object({
   ...ProductLineInputSchema.shape,
-  id: z.number().int(),
+  id: RowIdSchema,
   prices: pricesOf(UnitPriceSchema).nullable(),
 })
 /** Prices are null for roles that may not see them (engineer, production). */
@@ -84,7 +84,7 @@ export type CatalogueOption = z.infer<typeof CatalogueOptionSchema>
 
 /** One product line judged against a sizing: fits, or the reasons it does not. */
 export const UnitMatchSchema = z.object({
-  productLineId: z.number().int(),
+  productLineId: RowIdSchema,
   code: z.string(),
   name: z.string(),
   fits: z.boolean(),

@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { IdSchema, PAGE_QUERY } from './ids'
+import { IdSchema, PAGE_QUERY, RowIdSchema } from './ids'
 import { EmailSchema } from './auth'
 
 export const CustomerInputSchema = z.object({
@@ -17,15 +17,15 @@ export const ContactInputSchema = z.object({
 export type ContactInput = z.infer<typeof ContactInputSchema>
 
 export const ContactSchema = ContactInputSchema.extend({
-  id: z.number().int(),
-  companyId: z.number().int(),
+  id: RowIdSchema,
+  companyId: RowIdSchema,
   /** The customer user made from this contact by an invitation, if any. */
-  userId: z.number().int().nullable(),
+  userId: RowIdSchema.nullable(),
 })
 export type Contact = z.infer<typeof ContactSchema>
 
 export const CustomerSchema = z.object({
-  id: z.number().int(),
+  id: RowIdSchema,
   name: z.string(),
   address: z.string(),
   contacts: z.array(ContactSchema),

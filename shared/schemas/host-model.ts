@@ -1,9 +1,9 @@
 import { z } from 'zod'
-import { IdSchema } from './ids'
+import { IdSchema, RowIdSchema, TimestampSchema } from './ids'
 import { ModelDefinitionSchema } from './sizing'
 
 export const ModelCreateSchema = z.object({
-  siteId: z.number().int().positive(),
+  siteId: RowIdSchema.positive(),
   name: z.string().trim().min(1, 'required').max(160),
   definition: ModelDefinitionSchema,
   reason: z.string().trim().max(300).default('first version'),
@@ -30,28 +30,28 @@ export const ModelRevisionParamsSchema = z.object({
 export const ModelRevisionInfoSchema = z.object({
   revision: z.number().int(),
   reason: z.string(),
-  createdAt: z.string(),
+  createdAt: TimestampSchema,
   createdByName: z.string(),
 })
 export type ModelRevisionInfo = z.infer<typeof ModelRevisionInfoSchema>
 
 /** One stored revision of a model with its structure: what a sizing on that revision used. */
 export const ModelRevisionSchema = ModelRevisionInfoSchema.extend({
-  modelId: z.number().int(),
+  modelId: RowIdSchema,
   definition: ModelDefinitionSchema,
 })
 export type ModelRevision = z.infer<typeof ModelRevisionSchema>
 
 export const HostModelSchema = z.object({
-  id: z.number().int(),
-  siteId: z.number().int(),
+  id: RowIdSchema,
+  siteId: RowIdSchema,
   siteName: z.string(),
   name: z.string(),
-  ownerId: z.number().int(),
+  ownerId: RowIdSchema,
   ownerName: z.string(),
   currentRevision: z.number().int(),
   definition: ModelDefinitionSchema,
   revisions: z.array(ModelRevisionInfoSchema),
-  updatedAt: z.string(),
+  updatedAt: TimestampSchema,
 })
 export type HostModel = z.infer<typeof HostModelSchema>

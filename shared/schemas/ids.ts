@@ -38,3 +38,9 @@ export const IdParamSchema = z.object({ id: IdSchema })
 
 /** An id inside a JSON body: a whole number that fits the database column. */
 export const BodyIdSchema = z.number().int().positive().max(MAX_ID)
+
+/** The id of a row as an answer carries it. */
+export const RowIdSchema = z.number().int()
+
+/** A moment as an answer carries it: the JSON of a Date, ISO 8601 text in UTC. */
+export const TimestampSchema = z.string()

@@ -1,11 +1,7 @@
 import { z } from 'zod'
-import { IdSchema, IndexSchema } from './ids'
-import type {
-  ChannelDirection,
-  IdentificationResult,
-  TimeUnit,
-  TimeUnitSource,
-} from '../measurements'
+import { IdSchema, IndexSchema, RowIdSchema, TimestampSchema } from './ids'
+import { IdentificationResultSchema, IdentifiedPeakSchema } from './identification'
+import type { ChannelDirection, TimeUnit, TimeUnitSource } from '../measurements'
 
 /** The largest record file accepted, bytes (8 MiB; about 400 000 rows of time and acceleration). */
 export const MAX_RECORD_BYTES = 8 * 1024 * 1024
@@ -44,7 +40,7 @@ export const CalibrateSchema = z.object({
   mode: z.number().int().min(1, 'modes are numbered from 1 (the lowest)'),
   /** Hz */
   measuredHz: z.number().positive('must be above zero'),
-  recordId: z.number().int().positive().optional(),
+  recordId: RowIdSchema.positive().optional(),
   dampingRatio: z.number().min(0).lt(1, 'must be below 1').optional(),
 })
 export type CalibrateInput = z.infer<typeof CalibrateSchema>
@@ -55,7 +51,7 @@ export type CalibrateInput = z.infer<typeof CalibrateSchema>
  * does not change what the sizing was based on.
  */
 export const SizingRecordLinkSchema = z.object({
-  recordId: z.number().int().positive(),
+  recordId: RowIdSchema.positive(),
   peaks: z
     .array(
       z.object({
@@ -84,11 +80,11 @@ export type RecordChannelInfo = z.infer<typeof RecordChannelInfoSchema>
 
 /** A stored record as listed. */
 export const MeasurementRecordSummarySchema = z.object({
-  id: z.number().int(),
-  siteId: z.number().int(),
-  modelId: z.number().int().nullable(),
+  id: RowIdSchema,
+  siteId: RowIdSchema,
+  modelId: RowIdSchema.nullable(),
   nodeId: z.string().nullable(),
-  ownerId: z.number().int(),
+  ownerId: RowIdSchema,
   ownerName: z.string(),
   filename: z.string(),
   size: z.number().int(),
@@ -100,18 +96,14 @@ export const MeasurementRecordSummarySchema = z.object({
   /** every acceleration channel, in column order, with where it was measured */
   channels: z.array(RecordChannelInfoSchema),
   /** unit the time column was read in (null without one) and how it was decided */
-  timeUnit: z.custom<TimeUnit>((v) => v === 's' || v === 'ms').nullable(),
-  timeUnitSource: z.custom<TimeUnitSource>((v) => typeof v === 'string').nullable(),
+  timeUnit: z.enum(['s', 'ms']).nullable() satisfies z.ZodType<TimeUnit | null>,
+  timeUnitSource: z
+    .enum(['option', 'header', 'step'])
+    .nullable() satisfies z.ZodType<TimeUnitSource | null>,
   analysisCount: z.number().int(),
-  createdAt: z.string(),
+  createdAt: TimestampSchema,
 })
 export type MeasurementRecordSummary = z.infer<typeof MeasurementRecordSummarySchema>
-
-/** The identification of a record (shared/measurements): an object here, typed by the engine. */
-export const IdentificationResultSchema = z.custom<IdentificationResult>(
-  (v) => typeof v === 'object' && v !== null,
-  'an identification result',
-)
 
 /** One record with its identification. */
 export const MeasurementRecordSchema = MeasurementRecordSummarySchema.extend({
@@ -121,10 +113,7 @@ export type MeasurementRecord = z.infer<typeof MeasurementRecordSchema>
 
 /** A peak added by hand, and the record with it. */
 export const AddedPeakSchema = z.object({
-  peak: z.custom<IdentificationResult['peaks'][number]>(
-    (v) => typeof v === 'object' && v !== null && 'frequencyHz' in v,
-    'an identified peak',
-  ),
+  peak: IdentifiedPeakSchema,
   record: MeasurementRecordSchema,
 })
 export type AddedPeak = z.infer<typeof AddedPeakSchema>

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { RowIdSchema } from './ids'
 
 /** The steps of an order as its customer follows them; production's "queued" counts as paid. */
 export const ORDER_STEPS = ['paid', 'in-build', 'tuning', 'ready', 'shipped'] as const
@@ -26,7 +27,7 @@ export type OrderStep = z.infer<typeof OrderStepSchema>
 /** A paid order's progress, derived on the server from the order and its work order's events. */
 export const OrderTimelineSchema = z.object({
   orderNumber: z.string(),
-  quoteId: z.number().int(),
+  quoteId: RowIdSchema,
   /** the furthest step reached now (a step back in the workshop moves it back) */
   current: OrderStepIdSchema,
   steps: z.array(OrderStepSchema),

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { RowIdSchema, TimestampSchema } from './ids'
 
 /** The checkout session id the payment page hands back on the success URL. */
 export const CheckoutSessionIdSchema = z
@@ -11,27 +12,27 @@ export type PaymentReturn = z.infer<typeof PaymentReturnSchema>
 /** A second payment of a quote that had its order already, and its refund. */
 export const RefundInfoSchema = z.object({
   sessionId: z.string(),
-  quoteId: z.number().int(),
+  quoteId: RowIdSchema,
   /** minor units */
   amount: z.number().int(),
   currency: z.string(),
   status: z.enum(['pending', 'refunded']),
   refundId: z.string().nullable(),
-  refundedAt: z.string().nullable(),
-  paidTwiceAt: z.string(),
+  refundedAt: TimestampSchema.nullable(),
+  paidTwiceAt: TimestampSchema,
 })
 export type RefundInfo = z.infer<typeof RefundInfoSchema>
 
 /** A paid order as its customer, sales and the admin see it. */
 export const OrderInfoSchema = z.object({
-  id: z.number().int(),
+  id: RowIdSchema,
   number: z.string(),
-  quoteId: z.number().int(),
+  quoteId: RowIdSchema,
   /** minor units */
   amount: z.number().int(),
   currency: z.string(),
   status: z.string(),
-  paidAt: z.string(),
+  paidAt: TimestampSchema,
   /** production's progress: queued, in-build, tuning, ready, shipped */
   workOrderState: z.string().nullable().optional(),
 })

@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { BodyIdSchema, IndexSchema, PageSizeSchema } from './ids'
+import { BodyIdSchema, PAGE_QUERY, RowIdSchema, TimestampSchema } from './ids'
 import { QuoteDraftSchema, QuoteLineSchema, QuoteSendSchema, QuoteStateSchema } from './quote'
 
 /**
@@ -10,23 +10,21 @@ import { QuoteDraftSchema, QuoteLineSchema, QuoteSendSchema, QuoteStateSchema } 
 export const ReadyQuerySchema = z.object({
   /** words of the title, site or customer */
   search: z.string().trim().max(100).optional(),
-  /** rows per page, 1–200 (default 25); the total is in the X-Total-Count header */
-  limit: PageSizeSchema.optional(),
-  /** rows skipped, most recently handed over first */
-  offset: IndexSchema.optional(),
+  /** most recently handed over first; 25 a page when no limit is given */
+  ...PAGE_QUERY,
 })
 export type ReadyQuery = z.infer<typeof ReadyQuerySchema>
 
 /** A submitted sizing as the sales desk lists it, read from its current revision. */
 export const HandedOverSizingSchema = z.object({
-  id: z.number().int(),
+  id: RowIdSchema,
   revision: z.number().int(),
   title: z.string(),
   siteName: z.string(),
   companyName: z.string(),
   ownerName: z.string(),
   /** when the engineer handed it over, ISO */
-  submittedAt: z.string().nullable(),
+  submittedAt: TimestampSchema.nullable(),
   /** kg */
   absorberMass: z.number().nullable(),
   hostFrequencyHz: z.number().nullable(),

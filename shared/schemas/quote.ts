@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { IdSchema, IndexSchema, PageSizeSchema } from './ids'
+import { IdSchema, PAGE_QUERY, RowIdSchema, TimestampSchema } from './ids'
 import { CURRENCIES } from '../money'
 import { SizingSummarySchema } from './sizing'
 
@@ -17,7 +17,7 @@ const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'a date as YYYY-MM-DD')
 export const QuoteLineInputSchema = z.discriminatedUnion('kind', [
   z.object({
     kind: z.literal('unit'),
-    productLineId: z.number().int().positive(),
+    productLineId: RowIdSchema.positive(),
     quantity: z.number().int('whole units').min(1, 'at least 1').max(999),
     /** with a sizing of several absorbers: the ones (1-based) this line supplies, one each;
      * absent, the next ones not yet on a line */
@@ -25,7 +25,7 @@ export const QuoteLineInputSchema = z.discriminatedUnion('kind', [
   }),
   z.object({
     kind: z.literal('option'),
-    optionId: z.number().int().positive(),
+    optionId: RowIdSchema.positive(),
     quantity: z.number().int('whole units').min(1, 'at least 1').max(999),
   }),
 ])
@@ -33,7 +33,7 @@ export type QuoteLineInput = z.infer<typeof QuoteLineInputSchema>
 
 /** What sales edit on a draft; prices are never sent by the client. */
 export const QuoteDraftSchema = z.object({
-  contactId: z.number().int().positive().nullable().default(null),
+  contactId: RowIdSchema.positive().nullable().default(null),
   currency: CurrencySchema.default('EUR'),
   /** basis points, 100 = 1 % */
   discountBp: z
@@ -46,7 +46,7 @@ export const QuoteDraftSchema = z.object({
    * A named tax rate; null prices with the customer company's own rate or the default. The
    * server looks the rate up: a percentage sent by the browser is never used.
    */
-  taxRateId: z.number().int().positive().nullable().default(null),
+  taxRateId: RowIdSchema.positive().nullable().default(null),
   validUntil: isoDate,
   terms: z.string().max(4000).default(''),
   lines: z.array(QuoteLineInputSchema).min(1, 'add at least one line').max(40),
@@ -56,7 +56,7 @@ export const QuoteDraftSchema = z.object({
 export type QuoteDraft = z.infer<typeof QuoteDraftSchema>
 
 export const QuoteCreateSchema = QuoteDraftSchema.extend({
-  sizingId: z.number().int().positive(),
+  sizingId: RowIdSchema.positive(),
 })
 export type QuoteCreate = z.infer<typeof QuoteCreateSchema>
 
@@ -68,10 +68,8 @@ export const QuoteListQuerySchema = z.object({
   /** created on or before, YYYY-MM-DD */
   to: isoDate.optional(),
   search: z.string().trim().max(100).optional(),
-  /** rows per page, 1–200 (default 50); the total is in the X-Total-Count header */
-  limit: PageSizeSchema.optional(),
-  /** rows skipped, newest first */
-  offset: IndexSchema.optional(),
+  /** newest first; 50 a page when no limit is given */
+  ...PAGE_QUERY,
 })
 export type QuoteListQuery = z.infer<typeof QuoteListQuerySchema>
 
@@ -94,8 +92,8 @@ export type QuoteAccept = z.infer<typeof QuoteAcceptSchema>
 export const QuoteLineSchema = z.object({
   position: z.number().int(),
   kind: z.enum(['unit', 'option', 'service']),
-  productLineId: z.number().int().nullable(),
-  optionId: z.number().int().nullable(),
+  productLineId: RowIdSchema.nullable(),
+  optionId: RowIdSchema.nullable(),
   code: z.string(),
   description: z.string(),
   /** kg as built, for a unit line */
@@ -111,7 +109,7 @@ export type QuoteLine = z.infer<typeof QuoteLineSchema>
 export const QuoteEventSchema = z.object({
   fromState: QuoteStateSchema.nullable(),
   toState: QuoteStateSchema,
-  actorId: z.number().int().nullable(),
+  actorId: RowIdSchema.nullable(),
   actorName: z.string().nullable(),
   at: z.string(),
   note: z.string(),
@@ -119,33 +117,33 @@ export const QuoteEventSchema = z.object({
 export type QuoteEvent = z.infer<typeof QuoteEventSchema>
 
 export const QuoteSummarySchema = z.object({
-  id: z.number().int(),
+  id: RowIdSchema,
   number: z.string(),
   revision: z.number().int(),
   /** "TDW-2026-0001 rev 2" */
   reference: z.string(),
   state: QuoteStateSchema,
-  sizingId: z.number().int(),
+  sizingId: RowIdSchema,
   sizingTitle: z.string(),
-  companyId: z.number().int(),
+  companyId: RowIdSchema,
   companyName: z.string(),
   siteName: z.string(),
   currency: CurrencySchema,
   total: z.number().int(),
   validUntil: z.string(),
-  createdAt: z.string(),
-  sentAt: z.string().nullable(),
+  createdAt: TimestampSchema,
+  sentAt: TimestampSchema.nullable(),
   latest: z.boolean(),
 })
 export type QuoteSummary = z.infer<typeof QuoteSummarySchema>
 
 export const QuoteSchema = QuoteSummarySchema.extend({
-  contactId: z.number().int().nullable(),
+  contactId: RowIdSchema.nullable(),
   contactName: z.string().nullable(),
   contactEmail: z.string().nullable(),
   discountBp: z.number().int(),
   taxBp: z.number().int(),
-  taxRateId: z.number().int().nullable(),
+  taxRateId: RowIdSchema.nullable(),
   taxRateName: z.string().nullable(),
   terms: z.string(),
   lines: z.array(QuoteLineSchema),
@@ -156,10 +154,10 @@ export const QuoteSchema = QuoteSummarySchema.extend({
   /** The sizing as it was when this revision was made; later edits never reach it. */
   sizing: SizingSummarySchema,
   createdByName: z.string(),
-  acceptedAt: z.string().nullable(),
+  acceptedAt: TimestampSchema.nullable(),
   acceptedName: z.string().nullable(),
   purchaseOrder: z.string().nullable(),
-  paidAt: z.string().nullable(),
+  paidAt: TimestampSchema.nullable(),
   /** Who in sales confirmed the sizing's acknowledged failed checks when sending, and when. */
   designConfirmation: z.object({ at: z.string(), byName: z.string() }).nullable(),
   /** Supplier-side history; empty for a customer. */

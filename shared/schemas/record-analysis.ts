@@ -1,4 +1,6 @@
 import { z } from 'zod'
+import { RowIdSchema, TimestampSchema } from './ids'
+import { ResultFlagSchema } from './identification'
 import type { SsiIdentification } from '../measurements/identify-modes-ssi'
 import type { ModalIdentification } from '../measurements/modal-types'
 import { CHANNEL_DIRECTIONS, type ChannelDirection } from '../measurements/channels'
@@ -11,7 +13,7 @@ const nodeId = z.string().trim().min(1, 'must not be empty').max(60)
 /** Where each acceleration channel of a record sat: the model and, per channel, node and axis. */
 export const ChannelMapSchema = z.object({
   /** the host model the nodes belong to; null unties the record from any model */
-  modelId: z.number().int().positive().nullable(),
+  modelId: RowIdSchema.positive().nullable(),
   /** one entry per channel, in column order */
   channels: z
     .array(
@@ -108,7 +110,7 @@ export const ParameterGroupSchema = z.discriminatedUnion('kind', [
 export const ModelUpdateRequestSchema = z.object({
   /** the revision the engineer looked at; the update is refused when the model moved on */
   baseRevision: z.number().int().positive(),
-  analysisId: z.number().int().positive(),
+  analysisId: RowIdSchema.positive(),
   /** indices into the analysis's modes; default every mode */
   modes: z.array(z.number().int().min(0)).min(1, 'choose at least one mode').max(20).optional(),
   groups: z.array(ParameterGroupSchema).min(1, 'choose what may change').max(12),
@@ -130,18 +132,18 @@ export const AnalysisModeSchema: z.ZodType<AnalysisMode> = z.object({
   frequencyHz: z.number(),
   dampingRatio: z.number().nullable(),
   shape: z.array(z.number()),
-  flags: z.array(z.custom<ResultFlag>((v) => typeof v === 'string', 'a flag')),
+  flags: z.array(ResultFlagSchema),
   warnings: z.array(z.string()),
 })
 
 export const RecordAnalysisSchema: z.ZodType<RecordAnalysis> = z.object({
-  id: z.number().int(),
-  recordId: z.number().int(),
-  ownerId: z.number().int(),
+  id: RowIdSchema,
+  recordId: RowIdSchema,
+  ownerId: RowIdSchema,
   method: z.enum(['fdd', 'ssi']),
   modes: z.array(AnalysisModeSchema),
   result: engineObject<ModalIdentification | SsiIdentification>('identification'),
-  createdAt: z.string(),
+  createdAt: TimestampSchema,
 })
 
 export const RecordTimeHistorySchema: z.ZodType<RecordTimeHistory> = z.object({

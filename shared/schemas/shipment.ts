@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { IndexSchema, PageSizeSchema } from './ids'
+import { PAGE_QUERY, TimestampSchema } from './ids'
 
 /** Who takes delivery on site, read from the site (or the quote's contact) when the order was paid. */
 export const DeliveryContactSchema = z.object({
@@ -27,7 +27,7 @@ export const ShipmentSchema = z.object({
   carrier: z.string(),
   trackingNumber: z.string(),
   serialNumbers: z.array(z.string()),
-  shippedAt: z.string(),
+  shippedAt: TimestampSchema,
 })
 export type Shipment = z.infer<typeof ShipmentSchema>
 
@@ -44,8 +44,7 @@ export const WorkOrderListQuerySchema = z.object({
   state: z.enum(['queued', 'in-build', 'tuning', 'ready', 'shipped', 'open']).optional(),
   sort: z.enum(WORK_ORDER_SORTS).default('due'),
   dir: z.enum(['asc', 'desc']).default('asc'),
-  /** rows per page, 1–200 (default 50); the total is in the X-Total-Count header */
-  limit: PageSizeSchema.optional(),
-  offset: IndexSchema.optional(),
+  /** 50 a page when no limit is given */
+  ...PAGE_QUERY,
 })
 export type WorkOrderListQuery = z.infer<typeof WorkOrderListQuerySchema>

@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { IdSchema, PAGE_QUERY } from './ids'
+import { IdSchema, PAGE_QUERY, RowIdSchema, TimestampSchema } from './ids'
 
 export const STRUCTURE_KINDS = [
   'floor',
@@ -14,7 +14,7 @@ export type StructureKind = z.infer<typeof StructureKindSchema>
 
 export const SiteInputSchema = z.object({
   name: z.string().trim().min(1, 'required').max(160),
-  companyId: z.number().int().positive(),
+  companyId: RowIdSchema.positive(),
   address: z.string().trim().max(300).default(''),
   structureKind: StructureKindSchema,
   contactName: z.string().trim().max(120).default(''),
@@ -32,7 +32,7 @@ export const SiteListQuerySchema = z.object({
 export type SiteListQuery = z.infer<typeof SiteListQuerySchema>
 
 export const SitePhotoSchema = z.object({
-  id: z.number().int(),
+  id: RowIdSchema,
   filename: z.string(),
   contentType: z.string(),
   size: z.number().int(),
@@ -41,26 +41,26 @@ export const SitePhotoSchema = z.object({
 export type SitePhoto = z.infer<typeof SitePhotoSchema>
 
 export const SiteSchema = SiteInputSchema.extend({
-  id: z.number().int(),
+  id: RowIdSchema,
   companyName: z.string(),
-  ownerId: z.number().int(),
+  ownerId: RowIdSchema,
   ownerName: z.string(),
-  createdAt: z.string(),
+  createdAt: TimestampSchema,
   photos: z.array(SitePhotoSchema),
 })
 export type Site = z.infer<typeof SiteSchema>
 
 /** A row of the sites list: the columns the list shows, not the notes or the photos. */
 export const SiteListItemSchema = z.object({
-  id: z.number().int(),
+  id: RowIdSchema,
   name: z.string(),
-  companyId: z.number().int(),
+  companyId: RowIdSchema,
   companyName: z.string(),
   address: z.string(),
   structureKind: StructureKindSchema,
-  ownerId: z.number().int(),
+  ownerId: RowIdSchema,
   ownerName: z.string(),
   photoCount: z.number().int(),
-  updatedAt: z.string(),
+  updatedAt: TimestampSchema,
 })
 export type SiteListItem = z.infer<typeof SiteListItemSchema>

@@ -5,7 +5,7 @@ import {
   DesignAcknowledgementSchema,
   DesignCheckSchema,
 } from './design-checks'
-import { IdSchema, PAGE_QUERY } from './ids'
+import { IdSchema, PAGE_QUERY, RowIdSchema, TimestampSchema } from './ids'
 import {
   bandSchema,
   explicitTuningSchema,
@@ -67,8 +67,8 @@ export type Acceptance = z.infer<typeof AcceptanceSchema>
 
 const SizingInputFields = strictObject({
   title: z.string().trim().min(1, 'required').max(160),
-  siteId: z.number().int().positive(),
-  modelId: z.number().int().positive(),
+  siteId: RowIdSchema.positive(),
+  modelId: RowIdSchema.positive(),
   modelRevision: z.number().int().positive(),
   /** site records the engineer linked as evidence, with the peaks paired with modes */
   records: z.array(SizingRecordLinkSchema).max(20).optional(),
@@ -161,13 +161,13 @@ export type SizingState = (typeof SIZING_STATES)[number]
  * SI units: kg, N/m, N·s/m, Hz, m.
  */
 export const SizingSummarySchema = z.object({
-  id: z.number().int(),
+  id: RowIdSchema,
   revision: z.number().int(),
   title: z.string(),
   state: z.enum(SIZING_STATES),
-  siteId: z.number().int(),
+  siteId: RowIdSchema,
   siteName: z.string(),
-  companyId: z.number().int(),
+  companyId: RowIdSchema,
   companyName: z.string(),
   ownerName: z.string(),
   targetMode: z.number().int(),
@@ -206,7 +206,7 @@ export const SizingSummarySchema = z.object({
     without: z.array(z.number()),
     with: z.array(z.number()),
   }),
-  submittedAt: z.string().nullable(),
+  submittedAt: TimestampSchema.nullable(),
   handoverNote: z.string(),
   /** present when the design fails a check and was handed over with a reason; absent on old quotes */
   designAcknowledgement: DesignAcknowledgementSchema.nullable().optional(),
@@ -240,21 +240,21 @@ export type SizingListQuery = z.infer<typeof SizingListQuerySchema>
 
 /** A row of the sizings list. */
 export const SizingListItemSchema = z.object({
-  id: z.number().int(),
+  id: RowIdSchema,
   title: z.string(),
   state: z.enum(SIZING_STATES),
   revision: z.number().int(),
-  siteId: z.number().int(),
+  siteId: RowIdSchema,
   siteName: z.string(),
   companyName: z.string(),
-  ownerId: z.number().int(),
+  ownerId: RowIdSchema,
   ownerName: z.string(),
   /** kg, of every absorber together */
   absorberMass: z.number().nullable(),
   hostFrequencyHz: z.number().nullable(),
   reduction: z.number().nullable(),
   passes: z.boolean().nullable(),
-  updatedAt: z.string(),
+  updatedAt: TimestampSchema,
 })
 export type SizingListItem = z.infer<typeof SizingListItemSchema>
 
@@ -269,20 +269,20 @@ export const SizingEvaluationSchema = z.custom<SizingEvaluation>(
 
 /** A sizing as the server stores it: the input, its authoritative evaluation and summary. */
 export const SizingViewSchema = z.object({
-  id: z.number().int(),
-  siteId: z.number().int(),
-  modelId: z.number().int(),
-  ownerId: z.number().int(),
+  id: RowIdSchema,
+  siteId: RowIdSchema,
+  modelId: RowIdSchema,
+  ownerId: RowIdSchema,
   ownerName: z.string(),
   title: z.string(),
   state: z.enum(SIZING_STATES),
   currentRevision: z.number().int(),
   /** the revision shown (the current one unless another was asked for) */
   revision: z.number().int(),
-  submittedAt: z.string().nullable(),
+  submittedAt: TimestampSchema.nullable(),
   handoverNote: z.string(),
-  acknowledgementId: z.number().int().nullable(),
-  updatedAt: z.string(),
+  acknowledgementId: RowIdSchema.nullable(),
+  updatedAt: TimestampSchema,
   input: SizingInputSchema,
   evaluation: SizingEvaluationSchema,
   summary: SizingSummarySchema.omit({

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { RowIdSchema, TimestampSchema } from './ids'
 
 /** A named tax rate as the admin sets it up; 2000 basis points = 20 %. */
 export const TaxRateInputSchema = z.object({
@@ -14,14 +15,14 @@ export const TaxRateInputSchema = z.object({
 export type TaxRateInput = z.infer<typeof TaxRateInputSchema>
 
 export const TaxRateSchema = TaxRateInputSchema.extend({
-  id: z.number().int(),
-  updatedAt: z.string(),
+  id: RowIdSchema,
+  updatedAt: TimestampSchema,
 })
 export type TaxRate = z.infer<typeof TaxRateSchema>
 
 /** A customer company's own rate; null returns it to the default. */
 export const CompanyTaxRateSchema = z.object({
-  taxRateId: z.number().int().positive().nullable(),
+  taxRateId: RowIdSchema.positive().nullable(),
 })
 export type CompanyTaxRate = z.infer<typeof CompanyTaxRateSchema>
 
@@ -29,9 +30,9 @@ export const TaxSettingsSchema = z.object({
   rates: z.array(TaxRateSchema),
   companies: z.array(
     z.object({
-      companyId: z.number().int(),
+      companyId: RowIdSchema,
       companyName: z.string(),
-      taxRateId: z.number().int().nullable(),
+      taxRateId: RowIdSchema.nullable(),
     }),
   ),
 })

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { RowIdSchema, TimestampSchema } from './ids'
 import { DesignAcknowledgementSchema } from './design-checks'
 import { DeliveryContactSchema, ShipmentInputSchema, ShipmentSchema } from './shipment'
 
@@ -100,10 +101,10 @@ export type BuildSpecification = z.infer<typeof BuildSpecificationSchema>
 
 /** A work order in the production queue. */
 export const WorkOrderRowSchema = z.object({
-  id: z.number().int(),
-  orderId: z.number().int(),
-  quoteId: z.number().int(),
-  companyId: z.number().int(),
+  id: RowIdSchema,
+  orderId: RowIdSchema,
+  quoteId: RowIdSchema,
+  companyId: RowIdSchema,
   state: WorkOrderStateSchema,
   dueDate: z.string(),
   specification: BuildSpecificationSchema,
@@ -114,15 +115,15 @@ export const WorkOrderRowSchema = z.object({
   delivery: DeliveryContactSchema.nullable(),
   /** carrier, tracking and serial numbers once shipped, else null */
   shipment: ShipmentSchema.nullable(),
-  createdAt: z.string(),
-  updatedAt: z.string(),
+  createdAt: TimestampSchema,
+  updatedAt: TimestampSchema,
 })
 export type WorkOrderRow = z.infer<typeof WorkOrderRowSchema>
 
 /** A state change or a tuning measurement of a work order, with who and when. */
 export const WorkOrderEventSchema = z.object({
-  id: z.number().int(),
-  workOrderId: z.number().int(),
+  id: RowIdSchema,
+  workOrderId: RowIdSchema,
   kind: z.enum(['state', 'tuning']),
   fromState: z.string().nullable(),
   toState: z.string().nullable(),
@@ -132,7 +133,7 @@ export const WorkOrderEventSchema = z.object({
   passes: z.boolean().nullable(),
   /** the absorber a tuning record is of, on a work order of several; else null */
   absorber: z.number().int().nullable().optional(),
-  actorId: z.number().int().nullable(),
+  actorId: RowIdSchema.nullable(),
   actorName: z.string().nullable(),
   at: z.string(),
   note: z.string(),

@@ -13,6 +13,18 @@ afterAll(() => rig?.close())
 
 const stripe = new Stripe('sk_test_unused')
 
+/** A webhook delivery as the payment service makes it; no header sends it unsigned. */
+const post = (payload: string, header?: string) => {
+  const req = request(rig.t.app)
+    .post('/api/payments/webhook')
+    .set('content-type', 'application/json')
+  return (header === undefined ? req : req.set('stripe-signature', header)).send(payload)
+}
+
+/** The event of a completed checkout session. */
+const completed = (id: unknown, object: Record<string, unknown>) =>
+  JSON.stringify({ id, object: 'event', type: 'checkout.session.completed', data: { object } })
+
 async function orders(quoteId: number) {
   const { agent } = await signedIn(rig.t, 'admin')
   return ((await agent.get('/api/orders')).body as { quoteId: number }[]).filter(
@@ -79,24 +91,16 @@ describe('paying an accepted quote through the SDK and the payment stand-in', ()
   it('refuses a forged or missing signature with 400 and changes nothing', async () => {
     const { quote, customer } = await rig.acceptedQuote()
     const { body } = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)
-    const payload = JSON.stringify({
-      id: 'evt_forged',
-      object: 'event',
-      type: 'checkout.session.completed',
-      data: { object: { id: body.sessionId, amount_total: quote.total, payment_status: 'paid' } },
+    const payload = completed('evt_forged', {
+      id: body.sessionId,
+      amount_total: quote.total,
+      payment_status: 'paid',
     })
     const forged = stripe.webhooks.generateTestHeaderString({ payload, secret: 'whsec_wrong' })
-    const bad = await request(rig.t.app)
-      .post('/api/payments/webhook')
-      .set('content-type', 'application/json')
-      .set('stripe-signature', forged)
-      .send(payload)
+    const bad = await post(payload, forged)
     expect(bad.status).toBe(400)
     expect(bad.body.error.code).toBe('invalid-signature')
-    const none = await request(rig.t.app)
-      .post('/api/payments/webhook')
-      .set('content-type', 'application/json')
-      .send(payload)
+    const none = await post(payload)
     expect(none.status).toBe(400)
     expect(await orders(quote.id)).toHaveLength(0)
     expect((await customer.agent.get(`/api/quotes/${quote.id}`)).body.state).toBe('accepted')
@@ -105,18 +109,13 @@ describe('paying an accepted quote through the SDK and the payment stand-in', ()
   it('ignores a correctly signed event whose amount differs from the session the server made', async () => {
     const { quote, customer } = await rig.acceptedQuote()
     const { body } = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)
-    const payload = JSON.stringify({
-      id: 'evt_cheap_' + body.sessionId,
-      object: 'event',
-      type: 'checkout.session.completed',
-      data: { object: { id: body.sessionId, amount_total: 100, payment_status: 'paid' } },
+    const payload = completed('evt_cheap_' + body.sessionId, {
+      id: body.sessionId,
+      amount_total: 100,
+      payment_status: 'paid',
     })
     const header = stripe.webhooks.generateTestHeaderString({ payload, secret: 'whsec_rig' })
-    const res = await request(rig.t.app)
-      .post('/api/payments/webhook')
-      .set('content-type', 'application/json')
-      .set('stripe-signature', header)
-      .send(payload)
+    const res = await post(payload, header)
     expect(res.status).toBe(200)
     expect(res.body.outcome).toBe('ignored')
     expect(await orders(quote.id)).toHaveLength(0)
@@ -168,15 +167,6 @@ describe('paying an accepted quote through the SDK and the payment stand-in', ()
 })
 
 describe('webhook events that are signed but not to be believed', () => {
-  const post = (payload: string, header: string) =>
-    request(rig.t.app)
-      .post('/api/payments/webhook')
-      .set('content-type', 'application/json')
-      .set('stripe-signature', header)
-      .send(payload)
-  const completed = (id: unknown, object: Record<string, unknown>) =>
-    JSON.stringify({ id, object: 'event', type: 'checkout.session.completed', data: { object } })
-
   it('refuses a signature dated a year ahead with 400, within the SDK’s 300 s otherwise', async () => {
     const { quote, customer } = await rig.acceptedQuote()
     const { body } = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)

@@ -1,18 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { describe, expect, it } from 'vitest'
 import request from 'supertest'
-import type { TestApp } from '../helpers/app'
 import { mailTo, signedIn } from '../helpers/factories'
-import { customerWithContact, makeQuoteApp } from './quotes-rig'
+import { customerWithContact, quoteDesk } from './quotes-rig'
 
-let t: TestApp
-beforeAll(async () => {
-  ;({ t } = await makeQuoteApp())
-})
-afterAll(() => t.close())
+const desk = quoteDesk()
 
 describe('customers and contacts', () => {
   it('lets sales add a customer with a contact and find both in the list', async () => {
-    const { agent } = await signedIn(t, 'sales')
+    const { agent } = await signedIn(desk.t, 'sales')
     const { company, contact } = await customerWithContact(agent)
     const list = await agent.get('/api/customers')
     const found = list.body.find((c: { id: number }) => c.id === company.id)
@@ -27,13 +22,13 @@ describe('customers and contacts', () => {
   })
 
   it('invites a contact as a customer user by an e-mailed link, once', async () => {
-    const { agent } = await signedIn(t, 'sales')
+    const { agent } = await signedIn(desk.t, 'sales')
     const { company, contact } = await customerWithContact(agent)
     const res = await agent.post(`/api/customers/${company.id}/contacts/${contact.id}/invite`)
     expect(res.status).toBe(201)
     expect(res.body).toMatchObject({ role: 'customer', companyId: company.id, invited: true })
-    const mail = await mailTo(t, contact.email)
-    expect(mail.text).toContain(`${t.config.publicUrl}/set-password?token=`)
+    const mail = await mailTo(desk.t, contact.email)
+    expect(mail.text).toContain(`${desk.t.config.publicUrl}/set-password?token=`)
     const again = await agent.post(`/api/customers/${company.id}/contacts/${contact.id}/invite`)
     expect(again.status).toBe(409)
     const read = await agent.get(`/api/customers/${company.id}`)
@@ -41,7 +36,7 @@ describe('customers and contacts', () => {
   })
 
   it('invites a contact once when two invitations race, answering the other with 409', async () => {
-    const { agent } = await signedIn(t, 'sales')
+    const { agent } = await signedIn(desk.t, 'sales')
     const { company, contact } = await customerWithContact(agent)
     const url = `/api/customers/${company.id}/contacts/${contact.id}/invite`
     const answers = await Promise.all([1, 2, 3].map(() => agent.post(url)))
@@ -49,7 +44,7 @@ describe('customers and contacts', () => {
   })
 
   it('answers 404 for a contact of another customer', async () => {
-    const { agent } = await signedIn(t, 'sales')
+    const { agent } = await signedIn(desk.t, 'sales')
     const a = await customerWithContact(agent)
     const b = await customerWithContact(agent)
     const res = await agent.post(`/api/customers/${a.company.id}/contacts/${b.contact.id}/invite`)
@@ -58,9 +53,9 @@ describe('customers and contacts', () => {
 
   it('keeps customers from engineers, production and customers', async () => {
     for (const role of ['engineer', 'production', 'customer'] as const) {
-      const { agent } = await signedIn(t, role)
+      const { agent } = await signedIn(desk.t, role)
       expect((await agent.get('/api/customers')).status).toBe(403)
     }
-    expect((await request(t.app).get('/api/customers')).status).toBe(401)
+    expect((await request(desk.t.app).get('/api/customers')).status).toBe(401)
   })
 })

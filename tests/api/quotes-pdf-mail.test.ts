@@ -1,38 +1,19 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import type { Agent } from 'supertest'
-import type { TestApp } from '../helpers/app'
-import { mailTo, signedIn } from '../helpers/factories'
+import { describe, expect, it } from 'vitest'
+import { mailTo } from '../helpers/factories'
 import { fetchPdf, pdfText } from '../helpers/pdf'
-import {
-  catalogueIds,
-  customerWithContact,
-  daysFromNow,
-  makeQuoteApp,
-  sizingSummary,
-  taxRate,
-} from './quotes-rig'
+import { catalogueIds, daysFromNow, quoteDesk, taxRate } from './quotes-rig'
 
-let t: TestApp
-let sizings: Awaited<ReturnType<typeof makeQuoteApp>>['sizings']
-let sales: Agent
-
-beforeAll(async () => {
-  ;({ t, sizings } = await makeQuoteApp())
-  sales = (await signedIn(t, 'sales')).agent
-})
-afterAll(() => t.close())
+const desk = quoteDesk()
 
 /** A draft with one unit and one option: €8 160.00 + €1 850.00 = €10 010.00, 20 % tax → €12 012.00 */
 async function quote() {
-  const ids = await catalogueIds(sales)
-  const { company, contact } = await customerWithContact(sales)
-  const sizing = sizingSummary(company.id)
-  sizings.put(sizing)
-  const res = await sales.post('/api/quotes').send({
+  const ids = await catalogueIds(desk.sales)
+  const { company, contact, sizing } = await desk.customerSizing()
+  const res = await desk.sales.post('/api/quotes').send({
     sizingId: sizing.id,
     contactId: contact.id,
-    taxRateId: await taxRate(t, 2000),
-    validUntil: daysFromNow(t, 30),
+    taxRateId: await taxRate(desk.t, 2000),
+    validUntil: daysFromNow(desk.t, 30),
     terms: 'Delivery ex works; payment 30 days net.',
     lines: [
       { kind: 'unit', productLineId: ids.unit('FLR-S'), quantity: 1 },
@@ -47,7 +28,7 @@ describe('the quote PDF', () => {
   it('is a valid PDF whose text holds the number, the total and the engineering caution', async () => {
     const { quote: q } = await quote()
     expect(q.total).toBe(1_201_200)
-    const res = await fetchPdf(sales, `/api/quotes/${q.id}/pdf`)
+    const res = await fetchPdf(desk.sales, `/api/quotes/${q.id}/pdf`)
     expect(res.status).toBe(200)
     expect(res.headers['content-type']).toBe('application/pdf')
     const bytes = res.body as Buffer
@@ -67,13 +48,13 @@ describe('the quote PDF', () => {
 describe('sending a quote', () => {
   it('mails the PDF and the portal link to the contact through the SMTP fake', async () => {
     const { quote: q, contact } = await quote()
-    const sent = await sales.post(`/api/quotes/${q.id}/send`)
+    const sent = await desk.sales.post(`/api/quotes/${q.id}/send`)
     expect(sent.status).toBe(200)
     expect(sent.body.state).toBe('sent')
     expect(sent.body.sentAt).not.toBeNull()
-    const mail = await mailTo(t, contact.email)
+    const mail = await mailTo(desk.t, contact.email)
     expect(mail.subject).toMatch(new RegExp(`^Quotation ${q.number} from `))
-    expect(mail.text).toContain(`${t.config.publicUrl}/portal/quotes/${q.id}`)
+    expect(mail.text).toContain(`${desk.t.config.publicUrl}/portal/quotes/${q.id}`)
     expect(mail.attachments).toHaveLength(1)
     const [pdf] = mail.attachments
     expect(pdf!.contentType).toBe('application/pdf')
@@ -81,7 +62,7 @@ describe('sending a quote', () => {
     expect(pdf!.content.subarray(0, 5).toString('latin1')).toBe('%PDF-')
     expect(await pdfText(pdf!.content)).toContain('€12,012.00')
     // The mailbox page's JSON lists it too, as a person opening the fake would see it.
-    const box = (await (await fetch(`${t.mail.httpUrl}/api/messages`)).json()) as {
+    const box = (await (await fetch(`${desk.t.mail.httpUrl}/api/messages`)).json()) as {
       subject: string
     }[]
     expect(box.map((m) => m.subject)).toContain(mail.subject)
@@ -89,18 +70,18 @@ describe('sending a quote', () => {
 
   it('refuses to send a quote with no contact, and sends nothing', async () => {
     const { quote: q } = await quote()
-    const before = t.mail.messages().length
+    const before = desk.t.mail.messages().length
     const { contactId: _c, ...rest } = q
-    const cleared = await sales.put(`/api/quotes/${q.id}`).send({
+    const cleared = await desk.sales.put(`/api/quotes/${q.id}`).send({
       currency: rest.currency,
       contactId: null,
       validUntil: rest.validUntil,
       lines: [{ kind: 'option', optionId: q.lines[1].optionId, quantity: 1 }],
     })
     expect(cleared.status).toBe(200)
-    const res = await sales.post(`/api/quotes/${q.id}/send`)
+    const res = await desk.sales.post(`/api/quotes/${q.id}/send`)
     expect(res.status).toBe(409)
     expect(res.body.error.code).toBe('no-contact')
-    expect(t.mail.messages().length).toBe(before)
+    expect(desk.t.mail.messages().length).toBe(before)
   })
 })

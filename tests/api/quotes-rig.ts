@@ -1,4 +1,6 @@
 import { randomBytes } from 'node:crypto'
+import type { Agent } from 'supertest'
+import { afterAll, beforeAll } from 'vitest'
 import { pino } from 'pino'
 import { createApp } from '../../server/app'
 import { smtpMailer } from '../../server/integrations/mail'
@@ -8,6 +10,12 @@ import type { SizingPool } from '../../server/workers/pool'
 import type { SizingSummary } from '../../shared/schemas/sizing'
 import { seedCatalogue } from '../../seed/seed-catalogue'
 import { makeTestApp, type TestApp } from '../helpers/app'
+import { signedIn } from '../helpers/factories'
+import {
+  OFFICE_FLOOR,
+  OFFICE_FLOOR_ABSORBER,
+  OFFICE_FLOOR_ACCEPTANCE,
+} from '../helpers/office-floor'
 
 /** Quotes never solve a sizing; a call here would be a wiring mistake worth a loud failure. */
 export const noSolving: SizingPool = {
@@ -59,13 +67,9 @@ export async function makeQuoteApp(
 
 let nextId = 900_000
 
-/**
- * An invented submitted sizing of an office floor: mode 1 at 6.9 Hz, 10 t modal mass, a
- * 212.4 kg vertical absorber at 6.75 Hz with ζ 0.09 (k = m ω², c = 2 ζ m ω).
- */
+/** A submitted sizing of the invented office floor (tests/helpers/office-floor.ts). */
 export function sizingSummary(companyId: number, overrides: Partial<SizingSummary> = {}) {
-  const mass = 212.4
-  const omega = 2 * Math.PI * 6.75
+  const omega = 2 * Math.PI * OFFICE_FLOOR_ABSORBER.frequencyHz
   const f = Array.from({ length: 41 }, (_, i) => 5 + i * 0.1)
   const s: SizingSummary = {
     id: nextId++,
@@ -78,29 +82,11 @@ export function sizingSummary(companyId: number, overrides: Partial<SizingSummar
     companyName: 'customer',
     ownerName: 'Field engineer',
     targetMode: 1,
-    hostFrequencyHz: 6.9,
-    effectiveMass: 10_000,
-    orientation: 'vertical',
-    absorber: {
-      mass,
-      stiffness: mass * omega * omega,
-      damping: 2 * 0.09 * mass * omega,
-      frequencyHz: 6.75,
-      frequencyRatio: 6.75 / 6.9,
-      dampingRatio: 0.09,
-    },
-    stroke: 0.009,
-    strokeLimit: 0.02,
+    ...OFFICE_FLOOR,
+    absorber: OFFICE_FLOOR_ABSORBER,
     load: 'Harmonic force 280 N at node-3',
     staticDeflection: 9.81 / (omega * omega),
-    reduction: 6.2,
-    acceptance: {
-      label: 'Office floor',
-      quantity: 'acceleration',
-      limit: 0.05,
-      responseWith: 0.03,
-      passes: true,
-    },
+    acceptance: OFFICE_FLOOR_ACCEPTANCE,
     chart: {
       frequencyHz: f,
       without: f.map((x) => 1 / Math.abs(1 - (x / 6.9) ** 2 + 0.02)),
@@ -118,10 +104,8 @@ export function daysFromNow(t: TestApp, n: number) {
   return new Date(Date.now() + t.clock.offsetMs + n * 86_400_000).toISOString().slice(0, 10)
 }
 
-type AgentLike = import('supertest').Agent
-
 /** A fresh customer company with one contact, made through the API as sales would. */
-export async function customerWithContact(agent: AgentLike) {
+export async function customerWithContact(agent: Agent) {
   const tag = randomBytes(3).toString('hex')
   const company = await agent
     .post('/api/customers')
@@ -138,7 +122,7 @@ export async function customerWithContact(agent: AgentLike) {
 }
 
 /** Catalogue ids by code, for building lines. */
-export async function catalogueIds(agent: AgentLike) {
+export async function catalogueIds(agent: Agent) {
   const lines = (await agent.get('/api/catalogue/lines')).body as { id: number; code: string }[]
   const options = (await agent.get('/api/catalogue/options')).body as { id: number; code: string }[]
   const unit = (code: string) => lines.find((l) => l.code === code)!.id
@@ -150,4 +134,45 @@ export async function catalogueIds(agent: AgentLike) {
 export async function taxRate(t: TestApp, rateBp: number) {
   const name = `Rate ${rateBp} ${randomBytes(3).toString('hex')}`
   return (await t.services.tax.save(null, { name, rateBp, isDefault: false })).id
+}
+
+/** What a quotes test file works with; its fields are set before the file's first test. */
+export interface QuoteDesk {
+  t: TestApp
+  /** the sizings the quotes read, held in memory: put one in to quote it */
+  sizings: ReturnType<typeof memorySizingSource>
+  sales: Agent
+  admin: Agent
+  /** the demo catalogue's ids by code */
+  ids: Awaited<ReturnType<typeof catalogueIds>>
+  /** A fresh customer with one contact, and a submitted sizing of theirs held to quote. */
+  customerSizing: (overrides?: Partial<SizingSummary>) => Promise<{
+    company: { id: number; name: string }
+    contact: { id: number; email: string }
+    sizing: SizingSummary
+  }>
+}
+
+/**
+ * The common start of a quotes test file: the quote app (makeQuoteApp) with sales and the admin
+ * signed in, made before the file's tests and closed after them. Read its fields in tests and
+ * hooks, not at the top of the file (they are set in beforeAll).
+ */
+export function quoteDesk(): QuoteDesk {
+  const desk = {
+    async customerSizing(overrides = {}) {
+      const { company, contact } = await customerWithContact(desk.sales)
+      const sizing = sizingSummary(company.id, overrides)
+      desk.sizings.put(sizing)
+      return { company, contact, sizing }
+    },
+  } as QuoteDesk
+  beforeAll(async () => {
+    const { t, sizings } = await makeQuoteApp()
+    const sales = (await signedIn(t, 'sales')).agent
+    const admin = (await signedIn(t, 'admin')).agent
+    Object.assign(desk, { t, sizings, sales, admin, ids: await catalogueIds(sales) })
+  })
+  afterAll(() => desk.t.close())
+  return desk
 }

@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest'
 import type { UnitRanges } from '../../shared/catalogue'
 import { designChecks, type DesignFacts } from '../../shared/sizing/design-checks'
+import {
+  OFFICE_FLOOR,
+  OFFICE_FLOOR_ABSORBER,
+  OFFICE_FLOOR_ACCEPTANCE,
+} from '../helpers/office-floor'
 import { floorUnitRanges } from '../helpers/unit-ranges'
 
 // Invented units and sizing figures; every check below is a comparison done by hand.
@@ -8,24 +13,12 @@ const floor = floorUnitRanges({ code: 'FL-400', name: 'Floor unit 400' })
 const deep: UnitRanges = { ...floor, id: 2, code: 'FL-DEEP', massMax: 100, strokeLimit: 0.05 }
 const side: UnitRanges = { ...floor, id: 3, code: 'SW-100', orientation: 'horizontal' }
 
+// The invented office floor of tests/helpers/office-floor.ts.
 const facts: DesignFacts = {
-  absorber: {
-    mass: 212.4,
-    stiffness: 1,
-    damping: 1,
-    frequencyHz: 6.75,
-    frequencyRatio: 0.98,
-    dampingRatio: 0.09,
-  },
-  stroke: 0.009,
-  orientation: 'vertical',
-  acceptance: {
-    label: 'Office floor',
-    quantity: 'acceleration',
-    limit: 0.05,
-    responseWith: 0.03,
-    passes: true,
-  },
+  absorber: OFFICE_FLOOR_ABSORBER,
+  stroke: OFFICE_FLOOR.stroke,
+  orientation: OFFICE_FLOOR.orientation,
+  acceptance: OFFICE_FLOOR_ACCEPTANCE,
 }
 
 const byId = (checks: ReturnType<typeof designChecks>) =>

@@ -1,8 +1,13 @@
 import { describe, expect, it } from 'vitest'
 import { plainSummary, responseText } from '../../shared/quote-plain-words'
 import type { CustomerSizing } from '../../shared/schemas/quote'
+import {
+  OFFICE_FLOOR,
+  OFFICE_FLOOR_ABSORBER,
+  OFFICE_FLOOR_ACCEPTANCE,
+} from '../helpers/office-floor'
 
-// An invented office floor (demo data): mode 1 at 6.9 Hz, a 212.4 kg vertical absorber.
+// The invented office floor (demo data): mode 1 at 6.9 Hz, a 212.4 kg vertical absorber.
 const floor: CustomerSizing = {
   id: 1,
   revision: 1,
@@ -11,28 +16,10 @@ const floor: CustomerSizing = {
   siteName: 'Harbour Row offices',
   companyName: 'Customer Ltd',
   targetMode: 1,
-  hostFrequencyHz: 6.9,
-  effectiveMass: 10_000,
-  orientation: 'vertical',
-  absorber: {
-    mass: 212.4,
-    stiffness: 382_000,
-    damping: 1_620,
-    frequencyHz: 6.75,
-    frequencyRatio: 0.978,
-    dampingRatio: 0.09,
-  },
-  stroke: 0.009,
-  strokeLimit: 0.02,
+  ...OFFICE_FLOOR,
+  absorber: OFFICE_FLOOR_ABSORBER,
   staticDeflection: 0.00545,
-  reduction: 6.2,
-  acceptance: {
-    label: 'Office floor',
-    quantity: 'acceleration',
-    limit: 0.05,
-    responseWith: 0.03,
-    passes: true,
-  },
+  acceptance: OFFICE_FLOOR_ACCEPTANCE,
   chart: { frequencyHz: [], without: [], with: [] },
 }
 

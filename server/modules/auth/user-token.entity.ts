@@ -1,25 +1,17 @@
-import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm'
-import { CreatedRecord } from '../../db/record-columns'
+import { Column, Entity, Index } from 'typeorm'
+import { NumberedCreatedRecord } from '../../db/record-columns'
+import { IntColumn, MomentColumn, VarcharColumn } from '../../db/columns'
 
 /** A single-use link token (invitation or password reset); only its SHA-256 is stored. */
 @Entity('user_tokens')
-export class UserTokenEntity extends CreatedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
-  @Column('int')
-  userId: number
-
-  @Column('varchar', { length: 16 })
-  purpose: 'invite' | 'reset'
+export class UserTokenEntity extends NumberedCreatedRecord {
+  @IntColumn() userId: number
+  @VarcharColumn(16) purpose: 'invite' | 'reset'
 
   @Index({ unique: true })
   @Column('char', { length: 64 })
   tokenHash: string
 
-  @Column('datetime', { precision: 3 })
-  expiresAt: Date
-
-  @Column('datetime', { precision: 3, nullable: true })
-  usedAt: Date | null
+  @MomentColumn() expiresAt: Date
+  @MomentColumn({ nullable: true }) usedAt: Date | null
 }

@@ -1,17 +1,10 @@
-import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm'
-import { CreatedRecord } from '../../db/record-columns'
+import { Entity } from 'typeorm'
+import { NumberedCreatedRecord } from '../../db/record-columns'
+import { VarcharColumn } from '../../db/columns'
 
 @Entity('companies')
-export class CompanyEntity extends CreatedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
-  @Column('varchar', { length: 160, unique: true })
-  name: string
-
-  @Column('varchar', { length: 16 })
-  kind: 'supplier' | 'customer'
-
-  @Column('varchar', { length: 300, default: '' })
-  address: string
+export class CompanyEntity extends NumberedCreatedRecord {
+  @VarcharColumn(160, { unique: true }) name: string
+  @VarcharColumn(16) kind: 'supplier' | 'customer'
+  @VarcharColumn(300, { default: '' }) address: string
 }

@@ -1,44 +1,22 @@
-import {
-  Column,
-  Entity,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from 'typeorm'
-import { CreatedRecord } from '../../db/record-columns'
+import { Entity, type Relation } from 'typeorm'
+import { NumberedCreatedRecord } from '../../db/record-columns'
 import type { CompanyEntity } from '../companies/company.entity'
 import type { UserEntity } from '../users/user.entity'
+import { VarcharColumn } from '../../db/columns'
+import { ReferenceTo } from '../../db/reference-column'
 
 /** A person at a customer company; becomes a customer user when invited. */
 @Entity('contacts')
-export class ContactEntity extends CreatedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
+export class ContactEntity extends NumberedCreatedRecord {
+  declare companyId: number
+  @ReferenceTo('CompanyEntity', { onDelete: 'CASCADE' }) company: Relation<CompanyEntity>
 
-  @Column('int')
-  companyId: number
+  @VarcharColumn(120) name: string
+  @VarcharColumn(254) email: string
+  @VarcharColumn(40, { default: '' }) phone: string
+  @VarcharColumn(120, { default: '' }) position: string
 
-  @ManyToOne('CompanyEntity', { onDelete: 'CASCADE' })
-  @JoinColumn({ name: 'companyId' })
-  company: Relation<CompanyEntity>
-
-  @Column('varchar', { length: 120 })
-  name: string
-
-  @Column('varchar', { length: 254 })
-  email: string
-
-  @Column('varchar', { length: 40, default: '' })
-  phone: string
-
-  @Column('varchar', { length: 120, default: '' })
-  position: string
-
-  @Column('int', { nullable: true })
-  userId: number | null
-
-  @ManyToOne('UserEntity', { nullable: true, onDelete: 'SET NULL' })
-  @JoinColumn({ name: 'userId' })
+  declare userId: number | null
+  @ReferenceTo('UserEntity', { nullable: true, onDelete: 'SET NULL' })
   user: Relation<UserEntity> | null
 }

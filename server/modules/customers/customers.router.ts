@@ -1,7 +1,6 @@
 import { z } from 'zod'
 import { UserSummarySchema } from '../../../shared/schemas/auth'
 import { ContactSchema, CustomerSchema } from '../../../shared/schemas/customer'
-import { Router } from 'express'
 import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
@@ -12,113 +11,60 @@ import {
 } from '../../../shared/schemas/customer'
 import type { ApiRegistry } from '../../http/api-registry'
 import { answerPage } from '../../http/page'
-import { route } from '../../http/route'
+import { routeTable } from '../../http/route-table'
 import { clientAddress } from '../../http/client-address'
 import type { CustomersService } from './customers.service'
 
-const SELLERS = ACCESS.customers.write
-
 export function customersRouter(api: ApiRegistry, customers: CustomersService) {
-  const router = Router()
-  const tag = 'Customers'
-  const base = { tag, access: SELLERS }
-  route(
-    router,
-    api,
-    {
-      ...base,
-      method: 'get',
-      path: '/api/customers',
-      response: z.array(CustomerSchema),
-      summary:
-        'Customer companies and contacts by name, with a search; one page with limit and offset, the total matching in X-Total-Count',
-      query: CustomerListQuerySchema,
-    },
-    async ({ query, res }) => answerPage(res, await customers.list(query)),
-  )
-  route(
-    router,
-    api,
-    {
-      ...base,
-      method: 'post',
-      path: '/api/customers',
-      response: CustomerSchema,
-      summary: 'Add a customer company',
-      body: CustomerInputSchema,
-      status: 201,
-    },
-    ({ body }) => customers.create(body),
-  )
-  route(
-    router,
-    api,
-    {
-      ...base,
-      method: 'get',
-      path: '/api/customers/:id',
-      response: CustomerSchema,
-      summary: 'One customer with contacts',
-      params: IdParamSchema,
-    },
-    ({ params }) => customers.get(params.id),
-  )
-  route(
-    router,
-    api,
-    {
-      ...base,
-      method: 'put',
-      path: '/api/customers/:id',
-      response: CustomerSchema,
-      summary: 'Rename a customer or change its address',
-      params: IdParamSchema,
-      body: CustomerInputSchema,
-    },
-    ({ params, body }) => customers.update(params.id, body),
-  )
-  route(
-    router,
-    api,
-    {
-      ...base,
-      method: 'post',
-      path: '/api/customers/:id/contacts',
-      response: ContactSchema,
-      summary: 'Add a contact',
-      params: IdParamSchema,
-      body: ContactInputSchema,
-      status: 201,
-    },
-    ({ params, body }) => customers.addContact(params.id, body),
-  )
-  route(
-    router,
-    api,
-    {
-      ...base,
-      method: 'put',
-      path: '/api/customers/:id/contacts/:contactId',
-      response: ContactSchema,
-      summary: 'Change a contact',
-      params: ContactParamsSchema,
-      body: ContactInputSchema,
-    },
-    ({ params, body }) => customers.updateContact(params.id, params.contactId, body),
-  )
-  route(
-    router,
-    api,
-    {
-      ...base,
-      method: 'post',
-      path: '/api/customers/:id/contacts/:contactId/invite',
-      response: UserSummarySchema,
-      summary: 'Invite a contact as a customer user (mails a set-password link)',
-      params: ContactParamsSchema,
-      status: 201,
-    },
-    ({ params, req }) => customers.invite(params.id, params.contactId, clientAddress(req)),
-  )
-  return router
+  const routes = routeTable(api, 'Customers', ACCESS.customers)
+  routes.get('/api/customers', {
+    summary:
+      'Customer companies and contacts by name, with a search; one page with limit and offset, the total matching in X-Total-Count',
+    response: z.array(CustomerSchema),
+    query: CustomerListQuerySchema,
+    answer: async ({ query, res }) => answerPage(res, await customers.list(query)),
+  })
+  routes.post('/api/customers', {
+    summary: 'Add a customer company',
+    response: CustomerSchema,
+    body: CustomerInputSchema,
+    status: 201,
+    answer: ({ body }) => customers.create(body),
+  })
+  routes.get('/api/customers/:id', {
+    summary: 'One customer with contacts',
+    response: CustomerSchema,
+    params: IdParamSchema,
+    answer: ({ params }) => customers.get(params.id),
+  })
+  routes.put('/api/customers/:id', {
+    summary: 'Rename a customer or change its address',
+    response: CustomerSchema,
+    params: IdParamSchema,
+    body: CustomerInputSchema,
+    answer: ({ params, body }) => customers.update(params.id, body),
+  })
+  routes.post('/api/customers/:id/contacts', {
+    summary: 'Add a contact',
+    response: ContactSchema,
+    params: IdParamSchema,
+    body: ContactInputSchema,
+    status: 201,
+    answer: ({ params, body }) => customers.addContact(params.id, body),
+  })
+  routes.put('/api/customers/:id/contacts/:contactId', {
+    summary: 'Change a contact',
+    response: ContactSchema,
+    params: ContactParamsSchema,
+    body: ContactInputSchema,
+    answer: ({ params, body }) => customers.updateContact(params.id, params.contactId, body),
+  })
+  routes.post('/api/customers/:id/contacts/:contactId/invite', {
+    summary: 'Invite a contact as a customer user (mails a set-password link)',
+    response: UserSummarySchema,
+    params: ContactParamsSchema,
+    status: 201,
+    answer: ({ params, req }) => customers.invite(params.id, params.contactId, clientAddress(req)),
+  })
+  return routes.router
 }

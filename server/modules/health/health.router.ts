@@ -1,23 +1,15 @@
 import { ApiDocumentSchema, HealthSchema } from '../../../shared/schemas/service'
-import { Router } from 'express'
 import type { DataSource } from 'typeorm'
 import type { ApiRegistry } from '../../http/api-registry'
-import { route } from '../../http/route'
+import { routeTable } from '../../http/route-table'
 
 export function healthRouter(api: ApiRegistry, ds: DataSource, version: string) {
-  const router = Router()
-  route(
-    router,
-    api,
-    {
-      method: 'get',
-      path: '/api/health',
-      response: HealthSchema,
-      tag: 'Service',
-      summary: 'Liveness and database reachability',
-      access: 'public',
-    },
-    async ({ res }) => {
+  const routes = routeTable(api, 'Service', {})
+  routes.get('/api/health', {
+    summary: 'Liveness and database reachability',
+    response: HealthSchema,
+    access: 'public',
+    answer: async ({ res }) => {
       const started = performance.now()
       let database: 'up' | 'down' = 'up'
       try {
@@ -34,19 +26,12 @@ export function healthRouter(api: ApiRegistry, ds: DataSource, version: string) 
       res.status(database === 'up' ? 200 : 503).json(body)
       return undefined
     },
-  )
-  route(
-    router,
-    api,
-    {
-      method: 'get',
-      path: '/api/openapi.json',
-      response: ApiDocumentSchema,
-      tag: 'Service',
-      summary: 'This API document',
-      access: 'public',
-    },
-    () => api.document(version),
-  )
-  return router
+  })
+  routes.get('/api/openapi.json', {
+    summary: 'This API document',
+    response: ApiDocumentSchema,
+    access: 'public',
+    answer: () => api.document(version),
+  })
+  return routes.router
 }

@@ -6,7 +6,6 @@ import {
   MeasurementRecordSchema,
   MeasurementRecordSummarySchema,
 } from '../../../shared/schemas/measurement'
-import { Router } from 'express'
 import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
@@ -17,102 +16,63 @@ import {
   RecordUploadSchema,
 } from '../../../shared/schemas/measurement'
 import type { ApiRegistry } from '../../http/api-registry'
-import { routesFor } from '../../http/route'
+import { routeTable } from '../../http/route-table'
 import { singleUpload } from '../../http/upload'
 import type { Measurements } from './calibrate.service'
 import { recordAnalysesRoutes } from './record-analyses.router'
 
-const READERS = ACCESS.measurements.read
-const WRITERS = ACCESS.measurements.write
-
 export function measurementsRouter(api: ApiRegistry, m: Measurements) {
-  const router = Router()
-  const add = routesFor(router, api, 'Measurements')
-  add(
-    {
-      method: 'post',
-      path: '/api/sites/:id/records',
-      response: MeasurementRecordSchema,
-      summary: 'Upload an acceleration record (multipart field "record") and identify its modes',
-      access: WRITERS,
-      params: IdParamSchema,
-      body: RecordUploadSchema,
-      upload: 'record',
-      before: [singleUpload('record', MAX_RECORD_BYTES)],
-      status: 201,
-    },
-    ({ user, params, body, req, res }) =>
+  const routes = routeTable(api, 'Measurements', ACCESS.measurements)
+  routes.post('/api/sites/:id/records', {
+    summary: 'Upload an acceleration record (multipart field "record") and identify its modes',
+    response: MeasurementRecordSchema,
+    params: IdParamSchema,
+    body: RecordUploadSchema,
+    upload: 'record',
+    before: [singleUpload('record', MAX_RECORD_BYTES)],
+    status: 201,
+    answer: ({ user, params, body, req, res }) =>
       m.upload(user, params.id, body, req.file, closedSignal(res)),
-  )
-  add(
-    {
-      method: 'get',
-      path: '/api/sites/:id/records',
-      response: z.array(MeasurementRecordSummarySchema),
-      summary: 'Records of a site',
-      access: READERS,
-      params: IdParamSchema,
-    },
-    ({ params }) => m.list(params.id),
-  )
-  add(
-    {
-      method: 'get',
-      path: '/api/records/:id',
-      response: MeasurementRecordSchema,
-      summary: 'One record with its spectrum and peaks',
-      access: READERS,
-      params: IdParamSchema,
-    },
-    ({ params }) => m.get(params.id),
-  )
-  add(
-    {
-      method: 'delete',
-      path: '/api/records/:id',
-      summary: 'Delete a record, its file and its analyses',
-      access: WRITERS,
-      params: IdParamSchema,
-    },
-    ({ user, params }) => m.remove(user, params.id),
-  )
-  add(
-    {
-      method: 'post',
-      path: '/api/records/:id/peaks',
-      response: AddedPeakSchema,
-      summary: 'Identify a peak near a frequency and add it',
-      access: WRITERS,
-      params: IdParamSchema,
-      body: PeakAddSchema,
-      status: 201,
-    },
-    ({ user, params, body }) => m.addPeak(user, params.id, body.frequencyHz),
-  )
-  add(
-    {
-      method: 'delete',
-      path: '/api/records/:id/peaks/:index',
-      response: MeasurementRecordSchema,
-      summary: 'Drop a false peak (0-based index in the list)',
-      access: WRITERS,
-      params: PeakIndexParamsSchema,
-    },
-    ({ user, params }) => m.dropPeak(user, params.id, params.index),
-  )
-  add(
-    {
-      method: 'post',
-      path: '/api/models/:id/calibrate',
-      response: HostModelSchema,
-      summary: 'Scale a model’s springs to a measured frequency; saves a new revision',
-      access: WRITERS,
-      params: IdParamSchema,
-      body: CalibrateSchema,
-      status: 201,
-    },
-    ({ user, params, body }) => m.calibrate(user, params.id, body),
-  )
-  recordAnalysesRoutes(router, api, m)
-  return router
+  })
+  routes.get('/api/sites/:id/records', {
+    summary: 'Records of a site',
+    response: z.array(MeasurementRecordSummarySchema),
+    params: IdParamSchema,
+    answer: ({ params }) => m.list(params.id),
+  })
+  routes.get('/api/records/:id', {
+    summary: 'One record with its spectrum and peaks',
+    response: MeasurementRecordSchema,
+    params: IdParamSchema,
+    answer: ({ params }) => m.get(params.id),
+  })
+  routes.delete('/api/records/:id', {
+    summary: 'Delete a record, its file and its analyses',
+    params: IdParamSchema,
+    answer: ({ user, params }) => m.remove(user, params.id),
+  })
+  routes.post('/api/records/:id/peaks', {
+    summary: 'Identify a peak near a frequency and add it',
+    response: AddedPeakSchema,
+    params: IdParamSchema,
+    body: PeakAddSchema,
+    status: 201,
+    answer: ({ user, params, body }) => m.addPeak(user, params.id, body.frequencyHz),
+  })
+  routes.delete('/api/records/:id/peaks/:index', {
+    summary: 'Drop a false peak (0-based index in the list)',
+    response: MeasurementRecordSchema,
+    params: PeakIndexParamsSchema,
+    answer: ({ user, params }) => m.dropPeak(user, params.id, params.index),
+  })
+  routes.post('/api/models/:id/calibrate', {
+    summary: 'Scale a model’s springs to a measured frequency; saves a new revision',
+    response: HostModelSchema,
+    params: IdParamSchema,
+    body: CalibrateSchema,
+    status: 201,
+    answer: ({ user, params, body }) => m.calibrate(user, params.id, body),
+  })
+  recordAnalysesRoutes(routes, m)
+  return routes.router
 }

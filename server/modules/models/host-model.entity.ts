@@ -1,25 +1,19 @@
-import { Column, Entity, type Relation } from 'typeorm'
+import { Entity, type Relation } from 'typeorm'
 import { ReferenceTo } from '../../db/reference-column'
 import { NumberedTrackedRecord } from '../../db/record-columns'
 import type { SiteEntity } from '../sites/site.entity'
 import type { UserEntity } from '../users/user.entity'
+import { IntColumn, VarcharColumn } from '../../db/columns'
 
 /** A host structure model of a site; its content lives in numbered revisions. */
 @Entity('host_models')
 export class HostModelEntity extends NumberedTrackedRecord {
   declare siteId: number
-
-  @ReferenceTo('SiteEntity', { onDelete: 'CASCADE' })
-  site: Relation<SiteEntity>
+  @ReferenceTo('SiteEntity', { onDelete: 'CASCADE' }) site: Relation<SiteEntity>
 
   declare ownerId: number
+  @ReferenceTo('UserEntity', { onDelete: 'RESTRICT' }) owner: Relation<UserEntity>
 
-  @ReferenceTo('UserEntity', { onDelete: 'RESTRICT' })
-  owner: Relation<UserEntity>
-
-  @Column('varchar', { length: 160 })
-  name: string
-
-  @Column('int', { default: 1 })
-  currentRevision: number
+  @VarcharColumn(160) name: string
+  @IntColumn({ default: 1 }) currentRevision: number
 }

@@ -1,7 +1,7 @@
-import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm'
-import { CreatedRecord } from '../../db/record-columns'
+import { Entity, Index } from 'typeorm'
+import { NumberedCreatedRecord } from '../../db/record-columns'
 import type { MailMessage } from '../../integrations/mail'
-import { jsonColumn } from '../../http/json-column'
+import { IntColumn, JsonColumn, MomentColumn, VarcharColumn } from '../../db/columns'
 
 export type OutboxState = 'pending' | 'sent' | 'failed'
 
@@ -11,34 +11,18 @@ export type OutboxState = 'pending' | 'sent' | 'failed'
  */
 @Entity('outbox_mails')
 @Index('IDX_outbox_mails_due', ['state', 'nextAttemptAt'])
-export class OutboxMailEntity extends CreatedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
-  @Column('varchar', { length: 254 })
-  toAddress: string
-
-  @Column('varchar', { length: 300 })
-  subject: string
+export class OutboxMailEntity extends NumberedCreatedRecord {
+  @VarcharColumn(254) toAddress: string
+  @VarcharColumn(300) subject: string
 
   /** The whole message; attachments as base64. */
-  @Column('longtext', { transformer: jsonColumn })
-  message: StoredMail
+  @JsonColumn() message: StoredMail
 
-  @Column('varchar', { length: 12, default: 'pending' })
-  state: OutboxState
-
-  @Column('int', { default: 0 })
-  attempts: number
-
-  @Column('datetime', { precision: 3 })
-  nextAttemptAt: Date
-
-  @Column('varchar', { length: 500, nullable: true })
-  lastError: string | null
-
-  @Column('datetime', { precision: 3, nullable: true })
-  sentAt: Date | null
+  @VarcharColumn(12, { default: 'pending' }) state: OutboxState
+  @IntColumn({ default: 0 }) attempts: number
+  @MomentColumn() nextAttemptAt: Date
+  @VarcharColumn(500, { nullable: true }) lastError: string | null
+  @MomentColumn({ nullable: true }) sentAt: Date | null
 }
 
 export type StoredMail = Omit<MailMessage, 'attachments'> & {

@@ -27,7 +27,8 @@ function withAttachments<A, B>(
 const toStored = (m: MailMessage): StoredMail =>
   withAttachments(m, (a) => ({ base64: a.content.toString('base64') })) as StoredMail
 
-const fromStored = (m: StoredMail): MailMessage =>
+/** A stored mail as it was written: attachments' contents back from base64. */
+export const fromStored = (m: StoredMail): MailMessage =>
   withAttachments(m, (a) => ({ content: Buffer.from(a.base64, 'base64') })) as MailMessage
 
 export function outboxRepository(ds: DataSource) {

@@ -1,31 +1,18 @@
-import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm'
-import { CreatedRecord } from '../../db/record-columns'
+import { Entity, Index } from 'typeorm'
+import { NumberedCreatedRecord } from '../../db/record-columns'
+import { IntColumn, MomentColumn, VarcharColumn } from '../../db/columns'
 
 /** A paid quote; one per quote (the unique index is what makes the order exactly-once). */
 @Entity('orders')
-export class OrderEntity extends CreatedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
+export class OrderEntity extends NumberedCreatedRecord {
   @Index({ unique: true })
-  @Column('int')
+  @IntColumn()
   quoteId: number
 
-  @Column('int')
-  companyId: number
-
-  @Column('varchar', { length: 255 })
-  sessionId: string
-
-  @Column('int')
-  amount: number
-
-  @Column('varchar', { length: 3 })
-  currency: string
-
-  @Column('varchar', { length: 16, default: 'confirmed' })
-  status: string
-
-  @Column('datetime', { precision: 3 })
-  paidAt: Date
+  @IntColumn() companyId: number
+  @VarcharColumn(255) sessionId: string
+  @IntColumn() amount: number
+  @VarcharColumn(3) currency: string
+  @VarcharColumn(16, { default: 'confirmed' }) status: string
+  @MomentColumn() paidAt: Date
 }

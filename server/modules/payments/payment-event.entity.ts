@@ -1,4 +1,5 @@
-import { Column, CreateDateColumn, Entity, PrimaryColumn } from 'typeorm'
+import { CreateDateColumn, Entity, PrimaryColumn } from 'typeorm'
+import { VarcharColumn } from '../../db/columns'
 
 /** A webhook event applied; the primary key makes a replay or a second delivery a no-op. */
 @Entity('payment_events')
@@ -6,11 +7,8 @@ export class PaymentEventEntity {
   @PrimaryColumn('varchar', { length: 255 })
   eventId: string
 
-  @Column('varchar', { length: 80 })
-  type: string
-
-  @Column('varchar', { length: 255, default: '' })
-  sessionId: string
+  @VarcharColumn(80) type: string
+  @VarcharColumn(255, { default: '' }) sessionId: string
 
   @CreateDateColumn({ type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
   receivedAt: Date

@@ -1,5 +1,6 @@
 import { Brackets, type DataSource } from 'typeorm'
 import type { WorkOrderListQuery } from '../../../shared/schemas/shipment'
+import { likeText } from '../../db/list-page'
 import { WorkOrderEntity } from './work-order.entity'
 
 /** Rows per page of the production queue when the query does not say. */
@@ -35,7 +36,7 @@ export function workOrderQueueRepository(ds: DataSource) {
     if (q.state === 'open') qb.andWhere("w.state <> 'shipped'")
     else if (q.state) qb.andWhere('w.state = :state', { state: q.state })
     if (q.search) {
-      const like = `%${q.search.toLowerCase().replace(/[%_\\]/g, '\\$&')}%`
+      const like = likeText(q.search.toLowerCase())
       qb.andWhere(
         new Brackets((b) => {
           for (const col of SEARCHED) b.orWhere(`LOWER(${col}) LIKE :like`, { like })

@@ -88,11 +88,15 @@ export function quotesCore(deps: QuotesDeps) {
     return r
   }
 
+  /** The customer's projection of a quote: no supplier history, no staff specifics. */
+  async function customerView(r: QuoteRow): Promise<CustomerQuote> {
+    return toCustomerQuote(quoteOf(r, (await repo.latestRevision(r.number)) === r.revision, []))
+  }
+
   /** The supplier's full view, or for a customer the customer projection. */
   async function view(user: AuthUser, r: QuoteRow): Promise<Quote | CustomerQuote> {
-    const latest = (await repo.latestRevision(r.number)) === r.revision
-    if (isCustomer(user)) return toCustomerQuote(quoteOf(r, latest, []))
-    return quoteOf(r, latest, await repo.events(r.id))
+    if (isCustomer(user)) return customerView(r)
+    return fullView(r)
   }
 
   /** The supplier's full view, for internal use (the work order's frozen specification). */
@@ -137,7 +141,7 @@ export function quotesCore(deps: QuotesDeps) {
     return { ...head, ...rate, ...totals, lines }
   }
 
-  return { row, visibleRow, view, fullView, submittedSizing, price, priced, fresh }
+  return { row, visibleRow, view, customerView, fullView, submittedSizing, price, priced, fresh }
 }
 export type QuotesCore = ReturnType<typeof quotesCore>
 

@@ -1,57 +1,28 @@
-import {
-  Column,
-  Entity,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from 'typeorm'
+import { Entity, type Relation } from 'typeorm'
 import type { QuoteEntity } from './quote.entity'
+import { DoubleColumn, IntColumn, VarcharColumn } from '../../db/columns'
+import { ReferenceTo } from '../../db/reference-column'
+import { NumberedRecord } from '../../db/record-columns'
 
 /** A priced line, frozen with its code and text so catalogue changes never reach it. */
 @Entity('quote_lines')
-export class QuoteLineEntity {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
-  @Column('int')
-  quoteId: number
-
-  @ManyToOne('QuoteEntity', 'lines', { onDelete: 'CASCADE' })
-  @JoinColumn({ name: 'quoteId' })
+export class QuoteLineEntity extends NumberedRecord {
+  declare quoteId: number
+  @ReferenceTo('QuoteEntity', { onDelete: 'CASCADE', inverse: 'lines' })
   quote: Relation<QuoteEntity>
 
-  @Column('int')
-  position: number
-
-  @Column('varchar', { length: 16 })
-  kind: 'unit' | 'option' | 'service'
-
-  @Column('int', { nullable: true })
-  productLineId: number | null
-
-  @Column('int', { nullable: true })
-  optionId: number | null
-
-  @Column('varchar', { length: 24 })
-  code: string
-
-  @Column('varchar', { length: 300 })
-  description: string
-
-  @Column('double', { nullable: true })
-  builtMass: number | null
+  @IntColumn() position: number
+  @VarcharColumn(16) kind: 'unit' | 'option' | 'service'
+  @IntColumn({ nullable: true }) productLineId: number | null
+  @IntColumn({ nullable: true }) optionId: number | null
+  @VarcharColumn(24) code: string
+  @VarcharColumn(300) description: string
+  @DoubleColumn({ nullable: true }) builtMass: number | null
 
   /** the sizing's absorbers (1-based) a unit line supplies, as "1,2"; null for one absorber */
-  @Column('varchar', { length: 60, nullable: true })
-  absorbers: string | null
+  @VarcharColumn(60, { nullable: true }) absorbers: string | null
 
-  @Column('int')
-  quantity: number
-
-  @Column('int')
-  unitPrice: number
-
-  @Column('int')
-  lineTotal: number
+  @IntColumn() quantity: number
+  @IntColumn() unitPrice: number
+  @IntColumn() lineTotal: number
 }

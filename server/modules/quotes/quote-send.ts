@@ -1,10 +1,5 @@
 import type { MailPreview } from '../../../shared/schemas/quote-flow'
-import {
-  toCustomerQuote,
-  type CustomerQuote,
-  type Quote,
-  type QuoteSend,
-} from '../../../shared/schemas/quote'
+import { toCustomerQuote, type Quote, type QuoteSend } from '../../../shared/schemas/quote'
 import { AppError, notFound } from '../../http/app-error'
 import { inlineFontCss } from '../../integrations/pdf/renderer'
 import type { AuthUser } from '../../middleware/authenticate'
@@ -82,7 +77,7 @@ export function quoteSending(deps: QuotesServiceDeps, core: QuotesCore) {
    * quote's row lock: a second send waits, finds it sent and answers it as it is, mailing
    * nothing.
    */
-  async function send(user: AuthUser, id: number, body: QuoteSend): Promise<Quote | CustomerQuote> {
+  async function send(user: AuthUser, id: number, body: QuoteSend): Promise<Quote> {
     await repo.exclusive(id, async (transition) => {
       const r = await repo.findById(id)
       if (!r) throw notFound('quote')
@@ -110,7 +105,7 @@ export function quoteSending(deps: QuotesServiceDeps, core: QuotesCore) {
       })
       if (!moved) throw conflict('quote-state', 'The quote changed while it was being sent.')
     })
-    return core.view(user, await core.row(id))
+    return core.fullView(await core.row(id))
   }
 
   return { renderPdf, send, mailPreview }

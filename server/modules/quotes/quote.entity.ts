@@ -1,22 +1,14 @@
-import {
-  Column,
-  Entity,
-  Index,
-  JoinColumn,
-  ManyToOne,
-  OneToMany,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from 'typeorm'
-import { TrackedRecord } from '../../db/record-columns'
+import { Column, Entity, Index, OneToMany, type Relation } from 'typeorm'
+import { NumberedTrackedRecord } from '../../db/record-columns'
 import type { Currency } from '../../../shared/money'
 import type { QuoteState } from '../../../shared/schemas/quote'
 import type { SizingSummary } from '../../../shared/schemas/sizing'
-import { jsonColumn } from '../../http/json-column'
 import type { CompanyEntity } from '../companies/company.entity'
 import type { ContactEntity } from '../customers/contact.entity'
 import type { UserEntity } from '../users/user.entity'
 import type { QuoteLineEntity } from './quote-line.entity'
+import { IntColumn, JsonColumn, MomentColumn, VarcharColumn } from '../../db/columns'
+import { ReferenceTo } from '../../db/reference-column'
 
 /** One revision of a numbered quote; a sent revision is never changed, only superseded. */
 @Entity('quotes')
@@ -24,118 +16,63 @@ import type { QuoteLineEntity } from './quote-line.entity'
 @Index('IDX_quotes_expiry', ['state', 'validUntil'])
 @Index('UQ_quotes_number_revision', ['number', 'revision'], { unique: true })
 @Index('UQ_quotes_year_seq_revision', ['year', 'seq', 'revision'], { unique: true })
-export class QuoteEntity extends TrackedRecord {
-  @PrimaryGeneratedColumn('increment', { type: 'int' })
-  id: number
-
-  @Column('varchar', { length: 24 })
-  number: string
-
-  @Column('int')
-  year: number
-
-  @Column('int')
-  seq: number
-
-  @Column('int')
-  revision: number
-
-  @Column('varchar', { length: 16 })
-  state: QuoteState
+export class QuoteEntity extends NumberedTrackedRecord {
+  @VarcharColumn(24) number: string
+  @IntColumn() year: number
+  @IntColumn() seq: number
+  @IntColumn() revision: number
+  @VarcharColumn(16) state: QuoteState
 
   /** The lead's sizings live elsewhere (or in memory in tests): a soft reference. */
-  @Column('int')
-  sizingId: number
+  @IntColumn() sizingId: number
 
   /** The sizing summary frozen when this revision was made. */
-  @Column('longtext', { transformer: jsonColumn })
-  sizing: SizingSummary
+  @JsonColumn() sizing: SizingSummary
 
-  @Column('int')
-  companyId: number
+  declare companyId: number
+  @ReferenceTo('CompanyEntity', { onDelete: 'RESTRICT' }) company: Relation<CompanyEntity>
 
-  @ManyToOne('CompanyEntity', { onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'companyId' })
-  company: Relation<CompanyEntity>
-
-  @Column('int', { nullable: true })
-  contactId: number | null
-
-  @ManyToOne('ContactEntity', { nullable: true, onDelete: 'SET NULL' })
-  @JoinColumn({ name: 'contactId' })
+  declare contactId: number | null
+  @ReferenceTo('ContactEntity', { nullable: true, onDelete: 'SET NULL' })
   contact: Relation<ContactEntity> | null
 
-  @Column('varchar', { length: 3 })
-  currency: Currency
-
-  @Column('int')
-  discountBp: number
-
-  @Column('int')
-  taxBp: number
+  @VarcharColumn(3) currency: Currency
+  @IntColumn() discountBp: number
+  @IntColumn() taxBp: number
 
   /** the named rate the quote was priced with, as it was then (null: no rate set up, 0 %) */
-  @Column('int', { nullable: true })
-  taxRateId: number | null
+  @IntColumn({ nullable: true }) taxRateId: number | null
 
-  @Column('varchar', { length: 60, nullable: true })
-  taxRateName: string | null
+  @VarcharColumn(60, { nullable: true }) taxRateName: string | null
 
   /** YYYY-MM-DD; a string, because a calendar date has no time zone to shift it. */
-  @Column('varchar', { length: 10 })
-  validUntil: string
+  @VarcharColumn(10) validUntil: string
 
   @Column('text')
   terms: string
 
-  @Column('int')
-  subtotal: number
-
-  @Column('int')
-  discount: number
-
-  @Column('int')
-  discountedSubtotal: number
-
-  @Column('int')
-  tax: number
-
-  @Column('int')
-  total: number
+  @IntColumn() subtotal: number
+  @IntColumn() discount: number
+  @IntColumn() discountedSubtotal: number
+  @IntColumn() tax: number
+  @IntColumn() total: number
 
   @OneToMany('QuoteLineEntity', 'quote', { cascade: true })
   lines: Relation<QuoteLineEntity[]>
 
-  @Column('int')
-  createdById: number
+  declare createdById: number
+  @ReferenceTo('UserEntity', { onDelete: 'RESTRICT' }) createdBy: Relation<UserEntity>
 
-  @ManyToOne('UserEntity', { onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'createdById' })
-  createdBy: Relation<UserEntity>
-
-  @Column('datetime', { precision: 3, nullable: true })
-  sentAt: Date | null
-
-  @Column('datetime', { precision: 3, nullable: true })
-  acceptedAt: Date | null
-
-  @Column('varchar', { length: 120, nullable: true })
-  acceptedName: string | null
-
-  @Column('varchar', { length: 60, nullable: true })
-  purchaseOrder: string | null
-
-  @Column('datetime', { precision: 3, nullable: true })
-  paidAt: Date | null
+  @MomentColumn({ nullable: true }) sentAt: Date | null
+  @MomentColumn({ nullable: true }) acceptedAt: Date | null
+  @VarcharColumn(120, { nullable: true }) acceptedName: string | null
+  @VarcharColumn(60, { nullable: true }) purchaseOrder: string | null
+  @MomentColumn({ nullable: true }) paidAt: Date | null
 
   /** Sales confirmed, when sending, the failed design checks the sizing was handed over with. */
-  @Column('int', { nullable: true })
-  designConfirmedById: number | null
-
-  @ManyToOne('UserEntity', { nullable: true, onDelete: 'SET NULL' })
-  @JoinColumn({ name: 'designConfirmedById' })
+  declare designConfirmedById: number | null
+  @ReferenceTo('UserEntity', { nullable: true, onDelete: 'SET NULL' })
   designConfirmedBy: Relation<UserEntity> | null
 
-  @Column('datetime', { precision: 3, nullable: true })
-  designConfirmedAt: Date | null
+  @MomentColumn({ nullable: true }) designConfirmedAt: Date | null
 }

@@ -1,5 +1,4 @@
 import { z } from 'zod'
-import { Router } from 'express'
 import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
@@ -12,7 +11,7 @@ import {
 } from '../../../shared/schemas/quote-flow'
 import type { ApiRegistry } from '../../http/api-registry'
 import { answerPage } from '../../http/page'
-import { route } from '../../http/route'
+import { routeTable } from '../../http/route-table'
 import type { QuotesService } from './quotes.service'
 
 /**
@@ -20,56 +19,34 @@ import type { QuotesService } from './quotes.service'
  * Mounted before the quotes router, so `/api/quotes/ready` is not read as a quote id.
  */
 export function quotesFlowRouter(api: ApiRegistry, quotes: QuotesService) {
-  const router = Router()
-  const tag = 'Quotes'
+  const routes = routeTable(api, 'Quotes', { write: ACCESS.quotes.write })
   const access = ACCESS.quotes.write
-  route(
-    router,
-    api,
-    {
-      tag,
-      method: 'get',
-      path: '/api/quotes/ready',
-      response: z.array(ReadySizingSchema),
-      summary:
-        'One page of handed-over sizings with no live quote (none yet, or only expired or withdrawn ones), most recently handed over first; the total is in X-Total-Count',
-      access,
-      query: ReadyQuerySchema,
-    },
-    async ({ query, res }) => {
+  routes.get('/api/quotes/ready', {
+    summary:
+      'One page of handed-over sizings with no live quote (none yet, or only expired or withdrawn ones), most recently handed over first; the total is in X-Total-Count',
+    response: z.array(ReadySizingSchema),
+    access,
+    query: ReadyQuerySchema,
+    answer: async ({ query, res }) => {
       return answerPage(res, await quotes.ready(query))
     },
-  )
-  route(
-    router,
-    api,
-    {
-      tag,
-      method: 'post',
-      path: '/api/quotes/price-preview',
-      response: PricedDraftSchema,
-      summary:
-        "A draft's lines, discount and tax priced from the catalogue as a save would, without saving",
-      access,
-      body: PricePreviewSchema,
-    },
-    ({ user, body }) => quotes.pricePreview(user, body),
-  )
-  route(
-    router,
-    api,
-    {
-      tag,
-      params: IdParamSchema,
-      method: 'post',
-      path: '/api/quotes/:id/mail-preview',
-      response: MailPreviewSchema,
-      summary:
-        'The mail sending this draft would put in the contact’s mailbox with this personal message (the same template; the PDF by name)',
-      access,
-      body: MailPreviewRequestSchema,
-    },
-    ({ params, body }) => quotes.mailPreview(params.id, body.message),
-  )
-  return router
+  })
+  routes.post('/api/quotes/price-preview', {
+    summary:
+      "A draft's lines, discount and tax priced from the catalogue as a save would, without saving",
+    response: PricedDraftSchema,
+    access,
+    body: PricePreviewSchema,
+    answer: ({ user, body }) => quotes.pricePreview(user, body),
+  })
+  routes.post('/api/quotes/:id/mail-preview', {
+    summary:
+      'The mail sending this draft would put in the contact’s mailbox with this personal message (the same template; the PDF by name)',
+    params: IdParamSchema,
+    response: MailPreviewSchema,
+    access,
+    body: MailPreviewRequestSchema,
+    answer: ({ params, body }) => quotes.mailPreview(params.id, body.message),
+  })
+  return routes.router
 }

@@ -1,7 +1,7 @@
 import { withNamedLock } from '../../db/named-lock'
 import { Brackets, In, type DataSource, type EntityManager } from 'typeorm'
 import type { QuoteListQuery, QuoteState } from '../../../shared/schemas/quote'
-import { likeText } from '../../db/list-page'
+import { columnsOf, likeText, rawPage } from '../../db/list-page'
 import { QuoteEventEntity } from './quote-event.entity'
 import { QuoteLineEntity } from './quote-line.entity'
 import { QuoteEntity } from './quote.entity'
@@ -131,31 +131,20 @@ export function quotesRepository(ds: DataSource) {
           ),
         )
       }
-      const total = await qb.getCount()
-      const rows = await qb
-        .select([
-          'q.id AS id',
-          'q.number AS number',
-          'q.revision AS revision',
+      return rawPage<QuoteListRow>(qb, {
+        columns: [
+          ...columnsOf('q', 'id number revision sizingId companyId currency total validUntil'),
+          ...columnsOf('q', 'createdAt sentAt'),
           `${LIST_STATE} AS state`,
-          'q.sizingId AS sizingId',
           "JSON_VALUE(q.sizing, '$.title') AS sizingTitle",
           "JSON_VALUE(q.sizing, '$.siteName') AS siteName",
-          'q.companyId AS companyId',
           'company.name AS companyName',
-          'q.currency AS currency',
-          'q.total AS total',
-          'q.validUntil AS validUntil',
-          'q.createdAt AS createdAt',
-          'q.sentAt AS sentAt',
-        ])
-        .addSelect('(SELECT MAX(r.revision) FROM quotes r WHERE r.number = q.number)', 'latest')
-        .orderBy('q.createdAt', 'DESC')
-        .addOrderBy('q.id', 'DESC')
-        .limit(q.limit ?? DEFAULT_PAGE)
-        .offset(q.offset ?? 0)
-        .getRawMany<QuoteListRow>()
-      return { total, rows }
+          '(SELECT MAX(r.revision) FROM quotes r WHERE r.number = q.number) AS latest',
+        ],
+        newestFirst: 'q.createdAt',
+        page: q,
+        defaultLimit: DEFAULT_PAGE,
+      })
     },
     /** Runs `work` while no other instance numbers a quote of the year. */
     numbering: <T>(year: number, work: () => Promise<T>) =>

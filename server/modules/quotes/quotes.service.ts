@@ -66,6 +66,10 @@ export function quotesService(deps: QuoteFlowDeps) {
 
     get: async (user: AuthUser, id: number) => core.view(user, await core.visibleRow(user, id)),
 
+    /** A quote as its customer reads it, for the customer or for sales checking what they see. */
+    customerView: async (user: AuthUser, id: number) =>
+      core.customerView(await core.visibleRow(user, id)),
+
     /** The supplier's full view of a quote, for the server's own use (work orders). */
     internal: async (id: number) => core.fullView(await core.row(id)),
 
@@ -81,7 +85,7 @@ export function quotesService(deps: QuoteFlowDeps) {
         user.id,
         at,
       )
-      return core.view(user, await core.row(id))
+      return core.fullView(await core.row(id))
     },
 
     /** Re-prices a draft from the catalogue; a sent quote is never edited (409). */
@@ -100,7 +104,7 @@ export function quotesService(deps: QuoteFlowDeps) {
         }))
       )
         throw conflict('quote-not-draft', 'Only a draft can be changed; make a revision.')
-      return core.view(user, await core.row(id))
+      return core.fullView(await core.row(id))
     },
 
     send: sending.send,
@@ -150,14 +154,14 @@ export function quotesService(deps: QuoteFlowDeps) {
         user.id,
         deps.now(),
       )
-      return core.view(user, await core.row(newId))
+      return core.fullView(await core.row(newId))
     },
 
     /** A repeat of a withdrawal answers the withdrawn quote. */
     async withdraw(user: AuthUser, id: number, note: string) {
       const r = await core.row(id)
       if (r.state !== 'withdrawn') await move(r, 'withdrawn', user.id, { note })
-      return core.view(user, await core.row(id))
+      return core.fullView(await core.row(id))
     },
 
     /**
@@ -166,7 +170,7 @@ export function quotesService(deps: QuoteFlowDeps) {
      */
     async accept(user: AuthUser, id: number, body: QuoteAccept) {
       const r = await core.visibleRow(user, id)
-      if (acceptedAs(r, body)) return core.view(user, r)
+      if (acceptedAs(r, body)) return core.customerView(r)
       if (r.state !== 'sent')
         throw conflict('quote-state', `A ${r.state} quote cannot be accepted.`)
       if ((await repo.latestRevision(r.number)) !== r.revision)
@@ -181,7 +185,7 @@ export function quotesService(deps: QuoteFlowDeps) {
         note: `accepted by ${body.name}, PO ${body.purchaseOrder}`,
       })
       const now = await core.row(id)
-      if (ok || acceptedAs(now, body)) return core.view(user, now)
+      if (ok || acceptedAs(now, body)) return core.customerView(now)
       throw conflict('quote-state', `A ${now.state} quote cannot be accepted.`)
     },
 

@@ -5,34 +5,23 @@ import type { StructureKind } from '../../../shared/schemas/site'
 import type { CompanyEntity } from '../companies/company.entity'
 import type { UserEntity } from '../users/user.entity'
 import type { SitePhotoEntity } from './site-photo.entity'
+import { VarcharColumn } from '../../db/columns'
 
 @Index('IDX_sites_updated', ['updatedAt'])
 @Entity('sites')
 export class SiteEntity extends NumberedTrackedRecord {
-  @Column('varchar', { length: 160 })
-  name: string
+  @VarcharColumn(160) name: string
 
   declare companyId: number
-
-  @ReferenceTo('CompanyEntity', { onDelete: 'RESTRICT' })
-  company: Relation<CompanyEntity>
+  @ReferenceTo('CompanyEntity', { onDelete: 'RESTRICT' }) company: Relation<CompanyEntity>
 
   declare ownerId: number
+  @ReferenceTo('UserEntity', { onDelete: 'RESTRICT' }) owner: Relation<UserEntity>
 
-  @ReferenceTo('UserEntity', { onDelete: 'RESTRICT' })
-  owner: Relation<UserEntity>
-
-  @Column('varchar', { length: 300, default: '' })
-  address: string
-
-  @Column('varchar', { length: 24 })
-  structureKind: StructureKind
-
-  @Column('varchar', { length: 120, default: '' })
-  contactName: string
-
-  @Column('varchar', { length: 40, default: '' })
-  contactPhone: string
+  @VarcharColumn(300, { default: '' }) address: string
+  @VarcharColumn(24) structureKind: StructureKind
+  @VarcharColumn(120, { default: '' }) contactName: string
+  @VarcharColumn(40, { default: '' }) contactPhone: string
 
   @Column('text')
   notes: string

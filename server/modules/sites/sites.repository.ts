@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm'
 import type { Site, SiteInput, SiteListItem, SiteListQuery } from '../../../shared/schemas/site'
-import { likeText, type Page } from '../../db/list-page'
+import { columnsOf, likeText, rawPage, type Page } from '../../db/list-page'
 import { SitePhotoEntity } from './site-photo.entity'
 import { SiteEntity } from './site.entity'
 
@@ -70,25 +70,16 @@ export function sitesRepository(ds: DataSource) {
       }
       if (q.structureKind) qb.andWhere('s.structureKind = :k', { k: q.structureKind })
       if (q.companyId) qb.andWhere('s.companyId = :c', { c: q.companyId })
-      const total = await qb.getCount()
-      const rows = await qb
-        .select([
-          's.id AS id',
-          's.name AS name',
-          's.companyId AS companyId',
+      const { total, rows } = await rawPage<SiteListRow>(qb, {
+        columns: [
+          ...columnsOf('s', 'id name companyId address structureKind ownerId updatedAt'),
           'company.name AS companyName',
-          's.address AS address',
-          's.structureKind AS structureKind',
-          's.ownerId AS ownerId',
           'owner.name AS ownerName',
-          's.updatedAt AS updatedAt',
-        ])
-        .addSelect('(SELECT COUNT(*) FROM site_photos p WHERE p.siteId = s.id)', 'photoCount')
-        .orderBy('s.updatedAt', 'DESC')
-        .addOrderBy('s.id', 'DESC')
-        .limit(q.limit)
-        .offset(q.offset)
-        .getRawMany<SiteListRow>()
+          '(SELECT COUNT(*) FROM site_photos p WHERE p.siteId = s.id) AS photoCount',
+        ],
+        newestFirst: 's.updatedAt',
+        page: q,
+      })
       return { total, items: rows.map(toListItem) }
     },
     async create(ownerId: number, input: SiteInput) {

@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm'
+import { columnsOf, likeText, rawPage } from '../../db/list-page'
 import type { HandedOverSizing, ReadyQuery } from '../../../shared/schemas/quote-flow'
 import { SizingRevisionEntity } from './sizing-revision.entity'
 import { SizingEntity } from './sizing.entity'
@@ -55,28 +56,24 @@ export function handedOverRepository(ds: DataSource) {
     if (q.exclude.length) qb.andWhere('s.id NOT IN (:...exclude)', { exclude: q.exclude })
     if (q.search)
       qb.andWhere('(s.title LIKE :q OR site.name LIKE :q OR company.name LIKE :q)', {
-        q: `%${q.search.replace(/[%_\\]/g, '\\$&')}%`,
+        q: likeText(q.search),
       })
-    const total = await qb.getCount()
-    const rows = await qb
-      .select([
-        's.id AS id',
+    const { total, rows } = await rawPage<Raw>(qb, {
+      columns: [
+        ...columnsOf('s', 'id title submittedAt'),
         's.currentRevision AS revision',
-        's.title AS title',
         'site.name AS siteName',
         'company.name AS companyName',
         'owner.name AS ownerName',
-        's.submittedAt AS submittedAt',
         's.acknowledgementId AS ack',
         "JSON_VALUE(r.summary, '$.absorber.mass') AS mass",
         "JSON_VALUE(r.summary, '$.hostFrequencyHz') AS frequency",
         "JSON_VALUE(r.summary, '$.acceptance.passes') AS passes",
-      ])
-      .orderBy('s.submittedAt', 'DESC')
-      .addOrderBy('s.id', 'DESC')
-      .limit(q.limit ?? DEFAULT_PAGE)
-      .offset(q.offset ?? 0)
-      .getRawMany<Raw>()
+      ],
+      newestFirst: 's.submittedAt',
+      page: q,
+      defaultLimit: DEFAULT_PAGE,
+    })
     return { total, items: rows.map(toItem) }
   }
 }

@@ -1,10 +1,10 @@
-import { Column, Entity, Index, type Relation } from 'typeorm'
+import { Entity, Index, type Relation } from 'typeorm'
 import { NumberedRecord } from '../../db/record-columns'
 import { ReferenceTo } from '../../db/reference-column'
 import type { DesignCheck } from '../../../shared/schemas/design-checks'
-import { jsonColumn } from '../../http/json-column'
 import type { UserEntity } from '../users/user.entity'
 import type { SizingEntity } from './sizing.entity'
+import { IntColumn, JsonColumn, MomentColumn, VarcharColumn } from '../../db/columns'
 
 /**
  * An engineer's acceptance of a design that fails checks, made at a handover. Every one is kept;
@@ -14,25 +14,17 @@ import type { SizingEntity } from './sizing.entity'
 @Index(['sizingId', 'revision'])
 export class SizingAcknowledgementEntity extends NumberedRecord {
   declare sizingId: number
+  @ReferenceTo('SizingEntity', { onDelete: 'CASCADE' }) sizing: Relation<SizingEntity>
 
-  @ReferenceTo('SizingEntity', { onDelete: 'CASCADE' })
-  sizing: Relation<SizingEntity>
-
-  @Column('int')
-  revision: number
+  @IntColumn() revision: number
 
   /** The failing checks as the server judged them at the handover. */
-  @Column('longtext', { transformer: jsonColumn })
-  failedChecks: DesignCheck[]
+  @JsonColumn() failedChecks: DesignCheck[]
 
-  @Column('varchar', { length: 1000 })
-  reason: string
+  @VarcharColumn(1000) reason: string
 
   declare acknowledgedById: number
+  @ReferenceTo('UserEntity', { onDelete: 'RESTRICT' }) acknowledgedBy: Relation<UserEntity>
 
-  @ReferenceTo('UserEntity', { onDelete: 'RESTRICT' })
-  acknowledgedBy: Relation<UserEntity>
-
-  @Column('datetime', { precision: 3 })
-  acknowledgedAt: Date
+  @MomentColumn() acknowledgedAt: Date
 }

@@ -6,7 +6,7 @@ import type {
   SizingState,
 } from '../../../shared/schemas/sizing'
 import type { SizingEvaluation } from '../../../shared/sizing/evaluate-sizing'
-import { likeText, type Page } from '../../db/list-page'
+import { columnsOf, likeText, rawPage, type Page } from '../../db/list-page'
 import { SizingRevisionEntity } from './sizing-revision.entity'
 import { SizingEntity } from './sizing.entity'
 import type { StoredSummary } from './sizing-summary'
@@ -115,30 +115,22 @@ export function sizingsRepository(ds: DataSource) {
         qb.andWhere('(s.title LIKE :q OR site.name LIKE :q OR company.name LIKE :q)', {
           q: likeText(q.search),
         })
-      const total = await qb.getCount()
-      const rows = await qb
-        .select([
-          's.id AS id',
-          's.title AS title',
-          's.state AS state',
+      const { total, rows } = await rawPage<SizingListRow>(qb, {
+        columns: [
+          ...columnsOf('s', 'id title state siteId ownerId updatedAt'),
           's.currentRevision AS revision',
-          's.siteId AS siteId',
           'site.name AS siteName',
           'company.name AS companyName',
-          's.ownerId AS ownerId',
           'owner.name AS ownerName',
           // a set of absorbers shows its total mass
           "COALESCE(JSON_VALUE(r.summary, '$.totalMass'), JSON_VALUE(r.summary, '$.absorber.mass')) AS absorberMass",
           "JSON_VALUE(r.summary, '$.hostFrequencyHz') AS hostFrequencyHz",
           "JSON_VALUE(r.summary, '$.reduction') AS reduction",
           "JSON_VALUE(r.summary, '$.acceptance.passes') AS passes",
-          's.updatedAt AS updatedAt',
-        ])
-        .orderBy('s.updatedAt', 'DESC')
-        .addOrderBy('s.id', 'DESC')
-        .limit(q.limit)
-        .offset(q.offset)
-        .getRawMany<SizingListRow>()
+        ],
+        newestFirst: 's.updatedAt',
+        page: q,
+      })
       return { total, items: rows.map(toListItem) }
     },
     async create(

@@ -1,18 +1,16 @@
 import { Column, Entity } from 'typeorm'
 import { NumberedTrackedRecord } from '../../db/record-columns'
+import { BooleanColumn, IntColumn, VarcharColumn } from '../../db/columns'
 
 /** A named tax rate; at most one is the default (enforced by the service under a lock). */
 @Entity('tax_rates')
 export class TaxRateEntity extends NumberedTrackedRecord {
-  @Column('varchar', { length: 60, unique: true })
-  name: string
+  @VarcharColumn(60, { unique: true }) name: string
 
   /** basis points: 2000 = 20 % */
-  @Column('int')
-  rateBp: number
+  @IntColumn() rateBp: number
 
-  @Column('boolean', { default: false })
-  isDefault: boolean
+  @BooleanColumn({ default: false }) isDefault: boolean
 }
 
 /** A customer company's own tax rate, instead of the default. */
@@ -21,6 +19,5 @@ export class CompanyTaxRateEntity {
   @Column('int', { primary: true })
   companyId: number
 
-  @Column('int')
-  taxRateId: number
+  @IntColumn() taxRateId: number
 }
