@@ -90,28 +90,26 @@ function expressApp(deps: AppDeps, services: Services): Express {
   )
   app.use('/api', express.json({ limit: '2mb' }))
 
-  app.use(healthRouter(api, deps.dataSource, VERSION))
+  // every resource's routes (each router declares its access, validation and OpenAPI entries)
   app.use(
-    authRouter(api, services.auth, {
-      tokenTtlHours: config.TOKEN_TTL_HOURS,
-      secureCookie: https,
-    }),
+    healthRouter(api, deps.dataSource, VERSION),
+    authRouter(api, services.auth, { tokenTtlHours: config.TOKEN_TTL_HOURS, secureCookie: https }),
+    usersRouter(api, services.usersAdmin),
+    companiesRouter(api, services.companies),
+    sitesRouter(api, services.sites),
+    modelsRouter(api, services.models),
+    sizingsRouter(api, services.sizings),
+    measurementsRouter(api, services.measurements),
+    catalogueRouter(api, services.catalogue, services.sizingSource),
+    customersRouter(api, services.customers),
+    quotesFlowRouter(api, services.quotes),
+    quotesRouter(api, services.quotes),
+    taxRouter(api, services.tax),
+    paymentsRouter(api, services.payments),
+    orderDocumentsRouter(api, services.orders),
+    productionRouter(api, services.production),
+    auditRouter(api, services.audit),
   )
-  app.use(usersRouter(api, services.usersAdmin))
-  app.use(companiesRouter(api, services.companies))
-  app.use(sitesRouter(api, services.sites))
-  app.use(modelsRouter(api, services.models))
-  app.use(sizingsRouter(api, services.sizings))
-  app.use(measurementsRouter(api, services.measurements))
-  app.use(catalogueRouter(api, services.catalogue, services.sizingSource))
-  app.use(customersRouter(api, services.customers))
-  app.use(quotesFlowRouter(api, services.quotes))
-  app.use(quotesRouter(api, services.quotes))
-  app.use(taxRouter(api, services.tax))
-  app.use(paymentsRouter(api, services.payments))
-  app.use(orderDocumentsRouter(api, services.orders))
-  app.use(productionRouter(api, services.production))
-  app.use(auditRouter(api, services.audit))
 
   app.use('/api', notFoundHandler)
   serveClient(app, config.CLIENT_DIR)

@@ -1,4 +1,5 @@
 import type {
+  CustomerQuote,
   Quote,
   QuoteAccept,
   QuoteCreate,
@@ -21,6 +22,8 @@ export const quotesApi = {
   /** one page, newest first, with the total matching the filters */
   page: (q: QuoteListQuery) => api.page<QuoteSummary>(`/api/quotes${queryString(q)}`),
   get: (id: number) => api.get<Quote>(`/api/quotes/${id}`),
+  /** A quote as its customer reads it (the portal; sales may preview it). */
+  customerView: (id: number) => api.get<CustomerQuote>(`/api/quotes/${id}/customer-view`),
   create: (body: QuoteCreate) => api.post<Quote>('/api/quotes', body),
   update: (id: number, body: QuoteDraft) => api.put<Quote>(`/api/quotes/${id}`, body),
   /**
@@ -38,7 +41,8 @@ export const quotesApi = {
   pricePreview: (body: PricePreview) => api.post<PricedDraft>('/api/quotes/price-preview', body),
   revise: (id: number) => api.post<Quote>(`/api/quotes/${id}/revise`),
   withdraw: (id: number, note = '') => api.post<Quote>(`/api/quotes/${id}/withdraw`, { note }),
-  accept: (id: number, body: QuoteAccept) => api.post<Quote>(`/api/quotes/${id}/accept`, body),
+  accept: (id: number, body: QuoteAccept) =>
+    api.post<CustomerQuote>(`/api/quotes/${id}/accept`, body),
   pdfUrl: (id: number) => `/api/quotes/${id}/pdf`,
   /** The sizing a new quote is made from, as sales read it. */
   sizing: (id: number) => api.get<SizingSummary>(`/api/quotes/from-sizing/${id}`),
