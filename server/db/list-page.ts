@@ -38,13 +38,16 @@ export async function rawPage<R>(
   qb: SelectQueryBuilder<ObjectLiteral>,
   { columns, newestFirst, page, defaultLimit }: RawPageRequest,
 ): Promise<{ total: number; rows: R[] }> {
-  const total = await qb.getCount()
-  const rows = await qb
-    .select(columns)
-    .orderBy(newestFirst, 'DESC')
-    .addOrderBy(`${qb.alias}.id`, 'DESC')
-    .limit(page.limit ?? defaultLimit)
-    .offset(page.offset)
-    .getRawMany<R>()
+  // the count and the page on two connections at once: a list answers in one round trip's time
+  const [total, rows] = await Promise.all([
+    qb.clone().getCount(),
+    qb
+      .select(columns)
+      .orderBy(newestFirst, 'DESC')
+      .addOrderBy(`${qb.alias}.id`, 'DESC')
+      .limit(page.limit ?? defaultLimit)
+      .offset(page.offset)
+      .getRawMany<R>(),
+  ])
   return { total, rows }
 }

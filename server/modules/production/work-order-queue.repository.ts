@@ -43,14 +43,17 @@ export function workOrderQueueRepository(ds: DataSource) {
         }),
       )
     }
-    const total = await qb.getCount()
     const dir = q.dir === 'desc' ? 'DESC' : 'ASC'
-    const items = await qb
-      .orderBy(SORT_KEYS[q.sort], dir)
-      .addOrderBy('w.id', dir)
-      .limit(q.limit ?? DEFAULT_QUEUE_PAGE)
-      .offset(q.offset ?? 0)
-      .getMany()
+    // the count and the page on two connections at once
+    const [total, items] = await Promise.all([
+      qb.clone().getCount(),
+      qb
+        .orderBy(SORT_KEYS[q.sort], dir)
+        .addOrderBy('w.id', dir)
+        .limit(q.limit ?? DEFAULT_QUEUE_PAGE)
+        .offset(q.offset ?? 0)
+        .getMany(),
+    ])
     return { items, total }
   }
 }
