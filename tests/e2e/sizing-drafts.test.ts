@@ -1,7 +1,5 @@
 import { beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'puppeteer-core'
-import { seedPeople } from '../../seed/seed-people'
-import { seedCatalogue } from '../../seed/seed-catalogue'
 import { DEMO_USERS } from '../../seed/demo-people'
 import {
   DEMO_FOOTBRIDGE_SITE,
@@ -21,13 +19,12 @@ import {
   waitForText,
 } from '../helpers/browser'
 import { engineerOnSizing } from '../helpers/sizing-on-span'
+import { seedDemoSizings } from '../helpers/demo-seed'
 
 const rig = browserRigPerFile()
 beforeAll(async () => {
-  const { companyIds } = await seedPeople(rig.t.services)
-  await seedCatalogue(rig.t.services)
-  await seedSizings(rig.t.services, { companyIds })
-  await seedSizings(rig.t.services, { companyIds })
+  const { companyIds } = await seedDemoSizings(rig.t.services)
+  await seedSizings(rig.t.services, { companyIds }) // a second run adds nothing
 })
 
 const demo = (role: string) => DEMO_USERS.find((u) => u.role === role)!
