@@ -18,7 +18,7 @@ import {
   valueOf,
   waitForText,
 } from '../helpers/browser'
-import { engineerOnSizing } from '../helpers/sizing-on-span'
+import { engineerOnSizing, reopen } from '../helpers/sizing-on-span'
 import { seedDemoSizings } from '../helpers/demo-seed'
 
 const rig = browserRigPerFile()
@@ -161,9 +161,7 @@ describe('demo sizings, drafts and hand-over in Chromium', () => {
     expect(model.definition.hostDampingRatio).toEqual([0.05, 0.0005, 0.02])
 
     // Reopened from the server alone, every field shows what was entered.
-    await page.evaluate(() => localStorage.clear())
-    await page.goto(`${base}/absorber`)
-    await page.waitForSelector('#mass-ratio')
+    await reopen(page, `${base}/absorber`, '#mass-ratio')
     const entered = {
       '#mass-ratio': '5 %',
       '#tuning-ratio': '0.95',

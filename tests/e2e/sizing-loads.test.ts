@@ -9,7 +9,7 @@ import {
   valueOf,
   waitForText,
 } from '../helpers/browser'
-import { engineerOnSizing } from '../helpers/sizing-on-span'
+import { engineerOnSizing, reopen } from '../helpers/sizing-on-span'
 
 const rig = browserRigPerFile()
 
@@ -18,13 +18,6 @@ async function save(page: Page, revision: number) {
   await openStep(page, 'Hand over')
   await page.locator('::-p-aria([name="Save sizing"][role="button"])').click()
   await waitForText(page, `Saved as revision ${revision}, computed on the server`)
-}
-
-/** Opens a step from the server's copy alone, as on another tablet. */
-async function reopen(page: Page, url: string, field: string) {
-  await page.evaluate(() => localStorage.clear())
-  await page.goto(url)
-  await page.waitForSelector(field)
 }
 
 describe('the design load in the sizing form, in Chromium', () => {

@@ -1,4 +1,5 @@
 import request from 'supertest'
+import type { Page } from 'puppeteer-core'
 import { spanModel } from '../../shared/dynamics'
 import type { SizingInput } from '../../shared/schemas/sizing'
 import { toAuthUser } from '../../server/modules/auth/auth.service'
@@ -66,4 +67,11 @@ export async function engineerOnSizing(rig: BrowserRig) {
   const agent = request.agent(rig.t.app)
   await agent.post('/api/auth/sign-in').send({ email: made.engineer.email, password: PASSWORD })
   return { ...made, page, agent, base: `${rig.url}/sizings/${made.sizing.id}` }
+}
+
+/** Opens a step from the server's copy alone (no draft in the browser), as on another tablet. */
+export async function reopen(page: Page, url: string, field: string) {
+  await page.evaluate(() => localStorage.clear())
+  await page.goto(url)
+  await page.waitForSelector(field)
 }
