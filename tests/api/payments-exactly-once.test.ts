@@ -14,6 +14,10 @@ beforeAll(async () => {
 })
 afterAll(() => rig?.close())
 
+/** What `seen` shows of an accepted quote paid exactly once, and of one not paid at all. */
+const PAID_ONCE = { orders: 1, workOrders: 1, state: 'paid', receipts: 1 }
+const NOT_PAID = { orders: 0, workOrders: 0, state: 'accepted', receipts: 0 }
+
 /** What an admin, production and the customer's mailbox show of one quote's payment. */
 async function seen(quoteId: number, customerEmail: string) {
   const orders = (await admin.get('/api/orders')).body as { quoteId: number }[]
@@ -53,23 +57,13 @@ describe('a payment confirmed exactly once, whichever path sees it first', () =>
     try {
       expect((await rig.payOnPage(session.url)).status).toBe(303)
       expect(await rig.deliveriesOf(session.sessionId)).toMatchObject([{ status: 500 }])
-      expect(await seen(quote.id, customer.user.email)).toEqual({
-        orders: 0,
-        workOrders: 0,
-        state: 'accepted',
-        receipts: 0,
-      })
+      expect(await seen(quote.id, customer.user.email)).toEqual(NOT_PAID)
     } finally {
       await rig.t.ds.query(`DROP TRIGGER ${trigger}`)
     }
     expect(await rig.retryDeliveries(60_000)).toBeGreaterThanOrEqual(1)
     expect((await rig.deliveriesOf(session.sessionId)).map((d) => d.status)).toEqual([500, 200])
-    expect(await seen(quote.id, customer.user.email)).toEqual({
-      orders: 1,
-      workOrders: 1,
-      state: 'paid',
-      receipts: 1,
-    })
+    expect(await seen(quote.id, customer.user.email)).toEqual(PAID_ONCE)
   })
 
   it('confirms from the customer’s return to the success page when the webhook is down', async () => {
@@ -110,12 +104,7 @@ describe('a payment confirmed exactly once, whichever path sees it first', () =>
     } finally {
       rig.t.clock.offsetMs = 0
     }
-    expect(await seen(quote.id, customer.user.email)).toEqual({
-      orders: 1,
-      workOrders: 1,
-      state: 'paid',
-      receipts: 1,
-    })
+    expect(await seen(quote.id, customer.user.email)).toEqual(PAID_ONCE)
   })
 
   it('hands a repeated checkout the same open session, and expires it when another starts', async () => {

@@ -102,28 +102,27 @@ describe('a mode no unit can reach', () => {
     response: { node: 'm1' },
     band: { minHz: 1, maxHz: 10 },
   }
+  /** The chain with a 2 % Den Hartog unit at each [node, target mode]. */
+  const onChain = (...units: [node: string, targetMode: number][]) =>
+    solveSet({
+      ...chain,
+      absorbers: units.map(([node, targetMode]) => ({
+        node,
+        massRatio: 0.02,
+        targetMode,
+        tuning: 'den-hartog' as const,
+      })),
+    })
 
   it('reports peak.with as null, naming the mode, when every unit sits on its node line', () => {
-    const r = solveSet({
-      ...chain,
-      absorbers: [
-        { node: 'm2', massRatio: 0.02, targetMode: 1, tuning: 'den-hartog' },
-        { node: 'm2', massRatio: 0.02, targetMode: 3, tuning: 'den-hartog' },
-      ],
-    })
+    const r = onChain(['m2', 1], ['m2', 3])
     expect(r.peak.with).toBeNull()
     expect(r.peak.without).toBeNull()
     expect(r.notes.join(' ')).toMatch(/peak\.with is null: host mode 2 \(/)
   })
 
   it('keeps the peak finite once one unit moves that mode', () => {
-    const r = solveSet({
-      ...chain,
-      absorbers: [
-        { node: 'm2', massRatio: 0.02, targetMode: 1, tuning: 'den-hartog' },
-        { node: 'm1', massRatio: 0.02, targetMode: 2, tuning: 'den-hartog' },
-      ],
-    })
+    const r = onChain(['m2', 1], ['m1', 2])
     expect(r.peak.with).toBeGreaterThan(0)
     expect(Number.isFinite(r.peak.with)).toBe(true)
   })

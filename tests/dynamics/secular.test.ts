@@ -10,6 +10,19 @@ function modes(model: ModelInput) {
   return prepareHost(host, new Float64Array(host.ids.length))
 }
 
+/**
+ * A seeded random network of 2 to 1 + spread nodes, its modes, the node index j of the absorber and
+ * an absorber mass of 10 to 210 kg; `rnd` goes on with the same seed.
+ */
+function randomCase(seed: number, spread: number) {
+  const rnd = seeded(seed)
+  const n = 2 + Math.floor(rnd() * spread)
+  const model = randomNetwork(rnd, n, false)
+  const host = modes(model)
+  const j = Math.floor(rnd() * n)
+  return { rnd, n, model, host, j, mass: 10 + 200 * rnd() }
+}
+
 function maxRelError(a: ArrayLike<number>, b: ArrayLike<number>): number {
   expect(a.length).toBe(b.length)
   let e = 0
@@ -22,13 +35,8 @@ describe('natural frequencies with the absorber from the secular equation', () =
   // (the rank-one secular equation, Golub, SIAM Review 15, 1973, must give the same spectrum).
   it('match a direct eigen solve of the host plus absorber on random networks to 1e-9', () => {
     for (let seed = 1; seed <= 25; seed++) {
-      const rnd = seeded(seed)
-      const n = 2 + Math.floor(rnd() * 30)
-      const model = randomNetwork(rnd, n, false)
-      const host = modes(model)
-      const j = Math.floor(rnd() * n)
+      const { rnd, n, model, host, j, mass } = randomCase(seed, 30)
       const node = `n${j}`
-      const mass = 10 + 200 * rnd()
       const stiffness = mass * ((host.modes.omega[0] ?? 1) * (0.7 + 0.6 * rnd())) ** 2
       const full = modes({
         nodes: [...model.nodes, { id: 'tmd', mass }],
@@ -45,12 +53,7 @@ describe('natural frequencies with the absorber from the secular equation', () =
   // the node, solved directly.
   it('in the locked limit (k_a → ∞) match the host with the absorber mass added at the node', () => {
     for (let seed = 31; seed <= 40; seed++) {
-      const rnd = seeded(seed)
-      const n = 2 + Math.floor(rnd() * 20)
-      const model = randomNetwork(rnd, n, false)
-      const host = modes(model)
-      const j = Math.floor(rnd() * n)
-      const mass = 10 + 200 * rnd()
+      const { n, model, host, j, mass } = randomCase(seed, 20)
       const heavier = {
         ...model,
         nodes: model.nodes.map((x) =>

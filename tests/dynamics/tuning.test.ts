@@ -14,6 +14,15 @@ function problemFor(zetaHost: number, mu: number) {
   return { ctx, pb: tuningProblem(ctx.rec, ctx.omegaTarget, mu * (ctx.effectiveMass ?? 0)) }
 }
 
+/** A closed form's tunings on an undamped host at each of MUS, against a table to `digits` digits. */
+function expectTabulated(form: keyof typeof closedForms, f: number[], z: number[], digits: number) {
+  MUS.forEach((mu, i) => {
+    const t = closedForms[form].tune(mu, 0)
+    expect(t.frequencyRatio, `${form} f at μ = ${mu}`).toBeCloseTo(f[i] ?? NaN, digits)
+    expect(t.dampingRatio, `${form} ζ at μ = ${mu}`).toBeCloseTo(z[i] ?? NaN, digits)
+  })
+}
+
 describe('closed-form tunings', () => {
   // Source: Den Hartog, Mechanical Vibrations (1956): f = 1/(1+μ), ζ_a = √(3μ/(8(1+μ))) with ζ_a
   // referred to the absorber's own frequency; table values in
@@ -40,11 +49,7 @@ describe('closed-form tunings', () => {
   it('asami-nishihara reproduces the tabulated exact H∞ tuning', () => {
     const f = [0.990099, 0.980391, 0.952372, 0.909058]
     const z = [0.060962, 0.085829, 0.133938, 0.18547]
-    MUS.forEach((mu, i) => {
-      const t = closedForms['asami-nishihara'].tune(mu, 0)
-      expect(t.frequencyRatio).toBeCloseTo(f[i] ?? 0, 6)
-      expect(t.dampingRatio).toBeCloseTo(z[i] ?? 0, 6)
-    })
+    expectTabulated('asami-nishihara', f, z, 6)
   })
 
   // Source: Warburton, EESD 10 (1982) — values (from memory; computed to 5 digits) in
@@ -52,11 +57,7 @@ describe('closed-form tunings', () => {
   it('warburton-force reproduces the tabulated white-noise optimum', () => {
     const f = [0.99257, 0.98528, 0.96421, 0.93154]
     const z = [0.04981, 0.07019, 0.10977, 0.15254]
-    MUS.forEach((mu, i) => {
-      const t = closedForms['warburton-force'].tune(mu, 0)
-      expect(t.frequencyRatio).toBeCloseTo(f[i] ?? 0, 5)
-      expect(t.dampingRatio).toBeCloseTo(z[i] ?? 0, 5)
-    })
+    expectTabulated('warburton-force', f, z, 5)
   })
 
   it('every closed form states its scope', () => {

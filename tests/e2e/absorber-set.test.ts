@@ -1,24 +1,23 @@
 import { mkdirSync } from 'node:fs'
 import { afterAll, beforeAll, expect, it } from 'vitest'
 import type { Browser, Page } from 'puppeteer-core'
-import { spanModel } from '../../shared/dynamics'
-import type { SizingInput } from '../../shared/schemas/sizing'
 import { toAuthUser } from '../../server/modules/auth/auth.service'
-import { PASSWORD, makeUser, signedIn } from '../helpers/factories'
+import { makeUser, signedIn } from '../helpers/factories'
 import {
   choose,
   enter,
   launchBrowser,
   mainText,
-  newPage,
   openStep,
+  pageSignedInAs,
   shot,
-  signInAs,
   SHOTS_DIR,
   waitForText,
 } from '../helpers/browser'
 import { makePaymentRig, type PaymentRig } from '../api/payments-rig'
 import { customerWithContact } from '../api/quotes-rig'
+import { engineerWithSizing } from '../helpers/sizing-on-span'
+import { move, ship } from '../helpers/work-order-page'
 
 // One flow across four roles (about 45 s alone on a 2-core machine, so it allows three minutes).
 // The order has to be paid to reach production, so this file runs on the payment rig (the
@@ -35,49 +34,25 @@ afterAll(async () => {
   await rig?.close()
 })
 
-/** A floor span of three 10 t masses (invented, mode 1 at 5.8 Hz, mode 2 near 10.7 Hz) and a
- * draft sizing with one absorber at midspan for mode 1, loaded and read at the quarter point. */
+/** The three-mass floor span of tests/helpers/sizing-on-span (mode 2 near 10.7 Hz) for a customer
+ * with a contact, its draft sizing with one absorber at midspan for mode 1, loaded and read at the
+ * quarter point. */
 async function draftOnSpan() {
-  const s = rig.t.services
-  const engineer = await makeUser(rig.t, 'engineer')
-  const user = toAuthUser((await s.users.findByEmail(engineer.email))!)
   const { company, contact } = await customerWithContact(rig.sales)
-  const site = await s.sites.create(user, {
-    name: `Gallery floor ${engineer.id}`,
+  const { engineer, sizing } = await engineerWithSizing(rig.t, {
     companyId: company.id,
-    structureKind: 'floor',
-    address: '',
-    contactName: '',
-    contactPhone: '',
-    notes: '',
+    input: {
+      title: 'Gallery floor, two modes',
+      excitationNode: 'node-1',
+      responseNode: 'node-1',
+      massRatio: 0.01,
+      // At the quarter-point response mode 2 dominates the set's peak, so the joint optimum is
+      // flat in unit 1's tuning and may land at a damping no catalogue unit has; unit 1 takes Den
+      // Hartog's published tuning (f = f₁/(1+μ), ζ = √(3μ/(8(1+μ)³))) and unit 2 is optimised.
+      tuning: 'den-hartog',
+      acceptance: { label: 'custom', quantity: 'acceleration', limit: 0.5 },
+    },
   })
-  const m = spanModel(3, 30_000, 5.8)
-  const model = await s.models.create(user, {
-    siteId: site.id,
-    name: 'Gallery span',
-    definition: { nodes: m.nodes, springs: m.springs, hostDampingRatio: 0.02 },
-    reason: 'first version',
-  })
-  const input: SizingInput = {
-    title: 'Gallery floor, two modes',
-    siteId: site.id,
-    modelId: model.id,
-    modelRevision: 1,
-    targetMode: 1,
-    absorberNode: 'node-2',
-    excitationNode: 'node-1',
-    responseNode: 'node-1',
-    forceAmplitude: 280,
-    massRatio: 0.01,
-    // At the quarter-point response mode 2 dominates the set's peak, so the joint optimum is
-    // flat in unit 1's tuning and may land at a damping no catalogue unit has; unit 1 takes Den
-    // Hartog's published tuning (f = f₁/(1+μ), ζ = √(3μ/(8(1+μ)³))) and unit 2 is optimised.
-    tuning: 'den-hartog',
-    orientation: 'vertical',
-    acceptance: { label: 'custom', quantity: 'acceleration', limit: 0.5 },
-    detuningTolerance: 0.1,
-  }
-  const sizing = await s.sizings.create(user, input)
   return { engineer, sizing, company, contact }
 }
 
@@ -87,18 +62,11 @@ async function clickButton(page: Page, label: string) {
   await (await page.waitForSelector(`::-p-xpath(${xpath})`))!.click()
 }
 
-/** Taps the work order's next-step button and waits for the state change in the history. */
-async function move(page: Page, button: string, toWords: string) {
-  await page.locator(`button:not([disabled]) ::-p-text(${button})`).click()
-  await page.waitForSelector(`::-p-text(→ ${toWords})`)
-}
-
 it('an engineer adds a second absorber for mode 2, sales quote two units, and the work order ships when both are tuned', async () => {
   const { engineer, sizing, company } = await draftOnSpan()
 
   // Engineer: a second absorber for mode 2 at the quarter point, 1 % of its effective mass.
-  const page = await newPage({ browser })
-  await signInAs(page, rig.appUrl, engineer.email, PASSWORD)
+  const page = await pageSignedInAs({ browser, url: rig.appUrl }, engineer)
   await page.goto(`${rig.appUrl}/sizings/${sizing.id}/absorber`)
   await clickButton(page, 'Add an absorber')
   await page.waitForSelector('[aria-label="Absorber 2"]')
@@ -132,8 +100,7 @@ it('an engineer adds a second absorber for mode 2, sales quote two units, and th
 
   // Sales: a unit for each absorber, from that absorber's own catalogue matches.
   const { user: salesUser } = await signedIn(rig.t, 'sales')
-  const quoting = await newPage({ browser })
-  await signInAs(quoting, rig.appUrl, salesUser.email, PASSWORD)
+  const quoting = await pageSignedInAs({ browser, url: rig.appUrl }, salesUser)
   await quoting.goto(`${rig.appUrl}/quotes/new?sizing=${sizing.id}`)
   for (const n of [1, 2])
     await quoting.locator(`[data-test="absorber-${n}-matches"] ::-p-text(Add FLR-S)`).click()
@@ -174,8 +141,7 @@ it('an engineer adds a second absorber for mode 2, sales quote two units, and th
   const units = wo.specification.units!
   expect(units).toHaveLength(2)
   const builder = await makeUser(rig.t, 'production')
-  const shop = await newPage({ browser })
-  await signInAs(shop, rig.appUrl, builder.email, PASSWORD)
+  const shop = await pageSignedInAs({ browser, url: rig.appUrl }, builder)
   await shop.goto(`${rig.appUrl}/work-orders/${wo.id}`)
   await waitForText(shop, '2 absorbers, each tuned on its own')
   const text = await mainText(shop)
@@ -199,12 +165,11 @@ it('an engineer adds a second absorber for mode 2, sales quote two units, and th
   await shop.waitForSelector('[data-test="unit-2"] ::-p-text(within tolerance)')
   await move(shop, 'Mark ready to ship', 'Ready to ship')
   // one serial number per absorber: two units leave the works
-  await shop.locator('#ship-carrier').fill('Northway Freight')
-  await shop.locator('#ship-tracking').fill('NWF-7781')
-  await shop.locator('#ship-serial-0').fill('TDW-FLRS-0001')
-  await shop.locator('#ship-serial-1').fill('TDW-FLRS-0002')
-  await shop.locator('button:not([disabled]) ::-p-text(Record shipment and mark shipped)').click()
-  await shop.waitForSelector('::-p-text(→ Shipped)')
+  await ship(shop, {
+    carrier: 'Northway Freight',
+    tracking: 'NWF-7781',
+    serials: ['TDW-FLRS-0001', 'TDW-FLRS-0002'],
+  })
   await shot(shop, 'set-6-shipped')
   expect((await rig.t.services.production.get(wo.id)).state).toBe('shipped')
   await shop.browserContext().close()

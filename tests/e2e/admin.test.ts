@@ -2,9 +2,7 @@ import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'puppeteer-core'
 import { toAuthUser } from '../../server/modules/auth/auth.service'
 import { closePdfRenderers } from '../../server/integrations/pdf/renderer'
-import { seedPeople } from '../../seed/seed-people'
-import { DEMO_OFFICE_SIZING, seedSizings } from '../../seed/seed-sizings'
-import { seedCatalogue } from '../../seed/seed-catalogue'
+import { DEMO_OFFICE_SIZING } from '../../seed/seed-sizings'
 import { CUSTOMERS, DEMO_USERS } from '../../seed/demo-people'
 import type { Quote } from '../../shared/schemas/quote'
 import { PASSWORD, makeUser } from '../helpers/factories'
@@ -18,15 +16,14 @@ import {
   waitForText,
   type BrowserRig,
 } from '../helpers/browser'
+import { seedDemoSizings } from '../helpers/demo-seed'
 
 let rig: BrowserRig
 let newQuote: () => Promise<Quote>
 beforeAll(async () => {
   rig = await startBrowserRig()
   const s = rig.t.services
-  const { companyIds } = await seedPeople(s)
-  await seedCatalogue(s)
-  await seedSizings(s, { companyIds })
+  await seedDemoSizings(s)
   const sales = toAuthUser((await s.users.findByEmail('sales@quellnode.test'))!)
   const [sizing] = await s.sizings.list(sales, { search: DEMO_OFFICE_SIZING })
   const unit = (await s.catalogue.match(await s.sizings.summary(sizing!.id))).find((m) => m.fits)!

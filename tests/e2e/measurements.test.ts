@@ -2,15 +2,8 @@ import { readFileSync } from 'node:fs'
 import path from 'node:path'
 import { singleModeModel } from '../../shared/dynamics'
 import { expect, it } from 'vitest'
-import { PASSWORD, signedIn } from '../helpers/factories'
-import {
-  mainText,
-  newPage,
-  shot,
-  signInAs,
-  browserRigPerFile,
-  waitForText,
-} from '../helpers/browser'
+import { signedIn } from '../helpers/factories'
+import { mainText, pageSignedInAs, shot, browserRigPerFile, waitForText } from '../helpers/browser'
 import { buildingDefinition, makeCompany, siteBody, sizingInput } from '../helpers/records'
 
 const rig = browserRigPerFile()
@@ -24,8 +17,7 @@ it('lets an engineer upload a heel-drop record, see its peaks and calibrate a mo
     .send({ siteId: site.id, name: 'Office floor bays', definition: buildingDefinition() })
   expect(model.status).toBe(201)
 
-  const page = await newPage(rig)
-  await signInAs(page, rig.url, engineer.email, PASSWORD)
+  const page = await pageSignedInAs(rig, engineer)
   await page.goto(`${rig.url}/sites/${site.id}/records`)
   const input = await page.waitForSelector('input[type=file]')
   await input!.uploadFile(path.resolve('seed/records/heel-drop-office-floor.csv'))
@@ -66,8 +58,7 @@ it('calibrates from step 2 of a sizing, shows model against measurement before a
   })
   const sizing = (await agent.post('/api/sizings').send({ input })).body
 
-  const page = await newPage(rig)
-  await signInAs(page, rig.url, engineer.email, PASSWORD)
+  const page = await pageSignedInAs(rig, engineer)
   const base = `${rig.url}/sizings/${sizing.id}`
   await page.goto(`${base}/records`)
   await page.locator('::-p-aria([name="Use heel-drop.csv for this sizing"])').click()

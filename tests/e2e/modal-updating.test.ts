@@ -2,15 +2,8 @@ import { mkdtempSync, writeFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import path from 'node:path'
 import { expect, it } from 'vitest'
-import { PASSWORD, signedIn } from '../helpers/factories'
-import {
-  mainText,
-  newPage,
-  shot,
-  signInAs,
-  browserRigPerFile,
-  waitForText,
-} from '../helpers/browser'
+import { signedIn } from '../helpers/factories'
+import { mainText, pageSignedInAs, shot, browserRigPerFile, waitForText } from '../helpers/browser'
 import { chainDefinition, chainRecordCsv, chainTruth, TRUE_SCALE } from '../helpers/chain-record'
 import { makeCompany, siteBody, sizingInput } from '../helpers/records'
 
@@ -33,8 +26,7 @@ it('takes a three-channel ambient record to an updated model and sizes on its re
   const file = path.join(mkdtempSync(path.join(tmpdir(), 'qn-oma-')), 'gallery-ambient.csv')
   writeFileSync(file, chainRecordCsv())
 
-  const page = await newPage(rig)
-  await signInAs(page, rig.url, engineer.email, PASSWORD)
+  const page = await pageSignedInAs(rig, engineer)
   await page.goto(`${rig.url}/sites/${site.id}/records`)
   await (await page.waitForSelector('input[type=file]'))!.uploadFile(file)
   await page.locator('button ::-p-text(Upload and analyse)').click()

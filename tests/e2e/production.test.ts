@@ -1,7 +1,8 @@
 import { afterAll, beforeAll, expect, it } from 'vitest'
 import type { Browser, Page } from 'puppeteer-core'
-import { PASSWORD, makeUser } from '../helpers/factories'
-import { enter, launchBrowser, mainText, newPage, shot, signInAs } from '../helpers/browser'
+import { makeUser } from '../helpers/factories'
+import { enter, launchBrowser, mainText, pageSignedInAs, shot } from '../helpers/browser'
+import { move, searchQueueFor, ship } from '../helpers/work-order-page'
 import { makePaymentRig, type PaymentRig } from '../api/payments-rig'
 
 let rig: PaymentRig
@@ -14,23 +15,15 @@ afterAll(async () => {
   await browser?.close()
   await rig?.close()
 })
-
-/**
- * Moves one step by the button's words; the button is off for a moment after each answer, so
- * wait until it is on. The history says the new state in words.
- */
-async function move(page: Page, button: string, toWords: string) {
-  await page.locator(`button:not([disabled]) ::-p-text(${button})`).click()
-  await page.waitForSelector(`::-p-text(→ ${toWords})`)
-}
+/** The browser and the address of the built client, to open signed-in pages on. */
+const app = () => ({ browser, url: rig.appUrl })
 
 it('takes a paid order through build and tuning to shipping, and the customer sees it shipped', async () => {
   const { quote, customer } = await rig.acceptedQuote()
   const { body } = await customer.agent.post(`/api/quotes/${quote.id}/checkout`)
   await rig.payOnPage(body.url)
   const builder = await makeUser(rig.t, 'production')
-  const page = await newPage({ browser })
-  await signInAs(page, rig.appUrl, builder.email, PASSWORD)
+  const page = await pageSignedInAs(app(), builder)
   await page.goto(`${rig.appUrl}/work-orders`)
   await page.waitForSelector('a[href^="/work-orders/"]')
   await shot(page, 'production-1-queue')
@@ -41,15 +34,7 @@ it('takes a paid order through build and tuning to shipping, and the customer se
   expect(links).toContain(`/work-orders/${wo.id}`)
   // the queue searches on the server: wait for the page of one row
   // found by its quote's number, its state said in words
-  await enter(page, '#wo-search', quote.number)
-  await page.waitForFunction(
-    (href) =>
-      [...document.querySelectorAll('a[href^="/work-orders/"]')]
-        .map((a) => a.getAttribute('href'))
-        .join() === href,
-    {},
-    `/work-orders/${wo.id}`,
-  )
+  await searchQueueFor(page, quote.number, wo.id)
   await page.waitForSelector('::-p-text(Waiting to start)')
   await shot(page, 'production-1-queue-found')
   await enter(page, '#wo-search', 'no such order anywhere')
@@ -74,16 +59,11 @@ it('takes a paid order through build and tuning to shipping, and the customer se
   expect(tuned.latestTuning?.measuredHz).toBe(typed)
   await shot(page, 'production-2-tuned')
   await move(page, 'Mark ready to ship', 'Ready to ship')
-  await page.locator('#ship-carrier').fill('Northway Freight')
-  await page.locator('#ship-tracking').fill('NWF-2231')
-  await page.locator('#ship-serial-0').fill('TDW-0001')
-  await page.locator('button ::-p-text(Record shipment and mark shipped)').click()
-  await page.waitForSelector('::-p-text(→ Shipped)')
+  await ship(page, { carrier: 'Northway Freight', tracking: 'NWF-2231', serials: ['TDW-0001'] })
   await shot(page, 'production-3-shipped')
   await page.browserContext().close()
 
-  const portal = await newPage({ browser })
-  await signInAs(portal, rig.appUrl, customer.user.email, PASSWORD)
+  const portal = await pageSignedInAs(app(), customer.user)
   await portal.goto(`${rig.appUrl}/portal/quotes/${quote.id}`)
   await portal.waitForSelector('li[data-step="shipped"][aria-current="step"].reached')
   await portal.waitForSelector('::-p-text(Your unit has shipped.)')
@@ -120,20 +100,11 @@ it('production search and shipping details visible to the customer', async () =>
   const wo = (await rig.t.services.production.list()).find((w) => w.quoteId === quote.id)!
   const builder = await makeUser(rig.t, 'production')
 
-  const page = await newPage({ browser })
-  await signInAs(page, rig.appUrl, builder.email, PASSWORD)
+  const page = await pageSignedInAs(app(), builder)
   await page.goto(`${rig.appUrl}/work-orders`)
   await page.waitForSelector(`::-p-text(${wo.orderNumber})`)
   // found by the quote's number alone; the row shows order and quote numbers and the due date
-  await enter(page, '#wo-search', quote.number)
-  await page.waitForFunction(
-    (href) =>
-      [...document.querySelectorAll('a[href^="/work-orders/"]')]
-        .map((a) => a.getAttribute('href'))
-        .join() === href,
-    {},
-    `/work-orders/${wo.id}`,
-  )
+  await searchQueueFor(page, quote.number, wo.id)
   const row = await page.$eval('tbody tr', (tr) => tr.textContent ?? '')
   expect(row).toContain(wo.orderNumber)
   expect(row).toContain(quote.number)
@@ -149,13 +120,8 @@ it('production search and shipping details visible to the customer', async () =>
   expect(sheet).toContain('Vertical: the mass moves up and down')
   expect(sheet).toContain('Delivery contact')
   expect(sheet).not.toMatch(/\bqueued\b|\bin-build\b/)
-  for (const [button, words] of [
-    ['Start the build', 'Being built'],
-    ['Start tuning', 'Being tuned'],
-  ]) {
-    await page.locator(`button:not([disabled]) ::-p-text(${button})`).click()
-    await page.waitForSelector(`::-p-text(→ ${words})`)
-  }
+  await move(page, 'Start the build', 'Being built')
+  await move(page, 'Start tuning', 'Being tuned')
   // 6.75 Hz target: 6.95 is +2.96 % (out of the ±2 %), 6.77 is +0.30 % (within)
   const target = wo.specification.targetFrequencyHz
   expect(target).toBeCloseTo(6.75, 9)
@@ -164,8 +130,7 @@ it('production search and shipping details visible to the customer', async () =>
   await record(page, 6.77)
   await page.waitForSelector('::-p-text(+0.30 %)')
   await shot(page, 'production-search-2-tuning-record')
-  await page.locator('button:not([disabled]) ::-p-text(Mark ready to ship)').click()
-  await page.waitForSelector('::-p-text(→ Ready to ship)')
+  await move(page, 'Mark ready to ship', 'Ready to ship')
 
   // shipping without a carrier is refused beside the field, naming it
   await page.locator('#ship-tracking').fill('NWF-5520-1187')
@@ -181,8 +146,7 @@ it('production search and shipping details visible to the customer', async () =>
   await shot(page, 'production-search-4-shipped')
   await page.browserContext().close()
 
-  const portal = await newPage({ browser })
-  await signInAs(portal, rig.appUrl, customer.user.email, PASSWORD)
+  const portal = await pageSignedInAs(app(), customer.user)
   await portal.goto(`${rig.appUrl}/portal/quotes/${quote.id}`)
   await portal.waitForSelector('::-p-text(Tracking number)')
   const seen = await portal.$eval('.order-shipment', (s) => s.textContent ?? '')

@@ -2,9 +2,7 @@ import { randomBytes } from 'node:crypto'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { toAuthUser } from '../../server/modules/auth/auth.service'
 import { closePdfRenderers } from '../../server/integrations/pdf/renderer'
-import { seedPeople } from '../../seed/seed-people'
-import { DEMO_OFFICE_SIZING, seedSizings } from '../../seed/seed-sizings'
-import { seedCatalogue } from '../../seed/seed-catalogue'
+import { DEMO_OFFICE_SIZING } from '../../seed/seed-sizings'
 import { DEMO_USERS } from '../../seed/demo-people'
 import type { Page } from 'puppeteer-core'
 import { formatMoney } from '../../shared/money'
@@ -20,6 +18,7 @@ import {
   startBrowserRig,
   type BrowserRig,
 } from '../helpers/browser'
+import { seedDemoSizings } from '../helpers/demo-seed'
 
 let rig: BrowserRig
 let sizingId: number
@@ -29,9 +28,7 @@ const TITLE = `${DEMO_OFFICE_SIZING}, desk run ${randomBytes(3).toString('hex')}
 beforeAll(async () => {
   rig = await startBrowserRig()
   const s = rig.t.services
-  const { companyIds } = await seedPeople(s)
-  await seedCatalogue(s)
-  await seedSizings(s, { companyIds })
+  await seedDemoSizings(s)
   const admin = toAuthUser((await s.users.findByEmail('admin@quellnode.test'))!)
   const engineer = toAuthUser((await s.users.findByEmail('engineer@quellnode.test'))!)
   const [demo] = await s.sizings.list(admin, { search: DEMO_OFFICE_SIZING })

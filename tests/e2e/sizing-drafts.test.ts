@@ -1,8 +1,5 @@
 import { beforeAll, describe, expect, it } from 'vitest'
-import request from 'supertest'
 import type { Page } from 'puppeteer-core'
-import { seedPeople } from '../../seed/seed-people'
-import { seedCatalogue } from '../../seed/seed-catalogue'
 import { DEMO_USERS } from '../../seed/demo-people'
 import {
   DEMO_FOOTBRIDGE_SITE,
@@ -12,25 +9,22 @@ import {
 } from '../../seed/seed-sizings'
 import { toAuthUser } from '../../server/modules/auth/auth.service'
 import {
+  browserRigPerFile,
   choose,
   enter,
-  newPage,
   openStep,
+  pageSignedInAs,
   shot,
-  signInAs,
-  browserRigPerFile,
   valueOf,
   waitForText,
 } from '../helpers/browser'
-import { PASSWORD } from '../helpers/factories'
-import { engineerWithSizing } from '../helpers/sizing-on-span'
+import { engineerOnSizing, reopen } from '../helpers/sizing-on-span'
+import { seedDemoSizings } from '../helpers/demo-seed'
 
 const rig = browserRigPerFile()
 beforeAll(async () => {
-  const { companyIds } = await seedPeople(rig.t.services)
-  await seedCatalogue(rig.t.services)
-  await seedSizings(rig.t.services, { companyIds })
-  await seedSizings(rig.t.services, { companyIds })
+  const { companyIds } = await seedDemoSizings(rig.t.services)
+  await seedSizings(rig.t.services, { companyIds }) // a second run adds nothing
 })
 
 const demo = (role: string) => DEMO_USERS.find((u) => u.role === role)!
@@ -52,8 +46,7 @@ describe('demo sizings, drafts and hand-over in Chromium', () => {
   })
 
   it("shows sales the handed-over demo sizing read-only with the server's result", async () => {
-    const page = await newPage(rig)
-    await signInAs(page, rig.url, demo('sales').email, demo('sales').password)
+    const page = await pageSignedInAs(rig, demo('sales'))
     await openSizing(page, DEMO_OFFICE_SIZING)
     await waitForText(page, 'Read-only')
     expect(await page.$eval('#sizing-title', (e) => (e as HTMLInputElement).disabled)).toBe(true)
@@ -66,8 +59,7 @@ describe('demo sizings, drafts and hand-over in Chromium', () => {
   })
 
   it('opens the workspace without signal after one visit, keeps the offline save, and asks before overwriting a newer server version', async () => {
-    const page = await newPage(rig)
-    await signInAs(page, rig.url, demo('engineer').email, demo('engineer').password)
+    const page = await pageSignedInAs(rig, demo('engineer'))
     await openSizing(page, 'Millrace footbridge vertical absorber')
     const id = Number(/\/sizings\/(\d+)/.exec(page.url())?.[1])
     // the service worker has cached the app shell once it controls the page (slow on a busy
@@ -118,10 +110,7 @@ describe('demo sizings, drafts and hand-over in Chromium', () => {
   }, 150_000)
 
   it('reads every kind of numeric field as typed, saves once on a double tap and reopens each input as entered', async () => {
-    const { engineer, sizing, modelId } = await engineerWithSizing(rig.t)
-    const page = await newPage(rig)
-    await signInAs(page, rig.url, engineer.email, PASSWORD)
-    const base = `${rig.url}/sizings/${sizing.id}`
+    const { sizing, modelId, page, agent, base } = await engineerOnSizing(rig)
     await page.goto(`${base}/structure`)
     await page.waitForSelector('#sizing-title')
 
@@ -157,8 +146,6 @@ describe('demo sizings, drafts and hand-over in Chromium', () => {
     await waitForText(page, 'Saved as revision 2, computed on the server')
     expect(await page.$$('.p-toast-message-error')).toHaveLength(0)
 
-    const agent = request.agent(rig.t.app)
-    await agent.post('/api/auth/sign-in').send({ email: engineer.email, password: PASSWORD })
     const stored = (await agent.get(`/api/sizings/${sizing.id}`)).body
     expect(stored.currentRevision).toBe(2)
     expect(stored.input).toMatchObject({
@@ -174,9 +161,7 @@ describe('demo sizings, drafts and hand-over in Chromium', () => {
     expect(model.definition.hostDampingRatio).toEqual([0.05, 0.0005, 0.02])
 
     // Reopened from the server alone, every field shows what was entered.
-    await page.evaluate(() => localStorage.clear())
-    await page.goto(`${base}/absorber`)
-    await page.waitForSelector('#mass-ratio')
+    await reopen(page, `${base}/absorber`, '#mass-ratio')
     const entered = {
       '#mass-ratio': '5 %',
       '#tuning-ratio': '0.95',

@@ -1,19 +1,15 @@
 import { describe, expect, it } from 'vitest'
-import request from 'supertest'
 import type { Page } from 'puppeteer-core'
 import {
+  browserRigPerFile,
   choose,
   enter,
-  newPage,
   openStep,
   shot,
-  signInAs,
-  browserRigPerFile,
   valueOf,
   waitForText,
 } from '../helpers/browser'
-import { PASSWORD } from '../helpers/factories'
-import { engineerWithSizing } from '../helpers/sizing-on-span'
+import { engineerOnSizing, reopen } from '../helpers/sizing-on-span'
 
 const rig = browserRigPerFile()
 
@@ -24,21 +20,9 @@ async function save(page: Page, revision: number) {
   await waitForText(page, `Saved as revision ${revision}, computed on the server`)
 }
 
-/** Opens a step from the server's copy alone, as on another tablet. */
-async function reopen(page: Page, url: string, field: string) {
-  await page.evaluate(() => localStorage.clear())
-  await page.goto(url)
-  await page.waitForSelector(field)
-}
-
 describe('the design load in the sizing form, in Chromium', () => {
   it('saves a rotating machine and then a support acceleration with a stroke limit as typed, and reopens them', async () => {
-    const { engineer, sizing } = await engineerWithSizing(rig.t)
-    const page = await newPage(rig)
-    await signInAs(page, rig.url, engineer.email, PASSWORD)
-    const base = `${rig.url}/sizings/${sizing.id}`
-    const agent = request.agent(rig.t.app)
-    await agent.post('/api/auth/sign-in').send({ email: engineer.email, password: PASSWORD })
+    const { sizing, page, agent, base } = await engineerOnSizing(rig)
     const stored = async () => (await agent.get(`/api/sizings/${sizing.id}`)).body
 
     // A fan on the span: unbalance with a decimal comma, running speed in rpm.

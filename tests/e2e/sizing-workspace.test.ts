@@ -1,16 +1,15 @@
 import { describe, expect, it } from 'vitest'
 import { seedCatalogue } from '../../seed/seed-catalogue'
-import { makeUser, PASSWORD, signedIn } from '../helpers/factories'
+import { makeUser, signedIn } from '../helpers/factories'
 import { makeCompany } from '../helpers/records'
 import {
   choose,
   LANDSCAPE,
   mainText,
-  newPage,
+  pageSignedInAs,
   openStep,
   PORTRAIT,
   shot,
-  signInAs,
   browserRigPerFile,
   waitForText,
 } from '../helpers/browser'
@@ -24,8 +23,7 @@ describe.each([
   it('takes an engineer from a new site to a sizing handed over to sales', async () => {
     const engineer = await makeUser(rig.t, 'engineer')
     const company = await makeCompany(rig.t)
-    const page = await newPage(rig, viewport)
-    await signInAs(page, rig.url, engineer.email, PASSWORD)
+    const page = await pageSignedInAs(rig, engineer, viewport)
 
     await page.goto(`${rig.url}/sites`)
     await page.locator('::-p-aria([name="New site"][role="button"])').click()
@@ -125,8 +123,7 @@ async function quoteScreenShowsAcknowledgement(sizingId: number, companyId: numb
     lines: [{ kind: 'option', optionId: options[0]!.id, quantity: 1 }],
   })
   expect(quote.status).toBe(201)
-  const page = await newPage(rig)
-  await signInAs(page, rig.url, user.email, PASSWORD)
+  const page = await pageSignedInAs(rig, user)
   await page.goto(`${rig.url}/quotes/${quote.body.id}`)
   await waitForText(page, 'Design checks not met')
   await waitForText(page, `Reason given: ${REASON}`)

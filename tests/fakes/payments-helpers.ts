@@ -66,6 +66,11 @@ export function submitPayForm(
   })
 }
 
+/** Pays a session on its pay page with the card number as a customer types it. */
+export function payWithCard(session: { url: string | null }, card: string): Promise<Response> {
+  return submitPayForm(session.url ?? '', { card, action: 'pay' })
+}
+
 /**
  * The types of the webhooks a receiver got, each signature checked with the official SDK at the
  * fake's hand-set clock (receivedAt in milliseconds), not the host's.

@@ -2,7 +2,7 @@ import { beforeEach, describe, expect, it } from 'vitest'
 import { RETRY_DELAYS_S } from '../../fakes/payments/webhooks'
 import {
   createQuoteSession,
-  submitPayForm,
+  payWithCard,
   WEBHOOK_SECRET,
   verifiedTypes,
   clockedFakePerFile,
@@ -24,7 +24,7 @@ const runRetries = async () =>
 
 async function paidSession() {
   const session = await createQuoteSession(fake.stripe)
-  await submitPayForm(session.url ?? '', { card: '4242424242424242', action: 'pay' })
+  await payWithCard(session, '4242424242424242')
   return fake.stripe.checkout.sessions.retrieve(session.id)
 }
 

@@ -5,6 +5,7 @@ import {
   createQuoteSession,
   sdkFor,
   SECRET_KEY,
+  payWithCard,
   submitPayForm,
   WEBHOOK_SECRET,
 } from './payments-helpers'
@@ -54,10 +55,7 @@ describe('hosted pay page and webhooks of the payments fake', () => {
 
   it('completes the session, sends a verifiable completed event and redirects with the id', async () => {
     const session = await createQuoteSession(stripe)
-    const res = await submitPayForm(session.url ?? '', {
-      card: '4242 4242 4242 4242',
-      action: 'pay',
-    })
+    const res = await payWithCard(session, '4242 4242 4242 4242')
     expect(res.status).toBe(303)
     expect(res.headers.get('location')).toBe(`http://127.0.0.1:9/paid?session=${session.id}`)
     const events = verified()
@@ -76,7 +74,7 @@ describe('hosted pay page and webhooks of the payments fake', () => {
 
   it('rejects a webhook body that was altered after signing', async () => {
     const session = await createQuoteSession(stripe)
-    await submitPayForm(session.url ?? '', { card: '4242424242424242', action: 'pay' })
+    await payWithCard(session, '4242424242424242')
     const hook = receiver.received[0]
     expect(hook).toBeDefined()
     const forged = Buffer.from(hook!.rawBody.toString().replace('280000', '1'))
@@ -87,10 +85,7 @@ describe('hosted pay page and webhooks of the payments fake', () => {
 
   it('sends a failed payment event naming the session for a declined card and no completed event', async () => {
     const session = await createQuoteSession(stripe)
-    const res = await submitPayForm(session.url ?? '', {
-      card: '4000 0000 0000 0002',
-      action: 'pay',
-    })
+    const res = await payWithCard(session, '4000 0000 0000 0002')
     expect(res.status).toBe(402)
     expect(await res.text()).toMatch(/role="alert">The card was declined/)
     const events = verified()
@@ -102,7 +97,7 @@ describe('hosted pay page and webhooks of the payments fake', () => {
 
   it('sends nothing and changes nothing for a card number that is not a test number', async () => {
     const session = await createQuoteSession(stripe)
-    const res = await submitPayForm(session.url ?? '', { card: '1234', action: 'pay' })
+    const res = await payWithCard(session, '1234')
     expect(res.status).toBe(422)
     expect(receiver.received).toHaveLength(0)
   })
@@ -138,7 +133,7 @@ describe('hosted pay page and webhooks of the payments fake', () => {
 
   it('resends the same event id on a replay request, with a fresh valid signature', async () => {
     const session = await createQuoteSession(stripe)
-    await submitPayForm(session.url ?? '', { card: '4242424242424242', action: 'pay' })
+    await payWithCard(session, '4242424242424242')
     const list = (await (
       await fetch(`${fake.url}/_fake/events?sessionId=${session.id}`)
     ).json()) as {

@@ -6,6 +6,7 @@ import { afterAll, beforeAll } from 'vitest'
 import puppeteer, { type Browser, type Page } from 'puppeteer-core'
 import { CHROMIUM_ARGS } from '../../server/integrations/pdf/renderer'
 import { makeTestApp, type TestApp } from './app'
+import { PASSWORD } from './factories'
 
 export const SHOTS_DIR = path.resolve('.local/screenshots')
 export const PORTRAIT = { width: 820, height: 1180 }
@@ -91,6 +92,20 @@ export async function signInAs(page: Page, url: string, email: string, password:
   await page.locator('#password').fill(password)
   await page.locator('button[type="submit"]').click()
   await page.waitForSelector('nav[aria-label="Main"]')
+}
+
+/**
+ * A fresh page (portrait unless told) signed in as the user: a demo user with its own password or
+ * a test user with the shared PASSWORD.
+ */
+export async function pageSignedInAs(
+  rig: Pick<BrowserRig, 'browser' | 'url'>,
+  user: { email: string; password?: string },
+  viewport = PORTRAIT,
+): Promise<Page> {
+  const page = await newPage(rig, viewport)
+  await signInAs(page, rig.url, user.email, user.password ?? PASSWORD)
+  return page
 }
 
 /** Follows a main-menu entry, opening the menu first where the bar is too narrow for the links. */

@@ -1,19 +1,27 @@
+import request from 'supertest'
+import type { Page } from 'puppeteer-core'
 import { spanModel } from '../../shared/dynamics'
 import type { SizingInput } from '../../shared/schemas/sizing'
 import { toAuthUser } from '../../server/modules/auth/auth.service'
 import type { TestApp } from './app'
-import { makeUser } from './factories'
+import { pageSignedInAs, type BrowserRig } from './browser'
+import { makeUser, PASSWORD } from './factories'
 import { makeCompany } from './records'
 
-/** A fresh engineer with a three-mass floor span (5.8 Hz, invented) and a draft sizing on it. */
-export async function engineerWithSizing(t: TestApp) {
+/**
+ * A fresh engineer with a three-mass floor span (10 t masses, mode 1 at 5.8 Hz, invented) and a
+ * draft sizing on it: one absorber at midspan for mode 1, unless `input` says otherwise.
+ */
+export async function engineerWithSizing(
+  t: TestApp,
+  opts: { companyId?: number; input?: Partial<SizingInput> } = {},
+) {
   const s = t.services
   const engineer = await makeUser(t, 'engineer')
   const user = toAuthUser((await s.users.findByEmail(engineer.email))!)
-  const company = await makeCompany(t)
   const site = await s.sites.create(user, {
     name: `Round-trip floor ${engineer.id}`,
-    companyId: company.id,
+    companyId: opts.companyId ?? (await makeCompany(t)).id,
     structureKind: 'floor',
     address: '',
     contactName: '',
@@ -43,7 +51,27 @@ export async function engineerWithSizing(t: TestApp) {
     orientation: 'vertical',
     acceptance: { label: 'custom', quantity: 'acceleration', limit: 0.05 },
     detuningTolerance: 0.1,
+    ...opts.input,
   }
   const sizing = await s.sizings.create(user, input)
   return { engineer, user, sizing, input, modelId: model.id }
+}
+
+/**
+ * engineerWithSizing, with the engineer signed in twice: in a fresh page of the browser and in an
+ * API agent that reads what the server stored. `base` is the sizing's address in the client.
+ */
+export async function engineerOnSizing(rig: BrowserRig) {
+  const made = await engineerWithSizing(rig.t)
+  const page = await pageSignedInAs(rig, made.engineer)
+  const agent = request.agent(rig.t.app)
+  await agent.post('/api/auth/sign-in').send({ email: made.engineer.email, password: PASSWORD })
+  return { ...made, page, agent, base: `${rig.url}/sizings/${made.sizing.id}` }
+}
+
+/** Opens a step from the server's copy alone (no draft in the browser), as on another tablet. */
+export async function reopen(page: Page, url: string, field: string) {
+  await page.evaluate(() => localStorage.clear())
+  await page.goto(url)
+  await page.waitForSelector(field)
 }

@@ -4,32 +4,28 @@ import { boundedLeastSquares } from '../../shared/updating/bounded-least-squares
 // Bounded-variable least squares (Stark & Parker, Computational Statistics 10, 1995):
 // hand-checked cases.
 describe('boundedLeastSquares', () => {
-  it('returns the unconstrained solution when it lies inside the box', () => {
-    // A = [[1, 1], [1, −1]], b = [2, 0] → x = (1, 1)
-    const { x, atBound } = boundedLeastSquares(
+  /** A = [[1, 1], [1, −1]], b = [2, 0] with x ≥ (−5, −5) and x ≤ upper. */
+  const crossed = (upper: number[]) =>
+    boundedLeastSquares(
       [
         [1, 1],
         [1, -1],
       ],
       [2, 0],
       [-5, -5],
-      [5, 5],
+      upper,
     )
+
+  it('returns the unconstrained solution when it lies inside the box', () => {
+    // the least-squares solution x = (1, 1) lies inside the box
+    const { x, atBound } = crossed([5, 5])
     expect(x).toEqual([expect.closeTo(1, 12), expect.closeTo(1, 12)])
     expect(atBound).toEqual([false, false])
   })
 
   it('fixes a variable at its bound and re-solves the others', () => {
     // with x₁ ≤ 0.5: minimise (x₂ − 1.5)² + (0.5 − x₂)² → x₂ = 1
-    const { x, atBound } = boundedLeastSquares(
-      [
-        [1, 1],
-        [1, -1],
-      ],
-      [2, 0],
-      [-5, -5],
-      [0.5, 5],
-    )
+    const { x, atBound } = crossed([0.5, 5])
     expect(x).toEqual([0.5, expect.closeTo(1, 12)])
     expect(atBound).toEqual([true, false])
   })
