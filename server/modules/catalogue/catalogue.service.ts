@@ -1,12 +1,7 @@
 import { ACCESS } from '../../../shared/access'
 import { demandOfUnit } from '../../../shared/catalogue/unit-demand'
 import { matchUnits } from '../../../shared/catalogue'
-import type {
-  CatalogueOptionInput,
-  ProductLine,
-  ProductLineInput,
-  UnitMatch,
-} from '../../../shared/schemas/catalogue'
+import type { ProductLine, UnitMatch } from '../../../shared/schemas/catalogue'
 import type { Role } from '../../../shared/schemas/auth'
 import type { SizingSummary } from '../../../shared/schemas/sizing'
 import { AppError, notFound } from '../../http/app-error'
@@ -25,28 +20,48 @@ function codeTaken(code: string) {
   ])
 }
 
-/** Two rows may not share a code: a new one, or a changed one (`id`) taking another's. */
-async function checkCodeFree(
-  table: { findByCode: (code: string) => Promise<{ id: number } | null> },
-  code: string,
-  id?: number,
-) {
-  const other = await table.findByCode(code)
-  if (other && other.id !== id) throw codeTaken(code)
+/** A catalogue table whose rows each have a code of their own (product lines, options). */
+interface CodedTable<I, R> {
+  find: (id: number) => Promise<R | null>
+  findByCode: (code: string) => Promise<{ id: number } | null>
+  create: (input: I) => Promise<R>
+  update: (id: number, input: I) => Promise<R>
+}
+
+/**
+ * Reading, adding and changing the rows of a coded table: two rows may not share a code, so a
+ * new row, or a changed one taking another's code, is refused with 409.
+ */
+function codedRows<I extends { code: string }, R>(table: CodedTable<I, R>, missing: string) {
+  async function get(id: number) {
+    const found = await table.find(id)
+    if (!found) throw notFound(missing)
+    return found
+  }
+  async function checkCodeFree(code: string, id?: number) {
+    const other = await table.findByCode(code)
+    if (other && other.id !== id) throw codeTaken(code)
+  }
+  return {
+    get,
+    async create(input: I) {
+      await checkCodeFree(input.code)
+      return table.create(input)
+    },
+    async update(id: number, input: I) {
+      await get(id)
+      await checkCodeFree(input.code, id)
+      return table.update(id, input)
+    },
+  }
 }
 
 export function catalogueService(deps: { catalogue: CatalogueRepository }) {
   const { lines, options } = deps.catalogue
-  async function line(id: number) {
-    const found = await lines.find(id)
-    if (!found) throw notFound('product-line')
-    return found
-  }
-  async function option(id: number) {
-    const found = await options.find(id)
-    if (!found) throw notFound('catalogue-option')
-    return found
-  }
+  const lineRows = codedRows(lines, 'product-line')
+  const optionRows = codedRows(options, 'catalogue-option')
+  const line = lineRows.get
+  const option = optionRows.get
   return {
     line,
     option,
@@ -59,25 +74,11 @@ export function catalogueService(deps: { catalogue: CatalogueRepository }) {
     async getLine(role: Role, id: number) {
       return forRole(await line(id), role)
     },
-    async createLine(input: ProductLineInput) {
-      await checkCodeFree(lines, input.code)
-      return lines.create(input)
-    },
-    async updateLine(id: number, input: ProductLineInput) {
-      await line(id)
-      await checkCodeFree(lines, input.code, id)
-      return lines.update(id, input)
-    },
+    createLine: lineRows.create,
+    updateLine: lineRows.update,
     listOptions: (includeInactive = false) => options.list(!includeInactive),
-    async createOption(input: CatalogueOptionInput) {
-      await checkCodeFree(options, input.code)
-      return options.create(input)
-    },
-    async updateOption(id: number, input: CatalogueOptionInput) {
-      await option(id)
-      await checkCodeFree(options, input.code, id)
-      return options.update(id, input)
-    },
+    createOption: optionRows.create,
+    updateOption: optionRows.update,
     /** Every active product line judged against a sizing (or its absorber n of a set),
      * fitting ones first. */
     async match(sizing: SizingSummary, absorber?: number): Promise<UnitMatch[]> {
