@@ -183,6 +183,15 @@ export async function openStep(page: Page, name: string) {
 
 /** Opens a PrimeVue Select by its input id and picks the option that starts with the text. */
 export async function choose(page: Page, inputId: string, option: string) {
-  await page.locator(`#${inputId}`).click()
-  await page.locator(`li[role="option"][aria-label^="${option}"]`).click()
+  const item = `li[role="option"][aria-label^="${option}"]`
+  // a tap that lands while the page is still re-rendering may not open the list: tap again
+  for (let tries = 1; ; tries++) {
+    await page.locator(`#${inputId}`).click()
+    const opened = await page
+      .waitForSelector(item, { visible: true, timeout: 3000 })
+      .then(() => true)
+      .catch(() => false)
+    if (opened || tries === 3) break
+  }
+  await page.locator(item).click()
 }
