@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # npm test: on a fresh machine too — installs what is missing, starts (or reuses) the private
-# MariaDB, then type checks, lint, unit, API and browser tests against throwaway databases.
+# MariaDB, then type checks, lint, unit, API and browser tests against throwaway databases
+# (the checks and the unit tests run beside the slower steps).
 . "$(dirname "$0")/lib.sh"
 cd "$ROOT"
 bash server/scripts/ensure-system.sh
@@ -10,12 +11,39 @@ if ! bash server/scripts/db.sh status >/dev/null 2>&1; then
   bash server/scripts/db.sh start
   started_db=1
 fi
-cleanup() { [ "$started_db" = 1 ] && bash server/scripts/db.sh stop >/dev/null 2>&1 || true; }
+cleanup() {
+  # a step run beside the others does not outlive a failed run
+  for pid in $(jobs -p); do kill "$pid" 2>/dev/null || true; done
+  [ "$started_db" = 1 ] && bash server/scripts/db.sh stop >/dev/null 2>&1 || true
+}
 trap cleanup EXIT
 
 export NODE_ENV=test
 step() { log "$1"; shift; "$@"; }
-step "type checks" npm run -s typecheck
+# Steps that need neither the database nor the built client run beside the others (each is one
+# process on one core); their output is kept in .local/log and shown when they are waited for.
+declare -A BESIDE
+beside() {
+  local name=$1
+  shift
+  log "$name (beside the next steps)"
+  "$@" >"$LOCAL/log/test-${name// /-}.log" 2>&1 &
+  BESIDE[$name]=$!
+}
+joined() {
+  local name=$1 rc=0
+  wait "${BESIDE[$name]}" || rc=$?
+  log "$name: $([ "$rc" = 0 ] && echo passed || echo "FAILED (exit $rc)")"
+  cat "$LOCAL/log/test-${name// /-}.log"
+  return "$rc"
+}
+
+beside "type checks" npm run -s typecheck
 step "lint" npm run -s lint
+joined "type checks"
+beside "unit and client tests" npx vitest run --project unit --project client
 step "building the client for the browser tests" npx vite build --logLevel warn
-step "unit, API and browser tests" npx vitest run
+rc=0
+step "API and browser tests" npx vitest run --project api --project e2e || rc=$?
+joined "unit and client tests" || rc=$?
+exit "$rc"

@@ -147,3 +147,19 @@ function trackApi(page: Page) {
       await new Promise((r) => setTimeout(r, 50))
   }
 }
+
+/**
+ * Moves the app to `path` through its router, as a tap on one of its links does, and answers once
+ * the new route's page has rendered.
+ */
+export async function navigateInApp(page: Page, path: string) {
+  await page.evaluate(async (to) => {
+    type Mounted = { __vue_app__: { config: { globalProperties: { $router: Router } } } }
+    interface Router {
+      push(to: string): Promise<unknown>
+    }
+    const app = (document.querySelector('#app') as unknown as Mounted).__vue_app__
+    await app.config.globalProperties.$router.push(to)
+    await new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0)))
+  }, path)
+}

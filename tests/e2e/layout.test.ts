@@ -1,5 +1,5 @@
 import { mkdirSync } from 'node:fs'
-import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { afterAll, beforeAll, describe, it } from 'vitest'
 import type { Browser, Page } from 'puppeteer-core'
 import { DEMO_USERS } from '../../seed/demo-people'
 import type { Role } from '../../shared/schemas/auth'
@@ -14,7 +14,7 @@ import {
   signInAs,
   SHOTS_DIR,
 } from '../helpers/browser'
-import { apiTraffic, demoChain, measureLayout, type DemoChain } from './layout-rig'
+import { apiTraffic, demoChain, measureLayout, navigateInApp, type DemoChain } from './layout-rig'
 
 let rig: PaymentRig
 let browser: Browser
@@ -69,10 +69,15 @@ function routesFor(role: Role): string[] {
   return ['/', ...byRole[role], '/no-such-page']
 }
 
-/** Opens a route and waits until its heading shows and its data and tables have loaded. */
-async function visit(page: Page, url: string) {
+/**
+ * Opens a route as the app's own links do (a full load only for a page's first route: reloading
+ * the whole app for every route made this test CPU-bound) and waits until its heading shows and
+ * its data and tables have loaded.
+ */
+async function visit(page: Page, path: string) {
   const settled = apiTraffic(page)
-  await page.goto(url)
+  if (!page.url().startsWith(rig.appUrl)) await page.goto(`${rig.appUrl}${path}`)
+  else await navigateInApp(page, path)
   await page.waitForSelector('main :is(h1, [role="tablist"])')
   // a page that keeps a request open (a live preview) is measured after 5 s anyway
   await settled()
@@ -81,7 +86,7 @@ async function visit(page: Page, url: string) {
 
 /** Visits a route, saves its screenshot and answers what does not fit, in words. */
 async function problemsOf(page: Page, path: string, label: string, tablet: boolean) {
-  await visit(page, `${rig.appUrl}${path}`)
+  await visit(page, path)
   const m = await measureLayout(page)
   // what the person sees first (a full-page capture of every route costs a minute per role)
   await shot(page, `layout-${label}-${path.replace(/\W+/g, '_')}`, false)
@@ -94,9 +99,12 @@ async function problemsOf(page: Page, path: string, label: string, tablet: boole
   return found
 }
 
-for (const v of VIEWPORTS) {
-  describe(`every screen fits a ${v.name} screen (${v.size.width}×${v.size.height})`, () => {
-    it('fits the pages a signed-out visitor sees', async () => {
+// Every viewport and role in its own browser context, a few at a time (the e2e project's
+// maxConcurrency): the visits mostly wait for the page, so they overlap well.
+describe.concurrent('every screen fits a tablet in both orientations and a phone', () => {
+  for (const v of VIEWPORTS) {
+    const screen = `a ${v.name} screen (${v.size.width}×${v.size.height})`
+    it(`fits the pages a signed-out visitor sees on ${screen}`, async ({ expect }) => {
       const page = await newPage({ browser }, v.size)
       const found: string[] = []
       for (const path of ['/sign-in', '/forgot-password', '/set-password?token=x']) {
@@ -107,7 +115,9 @@ for (const v of VIEWPORTS) {
     })
 
     for (const demo of DEMO_USERS) {
-      it(`fits every page the ${demo.role} may open, with the header on one row`, async () => {
+      it(`fits every page the ${demo.role} may open on ${screen}, with the header on one row`, async ({
+        expect,
+      }) => {
         const page = await newPage({ browser }, v.size)
         await signInAs(page, rig.appUrl, demo.email, demo.password)
         const found: string[] = []
@@ -118,5 +128,5 @@ for (const v of VIEWPORTS) {
         expect(found).toEqual([])
       }, 240_000)
     }
-  })
-}
+  }
+})
