@@ -1,6 +1,6 @@
 import { mkdirSync } from 'node:fs'
 import { afterAll, beforeAll, expect, it } from 'vitest'
-import type { Browser, Page } from 'puppeteer-core'
+import type { Browser } from 'puppeteer-core'
 import { toAuthUser } from '../../server/modules/auth/auth.service'
 import { makeUser, signedIn } from '../helpers/factories'
 import {
@@ -12,6 +12,7 @@ import {
   pageSignedInAs,
   shot,
   SHOTS_DIR,
+  tapButton,
   waitForText,
 } from '../helpers/browser'
 import { makePaymentRig, type PaymentRig } from '../api/payments-rig'
@@ -56,19 +57,13 @@ async function draftOnSpan() {
   return { engineer, sizing, company, contact }
 }
 
-/** Clicks the first enabled button whose visible text is exactly `label`. */
-async function clickButton(page: Page, label: string) {
-  const xpath = `//button[not(@disabled) and normalize-space(.)="${label}"]`
-  await (await page.waitForSelector(`::-p-xpath(${xpath})`))!.click()
-}
-
 it('an engineer adds a second absorber for mode 2, sales quote two units, and the work order ships when both are tuned', async () => {
   const { engineer, sizing, company } = await draftOnSpan()
 
   // Engineer: a second absorber for mode 2 at the quarter point, 1 % of its effective mass.
   const page = await pageSignedInAs({ browser, url: rig.appUrl }, engineer)
   await page.goto(`${rig.appUrl}/sizings/${sizing.id}/absorber`)
-  await clickButton(page, 'Add an absorber')
+  await tapButton(page, 'Add an absorber')
   await page.waitForSelector('[aria-label="Absorber 2"]')
   await choose(page, 'unit-2-node', 'node-1')
   expect(await page.$eval('#unit-2-mode', (e) => e.textContent)).toContain('Mode 2')
@@ -82,14 +77,14 @@ it('an engineer adds a second absorber for mode 2, sales quote two units, and th
   await waitForText(page, 'Total absorber mass 400 kg')
   await shot(page, 'set-2-results')
   await openStep(page, 'Hand over')
-  await clickButton(page, 'Save sizing')
+  await tapButton(page, 'Save sizing')
   await waitForText(page, 'Saved as revision 2, computed on the server')
   // The saved set's catalogue units, matched absorber by absorber.
   await openStep(page, 'Results')
   await page.waitForSelector('[aria-label="Catalogue units"] ::-p-text(Absorber 2)')
   await shot(page, 'set-2b-catalogue')
   await openStep(page, 'Hand over')
-  await clickButton(page, 'Submit to sales')
+  await tapButton(page, 'Submit to sales')
   await waitForText(page, 'Handed over to sales')
   const stored = await rig.t.services.sizings.summary(sizing.id)
   expect(stored.absorbers?.map((u) => [u.node, u.targetMode])).toEqual([
@@ -106,7 +101,7 @@ it('an engineer adds a second absorber for mode 2, sales quote two units, and th
     await quoting.locator(`[data-test="absorber-${n}-matches"] ::-p-text(Add FLR-S)`).click()
   await quoting.waitForSelector('::-p-text(for absorber 2)')
   await shot(quoting, 'set-3-quote-builder')
-  await clickButton(quoting, 'Save draft')
+  await tapButton(quoting, 'Save draft')
   await quoting.waitForSelector('[data-state="draft"]')
   const lines = await quoting.$$eval('[aria-label="Quote lines"] tbody tr', (r) =>
     r.map((x) => x.textContent ?? ''),
@@ -114,11 +109,8 @@ it('an engineer adds a second absorber for mode 2, sales quote two units, and th
   expect(lines).toHaveLength(2)
   expect(lines[0]).toMatch(/for absorber 1 \(mode 1\)/)
   expect(lines[1]).toMatch(/for absorber 2 \(mode 2\)/)
-  await clickButton(quoting, 'Send to customer')
-  const send = await quoting.waitForSelector(
-    '::-p-xpath(//div[@role="dialog"]//button[normalize-space(.)="Send" and not(@disabled)])',
-  )
-  await send!.click()
+  await tapButton(quoting, 'Send to customer')
+  await tapButton(quoting, 'Send', '//div[@role="dialog"]')
   await quoting.waitForSelector('[data-state="sent"]')
   await shot(quoting, 'set-4-quote-sent')
   await quoting.browserContext().close()
@@ -150,18 +142,18 @@ it('an engineer adds a second absorber for mode 2, sales quote two units, and th
   await move(shop, 'Start tuning', 'Being tuned')
   const [first, second] = units as [(typeof units)[0], (typeof units)[0]]
   await enter(shop, '#measured-hz-1', `${first.targetFrequencyHz.toFixed(2)} Hz`)
-  await clickButton(shop, 'Record absorber 1')
+  await tapButton(shop, 'Record absorber 1')
   await shop.waitForSelector('[data-test="unit-1"] ::-p-text(within tolerance)')
   // absorber 2 measured 5 % high: out of the ±2 % works tolerance
   await enter(shop, '#measured-hz-2', `${(second.targetFrequencyHz * 1.05).toFixed(2)} Hz`)
-  await clickButton(shop, 'Record absorber 2')
+  await tapButton(shop, 'Record absorber 2')
   await shop.waitForSelector('[data-test="unit-2"] ::-p-text(out of tolerance)')
   await shop.locator('button:not([disabled]) ::-p-text(Mark ready to ship)').click()
   await shop.waitForSelector('.p-toast-message-error ::-p-text(Absorber 2)')
   expect((await rig.t.services.production.get(wo.id)).state).toBe('tuning')
   await shot(shop, 'set-5-blocked')
   await enter(shop, '#measured-hz-2', `${second.targetFrequencyHz.toFixed(2)} Hz`)
-  await clickButton(shop, 'Record absorber 2')
+  await tapButton(shop, 'Record absorber 2')
   await shop.waitForSelector('[data-test="unit-2"] ::-p-text(within tolerance)')
   await move(shop, 'Mark ready to ship', 'Ready to ship')
   // one serial number per absorber: two units leave the works

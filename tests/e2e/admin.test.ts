@@ -13,6 +13,7 @@ import {
   shot,
   signInAs,
   startBrowserRig,
+  tapButton,
   waitForText,
   type BrowserRig,
 } from '../helpers/browser'
@@ -54,13 +55,6 @@ afterEach(async (ctx) => {
 
 const admin = DEMO_USERS.find((u) => u.role === 'admin')!
 
-async function clickButton(page: Page, label: string) {
-  const button = await page.waitForSelector(
-    `::-p-xpath(//button[normalize-space(.)="${label}" and not(@disabled)])`,
-  )
-  await button!.click()
-}
-
 describe('the admin on a tablet', () => {
   it('gives the demo customer a tax rate of its own, changes it, and the next quote’s total follows', async () => {
     const page = await newPage(rig)
@@ -68,12 +62,12 @@ describe('the admin on a tablet', () => {
     await signInAs(page, rig.url, admin.email, admin.password)
     await page.goto(`${rig.url}/admin/tax`)
     await page.waitForSelector('h1 ::-p-text(Tax rates)')
-    await clickButton(page, 'Add a rate')
+    await tapButton(page, 'Add a rate')
     await page.waitForFunction(() => document.activeElement?.closest('[role="dialog"]'))
     await enter(page, '#tax-name', 'Harbour works')
     await enter(page, '#tax-rate', '10')
     await page.waitForSelector('::-p-text(= 10 %)')
-    await clickButton(page, 'Save rate')
+    await tapButton(page, 'Save rate')
     await waitForText(page, 'Harbour works')
     // the dialog's closing mask takes taps until it has gone
     await page.waitForSelector('.p-dialog-mask', { hidden: true })
@@ -92,11 +86,11 @@ describe('the admin on a tablet', () => {
     await shot(page, 'admin-1-tax-rate')
 
     // the rate is raised to 12.5 %, typed with a decimal comma as on a European keyboard
-    await clickButton(page, 'Change Harbour works')
+    await tapButton(page, 'Change Harbour works')
     await page.waitForFunction(() => document.activeElement?.closest('[role="dialog"]'))
     await enter(page, '#tax-rate', '12,5')
     await page.waitForSelector('::-p-text(= 12.5 %)')
-    await clickButton(page, 'Save rate')
+    await tapButton(page, 'Save rate')
     await waitForText(page, '12.5 %')
     const after = await newQuote()
     expect(after.taxBp).toBe(1250)
@@ -120,7 +114,7 @@ describe('the admin on a tablet', () => {
     }
     await deactivate()
     await shot(page, 'admin-3-confirm-deactivate')
-    await clickButton(page, 'Keep as is')
+    await tapButton(page, 'Keep as is')
     await page.waitForSelector('[role="alertdialog"]', { hidden: true })
     expect((await rig.t.services.users.findByEmail(target.email))?.active).toBe(true)
     await deactivate()

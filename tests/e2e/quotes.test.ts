@@ -16,6 +16,7 @@ import {
   shot,
   signInAs,
   startBrowserRig,
+  tapButton,
   type BrowserRig,
 } from '../helpers/browser'
 import { seedDemoSizings } from '../helpers/demo-seed'
@@ -44,12 +45,6 @@ afterAll(async () => {
 })
 
 const sales = DEMO_USERS.find((u) => u.role === 'sales')!
-
-/** Clicks the first button whose visible text is exactly `label`. */
-async function clickButton(page: Awaited<ReturnType<typeof newPage>>, label: string) {
-  const button = await page.waitForSelector(`::-p-xpath(//button[normalize-space(.)="${label}"])`)
-  await button!.click()
-}
 
 /** Waits until the element's text (anywhere on the page, dialogs included) contains `needle`. */
 async function textIn(page: Page, selector: string, needle: string) {
@@ -108,7 +103,7 @@ describe('sales quote the demo sizing in Chromium on a tablet', () => {
     await textIn(page, '[data-test="quote-total"]', formatMoney(two.total, 'EUR'))
     await page.locator('#add-option').click()
     await page.locator('li[role="option"] ::-p-text(Site tuning visit)').click()
-    await clickButton(page, 'Add option')
+    await tapButton(page, 'Add option')
     await textIn(page, '[data-test="line-price-1"]', 'each')
     // a quantity of 0 is an error beside the field, never turned into 1
     await enter(page, '#line-qty-0', '0')
@@ -119,7 +114,7 @@ describe('sales quote the demo sizing in Chromium on a tablet', () => {
     await enter(page, '#q-discount', '150')
     await page.waitForSelector('::-p-text(Discount: at most 100 %)')
     await shot(page, 'quotes-2-discount-refused')
-    await clickButton(page, 'Save draft')
+    await tapButton(page, 'Save draft')
     await page.waitForSelector('::-p-text(Discount: at most 100 %)')
     const quoted = async () =>
       (await rig.t.services.quotes.list(salesUser, {})).items.filter((q) => q.sizingId === sizingId)
@@ -148,7 +143,7 @@ describe('sales quote the demo sizing in Chromium on a tablet', () => {
     expect(await page.$$eval('[aria-label="Quote lines"] tbody tr', (r) => r.length)).toBe(2)
 
     // the send dialog shows the mail as the customer will get it, with the personal message
-    await clickButton(page, 'Send to customer')
+    await tapButton(page, 'Send to customer')
     await textIn(page, '[data-test="mail-subject"]', `Quotation ${number}`)
     await textIn(page, '[data-test="mail-attachment"]', `${number}.pdf`)
     await textIn(page, '[data-test="mail-to"]', 'customer@marlowquay.test')
@@ -222,7 +217,7 @@ describe('sales quote the demo sizing in Chromium on a tablet', () => {
     await enter(page, '#pl-eur-perKg', '12,5')
     await page.waitForSelector('::-p-text(= €12.50)')
     await shot(page, 'quotes-4-catalogue-price')
-    await clickButton(page, 'Save')
+    await tapButton(page, 'Save')
     await page.waitForSelector('::-p-text(€12.50/kg)')
     const line = (await rig.t.services.catalogue.listLines('admin', true)).find(
       (l) => l.code === code,

@@ -181,6 +181,16 @@ export async function openStep(page: Page, name: string) {
   throw new Error(`no step ${name}`)
 }
 
+/**
+ * Taps the first enabled button whose visible text is exactly `label` (inside `within`, an XPath
+ * such as `//div[@role="dialog"]`, when given). Through a locator, so a button that the page
+ * re-renders between finding and tapping is found again instead of failing the test.
+ */
+export async function tapButton(page: Page, label: string, within = '') {
+  const xpath = `${within}//button[not(@disabled) and normalize-space(.)="${label}"]`
+  await page.locator(`::-p-xpath(${xpath})`).click()
+}
+
 /** Opens a PrimeVue Select by its input id and picks the option that starts with the text. */
 export async function choose(page: Page, inputId: string, option: string) {
   const item = `li[role="option"][aria-label^="${option}"]`
