@@ -21,6 +21,7 @@ async function main() {
   const pool = createSizingPool(config.WORKER_THREADS, {
     maxQueue: config.ENGINE_QUEUE_LIMIT,
     budgetMs: config.ENGINE_BUDGET_MS,
+    niceIncrement: config.ENGINE_NICE,
   })
   const deps = { config, dataSource, mailer: smtpMailer(config), logger, pool }
   const { app, services } = createApp(deps)
