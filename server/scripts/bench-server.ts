@@ -15,7 +15,7 @@ import { createApp } from '../app'
 import { loadConfig } from '../config'
 import { createDataSource } from '../data-source'
 import { smtpMailer } from '../integrations/mail'
-import { createSizingPool } from '../workers/pool'
+import { configuredPool } from '../workers/pool'
 import { throwawayDatabase } from './bench/bench-db'
 import { client, concurrentP95, scheduledP95 } from './bench/http-load'
 import { benchSizing } from './bench/models'
@@ -42,7 +42,7 @@ export async function benchServer(progress: (s: string) => void): Promise<Server
   const env = { ...process.env, DB_NAME: db.name, LOG_LEVEL: 'silent', UPLOAD_DIR: uploads }
   const config = loadConfig({ ...env, NODE_ENV: 'test' })
   const dataSource = await createDataSource(config).initialize()
-  const pool = createSizingPool(2)
+  const pool = configuredPool(config) // as the server builds it
   const deps = {
     config,
     dataSource,

@@ -1,6 +1,7 @@
 import { fileURLToPath } from 'node:url'
 import { Piscina } from 'piscina'
 import type { SizingEvaluation } from '../../shared/sizing/evaluate-sizing'
+import type { Config } from '../config'
 import { AppError } from '../http/app-error'
 import type { RecordJob, RecordOutcome } from './record.worker'
 import type { SizingJob } from './sizing.worker'
@@ -104,6 +105,15 @@ export function createSizingPool(threads: number, limits: PoolLimits = {}): Sizi
     measure: (job, options = {}) => submit(job, worker('./measurements.worker.ts'), options),
     close: () => pool.destroy(),
   }
+}
+
+/** The pool as the server's configuration sets it: threads, queue, budget and priority. */
+export function configuredPool(config: Config): SizingPool {
+  return createSizingPool(config.WORKER_THREADS, {
+    maxQueue: config.ENGINE_QUEUE_LIMIT,
+    budgetMs: config.ENGINE_BUDGET_MS,
+    niceIncrement: config.ENGINE_NICE,
+  })
 }
 
 function cancelled(reason: unknown, budgetMs: number): AppError {
