@@ -61,6 +61,8 @@ const EnvSchema = z.object({
   ENGINE_QUEUE_LIMIT: z.coerce.number().int().min(0).max(1000).default(8),
   /** ms an engine job (a sizing, a record's identification) may take before it is cancelled */
   ENGINE_BUDGET_MS: z.coerce.number().int().min(100).max(600_000).default(60_000),
+  /** how far below the event loop the engine's threads are scheduled (nice increment, Linux) */
+  ENGINE_NICE: z.coerce.number().int().min(0).max(19).default(10),
   TRUST_PROXY: trustProxy,
   /** failed sign-ins per account, and per client address, within 15 minutes */
   SIGN_IN_LIMIT: count(5),

@@ -5,7 +5,7 @@ import { startBackgroundJobs } from './jobs'
 import { loadConfig } from './config'
 import { createDataSource } from './data-source'
 import { smtpMailer } from './integrations/mail'
-import { createSizingPool } from './workers/pool'
+import { configuredPool } from './workers/pool'
 import { closePdfRenderers } from './integrations/pdf/renderer'
 
 async function main() {
@@ -18,10 +18,7 @@ async function main() {
   }
   const logger = pino({ level: config.LOG_LEVEL })
   const dataSource = await createDataSource(config).initialize()
-  const pool = createSizingPool(config.WORKER_THREADS, {
-    maxQueue: config.ENGINE_QUEUE_LIMIT,
-    budgetMs: config.ENGINE_BUDGET_MS,
-  })
+  const pool = configuredPool(config)
   const deps = { config, dataSource, mailer: smtpMailer(config), logger, pool }
   const { app, services } = createApp(deps)
   const jobs = startBackgroundJobs(services, config, logger)

@@ -43,6 +43,14 @@ describe('site measurement records', () => {
 
   const refusals: [string, Buffer, string, number, RegExp][] = [
     ['a non-numeric line', Buffer.from('t,a\n0,0.1\n0.005,abc\n'), 'r.csv', 400, /line 3/],
+    // a file large enough to be handed to the worker whole (not a slice of a shared buffer)
+    [
+      'a long record with a non-numeric last line',
+      Buffer.concat([HEEL_DROP, Buffer.from('12,abc\n')]),
+      'r.csv',
+      400,
+      new RegExp(`line ${HEEL_DROP.toString().trimEnd().split('\n').length + 1}\\b`),
+    ],
     ['an empty file', Buffer.alloc(0), 'r.csv', 400, /line 1: the file is empty/],
     [
       'UTF-16 text with a byte-order mark',

@@ -52,7 +52,10 @@ export function measurementsService(deps: {
       return deps.records.listBySite(siteId)
     },
 
-    /** Reads and identifies the whole file first, so a refused upload leaves nothing behind. */
+    /**
+     * Keeps the file, then reads and identifies it in the worker pool; a refused or cancelled
+     * upload removes the file again, so it leaves nothing behind.
+     */
     async upload(
       user: AuthUser,
       siteId: number,
@@ -63,22 +66,24 @@ export function measurementsService(deps: {
       await deps.sites.get(siteId)
       await assertModelOfSite(input.modelId, siteId)
       const file = checkRecordFile(upload)
-      // Reading and identifying an 8 MB record takes seconds: in the worker pool, not here.
-      const read = await deps.pool.identify(
-        {
-          bytes: file.buffer,
-          readAs: {
-            ...(input.sampleRateHz !== undefined && { sampleRateHz: input.sampleRateHz }),
-            ...(input.timeUnit !== undefined && { timeUnit: input.timeUnit }),
-          },
-          kind: input.kind,
-        },
-        { signal },
-      )
-      if (!read.ok) throw new AppError(read.code, read.message, read.status, read.details)
-      const { result, record } = read
+      const size = file.buffer.length
       const storedName = await deps.files.save(file.buffer, '.csv')
       try {
+        // Reading and identifying an 8 MB record takes seconds: in the worker pool, not here.
+        // The bytes are on disk now, so they move to the worker rather than being copied.
+        const read = await deps.pool.identify(
+          {
+            bytes: file.buffer,
+            readAs: {
+              ...(input.sampleRateHz !== undefined && { sampleRateHz: input.sampleRateHz }),
+              ...(input.timeUnit !== undefined && { timeUnit: input.timeUnit }),
+            },
+            kind: input.kind,
+          },
+          { signal, moveBytes: true },
+        )
+        if (!read.ok) throw new AppError(read.code, read.message, read.status, read.details)
+        const { result, record } = read
         const id = await deps.records.create({
           siteId,
           modelId: input.modelId ?? null,
@@ -86,7 +91,7 @@ export function measurementsService(deps: {
           ownerId: user.id,
           filename: file.originalname.slice(0, 200),
           storedName,
-          size: file.buffer.length,
+          size,
           sampleRateHz: read.sampleRateHz,
           samples: read.samples,
           rateFromForm: input.sampleRateHz !== undefined,

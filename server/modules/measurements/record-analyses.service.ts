@@ -17,7 +17,8 @@ import { readAsStored } from './record-file'
  * a refusal comes back as a 4xx naming the field.
  */
 export async function measureOnPool(pool: Pick<SizingPool, 'measure'>, job: MeasurementJob) {
-  const out = await pool.measure(job)
+  // bytes read from the file store for this job alone: moved to the worker, not copied
+  const out = await pool.measure(job, { moveBytes: true })
   if (out.ok) return out.value
   if (out.field === 'file') {
     throw new AppError('invalid-record', out.message, 400, [
