@@ -1,9 +1,11 @@
+import jwt from 'jsonwebtoken'
 import request from 'supertest'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { anotherInstance, makeTestApp, type TestApp } from '../helpers/app'
 import { PASSWORD, signedIn } from '../helpers/factories'
 import { noSolving } from './quotes-rig'
 import { SESSION_RECHECK_MS } from '../../server/modules/auth/session-cache'
+import { SESSION_COOKIE } from '../../server/middleware/authenticate'
 
 // An instance believes a session it verified for SESSION_RECHECK_MS without reading the user
 // again; the instance that ends a session forgets it at once, the others within that interval.
@@ -75,5 +77,40 @@ describe('sessions believed for a moment', () => {
       expect((await me(b.app, user.cookie)).status).toBe(401)
       expect((await me(a.app, user.cookie)).status).toBe(401)
     })
+  })
+})
+
+describe('session tokens checked once', () => {
+  /** A session token as sign-in makes it, for `user`, expiring after `seconds`. */
+  function tokenFor(user: { id: number }, version: number, seconds: number) {
+    return jwt.sign({ ver: version }, a.config.JWT_SECRET, {
+      algorithm: 'HS256',
+      subject: String(user.id),
+      issuer: 'quellnode',
+      expiresIn: seconds,
+    })
+  }
+
+  it('refuses a token that was accepted before once it has expired', async () => {
+    const { user } = await signedIn(a, 'sales')
+    const cookie = `${SESSION_COOKIE}=${tokenFor(user, 0, 2)}`
+    expect((await me(a.app, cookie)).status).toBe(200)
+    await new Promise((r) => setTimeout(r, 2100))
+    expect((await me(a.app, cookie)).status).toBe(401)
+  })
+
+  it('refuses a token whose signature or subject was changed after the real one was accepted', async () => {
+    const { user, cookie } = await signedIn(a, 'sales')
+    expect((await me(a.app, cookie)).status).toBe(200)
+    const [head, body, signature] = cookie.split('=')[1]!.split('.')
+    const flipped = signature!.startsWith('A')
+      ? `B${signature!.slice(1)}`
+      : `A${signature!.slice(1)}`
+    expect((await me(a.app, `${SESSION_COOKIE}=${head}.${body}.${flipped}`)).status).toBe(401)
+    const claims = JSON.parse(Buffer.from(body!, 'base64url').toString())
+    const admin = Buffer.from(JSON.stringify({ ...claims, sub: String(user.id - 1) })).toString(
+      'base64url',
+    )
+    expect((await me(a.app, `${SESSION_COOKIE}=${head}.${admin}.${signature}`)).status).toBe(401)
   })
 })
