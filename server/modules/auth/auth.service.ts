@@ -5,6 +5,7 @@ import { AppError } from '../../http/app-error'
 import type { Account, AccountStore } from './accounts'
 import type { TokensRepository } from './tokens.repository'
 import { hashLinkToken, newLinkToken } from './link-tokens'
+import { sessionCache } from './session-cache'
 import type { Mailer } from '../../integrations/mail'
 import type { Throttle } from '../../integrations/rate-limits'
 
@@ -40,6 +41,14 @@ export function hashPassword(password: string) {
 }
 
 export function authService(deps: AuthDeps) {
+  const sessions = sessionCache(() => deps.now().getTime())
+  /** Ends every session of the user, here at once and on other instances within a recheck. */
+  async function endSessions(userId: number) {
+    sessions.forget(userId)
+    await deps.users.endSessions(userId)
+    sessions.forget(userId)
+  }
+
   async function sendLink(user: Account, purpose: 'invite' | 'reset', hours: number) {
     const { token, hash } = newLinkToken()
     const expiresAt = new Date(deps.now().getTime() + hours * 3600_000)
@@ -87,15 +96,24 @@ export function authService(deps: AuthDeps) {
 
     /**
      * The user a valid session belongs to, or null when the account is gone or inactive or the
-     * session was ended (its token version is behind the user's).
+     * session was ended (its token version is behind the user's). A session verified in the last
+     * SESSION_RECHECK_MS is believed without reading the user again (session-cache.ts).
      */
     async loadSessionUser(id: number, tokenVersion: number): Promise<AuthUser | null> {
-      const user = await deps.users.findById(id)
-      return user && user.active && user.tokenVersion === tokenVersion ? toAuthUser(user) : null
+      return (
+        sessions.get(id, tokenVersion) ??
+        sessions.load(id, tokenVersion, async () => {
+          const user = await deps.users.findById(id)
+          return user && user.active && user.tokenVersion === tokenVersion ? toAuthUser(user) : null
+        })
+      )
     },
 
-    /** Sign-out: ends this and every other session of the user. */
-    endSessions: (userId: number) => deps.users.endSessions(userId),
+    /**
+     * Ends this and every other session of the user: sign-out, and a role change or a
+     * deactivation by an admin.
+     */
+    endSessions,
 
     /** Spends a single-use link token and sets the password it was sent for. */
     async setPassword(token: string, password: string) {
@@ -110,7 +128,7 @@ export function authService(deps: AuthDeps) {
         throw new AppError('link-invalid', 'This account is not active.', 400)
       await deps.users.update(user.id, { passwordHash: await hashPassword(password) })
       // A new password ends every session, including one a thief may hold.
-      await deps.users.endSessions(user.id)
+      await endSessions(user.id)
     },
 
     /**

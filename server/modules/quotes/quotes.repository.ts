@@ -1,7 +1,7 @@
 import { withNamedLock } from '../../db/named-lock'
-import { Brackets, In, type DataSource, type EntityManager } from 'typeorm'
+import { In, type DataSource, type EntityManager } from 'typeorm'
 import type { QuoteListQuery, QuoteState } from '../../../shared/schemas/quote'
-import { columnsOf, likeText, rawPage } from '../../db/list-page'
+import { columnsOf, likeText, sqlPage, type Condition } from '../../db/list-page'
 import { QuoteEventEntity } from './quote-event.entity'
 import { QuoteLineEntity } from './quote-line.entity'
 import { QuoteEntity } from './quote.entity'
@@ -37,12 +37,46 @@ const relations = {
 } as const
 
 /**
- * A quote's state as of :today in the list: a sent quote whose last valid day has passed reads as
- * expired, so listing never writes; the stored state follows when the quote itself is read or
- * `expireDue` runs (quote-core.ts).
+ * A quote's state as of `today` (the placeholder) in the list: a sent quote whose last valid day
+ * has passed reads as expired, so listing never writes; the stored state follows when the quote
+ * itself is read or `expireDue` runs (quote-core.ts).
  */
 const LIST_STATE =
-  "(CASE WHEN q.state = 'sent' AND q.validUntil < :today THEN 'expired' ELSE q.state END)"
+  "(CASE WHEN q.state = 'sent' AND q.validUntil < ? THEN 'expired' ELSE q.state END)"
+
+/**
+ * What a list row carries: only the columns a list shows (the frozen sizing's title and site,
+ * not the whole summary) and whether each is its number's latest revision. The one placeholder
+ * is today (LIST_STATE).
+ */
+const LIST_COLUMNS = [
+  ...columnsOf('q', 'id number revision sizingId companyId currency total validUntil'),
+  ...columnsOf('q', 'createdAt sentAt'),
+  `${LIST_STATE} AS state`,
+  "JSON_VALUE(q.sizing, '$.title') AS sizingTitle",
+  "JSON_VALUE(q.sizing, '$.siteName') AS siteName",
+  'c.name AS companyName',
+  '(SELECT MAX(r.revision) FROM quotes r WHERE r.number = q.number) AS latest',
+]
+
+type ListFilter = QuoteListQuery & { states?: readonly QuoteState[]; today: string }
+
+/** The list's filters as conditions on `q` (quotes) and `c` (its company). */
+function listFilters(q: ListFilter): Condition[] {
+  const where: Condition[] = []
+  const state = (sql: string, params: unknown[]) =>
+    where.push({ sql: `${LIST_STATE} ${sql}`, params: [q.today, ...params] })
+  if (q.states) state(`IN (${q.states.map(() => '?').join(', ')})`, [...q.states])
+  if (q.state) state('= ?', [q.state])
+  if (q.companyId) where.push({ sql: 'q.companyId = ?', params: [q.companyId] })
+  if (q.from) where.push({ sql: 'q.createdAt >= ?', params: [`${q.from} 00:00:00`] })
+  if (q.to) where.push({ sql: 'q.createdAt < DATE_ADD(?, INTERVAL 1 DAY)', params: [q.to] })
+  if (q.search) {
+    const like = likeText(q.search)
+    where.push({ sql: 'q.number LIKE ? OR c.name LIKE ?', params: [like, like] })
+  }
+  return where
+}
 
 /** Rows per page of the quotes list when the query does not say. */
 export const DEFAULT_PAGE = 50
@@ -78,6 +112,8 @@ function linesOf(quoteId: number, lines: LineWrite[]) {
 export function quotesRepository(ds: DataSource) {
   const quotes = ds.getRepository(QuoteEntity)
   const events = ds.getRepository(QuoteEventEntity)
+  const company = quotes.metadata.findRelationWithPropertyPath('company')?.inverseEntityMetadata
+  const listFrom = `${quotes.metadata.tableName} q LEFT JOIN ${company?.tableName} c ON c.id = q.companyId`
 
   async function transitionIn(m: EntityManager, id: number, t: Transition) {
     const current = await m.findOneBy(QuoteEntity, { id, state: In([...t.from]) })
@@ -114,34 +150,12 @@ export function quotesRepository(ds: DataSource) {
      * in one query; the total matching goes with it. States are as of `today` (LIST_STATE).
      */
     async listPage(q: QuoteListQuery & { states?: readonly QuoteState[]; today: string }) {
-      const qb = quotes
-        .createQueryBuilder('q')
-        .leftJoin('q.company', 'company')
-        .setParameter('today', q.today)
-      if (q.states) qb.andWhere(`${LIST_STATE} IN (:...states)`, { states: q.states })
-      if (q.state) qb.andWhere(`${LIST_STATE} = :state`, { state: q.state })
-      if (q.companyId) qb.andWhere('q.companyId = :c', { c: q.companyId })
-      if (q.from) qb.andWhere('q.createdAt >= :from', { from: `${q.from} 00:00:00` })
-      if (q.to) qb.andWhere('q.createdAt < DATE_ADD(:to, INTERVAL 1 DAY)', { to: q.to })
-      if (q.search) {
-        const like = likeText(q.search)
-        qb.andWhere(
-          new Brackets((w) =>
-            w.where('q.number LIKE :like', { like }).orWhere('company.name LIKE :like', { like }),
-          ),
-        )
-      }
-      return rawPage<QuoteListRow>(qb, {
-        columns: [
-          ...columnsOf('q', 'id number revision sizingId companyId currency total validUntil'),
-          ...columnsOf('q', 'createdAt sentAt'),
-          `${LIST_STATE} AS state`,
-          "JSON_VALUE(q.sizing, '$.title') AS sizingTitle",
-          "JSON_VALUE(q.sizing, '$.siteName') AS siteName",
-          'company.name AS companyName',
-          '(SELECT MAX(r.revision) FROM quotes r WHERE r.number = q.number) AS latest',
-        ],
-        newestFirst: 'q.createdAt',
+      return sqlPage<QuoteListRow>(ds, {
+        from: listFrom,
+        where: listFilters(q),
+        columns: LIST_COLUMNS,
+        columnParams: [q.today],
+        newestFirst: ['q.createdAt', 'q.id'],
         page: q,
         defaultLimit: DEFAULT_PAGE,
       })

@@ -85,8 +85,9 @@ export function usersService(deps: {
         )
       }
       await deps.users.update(id, patch)
-      // A new role or a deactivation takes effect on sessions already open, on every instance.
-      await deps.users.endSessions(id)
+      // A new role or a deactivation takes effect on sessions already open: here at once, on
+      // every other instance within auth's recheck interval.
+      await deps.auth.endSessions(id)
       return summary((await deps.users.findById(id)) as UserRecord)
     },
   }
