@@ -168,8 +168,11 @@ describe('sign-in and reset limits', () => {
     }
     const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!
     // Before the fix known addresses took 120–210 ms and unknown 5–26 ms; now the mail work
-    // happens after the answer. A generous band, for a shared 2-core machine.
-    expect(Math.abs(median(known) - median(unknown))).toBeLessThan(50)
+    // happens after the answer. A generous band for a shared 2-core machine, where a busy moment
+    // slows both kinds alike: 50 ms, or half the slower median when that is more (the old
+    // difference was several times the unknown address's time, and still fails it).
+    const [k, u] = [median(known), median(unknown)]
+    expect(Math.abs(k - u)).toBeLessThan(Math.max(50, Math.max(k, u) / 2))
   })
 })
 

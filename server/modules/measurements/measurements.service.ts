@@ -1,5 +1,5 @@
 import type { RecordUpload } from '../../../shared/schemas/measurement'
-import { AppError, forbidden, notFound } from '../../http/app-error'
+import { AppError, forbidden, notFound, nullIfMissing } from '../../http/app-error'
 import type { FileStore } from '../../integrations/file-store'
 import type { AuthUser } from '../../middleware/authenticate'
 import type { ModelsService } from '../models/models.service'
@@ -35,7 +35,7 @@ export function measurementsService(deps: {
 
   async function assertModelOfSite(modelId: number | undefined, siteId: number) {
     if (modelId === undefined) return
-    const m = await deps.models.get(modelId).catch(() => null)
+    const m = await nullIfMissing(deps.models.get(modelId))
     if (!m || m.siteId !== siteId) {
       throw new AppError('invalid-input', 'The model is not one of this site.', 400, [
         { path: 'body.modelId', message: 'not a model of this site' },

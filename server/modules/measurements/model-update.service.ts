@@ -5,7 +5,7 @@ import type {
   RecordAnalysis,
 } from '../../../shared/schemas/record-analysis'
 import type { ModelUpdate, Sensor } from '../../../shared/updating'
-import { AppError } from '../../http/app-error'
+import { AppError, nullIfMissing } from '../../http/app-error'
 import type { AuthUser } from '../../middleware/authenticate'
 import type { ModelsService } from '../models/models.service'
 import type { SizingPool } from '../../workers/pool'
@@ -46,7 +46,7 @@ export function modelUpdateService(deps: {
     const model = await deps.models.get(modelId)
     if (input.baseRevision > model.currentRevision)
       throw invalid('body.baseRevision', `the model has ${model.currentRevision} revision(s)`)
-    const analysis = await deps.analyses.get(input.analysisId).catch(() => null)
+    const analysis = await nullIfMissing(deps.analyses.get(input.analysisId))
     if (!analysis) throw invalid('body.analysisId', 'no such analysis')
     const record = await deps.measurements.get(analysis.recordId)
     if (record.modelId !== modelId)

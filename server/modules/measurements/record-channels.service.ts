@@ -1,5 +1,5 @@
 import type { ChannelMap } from '../../../shared/schemas/record-analysis'
-import { AppError } from '../../http/app-error'
+import { AppError, nullIfMissing } from '../../http/app-error'
 import type { AuthUser } from '../../middleware/authenticate'
 import type { ModelsService } from '../models/models.service'
 import type { MeasurementsRepository } from './measurements.repository'
@@ -11,7 +11,7 @@ export const invalid = (path: string, message: string) =>
 
 /** The node ids of a model that carry mass: where a sensor can sit. */
 async function massNodes(models: ModelsService, modelId: number, siteId: number) {
-  const model = await models.get(modelId).catch(() => null)
+  const model = await nullIfMissing(models.get(modelId))
   if (!model || model.siteId !== siteId) throw invalid('body.modelId', 'not a model of this site')
   return new Set(model.definition.nodes.filter((n) => !n.fixed).map((n) => n.id))
 }

@@ -1,5 +1,5 @@
 import type { Logger } from 'pino'
-import { AppError, notFound } from '../../http/app-error'
+import { AppError, notFound, nullIfMissing } from '../../http/app-error'
 import type { CheckoutSession, PaymentGateway } from '../../integrations/payments'
 import type { AuthUser } from '../../middleware/authenticate'
 import type { QuotesService } from '../quotes/quotes.service'
@@ -72,7 +72,7 @@ export function paymentsService(deps: PaymentsDeps) {
 
   /** A customer reaches only their own company's quotes; others get the same 404 as a missing one. */
   async function payableQuote(user: AuthUser, quoteId: number) {
-    const q = await deps.quotes.forPayment(quoteId).catch(() => null)
+    const q = await nullIfMissing(deps.quotes.forPayment(quoteId))
     if (!q || (user.role === 'customer' && q.companyId !== user.companyId)) throw notFound('quote')
     return q
   }

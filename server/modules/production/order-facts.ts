@@ -1,3 +1,4 @@
+import { nullIfMissing } from '../../http/app-error'
 import type { Quote } from '../../../shared/schemas/quote'
 import type { DeliveryContact } from '../../../shared/schemas/shipment'
 import type { CatalogueService } from '../catalogue/catalogue.service'
@@ -16,8 +17,6 @@ export interface OrderFacts {
   delivery: DeliveryContact
 }
 
-const orNull = <T>(p: Promise<T>) => p.catch(() => null)
-
 /**
  * The catalogue unit's lead time and travel, and who takes delivery: the site's contact and
  * address, else the quote's contact and the customer's address. A record gone missing meanwhile
@@ -31,9 +30,11 @@ export function orderFacts(deps: {
   return async function factsOf(q: Quote): Promise<OrderFacts> {
     const unit = q.lines.find((l) => l.kind === 'unit')
     const [line, site, customer] = await Promise.all([
-      unit?.productLineId ? orNull(deps.catalogue.getLine('production', unit.productLineId)) : null,
-      orNull(deps.sites.get(q.sizing.siteId)),
-      orNull(deps.customers.get(q.companyId)),
+      unit?.productLineId
+        ? nullIfMissing(deps.catalogue.getLine('production', unit.productLineId))
+        : null,
+      nullIfMissing(deps.sites.get(q.sizing.siteId)),
+      nullIfMissing(deps.customers.get(q.companyId)),
     ])
     // A site id from another company (never expected) is not this customer's site.
     const own = site && site.companyId === q.companyId ? site : null

@@ -1,6 +1,6 @@
 import type { StatusChange, TuningRecordInput } from '../../../shared/schemas/work-order'
 import { checkStep } from '../../../shared/production/flow'
-import { AppError, notFound } from '../../http/app-error'
+import { AppError, notFound, nullIfMissing } from '../../http/app-error'
 import type { Mailer } from '../../integrations/mail'
 import type { AuthUser } from '../../middleware/authenticate'
 import type { QuotesService } from '../quotes/quotes.service'
@@ -150,7 +150,7 @@ export function productionService(deps: {
      * only their own company's (another's is a 404, as if it did not exist).
      */
     async shipmentFor(user: AuthUser, quoteId: number) {
-      const q = await deps.quotes.internal(quoteId).catch(() => null)
+      const q = await nullIfMissing(deps.quotes.internal(quoteId))
       if (!q || (user.role === 'customer' && q.companyId !== user.companyId))
         throw notFound('quote')
       const w = await deps.repo.findByQuote(quoteId)

@@ -1,3 +1,4 @@
+import { nullIfMissing } from '../../http/app-error'
 import { builtMass, matchUnits, quoteTotals, unitPrice } from '../../../shared/catalogue'
 import type { Currency } from '../../../shared/money'
 import type { QuoteLineInput } from '../../../shared/schemas/quote'
@@ -15,7 +16,7 @@ async function priceUnit(
   currency: Currency,
   units: number[] | null,
 ): Promise<LineWrite> {
-  const unit = await catalogue.line(l.productLineId).catch(() => null)
+  const unit = await nullIfMissing(catalogue.line(l.productLineId))
   if (!unit || !unit.active) throw lineError(i, 'productLineId', 'no such product line')
   const demands = (units ?? [1]).map((n) => demandOfUnit(sizing, n))
   for (const [j, demand] of demands.entries()) {
@@ -62,7 +63,7 @@ export async function priceLines(
       out.push(await priceUnit(catalogue, l, i, sizing, currency, units[i] ?? null))
       continue
     }
-    const opt = await catalogue.option(l.optionId).catch(() => null)
+    const opt = await nullIfMissing(catalogue.option(l.optionId))
     if (!opt || !opt.active) throw lineError(i, 'optionId', 'no such option')
     const price = opt.prices[currency]
     out.push({
