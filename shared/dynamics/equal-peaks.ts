@@ -82,6 +82,12 @@ function peakDerivatives(pb: TuningProblem, peak: Peak, x: number[]) {
     (4 * HW * HX)
   const s0 = mixed(HX, 0)
   const s1 = mixed(0, HX)
+  // The peak's frequency is known to the refinement's tolerance only: the gradient is read at the
+  // curve's stationary point ω* = ω − F_ω/F_ωω instead (first order), so that the search's steps do
+  // not carry that tolerance (the same Newton step in ω that the Hessian's correction takes).
+  const fs = (F(2, x0, x1) - F(0, x0, x1)) / (2 * HW)
+  g[0] = (g[0] ?? 0) - (s0 * fs) / fss
+  g[1] = (g[1] ?? 0) - (s1 * fs) / fss
   const hess = [
     (fxx[0] ?? 0) - (s0 * s0) / fss,
     fxy - (s0 * s1) / fss,

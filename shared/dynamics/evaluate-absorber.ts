@@ -37,14 +37,29 @@ export function unboundedWith(ctx: SizingContext, a: AbsorberValues): UndampedRe
   return coupledUndampedResonance(prep, vectors, rec.participation, band, a, measure.absorberLoad)
 }
 
+/** Evaluations already made per context, by absorber values: a study reads the sizing's own
+ * absorber in its result, its robustness curve and its sweep. */
+const evaluated = new WeakMap<SizingContext, Map<string, AbsorberEvaluation>>()
+const key = (a: AbsorberValues): string => `${a.mass}|${a.stiffness}|${a.damping}`
+
 /**
  * Peak receptance and absorber stroke over the band: every local maximum over the grid and the
  * natural frequencies refined with the exact rank-one formula; Infinity when a mode in the band
- * resonates without damping.
+ * resonates without damping. Computed once per context and absorber.
  * @param ctx sizing context
  * @param a absorber values (kg, N/m, N·s/m)
  */
 export function evaluateAbsorber(ctx: SizingContext, a: AbsorberValues): AbsorberEvaluation {
+  const memo = evaluated.get(ctx) ?? new Map<string, AbsorberEvaluation>()
+  evaluated.set(ctx, memo)
+  const known = memo.get(key(a))
+  if (known) return known
+  const ev = evaluateOnce(ctx, a)
+  memo.set(key(a), ev)
+  return ev
+}
+
+function evaluateOnce(ctx: SizingContext, a: AbsorberValues): AbsorberEvaluation {
   const unbounded = unboundedWith(ctx, a)
   if (unbounded) {
     const none = { value: Infinity, omega: unbounded.omega }
@@ -54,7 +69,7 @@ export function evaluateAbsorber(ctx: SizingContext, a: AbsorberValues): Absorbe
   const mag = new Float64Array(omega.length)
   const stroke = new Float64Array(omega.length)
   absorberOnGrid(ctx.rec, a, ctx.measure, mag, stroke)
-  const extra = coupledFrequencies({ rec: ctx.rec, poles: polesOf(ctx.rec) }, a)
+  const extra = coupledFrequencies(ctx.rec, polesOf(ctx.rec), a)
   const s = exactMagnitude(ctx.rec, a, ctx.measure, true)
   const peak = findPeak(omega, mag, exactMagnitude(ctx.rec, a, ctx.measure), { extra })
   return {
@@ -72,12 +87,33 @@ export function evaluateAbsorber(ctx: SizingContext, a: AbsorberValues): Absorbe
  * @param a absorber values (kg, N/m, N·s/m)
  */
 export function absorberPeak(ctx: SizingContext, a: AbsorberValues): Peak {
+  const known = evaluated.get(ctx)?.get(key(a))
+  if (known) return known.peak
   const unbounded = unboundedWith(ctx, a)
   if (unbounded) return { value: Infinity, omega: unbounded.omega }
   const mag = new Float64Array(ctx.rec.omega.length)
   absorberOnGrid(ctx.rec, a, ctx.measure, mag)
-  const extra = coupledFrequencies({ rec: ctx.rec, poles: polesOf(ctx.rec) }, a)
+  const extra = coupledFrequencies(ctx.rec, polesOf(ctx.rec), a)
   return findPeak(ctx.rec.omega, mag, exactMagnitude(ctx.rec, a, ctx.measure), { extra })
+}
+
+/**
+ * The largest stroke of `evaluateAbsorber` alone, for a caller that has the peak already (the
+ * sweep has it from the optimiser's check on the same grid): the same samples and refinement.
+ * @param ctx sizing context
+ * @param a absorber values (kg, N/m, N·s/m)
+ */
+export function absorberStroke(ctx: SizingContext, a: AbsorberValues): Peak {
+  const known = evaluated.get(ctx)?.get(key(a))
+  if (known) return known.maxStroke
+  const unbounded = unboundedWith(ctx, a)
+  if (unbounded) return { value: Infinity, omega: unbounded.omega }
+  const { omega } = ctx.rec
+  const mag = new Float64Array(omega.length)
+  const stroke = new Float64Array(omega.length)
+  absorberOnGrid(ctx.rec, a, ctx.measure, mag, stroke)
+  const extra = coupledFrequencies(ctx.rec, polesOf(ctx.rec), a)
+  return findPeak(omega, stroke, exactMagnitude(ctx.rec, a, ctx.measure, true), { extra })
 }
 
 /**
@@ -86,6 +122,18 @@ export function absorberPeak(ctx: SizingContext, a: AbsorberValues): Peak {
  * @param ctx sizing context
  */
 export function hostPeak(ctx: SizingContext): Peak {
+  let peak = hostPeaks.get(ctx)
+  if (!peak) {
+    peak = hostPeakOnce(ctx)
+    hostPeaks.set(ctx, peak)
+  }
+  return peak
+}
+
+/** The host's peak per context: the result and the sweep both read it. */
+const hostPeaks = new WeakMap<SizingContext, Peak>()
+
+function hostPeakOnce(ctx: SizingContext): Peak {
   if (ctx.hostResonance) return { value: Infinity, omega: ctx.hostResonance.omega }
   const { omega, values } = ctx.rec
   const m = ctx.measure

@@ -2,7 +2,7 @@ import type { ModelInput } from '../schemas/model'
 import { absorberAt, type AbsorberPoint } from './absorber-response'
 import { ModelError } from './errors'
 import { hostReceptance } from './host-receptance'
-import { measured, measuredStroke, RECEPTANCE, type Measure } from './measure'
+import { measured, measuredStroke, measureOf, RECEPTANCE, type Measure } from './measure'
 import type { SizingContext } from './sizing-context'
 import { prepareSizing, type PreparedSizing } from './size-absorber'
 
@@ -53,11 +53,9 @@ export function curve(n: number): ResponseCurve {
 
 /** The three measures of a request's load, one per quantity. */
 export function measures(m: Measure, base: boolean): [Measure, Measure, Measure] {
-  return [0, 1, 2].map((power) => ({
-    ...m,
-    power,
-    absolute: base && power === 2,
-  })) as [Measure, Measure, Measure]
+  return [0, 1, 2].map((power) =>
+    measureOf(power as 0 | 1 | 2, m.unbalance, base && power === 2, m.absorberLoad),
+  ) as [Measure, Measure, Measure]
 }
 
 /** Puts point k of every measure of a complex response into c. */

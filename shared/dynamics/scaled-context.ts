@@ -1,6 +1,6 @@
 import { frequencyGrid } from './grid'
 import { scaleHost } from './host'
-import type { HostReceptance, Receptance4 } from './host-receptance'
+import { receptanceOf, type HostReceptance, type Receptance4 } from './host-receptance'
 import { sizingContext, type SizingContext } from './sizing-context'
 import { hostUndampedResonance } from './undamped-modes'
 
@@ -38,7 +38,7 @@ function scaledReceptance(
     })
   }
   const lambda = rec.lambda.map((l) => l * s)
-  return { ...rec, omega: grid, values, at, lambda }
+  return receptanceOf({ ...rec, omega: grid, values, at, lambda })
 }
 
 /**

@@ -105,26 +105,24 @@ export function exactMagnitude(
  * the two limits of its damper, free (c_a = 0) and locked (c_a → ∞): every lightly damped mode of
  * the damped system lies near one of them, so these points keep a sharp resonance from falling
  * between grid points.
- * @param pb the problem
+ * @param rec host receptances over the band
+ * @param poles their secular poles (polesOf)
  * @param a absorber values
  */
-export function coupledFrequencies(
-  pb: Pick<TuningProblem, 'rec' | 'poles'>,
-  a: AbsorberValues,
-): number[] {
-  const { omega } = pb.rec
+export function coupledFrequencies(rec: HostReceptance, poles: Poles, a: AbsorberValues): number[] {
+  const { omega } = rec
   const min = (omega[0] ?? 0) ** 2
   const max = (omega[omega.length - 1] ?? 0) ** 2
   // A point within 1e-8 of a natural frequency is as good a sample as the frequency itself.
   const options = { min, max, tolerance: 1e-8, unchanged: false }
   // The locked limit depends on the mass alone, not on the tuning: solved once per search.
-  let locked = lockedRoots.get(pb.poles)
+  let locked = lockedRoots.get(poles)
   if (!locked || locked.mass !== a.mass || locked.min !== min || locked.max !== max) {
-    const roots = coupledEigenvalues(pb.poles, a.mass, Infinity, options).map(Math.sqrt)
+    const roots = coupledEigenvalues(poles, a.mass, Infinity, options).map(Math.sqrt)
     locked = { mass: a.mass, min, max, roots }
-    lockedRoots.set(pb.poles, locked)
+    lockedRoots.set(poles, locked)
   }
-  const free = coupledEigenvalues(pb.poles, a.mass, a.stiffness, options).map(Math.sqrt)
+  const free = coupledEigenvalues(poles, a.mass, a.stiffness, options).map(Math.sqrt)
   return free.concat(locked.roots)
 }
 
@@ -146,7 +144,7 @@ const lockedRoots = new WeakMap<
 export function peakWith(pb: TuningProblem, a: AbsorberValues, maxima?: Peak[]): Peak {
   absorberOnGrid(pb.rec, a, pb.measure, pb.mag)
   return findPeak(pb.rec.omega, pb.mag, exactMagnitude(pb.rec, a, pb.measure), {
-    extra: coupledFrequencies(pb, a),
+    extra: coupledFrequencies(pb.rec, pb.poles, a),
     ...(maxima && { maxima }),
   })
 }
@@ -159,7 +157,7 @@ export function peakWith(pb: TuningProblem, a: AbsorberValues, maxima?: Peak[]):
 export function strokeWith(pb: TuningProblem, a: AbsorberValues): Peak {
   absorberOnGrid(pb.rec, a, pb.measure, pb.mag, pb.stroke)
   return findPeak(pb.rec.omega, pb.stroke, exactMagnitude(pb.rec, a, pb.measure, true), {
-    extra: coupledFrequencies(pb, a),
+    extra: coupledFrequencies(pb.rec, pb.poles, a),
   })
 }
 
