@@ -2,6 +2,7 @@ import { absorberOnGrid } from './absorber-response'
 import { coupledUndampedResonance } from './coupled-undamped'
 import { measured } from './measure'
 import { findPeak, type Peak } from './peak'
+import { scratchPair } from './scratch'
 import type { SizingContext } from './sizing-context'
 import {
   coupledFrequencies,
@@ -66,8 +67,7 @@ function evaluateOnce(ctx: SizingContext, a: AbsorberValues): AbsorberEvaluation
     return { peak: none, strokeAtPeak: Infinity, maxStroke: none, unbounded }
   }
   const { omega } = ctx.rec
-  const mag = new Float64Array(omega.length)
-  const stroke = new Float64Array(omega.length)
+  const [mag, stroke] = scratchPair(omega.length)
   absorberOnGrid(ctx.rec, a, ctx.measure, mag, stroke)
   const extra = coupledFrequencies(ctx.rec, polesOf(ctx.rec), a)
   const s = exactMagnitude(ctx.rec, a, ctx.measure, true)
@@ -91,7 +91,7 @@ export function absorberPeak(ctx: SizingContext, a: AbsorberValues): Peak {
   if (known) return known.peak
   const unbounded = unboundedWith(ctx, a)
   if (unbounded) return { value: Infinity, omega: unbounded.omega }
-  const mag = new Float64Array(ctx.rec.omega.length)
+  const [mag] = scratchPair(ctx.rec.omega.length)
   absorberOnGrid(ctx.rec, a, ctx.measure, mag)
   const extra = coupledFrequencies(ctx.rec, polesOf(ctx.rec), a)
   return findPeak(ctx.rec.omega, mag, exactMagnitude(ctx.rec, a, ctx.measure), { extra })
@@ -109,8 +109,7 @@ export function absorberStroke(ctx: SizingContext, a: AbsorberValues): Peak {
   const unbounded = unboundedWith(ctx, a)
   if (unbounded) return { value: Infinity, omega: unbounded.omega }
   const { omega } = ctx.rec
-  const mag = new Float64Array(omega.length)
-  const stroke = new Float64Array(omega.length)
+  const [mag, stroke] = scratchPair(omega.length)
   absorberOnGrid(ctx.rec, a, ctx.measure, mag, stroke)
   const extra = coupledFrequencies(ctx.rec, polesOf(ctx.rec), a)
   return findPeak(omega, stroke, exactMagnitude(ctx.rec, a, ctx.measure, true), { extra })
@@ -137,9 +136,11 @@ function hostPeakOnce(ctx: SizingContext): Peak {
   if (ctx.hostResonance) return { value: Infinity, omega: ctx.hostResonance.omega }
   const { omega, values } = ctx.rec
   const m = ctx.measure
-  const mag = Float64Array.from(omega, (w, k) =>
-    measured(m, w, values[8 * k] ?? 0, values[8 * k + 1] ?? 0),
-  )
+  const [mag] = scratchPair(omega.length)
+  for (let k = 0; k < omega.length; k++) {
+    const w = omega[k] ?? 0
+    mag[k] = measured(m, w, values[8 * k] ?? 0, values[8 * k + 1] ?? 0)
+  }
   const h = new Float64Array(8)
   return findPeak(omega, mag, (w) => {
     ctx.rec.at(w, h)

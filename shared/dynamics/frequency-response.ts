@@ -73,6 +73,24 @@ export function put(
   c.phaseDeg[k] = (Math.atan2(im, re) * 180) / Math.PI
 }
 
+/**
+ * Host receptances over the chart's points. Over the sizing's own band they are the context's
+ * (the same sums, far modes folded over the same band), read point by point; over another range
+ * they are computed for it.
+ */
+function chartReceptance(ctx: SizingContext, omega: Float64Array): { values: Float64Array } {
+  const grid = ctx.rec.omega
+  const same = omega[0] === grid[0] && omega[omega.length - 1] === grid[grid.length - 1]
+  if (!same) return hostReceptance(ctx.prep, ctx.vectors, omega)
+  const values = new Float64Array(8 * omega.length)
+  const h = new Float64Array(8)
+  for (let k = 0; k < omega.length; k++) {
+    ctx.rec.at(omega[k] ?? 0, h)
+    values.set(h, 8 * k)
+  }
+  return { values }
+}
+
 /** The chart's default range: the band, or around a running speed and the target mode. */
 function chartRange(ctx: SizingContext): [number, number] {
   if (ctx.bandSource !== 'speed') return [ctx.band.min, ctx.band.max]
@@ -107,7 +125,7 @@ export function frequencyResponse(
     { length: points },
     (_, i) => lo * (hi / lo) ** (i / (points - 1)),
   )
-  const rec = hostReceptance(ctx.prep, ctx.vectors, omega)
+  const rec = chartReceptance(ctx, omega)
   const without = curve(points)
   const withAbsorber = sized ? curve(points) : null
   const stroke: number[] | null = sized ? new Array(points) : null

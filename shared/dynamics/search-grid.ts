@@ -1,4 +1,5 @@
 import { receptanceOf, type HostReceptance } from './host-receptance'
+import { scratchPair } from './scratch'
 import type { TuningProblem } from './tuning-objective'
 
 /**
@@ -51,6 +52,6 @@ function thinned(rec: HostReceptance, stride: number): HostReceptance {
  */
 export function searchProblem(pb: TuningProblem, stride = SEARCH_STRIDE): TuningProblem {
   const rec = thinned(pb.rec, stride)
-  const mag = new Float64Array(rec.omega.length)
-  return { ...pb, rec, mag, stroke: new Float64Array(mag.length) }
+  const [mag, stroke] = scratchPair(rec.omega.length)
+  return { ...pb, rec, mag, stroke }
 }

@@ -8,6 +8,7 @@ import type { Tuning } from './closed-forms'
 import type { HostReceptance } from './host-receptance'
 import { measured, measuredStroke, RECEPTANCE, type Measure } from './measure'
 import { findPeak, type Peak } from './peak'
+import { scratchPair } from './scratch'
 import { coupledEigenvalues, secularPoles, type Poles } from './secular'
 
 export type { AbsorberValues }
@@ -31,9 +32,9 @@ export interface TuningProblem {
   omegaTarget: number
   /** absorber mass, kg */
   mass: number
-  /** scratch, one value per grid point */
+  /** scratch, one value per grid point (shared: see scratch.ts) */
   mag: Float64Array
-  /** scratch for strokes, one value per grid point */
+  /** scratch for strokes, one value per grid point (shared: see scratch.ts) */
   stroke: Float64Array
   /** secular poles of the host at the attachment, for the natural frequencies with the absorber */
   poles: Poles
@@ -53,9 +54,8 @@ export function tuningProblem(
   mass: number,
   measure: Measure = RECEPTANCE,
 ): TuningProblem {
-  const mag = new Float64Array(rec.omega.length)
-  const poles = polesOf(rec)
-  return { rec, omegaTarget, mass, mag, stroke: new Float64Array(mag.length), poles, measure }
+  const [mag, stroke] = scratchPair(rec.omega.length)
+  return { rec, omegaTarget, mass, mag, stroke, poles: polesOf(rec), measure }
 }
 
 const polesByReceptance = new WeakMap<HostReceptance, Poles>()
