@@ -109,7 +109,11 @@ export function exactMagnitude(
  * @param poles their secular poles (polesOf)
  * @param a absorber values
  */
-export function coupledFrequencies(rec: HostReceptance, poles: Poles, a: AbsorberValues): number[] {
+export function coupledFrequencies(
+  rec: HostReceptance,
+  poles: Poles,
+  a: AbsorberValues,
+): Float64Array {
   const { omega } = rec
   const min = (omega[0] ?? 0) ** 2
   const max = (omega[omega.length - 1] ?? 0) ** 2
@@ -118,19 +122,23 @@ export function coupledFrequencies(rec: HostReceptance, poles: Poles, a: Absorbe
   // The locked limit depends on the mass alone, not on the tuning: solved once per search.
   let locked = lockedRoots.get(poles)
   if (!locked || locked.mass !== a.mass || locked.min !== min || locked.max !== max) {
-    const roots = coupledEigenvalues(poles, a.mass, Infinity, options).map(Math.sqrt)
+    const roots = Float64Array.from(coupledEigenvalues(poles, a.mass, Infinity, options), Math.sqrt)
     locked = { mass: a.mass, min, max, roots }
     lockedRoots.set(poles, locked)
   }
-  const free = coupledEigenvalues(poles, a.mass, a.stiffness, options).map(Math.sqrt)
-  return free.concat(locked.roots)
+  const free = coupledEigenvalues(poles, a.mass, a.stiffness, options)
+  // A typed array, whatever the count: the peak search then always reads one kind of array.
+  const out = new Float64Array(free.length + locked.roots.length)
+  for (let k = 0; k < free.length; k++) out[k] = Math.sqrt(free[k] ?? 0)
+  out.set(locked.roots, free.length)
+  return out
 }
 
 /** Natural frequencies of the host with the absorber locked, per set of poles, for one mass and
  * band: the last asked for (a search asks for the same again and again). */
 const lockedRoots = new WeakMap<
   Poles,
-  { mass: number; min: number; max: number; roots: number[] }
+  { mass: number; min: number; max: number; roots: Float64Array }
 >()
 
 /**
