@@ -8,15 +8,11 @@ export interface TimedStudy {
   outcome: ReturnType<typeof run>
   /** process CPU time (user + system) over the task, ms; the caller's thread only waits meanwhile */
   cpuMs: number
-  /** wall time of the task inside the worker, ms (without the messages to and from it) */
-  innerMs: number
 }
 
 export default function timedStudy(job: SizingJob): TimedStudy {
   const before = process.cpuUsage()
-  const t0 = performance.now()
   const outcome = run(job)
-  const innerMs = performance.now() - t0
   const used = process.cpuUsage(before)
-  return { outcome, cpuMs: (used.user + used.system) / 1000, innerMs }
+  return { outcome, cpuMs: (used.user + used.system) / 1000 }
 }
