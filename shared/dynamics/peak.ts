@@ -129,13 +129,22 @@ export function findPeak(
   const n = omega.length
   const first = omega[0] ?? 0
   const last = omega[n - 1] ?? 0
-  const ew: number[] = []
+  // The extra points inside the band, sorted, and the curve there: typed arrays, which sort
+  // numerically without a comparator call (and a boxed number) per comparison.
+  let inside = 0
   for (let k = 0; k < extra.length; k++) {
     const w = extra[k] ?? 0
-    if (w > first && w < last) ew.push(w)
+    if (w > first && w < last) inside++
   }
-  ew.sort((a, b) => a - b)
-  const ey = ew.map(exact)
+  const ew = new Float64Array(inside)
+  inside = 0
+  for (let k = 0; k < extra.length; k++) {
+    const w = extra[k] ?? 0
+    if (w > first && w < last) ew[inside++] = w
+  }
+  ew.sort()
+  const ey = new Float64Array(ew.length)
+  for (let k = 0; k < ew.length; k++) ey[k] = exact(ew[k] ?? 0)
   const total = n + ew.length
   let best: Peak = { value: -Infinity, omega: first }
   // One pass over grid and extra points merged in order, with a window of three samples
