@@ -2,6 +2,7 @@ import type { ModelInput } from '../schemas/model'
 import { ModelError } from './errors'
 import { absorberPeak } from './evaluate-absorber'
 import { scaledContext } from './scaled-context'
+import type { SizingContext } from './sizing-context'
 import { prepareSizing, type PreparedSizing } from './size-absorber'
 
 /** Options of `detuningRobustness`. */
@@ -53,8 +54,11 @@ export function detuningRobustness(
   const offsets = Array.from({ length: points }, (_, i) => -range + (2 * range * i) / (points - 1))
   if (!offsets.includes(0) && points % 2 === 0) offsets.push(0)
   const h = new Float64Array(8)
+  // One scaled context at a time: each offset's fills the buffers of the one before.
+  let last: SizingContext | undefined
   const at = (offset: number): { peak: number; amplification: number } => {
-    const ctx = Math.abs(offset) < 1e-12 ? nominal : scaledContext(nominal, (1 + offset) ** 2)
+    const ctx = Math.abs(offset) < 1e-12 ? nominal : scaledContext(nominal, (1 + offset) ** 2, last)
+    if (ctx !== nominal) last = ctx
     const peak = absorberPeak(ctx, sized.values).value
     ctx.rec.at(0, h)
     return { peak, amplification: peak / Math.hypot(h[0] ?? 0, h[1] ?? 0) }

@@ -34,12 +34,15 @@ const toValues = (pb: TuningProblem, x: number[]) =>
     dampingRatio: Math.exp(x[1] ?? 0),
   })
 
+/** The three host receptances of `responseNear`: one peak's derivatives are taken at a time. */
+const near = new Float64Array(24)
+
 /**
  * The response at ω(1 + (k − 1)·HW), k = 0, 1, 2, for the tuning (x₀, x₁), from one exact host
  * receptance per frequency: plain numbers, as it runs 19 times per peak and Newton step.
  */
 function responseNear(pb: TuningProblem, w: number): (k: number, x0: number, x1: number) => number {
-  const h = new Float64Array(24)
+  const h = near
   for (let k = 0; k < 3; k++) pb.rec.at(w * (1 + (k - 1) * HW), h.subarray(8 * k))
   const p: AbsorberPoint = { re: 0, im: 0, strokeRe: 0, strokeIm: 0 }
   const m = pb.mass
@@ -82,6 +85,12 @@ function peakDerivatives(pb: TuningProblem, peak: Peak, x: number[]) {
     (4 * HW * HX)
   const s0 = mixed(HX, 0)
   const s1 = mixed(0, HX)
+  // The peak's frequency is known to the refinement's tolerance only: the gradient is read at the
+  // curve's stationary point ω* = ω − F_ω/F_ωω instead (first order), so that the search's steps do
+  // not carry that tolerance (the same Newton step in ω that the Hessian's correction takes).
+  const fs = (F(2, x0, x1) - F(0, x0, x1)) / (2 * HW)
+  g[0] = (g[0] ?? 0) - (s0 * fs) / fss
+  g[1] = (g[1] ?? 0) - (s1 * fs) / fss
   const hess = [
     (fxx[0] ?? 0) - (s0 * s0) / fss,
     fxy - (s0 * s1) / fss,

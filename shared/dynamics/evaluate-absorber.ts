@@ -2,6 +2,7 @@ import { absorberOnGrid } from './absorber-response'
 import { coupledUndampedResonance } from './coupled-undamped'
 import { measured } from './measure'
 import { findPeak, type Peak } from './peak'
+import { scratchPair } from './scratch'
 import type { SizingContext } from './sizing-context'
 import {
   coupledFrequencies,
@@ -37,24 +38,38 @@ export function unboundedWith(ctx: SizingContext, a: AbsorberValues): UndampedRe
   return coupledUndampedResonance(prep, vectors, rec.participation, band, a, measure.absorberLoad)
 }
 
+/** Evaluations already made per context, by absorber values: a study reads the sizing's own
+ * absorber in its result, its robustness curve and its sweep. */
+const evaluated = new WeakMap<SizingContext, Map<string, AbsorberEvaluation>>()
+const key = (a: AbsorberValues): string => `${a.mass}|${a.stiffness}|${a.damping}`
+
 /**
  * Peak receptance and absorber stroke over the band: every local maximum over the grid and the
  * natural frequencies refined with the exact rank-one formula; Infinity when a mode in the band
- * resonates without damping.
+ * resonates without damping. Computed once per context and absorber.
  * @param ctx sizing context
  * @param a absorber values (kg, N/m, N·s/m)
  */
 export function evaluateAbsorber(ctx: SizingContext, a: AbsorberValues): AbsorberEvaluation {
+  const memo = evaluated.get(ctx) ?? new Map<string, AbsorberEvaluation>()
+  evaluated.set(ctx, memo)
+  const known = memo.get(key(a))
+  if (known) return known
+  const ev = evaluateOnce(ctx, a)
+  memo.set(key(a), ev)
+  return ev
+}
+
+function evaluateOnce(ctx: SizingContext, a: AbsorberValues): AbsorberEvaluation {
   const unbounded = unboundedWith(ctx, a)
   if (unbounded) {
     const none = { value: Infinity, omega: unbounded.omega }
     return { peak: none, strokeAtPeak: Infinity, maxStroke: none, unbounded }
   }
   const { omega } = ctx.rec
-  const mag = new Float64Array(omega.length)
-  const stroke = new Float64Array(omega.length)
+  const [mag, stroke] = scratchPair(omega.length)
   absorberOnGrid(ctx.rec, a, ctx.measure, mag, stroke)
-  const extra = coupledFrequencies({ rec: ctx.rec, poles: polesOf(ctx.rec) }, a)
+  const extra = coupledFrequencies(ctx.rec, polesOf(ctx.rec), a)
   const s = exactMagnitude(ctx.rec, a, ctx.measure, true)
   const peak = findPeak(omega, mag, exactMagnitude(ctx.rec, a, ctx.measure), { extra })
   return {
@@ -72,12 +87,32 @@ export function evaluateAbsorber(ctx: SizingContext, a: AbsorberValues): Absorbe
  * @param a absorber values (kg, N/m, N·s/m)
  */
 export function absorberPeak(ctx: SizingContext, a: AbsorberValues): Peak {
+  const known = evaluated.get(ctx)?.get(key(a))
+  if (known) return known.peak
   const unbounded = unboundedWith(ctx, a)
   if (unbounded) return { value: Infinity, omega: unbounded.omega }
-  const mag = new Float64Array(ctx.rec.omega.length)
+  const [mag] = scratchPair(ctx.rec.omega.length)
   absorberOnGrid(ctx.rec, a, ctx.measure, mag)
-  const extra = coupledFrequencies({ rec: ctx.rec, poles: polesOf(ctx.rec) }, a)
+  const extra = coupledFrequencies(ctx.rec, polesOf(ctx.rec), a)
   return findPeak(ctx.rec.omega, mag, exactMagnitude(ctx.rec, a, ctx.measure), { extra })
+}
+
+/**
+ * The largest stroke of `evaluateAbsorber` alone, for a caller that has the peak already (the
+ * sweep has it from the optimiser's check on the same grid): the same samples and refinement.
+ * @param ctx sizing context
+ * @param a absorber values (kg, N/m, N·s/m)
+ */
+export function absorberStroke(ctx: SizingContext, a: AbsorberValues): Peak {
+  const known = evaluated.get(ctx)?.get(key(a))
+  if (known) return known.maxStroke
+  const unbounded = unboundedWith(ctx, a)
+  if (unbounded) return { value: Infinity, omega: unbounded.omega }
+  const { omega } = ctx.rec
+  const [mag, stroke] = scratchPair(omega.length)
+  absorberOnGrid(ctx.rec, a, ctx.measure, mag, stroke)
+  const extra = coupledFrequencies(ctx.rec, polesOf(ctx.rec), a)
+  return findPeak(omega, stroke, exactMagnitude(ctx.rec, a, ctx.measure, true), { extra })
 }
 
 /**
@@ -86,12 +121,26 @@ export function absorberPeak(ctx: SizingContext, a: AbsorberValues): Peak {
  * @param ctx sizing context
  */
 export function hostPeak(ctx: SizingContext): Peak {
+  let peak = hostPeaks.get(ctx)
+  if (!peak) {
+    peak = hostPeakOnce(ctx)
+    hostPeaks.set(ctx, peak)
+  }
+  return peak
+}
+
+/** The host's peak per context: the result and the sweep both read it. */
+const hostPeaks = new WeakMap<SizingContext, Peak>()
+
+function hostPeakOnce(ctx: SizingContext): Peak {
   if (ctx.hostResonance) return { value: Infinity, omega: ctx.hostResonance.omega }
   const { omega, values } = ctx.rec
   const m = ctx.measure
-  const mag = Float64Array.from(omega, (w, k) =>
-    measured(m, w, values[8 * k] ?? 0, values[8 * k + 1] ?? 0),
-  )
+  const [mag] = scratchPair(omega.length)
+  for (let k = 0; k < omega.length; k++) {
+    const w = omega[k] ?? 0
+    mag[k] = measured(m, w, values[8 * k] ?? 0, values[8 * k + 1] ?? 0)
+  }
   const h = new Float64Array(8)
   return findPeak(omega, mag, (w) => {
     ctx.rec.at(w, h)

@@ -193,7 +193,13 @@ function build(
       }
     }
   })
-  const sum = new Float64Array(8)
+  // Per lane, its values at the N + 1 points side by side: the evaluation below runs for every
+  // exact host receptance (every refined peak of every candidate tuning).
+  const L = lanes.length
+  const byLane = new Float64Array(L * (N + 1))
+  for (let l = 0; l < L; l++)
+    for (let j = 0; j <= N; j++) byLane[l * (N + 1) + j] = values[8 * j + (lanes[l] ?? 0)] ?? 0
+  const sum = new Float64Array(L)
   return {
     min,
     max,
@@ -207,22 +213,19 @@ function build(
       for (let j = 0; j <= N; j++) {
         const dt = t - (nodes[j] ?? 0)
         if (dt === 0) {
-          for (let l = 0; l < lanes.length; l++) {
+          for (let l = 0; l < L; l++) {
             const k = lanes[l] ?? 0
-            out[k] = (out[k] ?? 0) + (values[8 * j + k] ?? 0)
+            out[k] = (out[k] ?? 0) + (byLane[l * (N + 1) + j] ?? 0)
           }
           return
         }
         const x = (weights[j] ?? 0) / dt
         den += x
-        for (let l = 0; l < lanes.length; l++) {
-          const k = lanes[l] ?? 0
-          sum[k] = (sum[k] ?? 0) + x * (values[8 * j + k] ?? 0)
-        }
+        for (let l = 0; l < L; l++) sum[l] = (sum[l] ?? 0) + x * (byLane[l * (N + 1) + j] ?? 0)
       }
-      for (let l = 0; l < lanes.length; l++) {
+      for (let l = 0; l < L; l++) {
         const k = lanes[l] ?? 0
-        out[k] = (out[k] ?? 0) + (sum[k] ?? 0) / den
+        out[k] = (out[k] ?? 0) + (sum[l] ?? 0) / den
       }
     },
   }

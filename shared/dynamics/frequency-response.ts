@@ -2,7 +2,7 @@ import type { ModelInput } from '../schemas/model'
 import { absorberAt, type AbsorberPoint } from './absorber-response'
 import { ModelError } from './errors'
 import { hostReceptance } from './host-receptance'
-import { measured, measuredStroke, RECEPTANCE, type Measure } from './measure'
+import { measured, measuredStroke, measureOf, RECEPTANCE, type Measure } from './measure'
 import type { SizingContext } from './sizing-context'
 import { prepareSizing, type PreparedSizing } from './size-absorber'
 
@@ -53,11 +53,9 @@ export function curve(n: number): ResponseCurve {
 
 /** The three measures of a request's load, one per quantity. */
 export function measures(m: Measure, base: boolean): [Measure, Measure, Measure] {
-  return [0, 1, 2].map((power) => ({
-    ...m,
-    power,
-    absolute: base && power === 2,
-  })) as [Measure, Measure, Measure]
+  return [0, 1, 2].map((power) =>
+    measureOf(power as 0 | 1 | 2, m.unbalance, base && power === 2, m.absorberLoad),
+  ) as [Measure, Measure, Measure]
 }
 
 /** Puts point k of every measure of a complex response into c. */
@@ -73,6 +71,24 @@ export function put(
   c.mobility[k] = measured(ms[1] ?? RECEPTANCE, w, re, im)
   c.accelerance[k] = measured(ms[2] ?? RECEPTANCE, w, re, im)
   c.phaseDeg[k] = (Math.atan2(im, re) * 180) / Math.PI
+}
+
+/**
+ * Host receptances over the chart's points. Over the sizing's own band they are the context's
+ * (the same sums, far modes folded over the same band), read point by point; over another range
+ * they are computed for it.
+ */
+function chartReceptance(ctx: SizingContext, omega: Float64Array): { values: Float64Array } {
+  const grid = ctx.rec.omega
+  const same = omega[0] === grid[0] && omega[omega.length - 1] === grid[grid.length - 1]
+  if (!same) return hostReceptance(ctx.prep, ctx.vectors, omega)
+  const values = new Float64Array(8 * omega.length)
+  const h = new Float64Array(8)
+  for (let k = 0; k < omega.length; k++) {
+    ctx.rec.at(omega[k] ?? 0, h)
+    values.set(h, 8 * k)
+  }
+  return { values }
 }
 
 /** The chart's default range: the band, or around a running speed and the target mode. */
@@ -109,7 +125,7 @@ export function frequencyResponse(
     { length: points },
     (_, i) => lo * (hi / lo) ** (i / (points - 1)),
   )
-  const rec = hostReceptance(ctx.prep, ctx.vectors, omega)
+  const rec = chartReceptance(ctx, omega)
   const without = curve(points)
   const withAbsorber = sized ? curve(points) : null
   const stroke: number[] | null = sized ? new Array(points) : null

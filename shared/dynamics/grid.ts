@@ -84,6 +84,12 @@ export function frequencyGrid(band: Band, target: number, options: GridOptions =
   const hi = Math.min(band.max, target * (1 + focus))
   for (let i = 0; hi > lo && i < focusPoints; i++)
     pts.push(lo + ((hi - lo) * (i + 0.5)) / focusPoints)
-  pts.sort((a, b) => a - b)
-  return Float64Array.from(pts.filter((w, i) => i === 0 || w > (pts[i - 1] ?? 0) * (1 + 1e-12)))
+  // A typed array sorts numerically without a comparator call per comparison.
+  const sorted = Float64Array.from(pts).sort()
+  let kept = 0
+  for (let i = 0; i < sorted.length; i++) {
+    const w = sorted[i] ?? 0
+    if (i === 0 || w > (sorted[i - 1] ?? 0) * (1 + 1e-12)) sorted[kept++] = w
+  }
+  return sorted.slice(0, kept)
 }

@@ -1,6 +1,7 @@
 import { solveComplex } from './complex-solve'
-import { foldFarModes, type FoldedModes } from './far-modes'
+import { foldFarModes } from './far-modes'
 import type { PreparedHost } from './host'
+import { modalSum, POLE_GAP } from './modal-sum'
 import { participation } from './participation'
 import type { ComplexArray } from './types'
 
@@ -45,6 +46,21 @@ export interface HostReceptance {
 }
 
 /**
+ * Host receptances, always built here: the nominal ones, the optimiser's thinner grid and a scaled
+ * host's then share one shape, which keeps the per-point code that reads them on one fast path.
+ */
+export function receptanceOf(r: HostReceptance): HostReceptance {
+  return {
+    omega: r.omega,
+    values: r.values,
+    at: r.at,
+    cheap: r.cheap,
+    participation: r.participation,
+    lambda: r.lambda,
+  }
+}
+
+/**
  * Unit vectors of a node triple.
  * @param n number of free nodes
  * @param t node indices
@@ -57,9 +73,6 @@ export function nodeVectors(n: number, t: NodeTriple): ReceptanceVectors {
   }
   return { r: unit(t.r), p: unit(t.f), u: unit(t.j) }
 }
-
-/** Relative distance to an undamped natural frequency below which the sum steps aside. */
-const POLE_GAP = 1e-8
 
 /**
  * Per component q of [rp, ru, up, uu], the first component whose modal numerators are the same
@@ -76,48 +89,6 @@ function repeatedComponents(prod: Float64Array, n: number): Int8Array {
     }
   }
   return src
-}
-
-function modalAt(
-  prep: PreparedHost,
-  prod: Float64Array,
-  src: Int8Array,
-  w: number,
-  out: Receptance4,
-  folded: FoldedModes | null,
-): boolean {
-  const { omega } = prep.modes
-  out.fill(0)
-  // Inside its band the far modes come folded into one correction (far-modes.ts).
-  const fold = folded && w >= folded.min && w <= folded.max ? folded : null
-  const count = fold ? fold.near.length : prep.n
-  for (let k = 0; k < count; k++) {
-    const i = fold ? (fold.near[k] ?? 0) : k
-    const wi = omega[i] ?? 0
-    // H_ab = Σ (aᵀφ_i)(bᵀφ_i) / (ω_i² − ω² + 2iζ_iω_iω) (modal superposition, e.g. Ewins, Modal
-    // Testing §2.6)
-    const dr = wi * wi - w * w
-    const di = 2 * (prep.zeta[i] ?? 0) * wi * w
-    // An undamped mode is singular at its own frequency: the caller steps aside.
-    if (di === 0 && Math.abs(dr) <= 2 * POLE_GAP * wi * wi) return false
-    const d = dr * dr + di * di
-    const ur = dr / d
-    const ui = -di / d
-    for (let q = 0; q < 4; q++) {
-      if (src[q] !== q) continue
-      const p = prod[i * 4 + q] ?? 0
-      out[2 * q] = (out[2 * q] ?? 0) + p * ur
-      out[2 * q + 1] = (out[2 * q + 1] ?? 0) + p * ui
-    }
-  }
-  fold?.add(w, out)
-  for (let q = 1; q < 4; q++) {
-    const s = src[q] ?? q
-    if (s === q) continue
-    out[2 * q] = out[2 * s] ?? 0
-    out[2 * q + 1] = out[2 * s + 1] ?? 0
-  }
-  return true
 }
 
 function dot(a: Float64Array, x: Float64Array, xi: Float64Array, col: number): [number, number] {
@@ -184,14 +155,19 @@ export function hostReceptance(
   }
   const last = omega[omega.length - 1] ?? 0
   const src = repeatedComponents(prod, n)
-  const folded = prep.classical
-    ? foldFarModes(prep.modes.omega, prep.zeta, prod, omega[0] ?? 0, last, { src })
+  const modal = prep.classical
+    ? modalSum(
+        prep,
+        prod,
+        src,
+        foldFarModes(prep.modes.omega, prep.zeta, prod, omega[0] ?? 0, last, { src }),
+      )
     : null
   const exact = (w: number, out: Receptance4): void => {
     let at = w
     // Step aside from a singular point (an undamped mode's own frequency) until the sum is finite.
     for (let tries = 0; tries < 4; tries++) {
-      if (prep.classical ? modalAt(prep, prod, src, at, out, folded) : directAt(prep, v, at, out)) {
+      if (modal ? modal(at, out) : directAt(prep, v, at, out)) {
         for (let q = 0; q < 4; q++) out[2 * q] = (out[2 * q] ?? 0) + (fixed[q] ?? 0)
         return
       }
@@ -205,5 +181,12 @@ export function hostReceptance(
     values.set(tmp, 8 * k)
   })
   const lambda = prep.modes.omega.map((w) => w * w)
-  return { omega, values, at: exact, cheap: prep.classical, participation: parts, lambda }
+  return receptanceOf({
+    omega,
+    values,
+    at: exact,
+    cheap: prep.classical,
+    participation: parts,
+    lambda,
+  })
 }

@@ -1,6 +1,6 @@
 import type { PreparedHost } from './host'
 import type { ReceptanceVectors } from './host-receptance'
-import { POWER, type Measure } from './measure'
+import { measureOf, POWER, type Measure } from './measure'
 import type { ValidLoad, ValidResponse } from './validate-load'
 
 function unit(n: number, k: number): Float64Array {
@@ -72,11 +72,11 @@ export function requestVectors(
   const base = load.kind === 'base'
   return {
     vectors: { r: unit(prep.fullN, response.node), p: loadVector(prep, load), u },
-    measure: {
-      power: POWER[response.quantity],
-      unbalance: load.unbalance,
-      absolute: base && response.quantity === 'acceleration',
-      absorberLoad: base && !relative ? -1 : 0,
-    },
+    measure: measureOf(
+      POWER[response.quantity],
+      load.unbalance,
+      base && response.quantity === 'acceleration',
+      base && !relative ? -1 : 0,
+    ),
   }
 }

@@ -1,9 +1,9 @@
 import type { ModelInput } from '../schemas/model'
 import { ModelError } from './errors'
-import { evaluateAbsorber, hostPeak } from './evaluate-absorber'
+import { absorberStroke, evaluateAbsorber, hostPeak, unboundedWith } from './evaluate-absorber'
 import { resolveTuning } from './resolve-tuning'
 import { sizingContext, type SizingContext } from './sizing-context'
-import { absorberValues } from './tuning-objective'
+import { absorberValues, type AbsorberValues } from './tuning-objective'
 
 /** One mass ratio of a sweep. */
 export interface SweepPoint {
@@ -18,6 +18,23 @@ export interface SweepPoint {
   reduction: number | null
   /** largest stroke per unit force over the band, m/N */
   maxStrokePerForce: number
+}
+
+/**
+ * Peak and largest stroke of an absorber. The optimiser has already read this absorber's peak on
+ * the context's full grid (its dense check, the very samples and refinement evaluateAbsorber
+ * takes), so only the stroke is evaluated then; a response left unbounded still reads Infinity.
+ */
+function peakAndStroke(
+  ctx: SizingContext,
+  a: AbsorberValues,
+  checked: number | undefined,
+): { peak: number; maxStroke: number } {
+  if (checked === undefined || unboundedWith(ctx, a)) {
+    const ev = evaluateAbsorber(ctx, a)
+    return { peak: ev.peak.value, maxStroke: ev.maxStroke.value }
+  }
+  return { peak: checked, maxStroke: absorberStroke(ctx, a).value }
 }
 
 /**
@@ -49,15 +66,16 @@ export function massRatioSweep(
     if (!Number.isFinite(mu) || mu <= 0)
       throw new ModelError(`massRatios[${i}]`, `must be positive, got ${mu}`)
     const t = resolveTuning(ctx, mu * m, mu, method)
-    const ev = evaluateAbsorber(ctx, absorberValues(mu * m, ctx.omegaTarget, t))
+    const a = absorberValues(mu * m, ctx.omegaTarget, t)
+    const { peak, maxStroke } = peakAndStroke(ctx, a, t.peak)
     return {
       massRatio: mu,
       mass: mu * m,
       frequencyRatio: t.frequencyRatio,
       dampingRatio: t.dampingRatio,
-      peak: ev.peak.value,
-      reduction: Number.isFinite(without) ? 1 - ev.peak.value / without : null,
-      maxStrokePerForce: ev.maxStroke.value,
+      peak,
+      reduction: Number.isFinite(without) ? 1 - peak / without : null,
+      maxStrokePerForce: maxStroke,
     }
   })
   return { peakWithout: Number.isFinite(without) ? without : null, points }

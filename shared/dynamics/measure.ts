@@ -18,8 +18,21 @@ export interface Measure {
   absorberLoad: number
 }
 
+/**
+ * A measure, always built here: every measure then has one shape, which keeps the per-point code
+ * that reads them (measured, absorberOnGrid) on one fast path.
+ */
+export function measureOf(
+  power: 0 | 1 | 2,
+  unbalance: boolean,
+  absolute: boolean,
+  absorberLoad: number,
+): Measure {
+  return { power, unbalance, absolute, absorberLoad }
+}
+
 /** Displacement per unit force: the receptance itself. */
-export const RECEPTANCE: Measure = { power: 0, unbalance: false, absolute: false, absorberLoad: 0 }
+export const RECEPTANCE: Measure = measureOf(0, false, false, 0)
 
 /** The power of ω of each quantity. */
 export const POWER: Record<ResponseQuantity, 0 | 1 | 2> = {

@@ -35,7 +35,8 @@ export interface OptimizedTuning extends Tuning {
   objective: number
   /** the closed form (or running-speed tuning) the search started from */
   startedFrom: StartName
-  /** objective value of that closed form on the same model */
+  /** objective value of that closed form on the same model (for the peak: on the search's thinner
+   * grid, which never reads higher, unless the result had to be checked against it on the full one) */
   startObjective: number
   evaluations: number
 }
@@ -68,18 +69,22 @@ export function optimizeTuning(
   }
   const cost = costOn(pb)
   // The peak is searched for on a thinner grid and the result checked on the full one; the mean
-  // square is an integral over the grid itself, so it keeps the full grid.
+  // square is an integral over the grid itself, so it keeps the full grid. The starts are ranked
+  // on the search's grid too: the chosen one is read on the full grid only when the search's
+  // optimum does not beat it plainly (a peak read on fewer samples is never higher).
   const search = objective === 'hinf' ? costOn(searchProblem(pb)) : cost
-  const { start, count } = bestStart(cost, mu, zetaHost, objective, options)
+  const { start, count } = bestStart(search, mu, zetaHost, objective, options)
+  let startFull: number | null = search === cost ? start.value : null
+  const fullStart = (): number => (startFull ??= cost(start.t))
   const found = (t: Tuning, value: number, evaluations: number): OptimizedTuning => ({
     ...t,
     objective: value,
     startedFrom: start.name,
-    startObjective: start.value,
-    evaluations,
+    startObjective: startFull ?? start.value,
+    evaluations: evaluations + (search === cost || startFull === null ? 0 : 1),
   })
   // Nothing beats a response of zero (an undamped absorber at a single running speed).
-  if (start.value === 0) return found(start.t, 0, count)
+  if (start.value === 0 && fullStart() === 0) return found(start.t, 0, count)
   const toTuning = (x: number[]): Tuning => ({
     frequencyRatio: Math.exp(x[0] ?? 0),
     dampingRatio: Math.exp(x[1] ?? 0),
@@ -114,9 +119,13 @@ export function optimizeTuning(
     (newton?.evaluations ?? 0) +
     (simplex?.evaluations ?? 0)
   const spent = search === cost ? 0 : best.evaluations
-  return best.value < start.value
+  // Plainly below the start's peak on the thinner grid, so below it on the full grid too.
+  if (best.value < start.value * (1 - 1e-12))
+    return found(toTuning(best.x), best.value, evaluations + spent)
+  const startValue = fullStart()
+  return best.value < startValue
     ? found(toTuning(best.x), best.value, evaluations + spent)
-    : found(start.t, start.value, evaluations + spent)
+    : found(start.t, startValue, evaluations + spent)
 }
 
 /** The lowest of some minima, or the fallback when there is none. */

@@ -20,11 +20,16 @@ export interface PeakOptions {
 
 const GOLDEN = (3 - Math.sqrt(5)) / 2
 
+/** No extra points: one empty typed array, so `extra` keeps one kind of array. */
+const NONE = new Float64Array(0)
+
 /**
  * Local maximum of f on [lo, hi] by Brent's method, started from a known point inside: parabolic
  * steps where the curve is smooth, golden-section steps otherwise (Brent, Algorithms for
- * Minimization without Derivatives, 1973, ch. 5). Returns the best point evaluated, so the value
- * is always one the curve takes.
+ * Minimization without Derivatives, 1973, ch. 5). The bracket's ends are samples of the curve too
+ * (flo, fhi): they are Brent's two other points from the start, so the first step is already the
+ * parabola through the three samples rather than a golden section. Returns the best point
+ * evaluated (never an end, both lower than the start), so the value is always one the curve takes.
  */
 function brentMax(
   f: (w: number) => number,
@@ -32,17 +37,22 @@ function brentMax(
   hi: number,
   start: Peak,
   tol: number,
+  flo: number,
+  fhi: number,
 ): Peak {
   let a = lo
   let b = hi
   let x = start.omega
-  let w = x
-  let v = x
   let fx = -start.value
-  let fw = fx
-  let fv = fx
-  let d = 0
-  let e = 0
+  // w the better end, v the other (Brent's second-best and previous points)
+  const loBetter = flo >= fhi
+  let w = loBetter ? lo : hi
+  let v = loBetter ? hi : lo
+  let fw = -(loBetter ? flo : fhi)
+  let fv = -(loBetter ? fhi : flo)
+  // the steps "before last" as wide as the bracket, so the first parabolic steps are allowed
+  let d = b - a
+  let e = b - a
   for (let it = 0; it < 100; it++) {
     const m = 0.5 * (a + b)
     const tol1 = tol * Math.abs(x) + 1e-300
@@ -115,17 +125,26 @@ export function findPeak(
   exact: (w: number) => number,
   options: PeakOptions = {},
 ): Peak {
-  const { tolerance = 3e-9, extra = [] } = options
+  const { tolerance = 3e-9, extra = NONE, maxima } = options
   const n = omega.length
   const first = omega[0] ?? 0
   const last = omega[n - 1] ?? 0
-  const ew: number[] = []
+  // The extra points inside the band, sorted, and the curve there: typed arrays, which sort
+  // numerically without a comparator call (and a boxed number) per comparison.
+  let inside = 0
   for (let k = 0; k < extra.length; k++) {
     const w = extra[k] ?? 0
-    if (w > first && w < last) ew.push(w)
+    if (w > first && w < last) inside++
   }
-  ew.sort((a, b) => a - b)
-  const ey = ew.map(exact)
+  const ew = new Float64Array(inside)
+  inside = 0
+  for (let k = 0; k < extra.length; k++) {
+    const w = extra[k] ?? 0
+    if (w > first && w < last) ew[inside++] = w
+  }
+  ew.sort()
+  const ey = new Float64Array(ew.length)
+  for (let k = 0; k < ew.length; k++) ey[k] = exact(ew[k] ?? 0)
   const total = n + ew.length
   let best: Peak = { value: -Infinity, omega: first }
   // One pass over grid and extra points merged in order, with a window of three samples
@@ -152,8 +171,8 @@ export function findPeak(
       const here: Peak = { value: cy, omega: cw }
       const hi = k < total ? nw : cw
       const lo = k > 1 ? pw : cw
-      const p = hi > lo ? brentMax(exact, lo, hi, here, tolerance) : here
-      options.maxima?.push(p)
+      const p = hi > lo ? brentMax(exact, lo, hi, here, tolerance, py, ny) : here
+      maxima?.push(p)
       if (p.value > best.value) best = p
     }
     pw = cw

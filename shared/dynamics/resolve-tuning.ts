@@ -15,6 +15,9 @@ export interface ResolvedTuning extends Tuning {
   /** with a stroke limit and an optimiser: whether some tuning respects it, and if none does the
    * smallest stroke found per unit load */
   strokeSearch?: { respected: boolean; active: boolean; smallest: number | null }
+  /** for the peak optimiser: the peak of this tuning (m/N for the receptance), as checked on the
+   * sizing's full grid — the value evaluateAbsorber reads for the same absorber */
+  peak?: number
 }
 
 /**
@@ -95,6 +98,7 @@ function resolveOnce(
       method: tuning,
       scope: optimizerScopes[tuning],
       startedFrom: o.startedFrom,
+      ...(tuning === 'optimize' && !limited?.active && { peak: o.objective }),
       ...(limited && {
         strokeSearch: {
           respected: limited.respected,

@@ -1,6 +1,6 @@
 import { frequencyGrid } from './grid'
 import { scaleHost } from './host'
-import type { HostReceptance, Receptance4 } from './host-receptance'
+import { receptanceOf, type HostReceptance, type Receptance4 } from './host-receptance'
 import { sizingContext, type SizingContext } from './sizing-context'
 import { hostUndampedResonance } from './undamped-modes'
 
@@ -12,12 +12,14 @@ import { hostUndampedResonance } from './undamped-modes'
  * @param s stiffness factor
  * @param grid rad/s, the scaled study's grid
  * @param scaledGrid true when grid is exactly the nominal grid times √s
+ * @param into a buffer of the values' length to fill instead of a new one
  */
 function scaledReceptance(
   rec: HostReceptance,
   s: number,
   grid: Float64Array,
   scaledGrid: boolean,
+  into?: Float64Array,
 ): HostReceptance {
   const root = Math.sqrt(s)
   const at = (w: number, out: Receptance4): void => {
@@ -27,7 +29,7 @@ function scaledReceptance(
   let values: Float64Array
   if (scaledGrid) {
     // A plain loop: a typed array's map calls a function per element.
-    values = new Float64Array(rec.values.length)
+    values = into?.length === rec.values.length ? into : new Float64Array(rec.values.length)
     for (let k = 0; k < values.length; k++) values[k] = (rec.values[k] ?? 0) / s
   } else {
     values = new Float64Array(8 * grid.length)
@@ -38,7 +40,14 @@ function scaledReceptance(
     })
   }
   const lambda = rec.lambda.map((l) => l * s)
-  return { ...rec, omega: grid, values, at, lambda }
+  return receptanceOf({ ...rec, omega: grid, values, at, lambda })
+}
+
+/** The nominal grid times √s, into `into` when it has the length. */
+function scaledGrid(omega: Float64Array, root: number, into?: Float64Array): Float64Array {
+  const out = into?.length === omega.length ? into : new Float64Array(omega.length)
+  for (let k = 0; k < omega.length; k++) out[k] = (omega[k] ?? 0) * root
+  return out
 }
 
 /**
@@ -49,8 +58,14 @@ function scaledReceptance(
  * does not scale with the stiffness) the context is built afresh on the scaled host.
  * @param nominal the nominal context
  * @param s stiffness factor, e.g. (1 + offset)²
+ * @param reuse a scaled context of the same nominal one that is no longer needed: its grid and
+ *   receptance buffers are filled anew instead of allocated (a detuning curve reads one at a time)
  */
-export function scaledContext(nominal: SizingContext, s: number): SizingContext {
+export function scaledContext(
+  nominal: SizingContext,
+  s: number,
+  reuse?: SizingContext,
+): SizingContext {
   if (s === 1) return nominal
   if (!nominal.prep.classical) return sizingContext(nominal.model, nominal.prep, s)
   const root = Math.sqrt(s)
@@ -58,10 +73,11 @@ export function scaledContext(nominal: SizingContext, s: number): SizingContext 
   const omegaTarget = prep.modes.omega[nominal.r] ?? 0
   const moves = !nominal.userBand
   const band = moves ? { min: nominal.band.min * root, max: nominal.band.max * root } : nominal.band
+  const old = reuse && reuse !== nominal ? reuse.rec : null
   const grid = moves
-    ? nominal.rec.omega.map((w) => w * root)
+    ? scaledGrid(nominal.rec.omega, root, old?.omega)
     : frequencyGrid(band, omegaTarget, { include: prep.modes.omega })
-  const rec = scaledReceptance(nominal.rec, s, grid, moves)
+  const rec = scaledReceptance(nominal.rec, s, grid, moves, old?.values)
   const resonance = (acts: boolean) =>
     hostUndampedResonance(prep, nominal.vectors, rec.participation, band, acts)
   return {

@@ -1,4 +1,5 @@
-import type { HostReceptance } from './host-receptance'
+import { receptanceOf, type HostReceptance } from './host-receptance'
+import { scratchPair } from './scratch'
 import type { TuningProblem } from './tuning-objective'
 
 /**
@@ -37,7 +38,7 @@ function thinned(rec: HostReceptance, stride: number): HostReceptance {
   const omega = Float64Array.from(keep, (k) => rec.omega[k] ?? 0)
   const values = new Float64Array(8 * keep.length)
   keep.forEach((k, i) => values.set(rec.values.subarray(8 * k, 8 * k + 8), 8 * i))
-  const out = { ...rec, omega, values }
+  const out = receptanceOf({ ...rec, omega, values })
   byStride.set(stride, out)
   return out
 }
@@ -51,6 +52,6 @@ function thinned(rec: HostReceptance, stride: number): HostReceptance {
  */
 export function searchProblem(pb: TuningProblem, stride = SEARCH_STRIDE): TuningProblem {
   const rec = thinned(pb.rec, stride)
-  const mag = new Float64Array(rec.omega.length)
-  return { ...pb, rec, mag, stroke: new Float64Array(mag.length) }
+  const [mag, stroke] = scratchPair(rec.omega.length)
+  return { ...pb, rec, mag, stroke }
 }

@@ -8,6 +8,7 @@ import type { Tuning } from './closed-forms'
 import type { HostReceptance } from './host-receptance'
 import { measured, measuredStroke, RECEPTANCE, type Measure } from './measure'
 import { findPeak, type Peak } from './peak'
+import { scratchPair } from './scratch'
 import { coupledEigenvalues, secularPoles, type Poles } from './secular'
 
 export type { AbsorberValues }
@@ -31,9 +32,9 @@ export interface TuningProblem {
   omegaTarget: number
   /** absorber mass, kg */
   mass: number
-  /** scratch, one value per grid point */
+  /** scratch, one value per grid point (shared: see scratch.ts) */
   mag: Float64Array
-  /** scratch for strokes, one value per grid point */
+  /** scratch for strokes, one value per grid point (shared: see scratch.ts) */
   stroke: Float64Array
   /** secular poles of the host at the attachment, for the natural frequencies with the absorber */
   poles: Poles
@@ -53,9 +54,8 @@ export function tuningProblem(
   mass: number,
   measure: Measure = RECEPTANCE,
 ): TuningProblem {
-  const mag = new Float64Array(rec.omega.length)
-  const poles = polesOf(rec)
-  return { rec, omegaTarget, mass, mag, stroke: new Float64Array(mag.length), poles, measure }
+  const [mag, stroke] = scratchPair(rec.omega.length)
+  return { rec, omegaTarget, mass, mag, stroke, poles: polesOf(rec), measure }
 }
 
 const polesByReceptance = new WeakMap<HostReceptance, Poles>()
@@ -105,34 +105,40 @@ export function exactMagnitude(
  * the two limits of its damper, free (c_a = 0) and locked (c_a → ∞): every lightly damped mode of
  * the damped system lies near one of them, so these points keep a sharp resonance from falling
  * between grid points.
- * @param pb the problem
+ * @param rec host receptances over the band
+ * @param poles their secular poles (polesOf)
  * @param a absorber values
  */
 export function coupledFrequencies(
-  pb: Pick<TuningProblem, 'rec' | 'poles'>,
+  rec: HostReceptance,
+  poles: Poles,
   a: AbsorberValues,
-): number[] {
-  const { omega } = pb.rec
+): Float64Array {
+  const { omega } = rec
   const min = (omega[0] ?? 0) ** 2
   const max = (omega[omega.length - 1] ?? 0) ** 2
   // A point within 1e-8 of a natural frequency is as good a sample as the frequency itself.
   const options = { min, max, tolerance: 1e-8, unchanged: false }
   // The locked limit depends on the mass alone, not on the tuning: solved once per search.
-  let locked = lockedRoots.get(pb.poles)
+  let locked = lockedRoots.get(poles)
   if (!locked || locked.mass !== a.mass || locked.min !== min || locked.max !== max) {
-    const roots = coupledEigenvalues(pb.poles, a.mass, Infinity, options).map(Math.sqrt)
+    const roots = Float64Array.from(coupledEigenvalues(poles, a.mass, Infinity, options), Math.sqrt)
     locked = { mass: a.mass, min, max, roots }
-    lockedRoots.set(pb.poles, locked)
+    lockedRoots.set(poles, locked)
   }
-  const free = coupledEigenvalues(pb.poles, a.mass, a.stiffness, options).map(Math.sqrt)
-  return free.concat(locked.roots)
+  const free = coupledEigenvalues(poles, a.mass, a.stiffness, options)
+  // A typed array, whatever the count: the peak search then always reads one kind of array.
+  const out = new Float64Array(free.length + locked.roots.length)
+  for (let k = 0; k < free.length; k++) out[k] = Math.sqrt(free[k] ?? 0)
+  out.set(locked.roots, free.length)
+  return out
 }
 
 /** Natural frequencies of the host with the absorber locked, per set of poles, for one mass and
  * band: the last asked for (a search asks for the same again and again). */
 const lockedRoots = new WeakMap<
   Poles,
-  { mass: number; min: number; max: number; roots: number[] }
+  { mass: number; min: number; max: number; roots: Float64Array }
 >()
 
 /**
@@ -146,7 +152,7 @@ const lockedRoots = new WeakMap<
 export function peakWith(pb: TuningProblem, a: AbsorberValues, maxima?: Peak[]): Peak {
   absorberOnGrid(pb.rec, a, pb.measure, pb.mag)
   return findPeak(pb.rec.omega, pb.mag, exactMagnitude(pb.rec, a, pb.measure), {
-    extra: coupledFrequencies(pb, a),
+    extra: coupledFrequencies(pb.rec, pb.poles, a),
     ...(maxima && { maxima }),
   })
 }
@@ -159,7 +165,7 @@ export function peakWith(pb: TuningProblem, a: AbsorberValues, maxima?: Peak[]):
 export function strokeWith(pb: TuningProblem, a: AbsorberValues): Peak {
   absorberOnGrid(pb.rec, a, pb.measure, pb.mag, pb.stroke)
   return findPeak(pb.rec.omega, pb.stroke, exactMagnitude(pb.rec, a, pb.measure, true), {
-    extra: coupledFrequencies(pb, a),
+    extra: coupledFrequencies(pb.rec, pb.poles, a),
   })
 }
 
