@@ -86,8 +86,14 @@ describe('the live preview of a sizing', () => {
   })
 
   describe('recomputed as the engineer types', () => {
-    beforeEach(() => vi.useFakeTimers())
-    afterEach(() => vi.useRealTimers())
+    beforeEach(() => {
+      vi.useFakeTimers()
+      vi.stubGlobal('Worker', InlineWorker)
+    })
+    afterEach(() => {
+      vi.useRealTimers()
+      vi.unstubAllGlobals()
+    })
 
     it('waits 150 ms after the last change and shows the answer to the latest one', async () => {
       const source = ref({ model: defaultDefinition(), input: inputFor() })
@@ -106,6 +112,31 @@ describe('the live preview of a sizing', () => {
       expect(preview.value?.modes[0]?.frequencyHz).toBeCloseTo(first / 2, 6)
     })
   })
+})
+
+/** The preview worker's message loop (preview.worker.ts) in this thread: jsdom has no workers. */
+class InlineWorker {
+  onmessage: ((e: MessageEvent) => void) | null = null
+  onerror: (() => void) | null = null
+  postMessage(data: { id: number; model: ModelDefinition; input: SizingInput }) {
+    const preview = previewSizing(data.model, data.input)
+    queueMicrotask(() => this.onmessage?.({ data: { id: data.id, preview } } as MessageEvent))
+  }
+  terminate() {}
+}
+
+it('says the live preview cannot run where no worker starts, and shows no numbers', async () => {
+  vi.useFakeTimers()
+  try {
+    const source = ref({ model: defaultDefinition(), input: inputFor() })
+    const { preview } = inComponent(() => useLivePreview(source))
+    await vi.advanceTimersByTimeAsync(200)
+    expect(preview.value?.evaluation).toBeNull()
+    expect(preview.value?.modes).toEqual([])
+    expect(preview.value?.error?.message).toMatch(/cannot run the live preview/)
+  } finally {
+    vi.useRealTimers()
+  }
 })
 
 /**

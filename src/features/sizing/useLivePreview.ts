@@ -1,9 +1,25 @@
 import { onBeforeUnmount, ref, toRaw, type Ref } from 'vue'
 import { watchDebounced } from '@vueuse/core'
 import type { ModelDefinition, SizingInput } from '@shared/schemas/sizing'
-import { previewSizing, type SizingPreview } from './preview'
+import type { SizingPreview } from './preview'
 
 const DEBOUNCE_MS = 150
+
+/**
+ * What the preview says where no worker can start. The engine runs only in the worker: a copy on
+ * the main thread would double the sizing page's download for browsers that tablets no longer
+ * run (every current one has module workers), and the server computes a saved sizing anyway.
+ */
+export const NO_PREVIEW: SizingPreview = {
+  nodeIds: [],
+  modes: [],
+  evaluation: null,
+  error: {
+    field: '',
+    message:
+      'This browser cannot run the live preview. Save the sizing: the server computes it in full.',
+  },
+}
 
 function startWorker(): Worker | null {
   try {
@@ -16,8 +32,8 @@ function startWorker(): Worker | null {
 }
 
 /**
- * Recomputes the sizing in the browser 150 ms after the last change, in a Web Worker when the
- * browser has one; only the answer to the latest request is kept, and a newer request stops the
+ * Recomputes the sizing in the browser 150 ms after the last change, in a Web Worker (where
+ * none can start, the preview says so); only the answer to the latest request is kept, and a newer request stops the
  * worker still computing an older one.
  * @param source the model and the choices, or null while nothing is loaded
  */
@@ -30,10 +46,11 @@ export function useLivePreview(source: Ref<{ model: ModelDefinition; input: Sizi
   function attach(w: Worker | null): Worker | null {
     if (!w) return null
     w.onerror = () => {
-      // the worker could not start (old browser, blocked script): compute here instead
+      // the worker could not start (old browser, blocked script): say so, never guess
       w.terminate()
       worker = null
-      run()
+      preview.value = NO_PREVIEW
+      busy.value = false
     }
     w.onmessage = (e: MessageEvent<{ id: number; preview: SizingPreview }>) => {
       if (e.data.id !== seq) return
@@ -58,7 +75,7 @@ export function useLivePreview(source: Ref<{ model: ModelDefinition; input: Sizi
     const payload = JSON.parse(JSON.stringify(toRaw(s))) as typeof s
     if (worker) worker.postMessage({ id, ...payload })
     else {
-      preview.value = previewSizing(payload.model, payload.input)
+      preview.value = NO_PREVIEW
       busy.value = false
     }
   }
