@@ -125,7 +125,7 @@ class InlineWorker {
   terminate() {}
 }
 
-it('says the live preview cannot run where no worker starts, and shows no numbers', async () => {
+it('says the live preview cannot run where no worker starts, shows no numbers and still offers the nodes', async () => {
   vi.useFakeTimers()
   try {
     const source = ref({ model: defaultDefinition(), input: inputFor() })
@@ -134,6 +134,11 @@ it('says the live preview cannot run where no worker starts, and shows no number
     expect(preview.value?.evaluation).toBeNull()
     expect(preview.value?.modes).toEqual([])
     expect(preview.value?.error?.message).toMatch(/cannot run the live preview/)
+    const free = defaultDefinition().nodes.filter((n) => !n.fixed)
+    expect(free.length).toBeGreaterThan(0)
+    // the same nodes, in the same order, as the engine's own preview offers
+    expect(preview.value?.nodeIds).toEqual(previewSizing(defaultDefinition(), inputFor()).nodeIds)
+    expect(preview.value?.nodeIds).toEqual(free.map((n) => n.id))
   } finally {
     vi.useRealTimers()
   }

@@ -1,8 +1,9 @@
 import { z } from 'zod'
-import { HostModelSchema, ModelRevisionSchema } from '../../../shared/schemas/host-model'
 import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import {
+  HostModelSchema,
+  ModelRevisionSchema,
   ModelCreateSchema,
   ModelListQuerySchema,
   ModelReviseSchema,

@@ -149,7 +149,7 @@ export function quotesRepository(ds: DataSource) {
      * title and site, not the whole summary) and whether each is its number's latest revision,
      * in one query; the total matching goes with it. States are as of `today` (LIST_STATE).
      */
-    async listPage(q: QuoteListQuery & { states?: readonly QuoteState[]; today: string }) {
+    async listPage(q: ListFilter) {
       return sqlPage<QuoteListRow>(ds, {
         from: listFrom,
         where: listFilters(q),

@@ -6,19 +6,22 @@ import type { SizingPreview } from './preview'
 const DEBOUNCE_MS = 150
 
 /**
- * What the preview says where no worker can start. The engine runs only in the worker: a copy on
- * the main thread would double the sizing page's download for browsers that tablets no longer
- * run (every current one has module workers), and the server computes a saved sizing anyway.
+ * What the preview says where no worker can start: no numbers, only the model's free nodes, so
+ * the choices can still be made and saved for the server to compute. The engine runs only in
+ * the worker: a copy on the main thread would double the sizing page's download for browsers
+ * that tablets no longer run (every current one has module workers).
  */
-export const NO_PREVIEW: SizingPreview = {
-  nodeIds: [],
-  modes: [],
-  evaluation: null,
-  error: {
-    field: '',
-    message:
-      'This browser cannot run the live preview. Save the sizing: the server computes it in full.',
-  },
+export function noPreview(model: ModelDefinition): SizingPreview {
+  return {
+    nodeIds: model.nodes.filter((n) => !n.fixed).map((n) => n.id),
+    modes: [],
+    evaluation: null,
+    error: {
+      field: '',
+      message:
+        'This browser cannot run the live preview. Save the sizing: the server computes it in full.',
+    },
+  }
 }
 
 function startWorker(): Worker | null {
@@ -33,8 +36,8 @@ function startWorker(): Worker | null {
 
 /**
  * Recomputes the sizing in the browser 150 ms after the last change, in a Web Worker (where
- * none can start, the preview says so); only the answer to the latest request is kept, and a newer request stops the
- * worker still computing an older one.
+ * none can start, the preview says so); only the answer to the latest request is kept, and a
+ * newer request stops the worker still computing an older one.
  * @param source the model and the choices, or null while nothing is loaded
  */
 export function useLivePreview(source: Ref<{ model: ModelDefinition; input: SizingInput } | null>) {
@@ -49,7 +52,7 @@ export function useLivePreview(source: Ref<{ model: ModelDefinition; input: Sizi
       // the worker could not start (old browser, blocked script): say so, never guess
       w.terminate()
       worker = null
-      preview.value = NO_PREVIEW
+      if (source.value) preview.value = noPreview(source.value.model)
       busy.value = false
     }
     w.onmessage = (e: MessageEvent<{ id: number; preview: SizingPreview }>) => {
@@ -75,7 +78,7 @@ export function useLivePreview(source: Ref<{ model: ModelDefinition; input: Sizi
     const payload = JSON.parse(JSON.stringify(toRaw(s))) as typeof s
     if (worker) worker.postMessage({ id, ...payload })
     else {
-      preview.value = NO_PREVIEW
+      preview.value = noPreview(payload.model)
       busy.value = false
     }
   }
