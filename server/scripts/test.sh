@@ -43,7 +43,17 @@ step "lint" npm run -s lint
 joined "type checks"
 beside "unit and client tests" npx vitest run --project unit --project client
 step "building the client for the browser tests" npx vite build --logLevel warn
+# A log's failures, printed again at the very end: CI keeps only the tail of a long output.
+failures() {
+  sed 's/\x1b\[[0-9;]*m//g' "$LOCAL/log/test-$1.log" |
+    sed -n '/Failed Suites\|Failed Tests\|Unhandled Error/,$p' | head -200
+}
 rc=0
-step "API and browser tests" npx vitest run --project api --project e2e || rc=$?
+step "API and browser tests" bash -c 'npx vitest run --project api --project e2e 2>&1 | tee "$1"; exit "${PIPESTATUS[0]}"' _ "$LOCAL/log/test-API-and-browser-tests.log" || rc=$?
 joined "unit and client tests" || rc=$?
+if [ "$rc" != 0 ]; then
+  log "failed; what failed, once more:"
+  failures "API-and-browser-tests"
+  failures "unit-and-client-tests"
+fi
 exit "$rc"
