@@ -26,6 +26,8 @@ export function useSizingWorkspace() {
   /** the model as it is now on the server (its latest revision and the revision list) */
   const model = ref<HostModel | null>(null)
   const notice = ref('')
+  /** why nothing is open once loading ended: no site to start from, or the server's refusal */
+  const unopened = ref('')
   const draft = computed(() => store.current)
   const readOnly = computed(() => auth.role === 'sales' || saved.value?.state === 'submitted')
   watch(readOnly, (locked) => (store.locked = locked), { immediate: true })
@@ -80,9 +82,11 @@ export function useSizingWorkspace() {
   const opening = useAction(
     async (id: number | null, siteId: number | null) => {
       notice.value = ''
+      unopened.value = ''
       try {
         if (id) await loadSaved(id)
         else if (siteId) await loadNew(siteId)
+        else unopened.value = 'A new sizing starts from a site: open the site, then start it there.'
       } catch (e) {
         if (!isApiError(e) || e.code !== 'offline' || !store.openKept(keyOf(id, siteId))) throw e
         notice.value =
@@ -91,7 +95,11 @@ export function useSizingWorkspace() {
     },
     { failure: 'Could not open the sizing', latest: true },
   )
-  const load = (id: number | null, siteId: number | null) => opening.run(id, siteId)
+  const load = async (id: number | null, siteId: number | null) => {
+    await opening.run(id, siteId)
+    if (opening.error.value) unopened.value = opening.error.value
+    if (unopened.value) store.currentKey = null // never show the sizing open before under this address
+  }
 
   /** Moves the sizing onto another revision of its model (the engineer says so, never by itself). */
   async function useModelRevision(revision: number) {
@@ -114,6 +122,7 @@ export function useSizingWorkspace() {
     draft,
     loading: opening.pending,
     notice,
+    unopened,
     readOnly,
     load,
     useModelRevision,
