@@ -128,10 +128,11 @@ describe('work orders', () => {
     expect((await agent.get('/api/audit')).status).toBe(403)
   })
 
-  it('prints the work order as a PDF with its target frequency and the safety note', async () => {
+  it('prints the work order as a PDF with its target frequency and the safety note, kept out of shared caches', async () => {
     const { agent, wo } = await paidWorkOrder()
     const res = await fetchPdf(agent, `/api/work-orders/${wo.id}/pdf`)
     expect(res.status).toBe(200)
+    expect(res.headers['cache-control']).toBe('private, no-store')
     const pdf = res.body as Buffer
     expect(pdf.subarray(0, 5).toString()).toBe('%PDF-')
     const text = await pdfText(pdf)

@@ -4,6 +4,7 @@ import { ACCESS } from '../../../shared/access'
 import { IdParamSchema } from '../../../shared/schemas/ids'
 import { StatusChangeSchema, TuningRecordInputSchema } from '../../../shared/schemas/work-order'
 import type { ApiRegistry } from '../../http/api-registry'
+import { sendPdf } from '../../http/send-pdf'
 import { routeTable } from '../../http/route-table'
 import type { ProductionService } from './production.service'
 import { QuoteShipmentSchema, WorkOrderListQuerySchema } from '../../../shared/schemas/shipment'
@@ -53,14 +54,7 @@ export function productionRouter(api: ApiRegistry, production: ProductionService
     summary: 'The work order as a PDF for the workshop',
     params: IdParamSchema,
     produces: 'application/pdf',
-    answer: async ({ params, res }) => {
-      const { filename, bytes } = await production.pdf(params.id)
-      res
-        .type('application/pdf')
-        .set('content-disposition', `inline; filename="${filename}"`)
-        .send(bytes)
-      return undefined
-    },
+    answer: async ({ params, res }) => sendPdf(res, await production.pdf(params.id)),
   })
   return routes.router
 }
