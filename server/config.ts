@@ -26,6 +26,8 @@ const trustProxy = z
     return v.split(',').map((x) => x.trim())
   })
 
+const MIN_PRODUCTION_HASH_COST = 10
+
 const EnvSchema = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
   HOST: z.string().default('127.0.0.1'),
@@ -42,6 +44,11 @@ const EnvSchema = z.object({
     .default('quellnode'),
   JWT_SECRET: z.string().min(32, 'at least 32 characters'),
   TOKEN_TTL_HOURS: z.coerce.number().positive().default(12),
+  /**
+   * bcrypt's cost (2^cost rounds per password hash); at least 10 in production. The tests use 4
+   * (common practice: a test suite hashes hundreds of passwords and proves nothing by slowness).
+   */
+  PASSWORD_HASH_COST: z.coerce.number().int().min(4).max(15).default(10),
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: port.default(4325),
   SMTP_SECURE: bool,
@@ -107,5 +114,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     throw new Error(`Invalid configuration:\n${lines.join('\n')}`)
   }
   const c = parsed.data
+  if (c.NODE_ENV === 'production' && c.PASSWORD_HASH_COST < MIN_PRODUCTION_HASH_COST)
+    throw new Error(
+      `Invalid configuration:\n  PASSWORD_HASH_COST: at least ${MIN_PRODUCTION_HASH_COST} in production`,
+    )
   return { ...c, publicUrl: c.PUBLIC_URL ?? `http://${c.HOST}:${c.PORT}` }
 }

@@ -69,6 +69,7 @@ export function buildServices(deps: AppDeps) {
     mailer,
     jwtSecret: deps.config.JWT_SECRET,
     tokenTtlHours: deps.config.TOKEN_TTL_HOURS,
+    passwordHashCost: deps.config.PASSWORD_HASH_COST,
     publicUrl: deps.config.publicUrl,
     now,
   })

@@ -23,6 +23,15 @@ describe('sign-in', () => {
     expect(cookie).toMatch(/SameSite=Strict/)
   })
 
+  it('stores a new password as a bcrypt hash of the configured cost, never the password', async () => {
+    const user = await makeUser(t, 'engineer')
+    const [row] = await t.ds.query('SELECT passwordHash FROM users WHERE id = ?', [user.id])
+    // bcrypt's stored form: $2a$<two-digit cost>$<salt and hash> (Provos & Mazières, 1999);
+    // the tests run at cost 4 (tests/helpers/test-env.ts).
+    expect(row.passwordHash).toMatch(/^\$2[aby]\$04\$.{53}$/)
+    expect(row.passwordHash).not.toContain(PASSWORD)
+  })
+
   it('answers a wrong password and an unknown user with the same 401 message', async () => {
     const user = await makeUser(t, 'sales')
     const wrong = await request(t.app)

@@ -15,14 +15,14 @@ export interface AuthDeps {
   mailer: Mailer
   jwtSecret: string
   tokenTtlHours: number
+  /** bcrypt's cost for new password hashes */
+  passwordHashCost: number
   publicUrl: string
   now: () => Date
   limits: { signIn: Throttle; reset: Throttle }
 }
 
 const BAD_CREDENTIALS = 'The e-mail address or the password is wrong.'
-// Compared against when the user is unknown, so both failures take the same time.
-const DUMMY_HASH = bcrypt.hashSync('not-a-real-password', 10)
 export const RESET_TTL_HOURS = 1
 
 export function toAuthUser(u: Account): AuthUser {
@@ -36,12 +36,11 @@ export function toAuthUser(u: Account): AuthUser {
   }
 }
 
-export function hashPassword(password: string) {
-  return bcrypt.hash(password, 10)
-}
-
 export function authService(deps: AuthDeps) {
   const sessions = sessionCache(() => deps.now().getTime())
+  const hashPassword = (password: string) => bcrypt.hash(password, deps.passwordHashCost)
+  // Compared against when the user is unknown, so both failures take the same time.
+  const dummyHash = bcrypt.hashSync('not-a-real-password', deps.passwordHashCost)
   /** Ends every session of the user, here at once and on other instances within a recheck. */
   async function endSessions(userId: number) {
     sessions.forget(userId)
@@ -69,6 +68,7 @@ export function authService(deps: AuthDeps) {
 
   return {
     sendLink,
+    hashPassword,
 
     /**
      * Checks the credentials and returns the user and a signed session token. Failures count
@@ -79,7 +79,7 @@ export function authService(deps: AuthDeps) {
       const keys = { account: email, address }
       await deps.limits.signIn.assertOpen(keys)
       const user = await deps.users.findByEmail(email)
-      const ok = await bcrypt.compare(password, user?.passwordHash ?? DUMMY_HASH)
+      const ok = await bcrypt.compare(password, user?.passwordHash ?? dummyHash)
       if (!user || !user.passwordHash || !ok || !user.active) {
         await deps.limits.signIn.take(keys).catch(() => undefined)
         throw new AppError('invalid-credentials', BAD_CREDENTIALS, 401)

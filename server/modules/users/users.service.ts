@@ -1,6 +1,6 @@
 import type { Invite, UserPatch, UserSummary } from '../../../shared/schemas/auth'
 import { AppError, notFound } from '../../http/app-error'
-import { hashPassword, toAuthUser, type AuthService } from '../auth/auth.service'
+import { toAuthUser, type AuthService } from '../auth/auth.service'
 import type { CompaniesService } from '../companies/companies.service'
 import type { Throttle } from '../../integrations/rate-limits'
 import type { UserRecord, UsersRepository } from './users.repository'
@@ -62,7 +62,7 @@ export function usersService(deps: {
       if (existing) return summary(existing)
       const { password, ...rest } = input
       return summary(
-        await deps.users.create({ ...rest, passwordHash: await hashPassword(password) }),
+        await deps.users.create({ ...rest, passwordHash: await deps.auth.hashPassword(password) }),
       )
     },
 
