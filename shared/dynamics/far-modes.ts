@@ -200,12 +200,37 @@ function build(
   for (let l = 0; l < L; l++)
     for (let j = 0; j <= N; j++) byLane[l * (N + 1) + j] = values[8 * j + (lanes[l] ?? 0)] ?? 0
   const sum = new Float64Array(L)
+  const folded = { min, max, near, degree: N, bound: p.bound }
+  // One component (response, load and absorber on one node): its two lanes summed in plain
+  // numbers, the same operations in the same order as the general loop below.
+  const k0 = lanes[0] ?? 0
+  const k1 = lanes[1] ?? 0
+  if (L === 2)
+    return {
+      ...folded,
+      add(w, out) {
+        const t = (w - c) / h
+        let s0 = 0
+        let s1 = 0
+        let den = 0
+        for (let j = 0; j <= N; j++) {
+          const dt = t - (nodes[j] ?? 0)
+          if (dt === 0) {
+            out[k0] = (out[k0] ?? 0) + (byLane[j] ?? 0)
+            out[k1] = (out[k1] ?? 0) + (byLane[N + 1 + j] ?? 0)
+            return
+          }
+          const x = (weights[j] ?? 0) / dt
+          den += x
+          s0 += x * (byLane[j] ?? 0)
+          s1 += x * (byLane[N + 1 + j] ?? 0)
+        }
+        out[k0] = (out[k0] ?? 0) + s0 / den
+        out[k1] = (out[k1] ?? 0) + s1 / den
+      },
+    }
   return {
-    min,
-    max,
-    near,
-    degree: N,
-    bound: p.bound,
+    ...folded,
     add(w, out) {
       const t = (w - c) / h
       sum.fill(0)
