@@ -29,18 +29,20 @@ const GOLDEN = (3 - Math.sqrt(5)) / 2
  */
 export const PEAK_TIE = 5e-10
 
-/** Peaks found (value, ω) of the current findPeak call, in band order: reused scratch. */
-const found: number[] = []
+/** Maxima found (value, ω pairs) by the current findPeak call, in band order: reused scratch,
+ * doubled when a curve has more. */
+let found = new Float64Array(64)
 
 /**
  * The peak to report from a curve's local maxima: the highest value, at the lowest frequency whose
  * maximum is within PEAK_TIE of it.
  * @param best the highest maximum (the first of equal ones)
  * @param found the maxima as (value, ω rad/s) pairs, in ascending frequency
+ * @param length how many of its numbers to read (default all)
  */
-export function tieBreak(best: Peak, found: ArrayLike<number>): Peak {
+export function tieBreak(best: Peak, found: ArrayLike<number>, length = found.length): Peak {
   const floor = best.value * (1 - PEAK_TIE)
-  for (let k = 0; k < found.length; k += 2) {
+  for (let k = 0; k < length; k += 2) {
     const w = found[k + 1] ?? best.omega
     if (w >= best.omega) break
     if ((found[k] ?? -Infinity) >= floor) return { value: best.value, omega: w }
@@ -176,7 +178,7 @@ export function findPeak(
   for (let k = 0; k < ew.length; k++) ey[k] = exact(ew[k] ?? 0)
   const total = n + ew.length
   let best: Peak = { value: -Infinity, omega: first }
-  found.length = 0
+  let count = 0
   // One pass over grid and extra points merged in order, with a window of three samples
   // (previous p, current c, next); plain variables, as this runs for every candidate tuning.
   let gi = 0
@@ -203,7 +205,13 @@ export function findPeak(
       const lo = k > 1 ? pw : cw
       const p = hi > lo ? brentMax(exact, lo, hi, here, tolerance, py, ny) : here
       maxima?.push(p)
-      found.push(p.value, p.omega)
+      if (count + 2 > found.length) {
+        const more = new Float64Array(2 * found.length)
+        more.set(found)
+        found = more
+      }
+      found[count++] = p.value
+      found[count++] = p.omega
       if (p.value > best.value) best = p
     }
     pw = cw
@@ -211,5 +219,5 @@ export function findPeak(
     cw = nw
     cy = ny
   }
-  return found.length > 2 ? tieBreak(best, found) : best
+  return count > 2 ? tieBreak(best, found, count) : best
 }
