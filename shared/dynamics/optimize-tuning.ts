@@ -66,9 +66,9 @@ export function optimizeTuning(
   const { objective = 'hinf', zetaHost = 0, maxEvaluations = 300 } = options
   const costOn =
     (p: TuningProblem) =>
-    (t: Tuning, maxima?: Peak[]): number => {
+    (t: Tuning, maxima?: Peak[], above?: number): number => {
       const a = absorberValues(p.mass, p.omegaTarget, t)
-      return objective === 'hinf' ? peakWith(p, a, maxima).value : meanSquareWith(p, a)
+      return objective === 'hinf' ? peakWith(p, a, maxima, above).value : meanSquareWith(p, a)
     }
   const cost = costOn(pb)
   // The peak is searched for on a thinner grid and the result checked on the full one; the mean
@@ -165,7 +165,7 @@ function lowest(minima: (Minimum | null)[], fallback: Minimum): Minimum {
 
 /** The best of the closed forms (and extra starts) on the full model, by the objective. */
 function bestStart(
-  cost: (t: Tuning, maxima?: Peak[]) => number,
+  cost: (t: Tuning, maxima?: Peak[], above?: number) => number,
   mu: number,
   zetaHost: number,
   objective: 'hinf' | 'h2',
@@ -178,14 +178,26 @@ function bestStart(
     })),
     ...(options.extraStarts ?? []),
   ]
-  const candidates = starts.map(({ name, tuning: t }): Candidate => {
+  // For the peak, a later start whose samples already rise above the best value so far cannot be
+  // the best (refined, its peak could only be higher): its peaks are not refined. The start chosen
+  // and its value are the same as with every start refined.
+  let best: Candidate | null = null
+  for (const { name, tuning: t } of starts) {
     const ok = t.dampingRatio >= 0 && t.frequencyRatio > 0
     const maxima: Peak[] | undefined = ok && objective === 'hinf' ? [] : undefined
-    const value = ok ? cost(t, maxima) : Infinity
-    return { name, t, value: Number.isNaN(value) ? Infinity : value, ...(maxima && { maxima }) }
-  })
-  const start = candidates.reduce((b, c) => (c.value < b.value ? c : b))
-  return { start, count: candidates.length }
+    const above: number | undefined =
+      maxima && best && Number.isFinite(best.value) ? best.value : undefined
+    const value: number = ok ? cost(t, maxima, above) : Infinity
+    const c: Candidate = {
+      name,
+      t,
+      value: Number.isNaN(value) ? Infinity : value,
+      ...(maxima && { maxima }),
+    }
+    if (!best || c.value < best.value) best = c
+  }
+  if (!best) throw new RangeError('no starting tuning')
+  return { start: best, count: starts.length }
 }
 
 /**

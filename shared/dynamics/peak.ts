@@ -16,6 +16,9 @@ export interface PeakOptions {
   tolerance?: number
   /** receives every refined local maximum, in band order */
   maxima?: Peak[]
+  /** a value the caller only needs to know the curve exceeds: when a sample already does, that
+   * sample is returned without refining anything (the peak, refined, could only be higher) */
+  above?: number
 }
 
 const GOLDEN = (3 - Math.sqrt(5)) / 2
@@ -156,7 +159,7 @@ export function findPeak(
   exact: (w: number) => number,
   options: PeakOptions = {},
 ): Peak {
-  const { tolerance = 3e-9, extra = NONE, maxima } = options
+  const { tolerance = 3e-9, extra = NONE, maxima, above = Infinity } = options
   const n = omega.length
   const first = omega[0] ?? 0
   const last = omega[n - 1] ?? 0
@@ -183,6 +186,10 @@ export function findPeak(
   // (previous p, current c, next); plain variables, as this runs for every candidate tuning.
   let gi = 0
   let ei = 0
+  if (above < Infinity) {
+    const over = sampleAbove(omega, mag, ew, ey, above)
+    if (over) return over
+  }
   let pw = first
   let py = -Infinity
   let cw = 0
@@ -220,4 +227,19 @@ export function findPeak(
     cy = ny
   }
   return count > 2 ? tieBreak(best, found, count) : best
+}
+
+/** The first sample (grid, then extra points) above a value, or null. */
+function sampleAbove(
+  omega: Float64Array,
+  mag: Float64Array,
+  ew: Float64Array,
+  ey: Float64Array,
+  above: number,
+): Peak | null {
+  for (let k = 0; k < mag.length; k++)
+    if ((mag[k] ?? -Infinity) > above) return { value: mag[k] ?? 0, omega: omega[k] ?? 0 }
+  for (let k = 0; k < ey.length; k++)
+    if ((ey[k] ?? -Infinity) > above) return { value: ey[k] ?? 0, omega: ew[k] ?? 0 }
+  return null
 }

@@ -164,12 +164,20 @@ const lockedRoots = new WeakMap<
  * is bounded (undamped-modes.ts).
  * @param pb the problem
  * @param a absorber values
+ * @param maxima receives every refined local maximum
+ * @param above when a sample exceeds it, that sample is returned unrefined (findPeak)
  */
-export function peakWith(pb: TuningProblem, a: AbsorberValues, maxima?: Peak[]): Peak {
+export function peakWith(
+  pb: TuningProblem,
+  a: AbsorberValues,
+  maxima?: Peak[],
+  above?: number,
+): Peak {
   absorberOnGrid(pb.rec, a, pb.measure, pb.mag)
   return findPeak(pb.rec.omega, pb.mag, exactMagnitude(pb.rec, a, pb.measure), {
     extra: coupledFrequencies(pb.rec, pb.poles, a),
     ...(maxima && { maxima }),
+    ...(above !== undefined && { above }),
   })
 }
 
