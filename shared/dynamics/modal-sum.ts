@@ -71,12 +71,7 @@ export function modalSum(
       out[2 * q + 1] = sums[2 * c + 1] ?? 0
     }
     fold?.add(w, out)
-    for (let q = 1; q < 4; q++) {
-      const s = src[q] ?? q
-      if (s === q) continue
-      out[2 * q] = out[2 * s] ?? 0
-      out[2 * q + 1] = out[2 * s + 1] ?? 0
-    }
+    copyRepeated(out, src)
     return true
   }
 }
@@ -115,12 +110,17 @@ function singleSum(
     out[0] = sr
     out[1] = si
     fold?.add(w, out)
-    for (let q = 1; q < 4; q++) {
-      const s = src[q] ?? q
-      if (s === q) continue
-      out[2 * q] = out[2 * s] ?? 0
-      out[2 * q + 1] = out[2 * s + 1] ?? 0
-    }
+    copyRepeated(out, src)
     return true
+  }
+}
+
+/** Each component that repeats another (src[q] ≠ q) copied from it. */
+function copyRepeated(out: Receptance4, src: Int8Array): void {
+  for (let q = 1; q < 4; q++) {
+    const s = src[q] ?? q
+    if (s === q) continue
+    out[2 * q] = out[2 * s] ?? 0
+    out[2 * q + 1] = out[2 * s + 1] ?? 0
   }
 }
