@@ -4,6 +4,7 @@ import { absorberPeak } from './evaluate-absorber'
 import { scaledContext } from './scaled-context'
 import type { SizingContext } from './sizing-context'
 import { prepareSizing, type PreparedSizing } from './size-absorber'
+import type { AbsorberValues } from './tuning-objective'
 
 /** Options of `detuningRobustness`. */
 export interface RobustnessOptions {
@@ -57,7 +58,14 @@ export function detuningRobustness(
   // One scaled context at a time: each offset's fills the buffers of the one before.
   let last: SizingContext | undefined
   const at = (offset: number): { peak: number; amplification: number } => {
-    const ctx = Math.abs(offset) < 1e-12 ? nominal : scaledContext(nominal, (1 + offset) ** 2, last)
+    const s = (1 + offset) ** 2
+    if (Math.abs(offset) >= 1e-12 && movesWithHost(nominal)) {
+      // H_s(0) = H(0)/s: the same operations as the scaled receptances' own
+      nominal.rec.at(0, h)
+      const peak = scaledPeak(nominal, sized.values, s)
+      return { peak, amplification: peak / Math.hypot((h[0] ?? 0) / s, (h[1] ?? 0) / s) }
+    }
+    const ctx = Math.abs(offset) < 1e-12 ? nominal : scaledContext(nominal, s, last)
     if (ctx !== nominal) last = ctx
     const peak = absorberPeak(ctx, sized.values).value
     ctx.rec.at(0, h)
@@ -78,4 +86,32 @@ export function detuningRobustness(
   const inside = curve.filter((p) => Math.abs(p.offset) <= tolerance + 1e-12)
   const worst = inside.reduce((w, p) => (p.peak > w.peak ? p : w))
   return { curve, worst }
+}
+
+/** Modal damping and a band that moves with the host: a scaled host is then the nominal one with
+ * a scaled absorber (scaledPeak). */
+function movesWithHost(ctx: SizingContext): boolean {
+  return ctx.prep.classical && !ctx.userBand
+}
+
+/**
+ * The peak with the absorber (m_a, k_a, c_a) on the host whose spring rates are all times s, read
+ * on the nominal host (docs/engineering/tuning.md#detuning-robustness). With modal damping
+ * (C ∝ √K at fixed ζ) the scaled system's equations at ω' = ω√s, divided by s, are the nominal
+ * host's at ω with the absorber (m_a, k_a/s, c_a/√s) under the loads divided by s: the response is
+ * x(ω)/s, the absorber's included, and the default band and its grid move by √s with the host.
+ * The measured quantity carries (iω')^power and ω'² for an unbalance, so it is the nominal one
+ * times s^(power/2 + unbalance − 1); an absolute acceleration 1 − ω'²x is the nominal one itself.
+ * No receptances are rebuilt or copied, and the nominal host's coupled frequencies with the
+ * absorber locked serve every offset.
+ * @param nominal the nominal context (classical damping, a band that moves with the host)
+ * @param a the absorber
+ * @param s stiffness factor
+ */
+function scaledPeak(nominal: SizingContext, a: AbsorberValues, s: number): number {
+  const root = Math.sqrt(s)
+  const twin = { mass: a.mass, stiffness: a.stiffness / s, damping: a.damping / root }
+  const value = absorberPeak(nominal, twin).value
+  const m = nominal.measure
+  return m.absolute ? value : value * root ** (m.power + (m.unbalance ? 2 : 0) - 2)
 }

@@ -127,12 +127,22 @@ function solve(a: number[], b: number[]): number[] | null {
   return z.every(Number.isFinite) ? z : null
 }
 
-/** The objective and its two highest peaks at x. */
-function peaksAt(pb: TuningProblem, x: number[]): { value: number; top: Peak[] } {
-  const maxima: Peak[] = []
-  const best = peakWith(pb, toValues(pb, x), maxima)
+/** The objective at a point and every refined local maximum there, as peakWith gives them. */
+export interface StartPeaks {
+  value: number
+  maxima: Peak[]
+}
+
+/** The objective and its three highest peaks at x (from `known` when given, x's own evaluation). */
+function peaksAt(
+  pb: TuningProblem,
+  x: number[],
+  known?: StartPeaks,
+): { value: number; top: Peak[] } {
+  const maxima: Peak[] = known ? known.maxima.slice() : []
+  const value = known ? known.value : peakWith(pb, toValues(pb, x), maxima).value
   maxima.sort((p, q) => q.value - p.value)
-  return { value: best.value, top: maxima.slice(0, 3) }
+  return { value, top: maxima.slice(0, 3) }
 }
 
 /** Newton steps in x, the likelier first: for the two highest peaks equal, for the highest alone. */
@@ -197,13 +207,18 @@ function pairStep(
  * Newton's method on the equal-peak optimality conditions from x (a start or a rough optimum).
  * @param pb the problem (the search's grid)
  * @param start x = (ln f, ln ζ_a)
+ * @param known the start's own evaluation on pb when the caller has it (not made again)
  * @returns the optimum with its value and the evaluations spent, converged: false when the method
  *   gave up (the best point reached is still returned, never worse than the start)
  */
-export function equalPeaks(pb: TuningProblem, start: number[]): Minimum & { converged: boolean } {
+export function equalPeaks(
+  pb: TuningProblem,
+  start: number[],
+  known?: StartPeaks,
+): Minimum & { converged: boolean } {
   let x = start
-  let current = peaksAt(pb, x)
-  let evaluations = 1
+  let current = peaksAt(pb, x, known)
+  let evaluations = known ? 0 : 1
   // Quadratic convergence: after a full step under 1e-8 the next would be about 1e-16, below what
   // the peaks' values can tell apart.
   let last = Infinity

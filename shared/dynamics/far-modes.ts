@@ -179,20 +179,24 @@ function build(
     (_, j) => (j % 2 ? -1 : 1) * (j === 0 || j === N ? 0.5 : 1),
   )
   const values = new Float64Array(8 * (N + 1))
-  nodes.forEach((t, j) => {
-    const w = c + h * t
-    for (const i of far) {
+  // only the components whose lanes are read (a repeated one is copied by the caller)
+  const own = Int8Array.from([0, 1, 2, 3].filter((q) => lanes.includes(2 * q)))
+  for (let j = 0; j <= N; j++) {
+    const w = c + h * (nodes[j] ?? 0)
+    for (let k = 0; k < far.length; k++) {
+      const i = far[k] ?? 0
       const wi = omega[i] ?? 0
       const dr = wi * wi - w * w
       const di = 2 * (zeta[i] ?? 0) * wi * w
       const d = dr * dr + di * di
-      for (let q = 0; q < 4; q++) {
+      for (let o = 0; o < own.length; o++) {
+        const q = own[o] ?? 0
         const pq = prod[4 * i + q] ?? 0
         values[8 * j + 2 * q] = (values[8 * j + 2 * q] ?? 0) + (pq * dr) / d
         values[8 * j + 2 * q + 1] = (values[8 * j + 2 * q + 1] ?? 0) - (pq * di) / d
       }
     }
-  })
+  }
   // Per lane, its values at the N + 1 points side by side: the evaluation below runs for every
   // exact host receptance (every refined peak of every candidate tuning).
   const L = lanes.length
@@ -200,12 +204,37 @@ function build(
   for (let l = 0; l < L; l++)
     for (let j = 0; j <= N; j++) byLane[l * (N + 1) + j] = values[8 * j + (lanes[l] ?? 0)] ?? 0
   const sum = new Float64Array(L)
+  const folded = { min, max, near, degree: N, bound: p.bound }
+  // One component (response, load and absorber on one node): its two lanes summed in plain
+  // numbers, the same operations in the same order as the general loop below.
+  const k0 = lanes[0] ?? 0
+  const k1 = lanes[1] ?? 0
+  if (L === 2)
+    return {
+      ...folded,
+      add(w, out) {
+        const t = (w - c) / h
+        let s0 = 0
+        let s1 = 0
+        let den = 0
+        for (let j = 0; j <= N; j++) {
+          const dt = t - (nodes[j] ?? 0)
+          if (dt === 0) {
+            out[k0] = (out[k0] ?? 0) + (byLane[j] ?? 0)
+            out[k1] = (out[k1] ?? 0) + (byLane[N + 1 + j] ?? 0)
+            return
+          }
+          const x = (weights[j] ?? 0) / dt
+          den += x
+          s0 += x * (byLane[j] ?? 0)
+          s1 += x * (byLane[N + 1 + j] ?? 0)
+        }
+        out[k0] = (out[k0] ?? 0) + s0 / den
+        out[k1] = (out[k1] ?? 0) + s1 / den
+      },
+    }
   return {
-    min,
-    max,
-    near,
-    degree: N,
-    bound: p.bound,
+    ...folded,
     add(w, out) {
       const t = (w - c) / h
       sum.fill(0)

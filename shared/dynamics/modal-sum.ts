@@ -44,6 +44,7 @@ export function modalSum(
   const all = Int32Array.from({ length: n }, (_, i) => i)
   const near = folded?.near ?? all
   const sums = new Float64Array(2 * Q)
+  if (Q === 1) return singleSum(lambda, damp, gap, num, near, all, folded, src)
   return (w, out) => {
     const fold = folded && w >= folded.min && w <= folded.max ? folded : null
     const modes = fold ? near : all
@@ -70,12 +71,56 @@ export function modalSum(
       out[2 * q + 1] = sums[2 * c + 1] ?? 0
     }
     fold?.add(w, out)
-    for (let q = 1; q < 4; q++) {
-      const s = src[q] ?? q
-      if (s === q) continue
-      out[2 * q] = out[2 * s] ?? 0
-      out[2 * q + 1] = out[2 * s + 1] ?? 0
-    }
+    copyRepeated(out, src)
     return true
+  }
+}
+
+/**
+ * `modalSum` for one own component (response, load and absorber on one node: the four sums are
+ * one), its sum in plain numbers: the same operations in the same order, so the same values.
+ */
+function singleSum(
+  lambda: Float64Array,
+  damp: Float64Array,
+  gap: Float64Array,
+  num: Float64Array,
+  near: Int32Array,
+  all: Int32Array,
+  folded: FoldedModes | null,
+  src: Int8Array,
+): (w: number, out: Receptance4) => boolean {
+  return (w, out) => {
+    const fold = folded && w >= folded.min && w <= folded.max ? folded : null
+    const modes = fold ? near : all
+    const w2 = w * w
+    let sr = 0
+    let si = 0
+    for (let k = 0; k < modes.length; k++) {
+      const i = modes[k] ?? 0
+      const dr = (lambda[i] ?? 0) - w2
+      const di = (damp[i] ?? 0) * w
+      if (di === 0 && Math.abs(dr) <= (gap[i] ?? 0)) return false
+      const d = dr * dr + di * di
+      const p = num[i] ?? 0
+      sr += p * (dr / d)
+      si += p * (-di / d)
+    }
+    out.fill(0)
+    out[0] = sr
+    out[1] = si
+    fold?.add(w, out)
+    copyRepeated(out, src)
+    return true
+  }
+}
+
+/** Each component that repeats another (src[q] ≠ q) copied from it. */
+function copyRepeated(out: Receptance4, src: Int8Array): void {
+  for (let q = 1; q < 4; q++) {
+    const s = src[q] ?? q
+    if (s === q) continue
+    out[2 * q] = out[2 * s] ?? 0
+    out[2 * q + 1] = out[2 * s + 1] ?? 0
   }
 }

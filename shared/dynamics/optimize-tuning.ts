@@ -1,6 +1,7 @@
 import { closedForms, type ClosedFormName, type Tuning } from './closed-forms'
-import { equalPeaks } from './equal-peaks'
+import { equalPeaks, type StartPeaks } from './equal-peaks'
 import { nelderMead, type Minimum, type NelderMeadOptions } from './nelder-mead'
+import type { Peak } from './peak'
 import { searchProblem } from './search-grid'
 import { absorberValues, meanSquareWith, peakWith, type TuningProblem } from './tuning-objective'
 
@@ -63,16 +64,19 @@ export function optimizeTuning(
   options: OptimizeOptions = {},
 ): OptimizedTuning {
   const { objective = 'hinf', zetaHost = 0, maxEvaluations = 300 } = options
-  const costOn = (p: TuningProblem) => (t: Tuning) => {
-    const a = absorberValues(p.mass, p.omegaTarget, t)
-    return objective === 'hinf' ? peakWith(p, a).value : meanSquareWith(p, a)
-  }
+  const costOn =
+    (p: TuningProblem) =>
+    (t: Tuning, maxima?: Peak[], above?: number): number => {
+      const a = absorberValues(p.mass, p.omegaTarget, t)
+      return objective === 'hinf' ? peakWith(p, a, maxima, above).value : meanSquareWith(p, a)
+    }
   const cost = costOn(pb)
   // The peak is searched for on a thinner grid and the result checked on the full one; the mean
   // square is an integral over the grid itself, so it keeps the full grid. The starts are ranked
   // on the search's grid too: the chosen one is read on the full grid only when the search's
   // optimum does not beat it plainly (a peak read on fewer samples is never higher).
-  const search = objective === 'hinf' ? costOn(searchProblem(pb)) : cost
+  const thin = objective === 'hinf' ? searchProblem(pb) : null
+  const search = thin ? costOn(thin) : cost
   const { start, count } = bestStart(search, mu, zetaHost, objective, options)
   let startFull: number | null = search === cost ? start.value : null
   const fullStart = (): number => (startFull ??= cost(start.t))
@@ -100,8 +104,7 @@ export function optimizeTuning(
   // not converge (those conditions do not describe the optimum, or the start is too far), a rough
   // simplex that only finds the basin and Newton from there; where that does not converge either,
   // the fine simplex restarted from the rough result. The lowest optimum found is kept.
-  const thin = objective === 'hinf' ? searchProblem(pb) : null
-  const direct = thin ? equalPeaks(thin, x0) : null
+  const direct = thin ? equalPeaks(thin, x0, reusable(thin, start, x0)) : null
   const first = direct?.converged ? direct : nelderMead(f, x0, { step: [0.02, 0.15], ...rough })
   const newton = thin && !direct?.converged ? equalPeaks(thin, first.x) : null
   const simplex =
@@ -128,6 +131,31 @@ export function optimizeTuning(
     : found(start.t, startValue, evaluations + spent)
 }
 
+/**
+ * The start's peaks on the search's grid, for Newton's first step, when x0 is exactly the start's
+ * tuning (ln then exp can move a ratio by a rounding, and a tiny damping is raised to the
+ * search's least): the same absorber values, so the same evaluation.
+ */
+function reusable(thin: TuningProblem, start: Candidate, x0: number[]): StartPeaks | undefined {
+  if (!start.maxima || !Number.isFinite(start.value)) return undefined
+  const a = absorberValues(thin.mass, thin.omegaTarget, start.t)
+  const b = absorberValues(thin.mass, thin.omegaTarget, {
+    frequencyRatio: Math.exp(x0[0] ?? 0),
+    dampingRatio: Math.exp(x0[1] ?? 0),
+  })
+  return a.stiffness === b.stiffness && a.damping === b.damping
+    ? { value: start.value, maxima: start.maxima }
+    : undefined
+}
+
+/** A start: its tuning, its objective and, for the peak, every refined maximum. */
+interface Candidate {
+  name: StartName
+  t: Tuning
+  value: number
+  maxima?: Peak[]
+}
+
 /** The lowest of some minima, or the fallback when there is none. */
 function lowest(minima: (Minimum | null)[], fallback: Minimum): Minimum {
   let best: Minimum | null = null
@@ -137,12 +165,12 @@ function lowest(minima: (Minimum | null)[], fallback: Minimum): Minimum {
 
 /** The best of the closed forms (and extra starts) on the full model, by the objective. */
 function bestStart(
-  cost: (t: Tuning) => number,
+  cost: (t: Tuning, maxima?: Peak[], above?: number) => number,
   mu: number,
   zetaHost: number,
   objective: 'hinf' | 'h2',
   options: OptimizeOptions,
-): { start: { name: StartName; t: Tuning; value: number }; count: number } {
+): { start: Candidate; count: number } {
   const starts: { name: StartName; tuning: Tuning }[] = [
     ...(options.starts ?? DEFAULT_STARTS[objective]).map((name) => ({
       name,
@@ -150,13 +178,26 @@ function bestStart(
     })),
     ...(options.extraStarts ?? []),
   ]
-  const candidates = starts.map(({ name, tuning: t }) => {
+  // For the peak, a later start whose samples already rise above the best value so far cannot be
+  // the best (refined, its peak could only be higher): its peaks are not refined. The start chosen
+  // and its value are the same as with every start refined.
+  let best: Candidate | null = null
+  for (const { name, tuning: t } of starts) {
     const ok = t.dampingRatio >= 0 && t.frequencyRatio > 0
-    const value = ok ? cost(t) : Infinity
-    return { name, t, value: Number.isNaN(value) ? Infinity : value }
-  })
-  const start = candidates.reduce((b, c) => (c.value < b.value ? c : b))
-  return { start, count: candidates.length }
+    const maxima: Peak[] | undefined = ok && objective === 'hinf' ? [] : undefined
+    const above: number | undefined =
+      maxima && best && Number.isFinite(best.value) ? best.value : undefined
+    const value: number = ok ? cost(t, maxima, above) : Infinity
+    const c: Candidate = {
+      name,
+      t,
+      value: Number.isNaN(value) ? Infinity : value,
+      ...(maxima && { maxima }),
+    }
+    if (!best || c.value < best.value) best = c
+  }
+  if (!best) throw new RangeError('no starting tuning')
+  return { start: best, count: starts.length }
 }
 
 /**

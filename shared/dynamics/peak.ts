@@ -16,9 +16,42 @@ export interface PeakOptions {
   tolerance?: number
   /** receives every refined local maximum, in band order */
   maxima?: Peak[]
+  /** a value the caller only needs to know the curve exceeds: when a sample already does, that
+   * sample is returned without refining anything (the peak, refined, could only be higher) */
+  above?: number
 }
 
 const GOLDEN = (3 - Math.sqrt(5)) / 2
+
+/**
+ * Relative gap under which two peaks of a curve count as equally high. An H∞ optimum balances its
+ * two peaks to 1e-10 (equal-peaks.ts), so which of them is higher turns on the last digits of the
+ * input; the peak then reported is the lower-frequency one of those within this gap of the
+ * highest, with the highest value (docs/engineering/response.md#true-peak-search). 5e-10 keeps
+ * the reported value within 1e-9 of the curve at the reported frequency.
+ */
+export const PEAK_TIE = 5e-10
+
+/** Maxima found (value, ω pairs) by the current findPeak call, in band order: reused scratch,
+ * doubled when a curve has more. */
+let found = new Float64Array(64)
+
+/**
+ * The peak to report from a curve's local maxima: the highest value, at the lowest frequency whose
+ * maximum is within PEAK_TIE of it.
+ * @param best the highest maximum (the first of equal ones)
+ * @param found the maxima as (value, ω rad/s) pairs, in ascending frequency
+ * @param length how many of its numbers to read (default all)
+ */
+export function tieBreak(best: Peak, found: ArrayLike<number>, length = found.length): Peak {
+  const floor = best.value * (1 - PEAK_TIE)
+  for (let k = 0; k < length; k += 2) {
+    const w = found[k + 1] ?? best.omega
+    if (w >= best.omega) break
+    if ((found[k] ?? -Infinity) >= floor) return { value: best.value, omega: w }
+  }
+  return best
+}
 
 /** No extra points: one empty typed array, so `extra` keeps one kind of array. */
 const NONE = new Float64Array(0)
@@ -113,7 +146,8 @@ function brentMax(
  * points merged in order) is refined between its neighbours with the exact curve, so a sharp
  * resonance is not missed between samples as long as each resonance has a sample near it (the
  * grid carries the natural frequencies for that). The band is [omega[0], omega[last]]; the peak
- * returned is a value the curve takes inside it.
+ * returned is a value the curve takes inside it. Of two or more maxima within PEAK_TIE of the
+ * highest, the lowest in frequency is reported, with the highest value (tieBreak).
  * @param omega grid, rad/s, ascending
  * @param mag curve values on the grid
  * @param exact the curve at any frequency (rad/s)
@@ -125,7 +159,7 @@ export function findPeak(
   exact: (w: number) => number,
   options: PeakOptions = {},
 ): Peak {
-  const { tolerance = 3e-9, extra = NONE, maxima } = options
+  const { tolerance = 3e-9, extra = NONE, maxima, above = Infinity } = options
   const n = omega.length
   const first = omega[0] ?? 0
   const last = omega[n - 1] ?? 0
@@ -147,10 +181,15 @@ export function findPeak(
   for (let k = 0; k < ew.length; k++) ey[k] = exact(ew[k] ?? 0)
   const total = n + ew.length
   let best: Peak = { value: -Infinity, omega: first }
+  let count = 0
   // One pass over grid and extra points merged in order, with a window of three samples
   // (previous p, current c, next); plain variables, as this runs for every candidate tuning.
   let gi = 0
   let ei = 0
+  if (above < Infinity) {
+    const over = sampleAbove(omega, mag, ew, ey, above)
+    if (over) return over
+  }
   let pw = first
   let py = -Infinity
   let cw = 0
@@ -173,6 +212,13 @@ export function findPeak(
       const lo = k > 1 ? pw : cw
       const p = hi > lo ? brentMax(exact, lo, hi, here, tolerance, py, ny) : here
       maxima?.push(p)
+      if (count + 2 > found.length) {
+        const more = new Float64Array(2 * found.length)
+        more.set(found)
+        found = more
+      }
+      found[count++] = p.value
+      found[count++] = p.omega
       if (p.value > best.value) best = p
     }
     pw = cw
@@ -180,5 +226,20 @@ export function findPeak(
     cw = nw
     cy = ny
   }
-  return best
+  return count > 2 ? tieBreak(best, found, count) : best
+}
+
+/** The first sample (grid, then extra points) above a value, or null. */
+function sampleAbove(
+  omega: Float64Array,
+  mag: Float64Array,
+  ew: Float64Array,
+  ey: Float64Array,
+  above: number,
+): Peak | null {
+  for (let k = 0; k < mag.length; k++)
+    if ((mag[k] ?? -Infinity) > above) return { value: mag[k] ?? 0, omega: omega[k] ?? 0 }
+  for (let k = 0; k < ey.length; k++)
+    if ((ey[k] ?? -Infinity) > above) return { value: ey[k] ?? 0, omega: ew[k] ?? 0 }
+  return null
 }

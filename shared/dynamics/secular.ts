@@ -117,27 +117,32 @@ function rationalStep(invK: number, a: number, b: number, x: number): number {
   return Math.abs(r1 - x) < Math.abs(r2 - x) ? r1 : r2
 }
 
-/** The root of the increasing g in the gap (a, b) of pole k, searched in (lo, hi) ⊂ (a, b) where
- * g(lo⁺) < 0 < g(hi⁻): rational steps kept inside the bracket, bisection when one leaves it,
- * until the bracket is under the tolerance. */
+/** The root of the increasing g in the gap (a, b) of pole k, searched in (from, to) ⊂ (a, b)
+ * where g(from⁺) < 0 < g(to⁻): rational steps kept inside the bracket, bisection when one leaves
+ * it, until the bracket is under the tolerance. Plain numbers in, as this runs for every candidate
+ * absorber of a search. */
 function root(
   p: Poles,
   invK: number,
   mass: number,
-  gap: { k: number; a: number; b: number },
-  bracket: [number, number],
+  k: number,
+  a: number,
+  b: number,
+  from: number,
+  to: number,
   tol: number,
 ): number {
-  let [lo, hi] = bracket
+  let lo = from
+  let hi = to
   let x = 0.5 * (lo + hi)
   for (let it = 0; it < 200; it++) {
-    split(p, mass, gap.k, x)
+    split(p, mass, k, x)
     const g = invK + parts.below + parts.above
     if (g === 0) return x
     if (g < 0) lo = x
     else hi = x
     if (hi - lo <= tol * hi) break
-    let next = rationalStep(invK, gap.a, gap.b, x)
+    let next = rationalStep(invK, a, b, x)
     // The model's steps close in on the root from one side: once a step is under the tolerance,
     // one step of half the tolerance past it (toward the root, g < 0 below it) closes the bracket.
     if (Math.abs(next - x) < 0.5 * tol * x) next = x + (g < 0 ? 0.5 : -0.5) * tol * x
@@ -189,7 +194,8 @@ export function coupledEigenvalues(
     if (!(hi > lo)) continue
     if (lo > a && secular(p, invK, mass, lo) > 0) continue
     if (hi < b && secular(p, invK, mass, hi) < 0) continue
-    out.push(root(p, invK, mass, { k, a, b }, [lo, hi], tolerance))
+    out.push(root(p, invK, mass, k, a, b, lo, hi, tolerance))
   }
-  return out.sort((x, y) => x - y)
+  // Each gap's root lies above the last one's: only the unchanged eigenvalues need sorting in.
+  return unchanged ? out.sort((x, y) => x - y) : out
 }

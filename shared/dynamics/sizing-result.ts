@@ -81,6 +81,8 @@ export interface AbsorberReport {
 export interface PeakReport {
   without: number | null
   with: number | null
+  /** where the peak is; of two peaks equal within 5e-10 the lower-frequency one
+   * (docs/engineering/response.md#true-peak-search) */
   withoutFrequencyHz: number | null
   withFrequencyHz: number | null
   /** 1 − with/without */
@@ -107,7 +109,8 @@ export interface DesignReport {
   frequencyHz: number
   /** sag of a vertical unit under its own weight, g/ω_a², m */
   staticDeflection: number
-  /** stroke per unit force at the response peak, m/N */
+  /** stroke per unit force at the response peak (at the lower of two equally high peaks), m/N; for
+   * information: every check reads maxStroke (docs/engineering/response.md#true-peak-search) */
   strokePerForceAtPeak: number | null
   /** largest stroke per unit force over the band, m/N */
   maxStrokePerForce: number | null

@@ -123,22 +123,38 @@ export function coupledFrequencies(
   let locked = lockedRoots.get(poles)
   if (!locked || locked.mass !== a.mass || locked.min !== min || locked.max !== max) {
     const roots = Float64Array.from(coupledEigenvalues(poles, a.mass, Infinity, options), Math.sqrt)
-    locked = { mass: a.mass, min, max, roots }
+    locked = { mass: a.mass, min, max, roots, free: [] }
     lockedRoots.set(poles, locked)
   }
+  // The same absorber is often asked for again (a search's optimum checked on the full grid,
+  // then its stroke): its frequencies are kept with the locked ones.
+  const known = locked.free.find((f) => f.stiffness === a.stiffness)
+  if (known) return known.out
   const free = coupledEigenvalues(poles, a.mass, a.stiffness, options)
   // A typed array, whatever the count: the peak search then always reads one kind of array.
   const out = new Float64Array(free.length + locked.roots.length)
   for (let k = 0; k < free.length; k++) out[k] = Math.sqrt(free[k] ?? 0)
   out.set(locked.roots, free.length)
+  if (locked.free.length >= KEEP_FREE) locked.free.shift()
+  locked.free.push({ stiffness: a.stiffness, out })
   return out
 }
 
+/** Absorbers (of one mass, per set of poles and band) whose frequencies are kept. */
+const KEEP_FREE = 4
+
 /** Natural frequencies of the host with the absorber locked, per set of poles, for one mass and
- * band: the last asked for (a search asks for the same again and again). */
+ * band: the last asked for (a search asks for the same again and again); with those with the last
+ * few free absorbers of that mass. The arrays are only read by their callers. */
 const lockedRoots = new WeakMap<
   Poles,
-  { mass: number; min: number; max: number; roots: Float64Array }
+  {
+    mass: number
+    min: number
+    max: number
+    roots: Float64Array
+    free: { stiffness: number; out: Float64Array }[]
+  }
 >()
 
 /**
@@ -148,12 +164,20 @@ const lockedRoots = new WeakMap<
  * is bounded (undamped-modes.ts).
  * @param pb the problem
  * @param a absorber values
+ * @param maxima receives every refined local maximum
+ * @param above when a sample exceeds it, that sample is returned unrefined (findPeak)
  */
-export function peakWith(pb: TuningProblem, a: AbsorberValues, maxima?: Peak[]): Peak {
+export function peakWith(
+  pb: TuningProblem,
+  a: AbsorberValues,
+  maxima?: Peak[],
+  above?: number,
+): Peak {
   absorberOnGrid(pb.rec, a, pb.measure, pb.mag)
   return findPeak(pb.rec.omega, pb.mag, exactMagnitude(pb.rec, a, pb.measure), {
     extra: coupledFrequencies(pb.rec, pb.poles, a),
     ...(maxima && { maxima }),
+    ...(above !== undefined && { above }),
   })
 }
 

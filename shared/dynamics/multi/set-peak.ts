@@ -1,5 +1,5 @@
 import { measured, measuredStroke } from '../measure'
-import { findPeak, type Peak } from '../peak'
+import { findPeak, tieBreak, type Peak } from '../peak'
 import type { AbsorberValues } from '../tuning-objective'
 import { gridRange } from './set-bands'
 import type { SetContext } from './set-context'
@@ -60,15 +60,18 @@ function curvePeak(ctx: SetContext, c: SetCurves, curve: number): Peak {
   const { omega } = ctx.rec
   let best: Peak = { value: -Infinity, omega: omega[0] ?? 0 }
   const values = c.grid[curve] ?? new Float64Array(0)
+  // every interval's peak (value, ω), in ascending frequency: two equal ones are reported alike
+  const found: number[] = []
   for (const band of ctx.intervals) {
     const [from, to] = gridRange(omega, band)
     if (to === from) continue
     const p = findPeak(omega.subarray(from, to), values.subarray(from, to), c.exact(curve), {
       extra: c.extra(),
     })
+    found.push(p.value, p.omega)
     if (p.value > best.value) best = p
   }
-  return best
+  return tieBreak(best, found)
 }
 
 /** The response with a set and its units' strokes over the band. */
