@@ -13,6 +13,7 @@ import { TaxRates1796400000002 } from './1796400000002-TaxRates'
 import { WorkOrderShipping1796500000000 } from './1796500000000-WorkOrderShipping'
 import { AbsorberSets1796510000000 } from './1796510000000-AbsorberSets'
 import { QuoteListColumns1796720000000 } from './1796720000000-QuoteListColumns'
+import { HandedOverIndex1796720000001 } from './1796720000001-HandedOverIndex'
 
 /** Every migration class in order; a new migration is added here too. */
 export const migrations = [
@@ -31,4 +32,5 @@ export const migrations = [
   WorkOrderShipping1796500000000,
   AbsorberSets1796510000000,
   QuoteListColumns1796720000000,
+  HandedOverIndex1796720000001,
 ]

@@ -1,7 +1,7 @@
 import { withNamedLock } from '../../db/named-lock'
 import { In, type DataSource, type EntityManager } from 'typeorm'
 import type { QuoteListQuery, QuoteState } from '../../../shared/schemas/quote'
-import { columnsOf, likeText, sqlPage, type Condition } from '../../db/list-page'
+import { columnsOf, likeText, relatedTable, sqlPage, type Condition } from '../../db/list-page'
 import type { SizingSummary } from '../../../shared/schemas/sizing'
 import { QuoteEventEntity } from './quote-event.entity'
 import { QuoteLineEntity } from './quote-line.entity'
@@ -117,8 +117,7 @@ function linesOf(quoteId: number, lines: LineWrite[]) {
 export function quotesRepository(ds: DataSource) {
   const quotes = ds.getRepository(QuoteEntity)
   const events = ds.getRepository(QuoteEventEntity)
-  const company = quotes.metadata.findRelationWithPropertyPath('company')?.inverseEntityMetadata
-  const listFrom = `${quotes.metadata.tableName} q LEFT JOIN ${company?.tableName} c ON c.id = q.companyId`
+  const listFrom = `${quotes.metadata.tableName} q LEFT JOIN ${relatedTable(quotes.metadata, 'company')} c ON c.id = q.companyId`
 
   async function transitionIn(m: EntityManager, id: number, t: Transition) {
     const current = await m.findOneBy(QuoteEntity, { id, state: In([...t.from]) })
