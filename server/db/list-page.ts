@@ -39,6 +39,18 @@ export interface Condition {
   params: unknown[]
 }
 
+/** Rows where any of `columns` contains `text` (likeText): `matching(q, ['s.name', 'c.name'])`. */
+export function matching(text: string, columns: string[]): Condition {
+  const like = likeText(text)
+  return { sql: columns.map((c) => `${c} LIKE ?`).join(' OR '), params: columns.map(() => like) }
+}
+
+/** `<expression> IN (…)` or `NOT IN (…)` over `values` (at least one). */
+export const among = (expression: string, values: readonly unknown[], not = false): Condition => ({
+  sql: `${expression} ${not ? 'NOT IN' : 'IN'} (${values.map(() => '?').join(', ')})`,
+  params: [...values],
+})
+
 export interface SqlPageRequest {
   /** what a row carries, each `<expression> AS <name>` */
   columns: string[]

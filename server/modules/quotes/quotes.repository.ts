@@ -1,7 +1,7 @@
 import { withNamedLock } from '../../db/named-lock'
 import { In, type DataSource, type EntityManager } from 'typeorm'
 import type { QuoteListQuery, QuoteState } from '../../../shared/schemas/quote'
-import { columnsOf, likeText, relatedTable, sqlPage, type Condition } from '../../db/list-page'
+import { columnsOf, matching, relatedTable, sqlPage, type Condition } from '../../db/list-page'
 import type { SizingSummary } from '../../../shared/schemas/sizing'
 import { QuoteEventEntity } from './quote-event.entity'
 import { QuoteLineEntity } from './quote-line.entity'
@@ -69,10 +69,7 @@ function listFilters(q: ListFilter): Condition[] {
   if (q.companyId) where.push({ sql: 'q.companyId = ?', params: [q.companyId] })
   if (q.from) where.push({ sql: 'q.createdAt >= ?', params: [`${q.from} 00:00:00`] })
   if (q.to) where.push({ sql: 'q.createdAt < DATE_ADD(?, INTERVAL 1 DAY)', params: [q.to] })
-  if (q.search) {
-    const like = likeText(q.search)
-    where.push({ sql: 'q.number LIKE ? OR c.name LIKE ?', params: [like, like] })
-  }
+  if (q.search) where.push(matching(q.search, ['q.number', 'c.name']))
   return where
 }
 

@@ -2,7 +2,7 @@ import type { DataSource } from 'typeorm'
 import type { Site, SiteInput, SiteListItem, SiteListQuery } from '../../../shared/schemas/site'
 import {
   columnsOf,
-  likeText,
+  matching,
   relatedTable,
   sqlPage,
   type Condition,
@@ -65,13 +65,7 @@ const LIST_COLUMNS = [
 /** The list's filters as conditions on `s` (sites) and `company`. */
 function listFilters(q: SiteListQuery): Condition[] {
   const where: Condition[] = []
-  if (q.search) {
-    const like = likeText(q.search)
-    where.push({
-      sql: 's.name LIKE ? OR s.address LIKE ? OR company.name LIKE ?',
-      params: [like, like, like],
-    })
-  }
+  if (q.search) where.push(matching(q.search, ['s.name', 's.address', 'company.name']))
   if (q.structureKind) where.push({ sql: 's.structureKind = ?', params: [q.structureKind] })
   if (q.companyId) where.push({ sql: 's.companyId = ?', params: [q.companyId] })
   return where

@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm'
-import { columnsOf, likeText, sqlPage, type Condition } from '../../db/list-page'
+import { among, columnsOf, matching, sqlPage, type Condition } from '../../db/list-page'
 import type { HandedOverSizing, ReadyQuery } from '../../../shared/schemas/quote-flow'
 import { sizingsListFrom } from './sizings.repository'
 
@@ -56,18 +56,8 @@ const COLUMNS = [
 
 function filters(q: ReadyQuery & { exclude: readonly number[] }): Condition[] {
   const where: Condition[] = [{ sql: 's.state = ?', params: ['submitted'] }]
-  if (q.exclude.length)
-    where.push({
-      sql: `s.id NOT IN (${q.exclude.map(() => '?').join(', ')})`,
-      params: [...q.exclude],
-    })
-  if (q.search) {
-    const like = likeText(q.search)
-    where.push({
-      sql: 's.title LIKE ? OR site.name LIKE ? OR company.name LIKE ?',
-      params: [like, like, like],
-    })
-  }
+  if (q.exclude.length) where.push(among('s.id', q.exclude, true))
+  if (q.search) where.push(matching(q.search, ['s.title', 'site.name', 'company.name']))
   return where
 }
 

@@ -8,7 +8,7 @@ import type {
 import type { SizingEvaluation } from '../../../shared/sizing/evaluate-sizing'
 import {
   columnsOf,
-  likeText,
+  matching,
   related,
   relatedTable,
   sqlPage,
@@ -112,13 +112,7 @@ function listFilters(q: ListFilter): Condition[] {
       sql: 's.ownerId = ? OR s.state = ?',
       params: [q.visibleTo.ownerId, q.visibleTo.orState ?? 'submitted'],
     })
-  if (q.search) {
-    const like = likeText(q.search)
-    where.push({
-      sql: 's.title LIKE ? OR site.name LIKE ? OR company.name LIKE ?',
-      params: [like, like, like],
-    })
-  }
+  if (q.search) where.push(matching(q.search, ['s.title', 'site.name', 'company.name']))
   return where
 }
 
