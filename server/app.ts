@@ -3,12 +3,12 @@ import { existsSync } from 'node:fs'
 import cookieParser from 'cookie-parser'
 import express, { type Express } from 'express'
 import helmet from 'helmet'
-import { pinoHttp } from 'pino-http'
 import { ApiRegistry } from './http/api-registry'
+import { byResource } from './http/by-resource'
 import { authenticate } from './middleware/authenticate'
 import { errorHandler, notFoundHandler } from './middleware/error-handler'
 import { noStore } from './middleware/no-store'
-import { requestId } from './middleware/request-id'
+import { requestLog } from './middleware/request-log'
 import { refuseCrossSite } from './middleware/same-origin'
 import { auditRouter } from './modules/audit/audit.router'
 import { authRouter } from './modules/auth/auth.router'
@@ -51,21 +51,9 @@ function expressApp(deps: AppDeps, services: Services): Express {
   app.set('trust proxy', config.TRUST_PROXY)
   app.disable('x-powered-by')
   const https = config.publicUrl.startsWith('https:')
-  app.use(
-    pinoHttp({
-      logger: deps.logger,
-      genReqId: requestId,
-      autoLogging: config.NODE_ENV !== 'test',
-      serializers: {
-        req: (r: { id: string; method: string; url: string }) => ({
-          id: r.id,
-          method: r.method,
-          url: r.url,
-        }),
-        res: (r: { statusCode: number }) => ({ status: r.statusCode }),
-      },
-    }),
-  )
+  // API answers are never stored (noStore), so an ETag (a hash of every body) serves no one
+  app.set('etag', false)
+  app.use(requestLog(deps.logger, config.NODE_ENV !== 'test'))
   app.use(
     helmet({
       hsts: https,
@@ -90,25 +78,31 @@ function expressApp(deps: AppDeps, services: Services): Express {
   )
   app.use('/api', express.json({ limit: '2mb' }))
 
-  // every resource's routes (each router declares its access, validation and OpenAPI entries)
+  // every resource's routes (each router declares its access, validation and OpenAPI entries),
+  // looked up by the path's resource
   app.use(
-    healthRouter(api, deps.dataSource, VERSION),
-    authRouter(api, services.auth, { tokenTtlHours: config.TOKEN_TTL_HOURS, secureCookie: https }),
-    usersRouter(api, services.usersAdmin),
-    companiesRouter(api, services.companies),
-    sitesRouter(api, services.sites),
-    modelsRouter(api, services.models),
-    sizingsRouter(api, services.sizings),
-    measurementsRouter(api, services.measurements),
-    catalogueRouter(api, services.catalogue, services.sizingSource),
-    customersRouter(api, services.customers),
-    quotesFlowRouter(api, services.quotes),
-    quotesRouter(api, services.quotes),
-    taxRouter(api, services.tax),
-    paymentsRouter(api, services.payments),
-    orderDocumentsRouter(api, services.orders),
-    productionRouter(api, services.production),
-    auditRouter(api, services.audit),
+    byResource([
+      healthRouter(api, deps.dataSource, VERSION),
+      authRouter(api, services.auth, {
+        tokenTtlHours: config.TOKEN_TTL_HOURS,
+        secureCookie: https,
+      }),
+      usersRouter(api, services.usersAdmin),
+      companiesRouter(api, services.companies),
+      sitesRouter(api, services.sites),
+      modelsRouter(api, services.models),
+      sizingsRouter(api, services.sizings),
+      measurementsRouter(api, services.measurements),
+      catalogueRouter(api, services.catalogue, services.sizingSource),
+      customersRouter(api, services.customers),
+      quotesFlowRouter(api, services.quotes),
+      quotesRouter(api, services.quotes),
+      taxRouter(api, services.tax),
+      paymentsRouter(api, services.payments),
+      orderDocumentsRouter(api, services.orders),
+      productionRouter(api, services.production),
+      auditRouter(api, services.audit),
+    ]),
   )
 
   app.use('/api', notFoundHandler)

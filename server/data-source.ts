@@ -20,7 +20,9 @@ export function createDataSource(db: DbConfig): DataSource {
     synchronize: false,
     migrationsRun: false,
     logging: ['error'],
-    extra: { connectionLimit: 10 },
+    // trace: false — mysql2 would capture a stack trace on every query to decorate a failed
+    // one's error; TypeORM wraps every failure in its own error with its own stack anyway.
+    extra: { connectionLimit: 10, trace: false },
   })
 }
 

@@ -1,4 +1,4 @@
-import type { DataSource, ObjectLiteral, SelectQueryBuilder } from 'typeorm'
+import type { DataSource, EntityMetadata } from 'typeorm'
 
 /** One page of a list and the total matching its filters. */
 export interface Page<T> {
@@ -19,38 +19,19 @@ export const columnsOf = (alias: string, names: string) =>
     .filter(Boolean)
     .map((name) => `${alias}.${name} AS ${name}`)
 
-export interface RawPageRequest {
-  /** what a row carries, each `<expression> AS <name>` */
-  columns: string[]
-  /** the moment the list shows newest first; rows of one moment go newest id first */
-  newestFirst: string
-  /** the list query's limit and offset */
-  page: { limit?: number; offset?: number }
-  /** rows per page when the query gives no limit; without one, every row */
-  defaultLimit?: number
+/**
+ * The entity a relation of an entity leads to (a quote's company, a site's owner), for a
+ * hand-written list statement that joins its table without naming another module's entity.
+ */
+export function related(metadata: EntityMetadata, relation: string): EntityMetadata {
+  const target = metadata.findRelationWithPropertyPath(relation)?.inverseEntityMetadata
+  if (!target) throw new Error(`${metadata.name} has no relation ${relation}`)
+  return target
 }
 
-/**
- * The total matching a query's filters and one page of its rows as raw objects, newest first:
- * the shape of every paged list whose rows are columns picked from joined tables.
- */
-export async function rawPage<R>(
-  qb: SelectQueryBuilder<ObjectLiteral>,
-  { columns, newestFirst, page, defaultLimit }: RawPageRequest,
-): Promise<{ total: number; rows: R[] }> {
-  // the count and the page on two connections at once: a list answers in one round trip's time
-  const [total, rows] = await Promise.all([
-    qb.clone().getCount(),
-    qb
-      .select(columns)
-      .orderBy(newestFirst, 'DESC')
-      .addOrderBy(`${qb.alias}.id`, 'DESC')
-      .limit(page.limit ?? defaultLimit)
-      .offset(page.offset)
-      .getRawMany<R>(),
-  ])
-  return { total, rows }
-}
+/** The table of `related(metadata, relation)`. */
+export const relatedTable = (metadata: EntityMetadata, relation: string) =>
+  related(metadata, relation).tableName
 
 /** A condition of a hand-written list query: SQL with `?` placeholders and their values. */
 export interface Condition {
@@ -58,7 +39,25 @@ export interface Condition {
   params: unknown[]
 }
 
-export interface SqlPageRequest extends Omit<RawPageRequest, 'newestFirst'> {
+/** Rows where any of `columns` contains `text` (likeText): `matching(q, ['s.name', 'c.name'])`. */
+export function matching(text: string, columns: string[]): Condition {
+  const like = likeText(text)
+  return { sql: columns.map((c) => `${c} LIKE ?`).join(' OR '), params: columns.map(() => like) }
+}
+
+/** `<expression> IN (…)` or `NOT IN (…)` over `values` (at least one). */
+export const among = (expression: string, values: readonly unknown[], not = false): Condition => ({
+  sql: `${expression} ${not ? 'NOT IN' : 'IN'} (${values.map(() => '?').join(', ')})`,
+  params: [...values],
+})
+
+export interface SqlPageRequest {
+  /** what a row carries, each `<expression> AS <name>` */
+  columns: string[]
+  /** the list query's limit and offset */
+  page: { limit?: number; offset?: number }
+  /** rows per page when the query gives no limit; without one, every row */
+  defaultLimit?: number
   /** `FROM … JOIN …`, the rows' tables with their aliases */
   from: string
   /** what rows must meet, all of them */
@@ -76,11 +75,11 @@ export const TOTAL = 'pageMatchingTotal'
 const ALL_ROWS = '18446744073709551615'
 
 /**
- * The same as `rawPage` in one plain statement on one connection: the total rides along each
- * row as a subquery MariaDB runs once, so a list costs one round trip and no query building.
- * Only a page past the end, which has no row to carry the total, asks for the count apart.
- * Each row keeps that column (TOTAL) beside its own.
- * For the busiest lists, whose filters are few enough to write out.
+ * The total matching a list's filters and one page of its rows as raw objects, newest first, in
+ * one plain statement on one connection: the total rides along each row as a subquery MariaDB
+ * runs once, so a list costs one round trip and no query building. Only a page past the end,
+ * which has no row to carry the total, asks for the count apart. Each row keeps that column
+ * (TOTAL) beside its own. Every list whose rows are columns picked from joined tables.
  */
 export async function sqlPage<R>(
   ds: DataSource,

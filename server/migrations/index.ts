@@ -12,6 +12,8 @@ import { RecordChannels1796400000001 } from './1796400000001-RecordChannels'
 import { TaxRates1796400000002 } from './1796400000002-TaxRates'
 import { WorkOrderShipping1796500000000 } from './1796500000000-WorkOrderShipping'
 import { AbsorberSets1796510000000 } from './1796510000000-AbsorberSets'
+import { QuoteListColumns1796720000000 } from './1796720000000-QuoteListColumns'
+import { HandedOverIndex1796720000001 } from './1796720000001-HandedOverIndex'
 
 /** Every migration class in order; a new migration is added here too. */
 export const migrations = [
@@ -29,4 +31,6 @@ export const migrations = [
   TaxRates1796400000002,
   WorkOrderShipping1796500000000,
   AbsorberSets1796510000000,
+  QuoteListColumns1796720000000,
+  HandedOverIndex1796720000001,
 ]

@@ -4,8 +4,8 @@ import { daysFromNow, quoteDesk } from './quotes-rig'
 
 const desk = quoteDesk()
 
-/** A draft for a fresh customer, valid for `days` more days. */
-async function draft(days = 30) {
+/** A draft for a fresh customer, valid for `days` more days, and the sizing it froze. */
+async function draftWithSizing(days = 30) {
   const { company, contact, sizing } = await desk.customerSizing()
   const res = await desk.sales.post('/api/quotes').send({
     sizingId: sizing.id,
@@ -15,10 +15,27 @@ async function draft(days = 30) {
     lines: [{ kind: 'unit', productLineId: desk.ids.unit('FLR-S'), quantity: 1 }],
   })
   expect(res.status).toBe(201)
-  return { quote: res.body as { id: number; number: string }, company }
+  return { quote: res.body as { id: number; number: string }, company, sizing }
+}
+
+/** A draft for a fresh customer, valid for `days` more days. */
+const draft = async (days = 30) => {
+  const { quote, company } = await draftWithSizing(days)
+  return { quote, company }
 }
 
 const ids = (body: { id: number }[]) => body.map((q) => q.id)
+
+type Listed = { id: number; revision: number; latest: boolean; sizingTitle: string; state: string }
+
+/** The list rows of one quote number, oldest revision first, as `agent` reads them. */
+async function revisionsListed(agent: typeof desk.sales, number: string) {
+  const res = await agent.get('/api/quotes').query({ search: number })
+  expect(res.status).toBe(200)
+  return (res.body as Listed[])
+    .map(({ revision, latest, sizingTitle, state }) => ({ revision, latest, sizingTitle, state }))
+    .sort((a, b) => a.revision - b.revision)
+}
 
 describe('the quotes list', () => {
   it("finds a quote by its number or by its customer's name, reading % and _ as plain characters", async () => {
@@ -81,5 +98,54 @@ describe('the quotes list', () => {
     await desk.sales.post(`/api/quotes/${quote.id}/send`).expect(200)
     const after = await customer.get('/api/quotes').query({ companyId: other.company.id })
     expect(ids(after.body)).toEqual([quote.id])
+  })
+
+  it('marks only the newest revision of a number as latest, through a revision, its sending and its acceptance, with the sizing each froze', async () => {
+    const { quote, company, sizing } = await draftWithSizing()
+    const bystander = await draft() // another number: its only revision stays its latest
+    await desk.sales.post(`/api/quotes/${quote.id}/send`).expect(200)
+    desk.sizings.put({ ...sizing, revision: 2, title: 'Stair core, re-measured' })
+    const rev2 = await desk.sales.post(`/api/quotes/${quote.id}/revise`).expect(201)
+    expect(await revisionsListed(desk.sales, quote.number)).toEqual([
+      { revision: 1, latest: false, sizingTitle: sizing.title, state: 'sent' },
+      { revision: 2, latest: true, sizingTitle: 'Stair core, re-measured', state: 'draft' },
+    ])
+
+    await desk.sales.post(`/api/quotes/${rev2.body.id}/send`).expect(200)
+    const { agent: customer } = await signedIn(desk.t, 'customer', { companyId: company.id })
+    await customer
+      .post(`/api/quotes/${rev2.body.id}/accept`)
+      .send({ name: 'Ilse Brandt', purchaseOrder: 'PO-7731' })
+      .expect(200)
+    const after = [
+      { revision: 1, latest: false, sizingTitle: sizing.title, state: 'withdrawn' },
+      { revision: 2, latest: true, sizingTitle: 'Stair core, re-measured', state: 'accepted' },
+    ]
+    expect(await revisionsListed(desk.sales, quote.number)).toEqual(after)
+    // the customer sees the accepted revision, marked latest, as sales do
+    expect(await revisionsListed(customer, quote.number)).toEqual([after[1]])
+    expect((await desk.sales.get(`/api/quotes/${quote.id}`)).body.latest).toBe(false)
+    expect((await desk.sales.get(`/api/quotes/${rev2.body.id}`)).body.latest).toBe(true)
+    expect(await revisionsListed(desk.sales, bystander.quote.number)).toMatchObject([
+      { revision: 1, latest: true },
+    ])
+  })
+
+  it('lists the title of the sizing a draft froze, also after the draft is changed', async () => {
+    const { quote, sizing } = await draftWithSizing()
+    const changed = await desk.sales.put(`/api/quotes/${quote.id}`).send({
+      validUntil: daysFromNow(desk.t, 20),
+      terms: 'Delivery in six weeks.',
+      lines: [{ kind: 'unit', productLineId: desk.ids.unit('FLR-S'), quantity: 2 }],
+    })
+    expect(changed.status).toBe(200)
+    const [row] = (await desk.sales.get('/api/quotes').query({ search: quote.number })).body
+    expect(row).toMatchObject({
+      id: quote.id,
+      sizingTitle: sizing.title,
+      siteName: sizing.siteName,
+      total: changed.body.total,
+      latest: true,
+    })
   })
 })

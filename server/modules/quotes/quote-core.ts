@@ -90,7 +90,7 @@ export function quotesCore(deps: QuotesDeps) {
 
   /** The customer's projection of a quote: no supplier history, no staff specifics. */
   async function customerView(r: QuoteRow): Promise<CustomerQuote> {
-    return toCustomerQuote(quoteOf(r, (await repo.latestRevision(r.number)) === r.revision, []))
+    return toCustomerQuote(quoteOf(r, []))
   }
 
   /** The supplier's full view, or for a customer the customer projection. */
@@ -101,7 +101,7 @@ export function quotesCore(deps: QuotesDeps) {
 
   /** The supplier's full view, for internal use (the work order's frozen specification). */
   async function fullView(r: QuoteRow): Promise<Quote> {
-    return quoteOf(r, (await repo.latestRevision(r.number)) === r.revision, await repo.events(r.id))
+    return quoteOf(r, await repo.events(r.id))
   }
 
   /** A submitted sizing the user may read: a draft stays its engineer's (404 to others). */

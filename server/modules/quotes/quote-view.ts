@@ -8,7 +8,7 @@ export const referenceOf = (number: string, revision: number) =>
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null)
 
-export function summaryOf(r: QuoteRow, latest: boolean): QuoteSummary {
+export function summaryOf(r: QuoteRow): QuoteSummary {
   return {
     id: r.id,
     number: r.number,
@@ -25,7 +25,7 @@ export function summaryOf(r: QuoteRow, latest: boolean): QuoteSummary {
     validUntil: r.validUntil,
     createdAt: r.createdAt.toISOString(),
     sentAt: iso(r.sentAt),
-    latest,
+    latest: r.latest,
   }
 }
 
@@ -39,22 +39,22 @@ export function listSummary(r: QuoteListRow): QuoteSummary {
     reference: referenceOf(r.number, revision),
     state: r.state,
     sizingId: Number(r.sizingId),
-    sizingTitle: r.sizingTitle ?? '',
+    sizingTitle: r.sizingTitle,
     companyId: Number(r.companyId),
     companyName: r.companyName ?? '',
-    siteName: r.siteName ?? '',
+    siteName: r.siteName,
     currency: r.currency as QuoteSummary['currency'],
     total: Number(r.total),
     validUntil: r.validUntil,
     createdAt: new Date(r.createdAt).toISOString(),
     sentAt: r.sentAt ? new Date(r.sentAt).toISOString() : null,
-    latest: Number(r.latest) === revision,
+    latest: Number(r.latest) === 1,
   }
 }
 
-export function quoteOf(r: QuoteRow, latest: boolean, events: QuoteEvent[]): Quote {
+export function quoteOf(r: QuoteRow, events: QuoteEvent[]): Quote {
   return {
-    ...summaryOf(r, latest),
+    ...summaryOf(r),
     contactId: r.contactId,
     contactName: r.contactName,
     contactEmail: r.contactEmail,

@@ -7,7 +7,7 @@ import type { CompanyEntity } from '../companies/company.entity'
 import type { ContactEntity } from '../customers/contact.entity'
 import type { UserEntity } from '../users/user.entity'
 import type { QuoteLineEntity } from './quote-line.entity'
-import { IntColumn, JsonColumn, MomentColumn, VarcharColumn } from '../../db/columns'
+import { BooleanColumn, IntColumn, JsonColumn, MomentColumn, VarcharColumn } from '../../db/columns'
 import { ReferenceTo } from '../../db/reference-column'
 
 /** One revision of a numbered quote; a sent revision is never changed, only superseded. */
@@ -23,11 +23,18 @@ export class QuoteEntity extends NumberedTrackedRecord {
   @IntColumn() revision: number
   @VarcharColumn(16) state: QuoteState
 
+  /** Whether this is its number's latest revision: set when it is made, cleared by the next. */
+  @BooleanColumn() latest: boolean
+
   /** The lead's sizings live elsewhere (or in memory in tests): a soft reference. */
   @IntColumn() sizingId: number
 
   /** The sizing summary frozen when this revision was made. */
   @JsonColumn() sizing: SizingSummary
+
+  /** The frozen sizing's title and site name as the list shows them (copies, kept with it). */
+  @VarcharColumn(160) sizingTitle: string
+  @VarcharColumn(160) siteName: string
 
   declare companyId: number
   @ReferenceTo('CompanyEntity', { onDelete: 'RESTRICT' }) company: Relation<CompanyEntity>

@@ -1,7 +1,8 @@
 import { withNamedLock } from '../../db/named-lock'
 import { In, type DataSource, type EntityManager } from 'typeorm'
 import type { QuoteListQuery, QuoteState } from '../../../shared/schemas/quote'
-import { columnsOf, likeText, sqlPage, type Condition } from '../../db/list-page'
+import { columnsOf, matching, relatedTable, sqlPage, type Condition } from '../../db/list-page'
+import type { SizingSummary } from '../../../shared/schemas/sizing'
 import { QuoteEventEntity } from './quote-event.entity'
 import { QuoteLineEntity } from './quote-line.entity'
 import { QuoteEntity } from './quote.entity'
@@ -45,18 +46,15 @@ const LIST_STATE =
   "(CASE WHEN q.state = 'sent' AND q.validUntil < ? THEN 'expired' ELSE q.state END)"
 
 /**
- * What a list row carries: only the columns a list shows (the frozen sizing's title and site,
- * not the whole summary) and whether each is its number's latest revision. The one placeholder
- * is today (LIST_STATE).
+ * What a list row carries: only the columns a list shows, all stored on the row itself (the
+ * frozen sizing's title and site, and whether it is its number's latest revision, are kept
+ * beside it when it is written). The one placeholder is today (LIST_STATE).
  */
 const LIST_COLUMNS = [
   ...columnsOf('q', 'id number revision sizingId companyId currency total validUntil'),
-  ...columnsOf('q', 'createdAt sentAt'),
+  ...columnsOf('q', 'createdAt sentAt sizingTitle siteName latest'),
   `${LIST_STATE} AS state`,
-  "JSON_VALUE(q.sizing, '$.title') AS sizingTitle",
-  "JSON_VALUE(q.sizing, '$.siteName') AS siteName",
   'c.name AS companyName',
-  '(SELECT MAX(r.revision) FROM quotes r WHERE r.number = q.number) AS latest',
 ]
 
 type ListFilter = QuoteListQuery & { states?: readonly QuoteState[]; today: string }
@@ -71,10 +69,7 @@ function listFilters(q: ListFilter): Condition[] {
   if (q.companyId) where.push({ sql: 'q.companyId = ?', params: [q.companyId] })
   if (q.from) where.push({ sql: 'q.createdAt >= ?', params: [`${q.from} 00:00:00`] })
   if (q.to) where.push({ sql: 'q.createdAt < DATE_ADD(?, INTERVAL 1 DAY)', params: [q.to] })
-  if (q.search) {
-    const like = likeText(q.search)
-    where.push({ sql: 'q.number LIKE ? OR c.name LIKE ?', params: [like, like] })
-  }
+  if (q.search) where.push(matching(q.search, ['q.number', 'c.name']))
   return where
 }
 
@@ -88,8 +83,8 @@ export interface QuoteListRow {
   revision: number
   state: QuoteState
   sizingId: number
-  sizingTitle: string | null
-  siteName: string | null
+  sizingTitle: string
+  siteName: string
   companyId: number
   companyName: string | null
   currency: string
@@ -97,8 +92,15 @@ export interface QuoteListRow {
   validUntil: string
   createdAt: Date
   sentAt: Date | null
+  /** 1 on its number's latest revision */
   latest: number
 }
+
+/** The copies of the frozen sizing a list row shows, stored with it. */
+const listedOf = (sizing: SizingSummary) => ({
+  sizingTitle: sizing.title,
+  siteName: sizing.siteName,
+})
 
 function linesOf(quoteId: number, lines: LineWrite[]) {
   return lines.map((l, i) => ({
@@ -112,8 +114,7 @@ function linesOf(quoteId: number, lines: LineWrite[]) {
 export function quotesRepository(ds: DataSource) {
   const quotes = ds.getRepository(QuoteEntity)
   const events = ds.getRepository(QuoteEventEntity)
-  const company = quotes.metadata.findRelationWithPropertyPath('company')?.inverseEntityMetadata
-  const listFrom = `${quotes.metadata.tableName} q LEFT JOIN ${company?.tableName} c ON c.id = q.companyId`
+  const listFrom = `${quotes.metadata.tableName} q LEFT JOIN ${relatedTable(quotes.metadata, 'company')} c ON c.id = q.companyId`
 
   async function transitionIn(m: EntityManager, id: number, t: Transition) {
     const current = await m.findOneBy(QuoteEntity, { id, state: In([...t.from]) })
@@ -182,11 +183,31 @@ export function quotesRepository(ds: DataSource) {
     async revisionsOf(number: string) {
       return quotes.find({ where: { number }, select: { id: true, revision: true, state: true } })
     },
-    /** Inserts a new revision with its lines and its creation event, in one transaction. */
+    /**
+     * Inserts a new revision with its lines and its creation event, in one transaction; it
+     * becomes its number's latest revision, and the one before stops being it (a revision made
+     * at the same time under the same number fails on the unique number and revision, undoing
+     * this too).
+     */
     async insert(q: QuoteWrite, actorId: number, at: Date) {
       return ds.transaction(async (m) => {
         const { lines, ...head } = q
-        const saved = await m.save(QuoteEntity, m.create(QuoteEntity, { ...head, state: 'draft' }))
+        await m
+          .createQueryBuilder()
+          .update(QuoteEntity)
+          // a flag, not a change of the revision: its last-change moment stays
+          .set({ latest: false, updatedAt: () => 'updatedAt' })
+          .where('number = :number AND latest = 1', { number: q.number })
+          .execute()
+        const saved = await m.save(
+          QuoteEntity,
+          m.create(QuoteEntity, {
+            ...head,
+            ...listedOf(head.sizing),
+            state: 'draft',
+            latest: true,
+          }),
+        )
         await m.insert(QuoteLineEntity, linesOf(saved.id, lines))
         await m.insert(QuoteEventEntity, {
           quoteId: saved.id,
@@ -203,7 +224,11 @@ export function quotesRepository(ds: DataSource) {
     async replaceDraft(id: number, q: Omit<QuoteWrite, 'number' | 'year' | 'seq' | 'revision'>) {
       return ds.transaction(async (m) => {
         const { lines, ...head } = q
-        const res = await m.update(QuoteEntity, { id, state: 'draft' }, head)
+        const res = await m.update(
+          QuoteEntity,
+          { id, state: 'draft' },
+          { ...head, ...listedOf(head.sizing) },
+        )
         if (res.affected !== 1) return false
         await m.delete(QuoteLineEntity, { quoteId: id })
         await m.insert(QuoteLineEntity, linesOf(id, lines))

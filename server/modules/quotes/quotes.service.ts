@@ -219,7 +219,7 @@ export function quotesService(deps: QuoteFlowDeps) {
         patch: { paidAt: at },
       })
       if (!ok) throw conflict('quote-state', `A ${r.state} quote cannot be marked paid.`)
-      return summaryOf((await repo.findById(quoteId)) as QuoteRow, true)
+      return summaryOf((await repo.findById(quoteId)) as QuoteRow)
     },
 
     /** accepted → paid inside the payment's transaction; false from any other state. */

@@ -1,6 +1,13 @@
 import type { DataSource } from 'typeorm'
 import type { Site, SiteInput, SiteListItem, SiteListQuery } from '../../../shared/schemas/site'
-import { columnsOf, likeText, rawPage, type Page } from '../../db/list-page'
+import {
+  columnsOf,
+  matching,
+  relatedTable,
+  sqlPage,
+  type Condition,
+  type Page,
+} from '../../db/list-page'
 import { SitePhotoEntity } from './site-photo.entity'
 import { SiteEntity } from './site.entity'
 
@@ -35,20 +42,44 @@ interface SiteListRow extends Omit<SiteListItem, 'photoCount' | 'updatedAt'> {
 }
 
 const toListItem = (r: SiteListRow): SiteListItem => ({
-  ...r,
   id: Number(r.id),
+  name: r.name,
   companyId: Number(r.companyId),
   companyName: r.companyName ?? '',
+  address: r.address,
+  structureKind: r.structureKind,
   ownerId: Number(r.ownerId),
   ownerName: r.ownerName ?? '',
   photoCount: Number(r.photoCount),
   updatedAt: new Date(r.updatedAt).toISOString(),
 })
 
+/** What a sites list row carries: a photo count, not the photos. */
+const LIST_COLUMNS = [
+  ...columnsOf('s', 'id name companyId address structureKind ownerId updatedAt'),
+  'company.name AS companyName',
+  'owner.name AS ownerName',
+  '(SELECT COUNT(*) FROM site_photos p WHERE p.siteId = s.id) AS photoCount',
+]
+
+/** The list's filters as conditions on `s` (sites) and `company`. */
+function listFilters(q: SiteListQuery): Condition[] {
+  const where: Condition[] = []
+  if (q.search) where.push(matching(q.search, ['s.name', 's.address', 'company.name']))
+  if (q.structureKind) where.push({ sql: 's.structureKind = ?', params: [q.structureKind] })
+  if (q.companyId) where.push({ sql: 's.companyId = ?', params: [q.companyId] })
+  return where
+}
+
 export function sitesRepository(ds: DataSource) {
   const repo = ds.getRepository(SiteEntity)
   const photos = ds.getRepository(SitePhotoEntity)
   const relations = { company: true, owner: true, photos: true } as const
+  const { metadata } = repo
+  const listFrom =
+    `${metadata.tableName} s` +
+    ` LEFT JOIN ${relatedTable(metadata, 'company')} company ON company.id = s.companyId` +
+    ` LEFT JOIN ${relatedTable(metadata, 'owner')} owner ON owner.id = s.ownerId`
   return {
     async findById(id: number) {
       const s = await repo.findOne({ where: { id }, relations })
@@ -59,25 +90,11 @@ export function sitesRepository(ds: DataSource) {
      * not the photos), and the total matching the filters.
      */
     async page(q: SiteListQuery): Promise<Page<SiteListItem>> {
-      const qb = repo
-        .createQueryBuilder('s')
-        .leftJoin('s.company', 'company')
-        .leftJoin('s.owner', 'owner')
-      if (q.search) {
-        qb.andWhere('(s.name LIKE :q OR s.address LIKE :q OR company.name LIKE :q)', {
-          q: likeText(q.search),
-        })
-      }
-      if (q.structureKind) qb.andWhere('s.structureKind = :k', { k: q.structureKind })
-      if (q.companyId) qb.andWhere('s.companyId = :c', { c: q.companyId })
-      const { total, rows } = await rawPage<SiteListRow>(qb, {
-        columns: [
-          ...columnsOf('s', 'id name companyId address structureKind ownerId updatedAt'),
-          'company.name AS companyName',
-          'owner.name AS ownerName',
-          '(SELECT COUNT(*) FROM site_photos p WHERE p.siteId = s.id) AS photoCount',
-        ],
-        newestFirst: 's.updatedAt',
+      const { total, rows } = await sqlPage<SiteListRow>(ds, {
+        from: listFrom,
+        where: listFilters(q),
+        columns: LIST_COLUMNS,
+        newestFirst: ['s.updatedAt', 's.id'],
         page: q,
       })
       return { total, items: rows.map(toListItem) }

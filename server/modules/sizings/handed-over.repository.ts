@@ -1,8 +1,7 @@
 import type { DataSource } from 'typeorm'
-import { columnsOf, likeText, rawPage } from '../../db/list-page'
+import { among, columnsOf, matching, sqlPage, type Condition } from '../../db/list-page'
 import type { HandedOverSizing, ReadyQuery } from '../../../shared/schemas/quote-flow'
-import { SizingRevisionEntity } from './sizing-revision.entity'
-import { SizingEntity } from './sizing.entity'
+import { sizingsListFrom } from './sizings.repository'
 
 interface Raw {
   id: number
@@ -43,34 +42,37 @@ function toItem(r: Raw): HandedOverSizing {
  * Submitted sizings, most recently handed over first, one page at a time, leaving out the ids
  * given (those the quotes module has a live quote for).
  */
+const COLUMNS = [
+  ...columnsOf('s', 'id title submittedAt'),
+  's.currentRevision AS revision',
+  'site.name AS siteName',
+  'company.name AS companyName',
+  'owner.name AS ownerName',
+  's.acknowledgementId AS ack',
+  "JSON_VALUE(r.summary, '$.absorber.mass') AS mass",
+  "JSON_VALUE(r.summary, '$.hostFrequencyHz') AS frequency",
+  "JSON_VALUE(r.summary, '$.acceptance.passes') AS passes",
+]
+
+function filters(q: ReadyQuery & { exclude: readonly number[] }): Condition[] {
+  const where: Condition[] = [{ sql: 's.state = ?', params: ['submitted'] }]
+  if (q.exclude.length) where.push(among('s.id', q.exclude, true))
+  if (q.search) where.push(matching(q.search, ['s.title', 'site.name', 'company.name']))
+  return where
+}
+
+/**
+ * Submitted sizings, most recently handed over first, one page at a time, leaving out the ids
+ * given (those the quotes module has a live quote for).
+ */
 export function handedOverRepository(ds: DataSource) {
+  const from = sizingsListFrom(ds)
   return async (q: ReadyQuery & { exclude: readonly number[] }) => {
-    const qb = ds
-      .getRepository(SizingEntity)
-      .createQueryBuilder('s')
-      .leftJoin('s.owner', 'owner')
-      .innerJoin('s.site', 'site')
-      .innerJoin('site.company', 'company')
-      .innerJoin(SizingRevisionEntity, 'r', 'r.sizingId = s.id AND r.revision = s.currentRevision')
-      .where('s.state = :state', { state: 'submitted' })
-    if (q.exclude.length) qb.andWhere('s.id NOT IN (:...exclude)', { exclude: q.exclude })
-    if (q.search)
-      qb.andWhere('(s.title LIKE :q OR site.name LIKE :q OR company.name LIKE :q)', {
-        q: likeText(q.search),
-      })
-    const { total, rows } = await rawPage<Raw>(qb, {
-      columns: [
-        ...columnsOf('s', 'id title submittedAt'),
-        's.currentRevision AS revision',
-        'site.name AS siteName',
-        'company.name AS companyName',
-        'owner.name AS ownerName',
-        's.acknowledgementId AS ack',
-        "JSON_VALUE(r.summary, '$.absorber.mass') AS mass",
-        "JSON_VALUE(r.summary, '$.hostFrequencyHz') AS frequency",
-        "JSON_VALUE(r.summary, '$.acceptance.passes') AS passes",
-      ],
-      newestFirst: 's.submittedAt',
+    const { total, rows } = await sqlPage<Raw>(ds, {
+      from,
+      where: filters(q),
+      columns: COLUMNS,
+      newestFirst: ['s.submittedAt', 's.id'],
       page: q,
       defaultLimit: DEFAULT_PAGE,
     })

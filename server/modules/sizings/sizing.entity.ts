@@ -9,6 +9,8 @@ import type { UserEntity } from '../users/user.entity'
 import { IntColumn, MomentColumn, VarcharColumn } from '../../db/columns'
 
 @Index('IDX_sizings_updated', ['updatedAt'])
+// the handed-over list: submitted sizings, most recently handed over first
+@Index('IDX_sizings_handed_over', ['state', 'submittedAt'])
 @Entity('sizings')
 export class SizingEntity extends NumberedTrackedRecord {
   declare siteId: number

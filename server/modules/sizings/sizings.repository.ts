@@ -6,7 +6,15 @@ import type {
   SizingState,
 } from '../../../shared/schemas/sizing'
 import type { SizingEvaluation } from '../../../shared/sizing/evaluate-sizing'
-import { columnsOf, likeText, rawPage, type Page } from '../../db/list-page'
+import {
+  columnsOf,
+  matching,
+  related,
+  relatedTable,
+  sqlPage,
+  type Condition,
+  type Page,
+} from '../../db/list-page'
 import { SizingRevisionEntity } from './sizing-revision.entity'
 import { SizingEntity } from './sizing.entity'
 import type { StoredSummary } from './sizing-summary'
@@ -71,9 +79,64 @@ const toListItem = (r: SizingListRow): SizingListItem => ({
   updatedAt: new Date(r.updatedAt as string | Date).toISOString(),
 })
 
+/**
+ * What a sizings list row carries: a few summary figures read from the current revision in the
+ * query itself, not the whole stored summary.
+ */
+const LIST_COLUMNS = [
+  ...columnsOf('s', 'id title state siteId ownerId updatedAt'),
+  's.currentRevision AS revision',
+  'site.name AS siteName',
+  'company.name AS companyName',
+  'owner.name AS ownerName',
+  // a set of absorbers shows its total mass
+  "COALESCE(JSON_VALUE(r.summary, '$.totalMass'), JSON_VALUE(r.summary, '$.absorber.mass')) AS absorberMass",
+  "JSON_VALUE(r.summary, '$.hostFrequencyHz') AS hostFrequencyHz",
+  "JSON_VALUE(r.summary, '$.reduction') AS reduction",
+  "JSON_VALUE(r.summary, '$.acceptance.passes') AS passes",
+]
+
+type ListFilter = SizingListQuery & {
+  visibleTo?: { ownerId: number; orState?: SizingState }
+  onlyState?: SizingState
+}
+
+/** The list's filters as conditions on `s` (sizings), `site` and `company`. */
+function listFilters(q: ListFilter): Condition[] {
+  const where: Condition[] = []
+  if (q.siteId) where.push({ sql: 's.siteId = ?', params: [q.siteId] })
+  if (q.state) where.push({ sql: 's.state = ?', params: [q.state] })
+  if (q.onlyState) where.push({ sql: 's.state = ?', params: [q.onlyState] })
+  if (q.visibleTo)
+    where.push({
+      sql: 's.ownerId = ? OR s.state = ?',
+      params: [q.visibleTo.ownerId, q.visibleTo.orState ?? 'submitted'],
+    })
+  if (q.search) where.push(matching(q.search, ['s.title', 'site.name', 'company.name']))
+  return where
+}
+
+/**
+ * `FROM …` of the sizings lists: each sizing with its site, the site's company, its owner and
+ * its current revision (`s`, `site`, `company`, `owner`, `r`).
+ */
+export function sizingsListFrom(ds: DataSource) {
+  const sizing = ds.getMetadata(SizingEntity)
+  const site = related(sizing, 'site')
+  return (
+    `${sizing.tableName} s` +
+    ` LEFT JOIN ${relatedTable(sizing, 'owner')} owner ON owner.id = s.ownerId` +
+    ` JOIN ${site.tableName} site ON site.id = s.siteId` +
+    ` JOIN ${relatedTable(site, 'company')} company ON company.id = site.companyId` +
+    ` JOIN ${ds.getMetadata(SizingRevisionEntity).tableName} r` +
+    ' ON r.sizingId = s.id AND r.revision = s.currentRevision'
+  )
+}
+
 export function sizingsRepository(ds: DataSource) {
   const sizings = ds.getRepository(SizingEntity)
   const revisions = ds.getRepository(SizingRevisionEntity)
+  const listFrom = sizingsListFrom(ds)
   return {
     async findById(id: number) {
       const s = await sizings.findOne({ where: { id }, relations: { owner: true } })
@@ -87,48 +150,12 @@ export function sizingsRepository(ds: DataSource) {
      * One page of sizings, last changed first, with a few summary figures read from the current
      * revision in the query itself (not the whole stored summary), and the total matching.
      */
-    async page(
-      q: SizingListQuery & {
-        visibleTo?: { ownerId: number; orState?: SizingState }
-        onlyState?: SizingState
-      },
-    ): Promise<Page<SizingListItem>> {
-      const qb = sizings
-        .createQueryBuilder('s')
-        .leftJoin('s.owner', 'owner')
-        .innerJoin('s.site', 'site')
-        .innerJoin('site.company', 'company')
-        .innerJoin(
-          SizingRevisionEntity,
-          'r',
-          'r.sizingId = s.id AND r.revision = s.currentRevision',
-        )
-      if (q.siteId) qb.andWhere('s.siteId = :siteId', { siteId: q.siteId })
-      if (q.state) qb.andWhere('s.state = :state', { state: q.state })
-      if (q.onlyState) qb.andWhere('s.state = :only', { only: q.onlyState })
-      if (q.visibleTo)
-        qb.andWhere('(s.ownerId = :me OR s.state = :shared)', {
-          me: q.visibleTo.ownerId,
-          shared: q.visibleTo.orState ?? 'submitted',
-        })
-      if (q.search)
-        qb.andWhere('(s.title LIKE :q OR site.name LIKE :q OR company.name LIKE :q)', {
-          q: likeText(q.search),
-        })
-      const { total, rows } = await rawPage<SizingListRow>(qb, {
-        columns: [
-          ...columnsOf('s', 'id title state siteId ownerId updatedAt'),
-          's.currentRevision AS revision',
-          'site.name AS siteName',
-          'company.name AS companyName',
-          'owner.name AS ownerName',
-          // a set of absorbers shows its total mass
-          "COALESCE(JSON_VALUE(r.summary, '$.totalMass'), JSON_VALUE(r.summary, '$.absorber.mass')) AS absorberMass",
-          "JSON_VALUE(r.summary, '$.hostFrequencyHz') AS hostFrequencyHz",
-          "JSON_VALUE(r.summary, '$.reduction') AS reduction",
-          "JSON_VALUE(r.summary, '$.acceptance.passes') AS passes",
-        ],
-        newestFirst: 's.updatedAt',
+    async page(q: ListFilter): Promise<Page<SizingListItem>> {
+      const { total, rows } = await sqlPage<SizingListRow>(ds, {
+        from: listFrom,
+        where: listFilters(q),
+        columns: LIST_COLUMNS,
+        newestFirst: ['s.updatedAt', 's.id'],
         page: q,
       })
       return { total, items: rows.map(toListItem) }
