@@ -11,16 +11,10 @@ export type SizingOutcome =
   | { ok: true; evaluation: SizingEvaluation }
   | { ok: false; field: string; message: string; unsolvable?: boolean }
 
-/** How a job may be cut short, and how its bytes travel. */
+/** How a job may be cut short. */
 export interface JobOptions {
   /** aborts the job, e.g. when its request closes */
   signal?: AbortSignal
-  /**
-   * Moves the job's `bytes` to the worker instead of copying them (an 8 MB record is copied on
-   * the event loop otherwise): the caller's buffer is empty afterwards. Bytes that share their
-   * memory with other buffers (a small file in Node's buffer pool) are copied as usual.
-   */
-  moveBytes?: boolean
 }
 
 export interface SizingPool {
@@ -48,16 +42,6 @@ export interface PoolLimits {
 }
 
 const worker = (name: string) => fileURLToPath(new URL(name, import.meta.url))
-
-/** The memory to move with a job: its bytes' buffer when they alone use all of it. */
-function transferList(task: unknown, options: JobOptions): ArrayBuffer[] {
-  const bytes = options.moveBytes ? (task as { bytes?: unknown }).bytes : undefined
-  if (!(bytes instanceof Uint8Array)) return []
-  const whole = bytes.buffer
-  const sole =
-    whole instanceof ArrayBuffer && bytes.byteOffset === 0 && bytes.byteLength === whole.byteLength
-  return sole ? [whole] : []
-}
 
 /**
  * A pool of worker threads for the engine and the record reader, bounded in queue and time. The
@@ -88,8 +72,7 @@ export function createSizingPool(threads: number, limits: PoolLimits = {}): Sizi
     if (options.signal?.aborted) onAbort()
     options.signal?.addEventListener('abort', onAbort, { once: true })
     try {
-      const transfer = transferList(task, options)
-      return (await pool.run(task, { filename, signal: stop.signal, transferList: transfer })) as T
+      return (await pool.run(task, { filename, signal: stop.signal })) as T
     } catch (e) {
       if (!stop.signal.aborted) throw e
       throw cancelled(stop.signal.reason, budgetMs)

@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs'
 import type {
   IdentificationResult,
   RecordKind,
@@ -9,7 +10,8 @@ import { identify, readRecord } from '../modules/measurements/record-file'
 import type { ReadAs } from './measurements.worker'
 
 export interface RecordJob {
-  bytes: Uint8Array
+  /** the stored file's path: read here, so its bytes never pass through the event loop */
+  file: string
   /** how to read the file: a sample rate for a file without a time column, the time unit */
   readAs: ReadAs
   kind?: RecordKind
@@ -38,7 +40,7 @@ export type RecordOutcome =
  */
 export default function run(job: RecordJob): RecordOutcome {
   try {
-    const record = readRecord(job.bytes, job.readAs)
+    const record = readRecord(readFileSync(job.file), job.readAs)
     const result = identify(record, job.kind)
     return {
       ok: true,

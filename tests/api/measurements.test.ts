@@ -76,6 +76,20 @@ describe('site measurement records', () => {
     })
   }
 
+  it('keeps no file of an upload refused for its form fields or its site', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const site = await siteOf(agent)
+    const before = storedFiles()
+    const badField = await agent
+      .post(`/api/sites/${site.id}/records`)
+      .field('kind', 'sideways')
+      .attach('record', HEEL_DROP, 'record.csv')
+    expect(badField.status).toBe(400)
+    expect(badField.body.error.details[0].path).toBe('body.kind')
+    expect((await upload(agent, 999_999, HEEL_DROP)).status).toBe(404)
+    expect(storedFiles()).toBe(before)
+  })
+
   it('refuses an upload from a sales user', async () => {
     const { agent: engineer } = await signedIn(t, 'engineer')
     const { agent: sales } = await signedIn(t, 'sales')
