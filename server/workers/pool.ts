@@ -3,7 +3,7 @@ import { Piscina } from 'piscina'
 import type { SizingEvaluation } from '../../shared/sizing/evaluate-sizing'
 import type { Config } from '../config'
 import { AppError } from '../http/app-error'
-import type { RecordJob, RecordOutcome } from './record.worker'
+import type { PeakJob, PeakOutcome, RecordJob, RecordOutcome } from './record.worker'
 import type { SizingJob } from './sizing.worker'
 import type { MeasurementJob, MeasurementOutcome } from './measurements.worker'
 
@@ -21,6 +21,8 @@ export interface SizingPool {
   run(job: SizingJob, options?: JobOptions): Promise<SizingOutcome>
   /** reads and identifies a measurement record off the event loop */
   identify(job: RecordJob, options?: JobOptions): Promise<RecordOutcome>
+  /** the peak of a stored record nearest a frequency, read off the event loop too */
+  peakAt(job: PeakJob, options?: JobOptions): Promise<PeakOutcome>
   /** modal identification, a record's time history, model updating: same threads, own file */
   measure(job: MeasurementJob, options?: JobOptions): Promise<MeasurementOutcome>
   close(): Promise<void>
@@ -59,7 +61,12 @@ export function createSizingPool(threads: number, limits: PoolLimits = {}): Sizi
     niceIncrement,
   })
 
-  async function submit<T>(task: unknown, filename: string, options: JobOptions): Promise<T> {
+  async function submit<T>(
+    task: unknown,
+    filename: string,
+    options: JobOptions,
+    name?: string,
+  ): Promise<T> {
     if (pool.queueSize >= maxQueue)
       throw new AppError(
         'engine-busy',
@@ -72,7 +79,7 @@ export function createSizingPool(threads: number, limits: PoolLimits = {}): Sizi
     if (options.signal?.aborted) onAbort()
     options.signal?.addEventListener('abort', onAbort, { once: true })
     try {
-      return (await pool.run(task, { filename, signal: stop.signal })) as T
+      return (await pool.run(task, { filename, name, signal: stop.signal })) as T
     } catch (e) {
       if (!stop.signal.aborted) throw e
       throw cancelled(stop.signal.reason, budgetMs)
@@ -85,6 +92,7 @@ export function createSizingPool(threads: number, limits: PoolLimits = {}): Sizi
   return {
     run: (job, options = {}) => submit(job, worker('./sizing.worker.ts'), options),
     identify: (job, options = {}) => submit(job, worker('./record.worker.ts'), options),
+    peakAt: (job, options = {}) => submit(job, worker('./record.worker.ts'), options, 'peak'),
     measure: (job, options = {}) => submit(job, worker('./measurements.worker.ts'), options),
     close: () => pool.destroy(),
   }

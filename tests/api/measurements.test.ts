@@ -110,7 +110,7 @@ describe('site measurement records', () => {
     expect((await owner.get(`/api/records/${rec.id}`)).status).toBe(404)
   })
 
-  it('drops a false peak and adds it back from the stored file', async () => {
+  it('drops a false peak, adds it back from the stored file, refuses one beyond the band', async () => {
     const { agent } = await signedIn(t, 'engineer')
     const site = await siteOf(agent)
     const rec = (await upload(agent, site.id, HEEL_DROP)).body
@@ -132,6 +132,11 @@ describe('site measurement records', () => {
       (await agent.post(`/api/records/${rec.id}/peaks`).send({ frequencyHz: first.frequencyHz }))
         .status,
     ).toBe(409)
+    // above the Nyquist frequency of a 200 Hz record: refused naming the field, nothing added
+    const beyond = await agent.post(`/api/records/${rec.id}/peaks`).send({ frequencyHz: 150 })
+    expect(beyond.status).toBe(400)
+    expect(beyond.body.error.details[0].path).toBe('body.frequencyHz')
+    expect(beyond.body.error.message).toMatch(/between 0 and 100 Hz/)
   })
 
   it('calibrates a model to a measured frequency as a new revision', async () => {

@@ -6,7 +6,7 @@ import type { ModelsService } from '../models/models.service'
 import type { SitesService } from '../sites/sites.service'
 import type { MeasurementsRepository, StoredRecord } from './measurements.repository'
 import type { SizingPool } from '../../workers/pool'
-import { checkRecordFile, peakAt, readAsStored, readRecord } from './record-file'
+import { checkRecordFile, readAsStored } from './record-file'
 
 /** An upload the route streamed into the file store: `filename` is its stored name. */
 type StoredUpload = { originalname: string; filename: string; size: number }
@@ -17,7 +17,7 @@ export function measurementsService(deps: {
   sites: SitesService
   models: ModelsService
   files: FileStore
-  pool: Pick<SizingPool, 'identify'>
+  pool: Pick<SizingPool, 'identify' | 'peakAt'>
 }) {
   async function stored(id: number): Promise<StoredRecord> {
     const r = await deps.records.findById(id)
@@ -147,10 +147,16 @@ export function measurementsService(deps: {
           409,
         )
       }
-      const bytes = await deps.files.read(r.storedName)
-      const record = readRecord(bytes, readAsStored(r))
-      const others = r.result.peaks.map((p) => p.frequencyHz)
-      const peak = peakAt(record, frequencyHz, r.result.kind, others)
+      // An 8 MB record takes a while to read: in the worker pool, which reads the file itself.
+      const found = await deps.pool.peakAt({
+        file: deps.files.pathOf(r.storedName),
+        readAs: readAsStored(r),
+        frequencyHz,
+        kind: r.result.kind,
+        otherPeaksHz: r.result.peaks.map((p) => p.frequencyHz),
+      })
+      if (!found.ok) throw new AppError(found.code, found.message, found.status, found.details)
+      const { peak } = found
       const result = { ...r.result, peaks: [...r.result.peaks, peak] }
       await deps.records.saveResult(id, result)
       return { peak, record: await get(id) }
