@@ -1,43 +1,52 @@
 /**
  * The health figure: p95 of GET /api/health as a client sees it, idle and while a 500-node
- * sizing runs in the worker pool and an 8 MB record is uploaded. Every client here (prober,
- * upload, sizing) runs in the benchmark's process, the server in its own.
+ * sizing runs in the worker pool and an 8 MB record is uploaded. Every client here runs in the
+ * benchmark's process, the server in its own; the sizing and the upload are sent from a thread
+ * of their own (busy.worker.ts), so the prober's schedule is not held up by them.
  */
+import { once } from 'node:events'
 import { monitorEventLoopDelay } from 'node:perf_hooks'
+import { fileURLToPath } from 'node:url'
+import { Worker } from 'node:worker_threads'
+import type { SizingInput } from '../../../shared/schemas/sizing'
 import { client, scheduledP95 } from './http-load'
 import { benchSizing } from './models'
-import type { SizingInput } from '../../../shared/schemas/sizing'
-import { recordFile, signIn, upload } from './requests'
+import { recordFile, signIn, sizeAndUpload } from './requests'
 import { WARM_NODES } from './seed-bench'
-
-type Bytes = Uint8Array<ArrayBuffer>
 
 /** ms between health probes */
 const PROBE_MS = 10
 /** sockets the prober may keep open */
 const PROBE_SOCKETS = 50
+const RECORD_BYTES = 8_000_000
 
 type BenchIds = { siteId: number; modelId: number; warmModelId: number }
 
-/** One sizing and one record upload at once; what failed of them, as lines. */
-async function sizeAndUpload(base: string, cookie: string, sizing: SizingInput, record: Bytes) {
-  const failures: string[] = []
-  const check = async (r: Response) => {
-    if (!r.ok) failures.push(`${r.url}: ${r.status} ${(await r.text()).slice(0, 300)}`)
-  }
-  await Promise.all([
-    fetch(`${base}/api/sizings`, {
-      method: 'POST',
-      headers: { cookie, 'content-type': 'application/json' },
-      body: JSON.stringify({ input: sizing }),
-    }).then(check),
-    upload(base, cookie, sizing.siteId, record).then(check),
-  ])
-  return failures
-}
-
 function check(failures: string[]) {
   if (failures.length) throw new Error(`busy requests failed: ${failures.join('; ')}`)
+}
+
+/** The busy clients' thread, once it has built its record and waits for the word to start. */
+async function busyClients(base: string, cookie: string, sizing: SizingInput) {
+  // A script that loads the TypeScript through tsx's loader (a worker's own entry cannot be .ts).
+  const file = fileURLToPath(new URL('./busy.worker.ts', import.meta.url))
+  const worker = new Worker(`require('tsx/cjs/api').require(${JSON.stringify(file)}, __filename)`, {
+    eval: true,
+    workerData: { base, cookie, sizing, bytes: RECORD_BYTES },
+  })
+  const [first] = (await Promise.race([once(worker, 'message'), once(worker, 'error')])) as [
+    unknown,
+  ]
+  if (first !== 'ready') throw first
+  return {
+    /** sends both requests; resolves with what failed of them */
+    async run(): Promise<string[]> {
+      worker.postMessage('go')
+      const [failures] = (await once(worker, 'message')) as [string[]]
+      await worker.terminate()
+      return failures
+    },
+  }
 }
 
 export async function benchHealth(
@@ -52,22 +61,17 @@ export async function benchHealth(
   const { siteId, modelId, warmModelId } = ids
   const warm = { siteId, modelId: warmModelId }
   check(await sizeAndUpload(base, engineer, benchSizing(WARM_NODES, warm), recordFile(100_000)))
-  // Made before the warm-up, so no collection of its making falls in the timed phases.
-  const record = recordFile(8_000_000)
+  const sizing = benchSizing(sizingNodes, { siteId, modelId })
+  const busyThread = await busyClients(base, engineer, sizing)
   const health = client(base, '', PROBE_SOCKETS)
   try {
     await scheduledP95(health, '/api/health', PROBE_MS, 50) // warm-up
     const idle = await scheduledP95(health, '/api/health', PROBE_MS, 300)
-    let running = true
-    // how long this process's own event loop stalls while it sends the busy requests
+    // how long this thread's own event loop stalls (it only probes) during the busy phase
     const ownLoop = monitorEventLoopDelay({ resolution: 1 })
     ownLoop.enable()
-    const busyWork = sizeAndUpload(
-      base,
-      engineer,
-      benchSizing(sizingNodes, { siteId, modelId }),
-      record,
-    ).finally(() => (running = false))
+    let running = true
+    const busyWork = busyThread.run().finally(() => (running = false))
     const t0 = performance.now()
     const busy = await scheduledP95(health, '/api/health', PROBE_MS, 50, () => !running)
     ownLoop.disable()
@@ -75,7 +79,7 @@ export async function benchHealth(
     progress(
       `health p95 idle ${idle.p95.toFixed(1)} ms; busy ${busy.p95.toFixed(1)} ms over ` +
         `${busy.count} requests in ${((performance.now() - t0) / 1000).toFixed(1)} s ` +
-        `(longest ${busy.max.toFixed(0)} ms; this process's own event loop stalled at most ` +
+        `(longest ${busy.max.toFixed(0)} ms; the prober's own event loop stalled at most ` +
         `${(ownLoop.max / 1e6).toFixed(0)} ms)`,
     )
     if (idle.errors + busy.errors > 0)
