@@ -20,7 +20,10 @@ export function createDataSource(db: DbConfig): DataSource {
     synchronize: false,
     migrationsRun: false,
     logging: ['error'],
-    extra: { connectionLimit: 10 },
+    // trace: false: mysql2's promise wrapper (which TypeORM queries through) would otherwise
+    // capture a stack trace for every query, about 30–40 µs of CPU on the event loop each
+    // (measured with SELECT 1); a failed query's QueryFailedError keeps TypeORM's own stack.
+    extra: { connectionLimit: 10, trace: false },
   })
 }
 
