@@ -20,8 +20,9 @@ export function createDataSource(db: DbConfig): DataSource {
     synchronize: false,
     migrationsRun: false,
     logging: ['error'],
-    // trace: false — mysql2 would capture a stack trace on every query to decorate a failed
-    // one's error; TypeORM wraps every failure in its own error with its own stack anyway.
+    // trace: false: mysql2's promise wrapper (which TypeORM queries through) would otherwise
+    // capture a stack trace for every query, about 30–40 µs of CPU on the event loop each
+    // (measured with SELECT 1); a failed query's QueryFailedError keeps TypeORM's own stack.
     extra: { connectionLimit: 10, trace: false },
   })
 }

@@ -2,6 +2,7 @@ import type { Request, RequestHandler, Response, Router } from 'express'
 import type { ZodType } from 'zod'
 import { z } from 'zod'
 import { AppError } from './app-error'
+import { discardUpload } from './upload'
 import { OUT_OF_RANGE } from '../../shared/schemas/model'
 import type { AuthUser } from '../middleware/authenticate'
 import type { ApiRegistry } from './api-registry'
@@ -100,10 +101,17 @@ export function route<B = undefined, Q = undefined, P = undefined, R = unknown>(
     ...(spec.before ?? []),
     async (req: Request, res: Response) => {
       const user = req.user as AuthUser
-      const params = parsePart(spec.params, req.params, 'params')
-      const query = parsePart(spec.query, req.query, 'query')
-      const body = parsePart(spec.body, req.body, 'body')
-      const result = await handler({ body, query, params, user, req, res })
+      let result
+      try {
+        const params = parsePart(spec.params, req.params, 'params')
+        const query = parsePart(spec.query, req.query, 'query')
+        const body = parsePart(spec.body, req.body, 'body')
+        result = await handler({ body, query, params, user, req, res })
+      } catch (e) {
+        // A refused request leaves no upload behind, removed before the answer goes out.
+        await discardUpload(req.file)
+        throw e
+      }
       if (res.headersSent) return
       if (result === undefined) res.status(spec.status ?? 204).end()
       else {

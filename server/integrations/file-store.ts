@@ -9,14 +9,22 @@ export function fileStore(root: string) {
     if (!/^[\w-]+(\.\w+)?$/.test(name)) throw new Error('bad stored name')
     return path.join(dir, name)
   }
+  /** A fresh stored name in the (created) directory, for bytes about to be written. */
+  async function place(extension: string) {
+    await mkdir(dir, { recursive: true })
+    const name = `${randomUUID()}${extension}`
+    return { name, path: full(name) }
+  }
   return {
+    place,
     async save(bytes: Buffer, extension: string) {
-      await mkdir(dir, { recursive: true })
-      const name = `${randomUUID()}${extension}`
-      await writeFile(full(name), bytes, { flag: 'wx' })
+      const { name, path: file } = await place(extension)
+      await writeFile(file, bytes, { flag: 'wx' })
       return name
     },
     read: (name: string) => readFile(full(name)),
+    /** where a stored file lies, for a worker thread that reads it itself */
+    pathOf: full,
     remove: (name: string) => rm(full(name), { force: true }),
   }
 }

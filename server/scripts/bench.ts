@@ -21,7 +21,8 @@ const progress = (s: string) => process.stderr.write(`bench: ${s}\n`)
 const result: Partial<BenchResult> = {}
 if (want('eigen')) result.eigen = await benchEigen(progress)
 if (want('study')) result.study = await benchStudy(progress)
-if (want('health') || want('list')) Object.assign(result, await benchServer(progress))
+if (want('health') || want('list'))
+  Object.assign(result, await benchServer(progress, { health: want('health'), list: want('list') }))
 let largestRoute = ''
 if (want('bundle')) {
   progress('client build')

@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs'
 import { ModelError } from '../../shared/dynamics'
 import {
   identifyModes,
@@ -26,10 +27,13 @@ export interface ReadAs {
   timeUnit?: TimeUnit
 }
 
-/** Work on measurements that takes too long for the event loop (0.1 s to a few seconds). */
+/**
+ * Work on measurements that takes too long for the event loop (0.1 s to a few seconds). A stored
+ * record is read here from its path, so its bytes never pass through the event loop.
+ */
 export type MeasurementJob =
-  | { kind: 'identify'; bytes: Uint8Array; readAs: ReadAs; run: AnalysisRun }
-  | { kind: 'history'; bytes: Uint8Array; readAs: ReadAs; maxPoints: number }
+  | { kind: 'identify'; file: string; readAs: ReadAs; run: AnalysisRun }
+  | { kind: 'history'; file: string; readAs: ReadAs; maxPoints: number }
   | {
       kind: 'update'
       model: ModelInput
@@ -55,14 +59,14 @@ const asMode = (m: AnalysisMode): AnalysisMode => ({
 function identify(
   job: Extract<MeasurementJob, { kind: 'identify' }>,
 ): Pick<RecordAnalysis, 'method' | 'modes' | 'result'> {
-  const record = parseRecordBytes(job.bytes, job.readAs)
+  const record = parseRecordBytes(readFileSync(job.file), job.readAs)
   const { method, ...range } = job.run
   const result = method === 'ssi' ? identifyModesSsi(record, range) : identifyModes(record, range)
   return { method, modes: result.modes.map(asMode), result }
 }
 
 function history(job: Extract<MeasurementJob, { kind: 'history' }>) {
-  const record = parseRecordBytes(job.bytes, job.readAs)
+  const record = parseRecordBytes(readFileSync(job.file), job.readAs)
   const accelerations = record.channels.map((c) => c.acceleration)
   const thin = thinHistory(record.sampleRateHz, record.startTimeS, accelerations, job.maxPoints)
   return {

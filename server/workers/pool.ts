@@ -3,7 +3,7 @@ import { Piscina } from 'piscina'
 import type { SizingEvaluation } from '../../shared/sizing/evaluate-sizing'
 import type { Config } from '../config'
 import { AppError } from '../http/app-error'
-import type { RecordJob, RecordOutcome } from './record.worker'
+import type { PeakJob, PeakOutcome, RecordJob, RecordOutcome } from './record.worker'
 import type { SizingJob } from './sizing.worker'
 import type { MeasurementJob, MeasurementOutcome } from './measurements.worker'
 
@@ -11,22 +11,18 @@ export type SizingOutcome =
   | { ok: true; evaluation: SizingEvaluation }
   | { ok: false; field: string; message: string; unsolvable?: boolean }
 
-/** How a job may be cut short, and how its bytes travel. */
+/** How a job may be cut short. */
 export interface JobOptions {
   /** aborts the job, e.g. when its request closes */
   signal?: AbortSignal
-  /**
-   * Moves the job's `bytes` to the worker instead of copying them (an 8 MB record is copied on
-   * the event loop otherwise): the caller's buffer is empty afterwards. Bytes that share their
-   * memory with other buffers (a small file in Node's buffer pool) are copied as usual.
-   */
-  moveBytes?: boolean
 }
 
 export interface SizingPool {
   run(job: SizingJob, options?: JobOptions): Promise<SizingOutcome>
   /** reads and identifies a measurement record off the event loop */
   identify(job: RecordJob, options?: JobOptions): Promise<RecordOutcome>
+  /** the peak of a stored record nearest a frequency, read off the event loop too */
+  peakAt(job: PeakJob, options?: JobOptions): Promise<PeakOutcome>
   /** modal identification, a record's time history, model updating: same threads, own file */
   measure(job: MeasurementJob, options?: JobOptions): Promise<MeasurementOutcome>
   close(): Promise<void>
@@ -49,16 +45,6 @@ export interface PoolLimits {
 
 const worker = (name: string) => fileURLToPath(new URL(name, import.meta.url))
 
-/** The memory to move with a job: its bytes' buffer when they alone use all of it. */
-function transferList(task: unknown, options: JobOptions): ArrayBuffer[] {
-  const bytes = options.moveBytes ? (task as { bytes?: unknown }).bytes : undefined
-  if (!(bytes instanceof Uint8Array)) return []
-  const whole = bytes.buffer
-  const sole =
-    whole instanceof ArrayBuffer && bytes.byteOffset === 0 && bytes.byteLength === whole.byteLength
-  return sole ? [whole] : []
-}
-
 /**
  * A pool of worker threads for the engine and the record reader, bounded in queue and time. The
  * workers load the TypeScript through tsx, so the same source runs under `npm start`, the tests
@@ -75,7 +61,12 @@ export function createSizingPool(threads: number, limits: PoolLimits = {}): Sizi
     niceIncrement,
   })
 
-  async function submit<T>(task: unknown, filename: string, options: JobOptions): Promise<T> {
+  async function submit<T>(
+    task: unknown,
+    filename: string,
+    options: JobOptions,
+    name?: string,
+  ): Promise<T> {
     if (pool.queueSize >= maxQueue)
       throw new AppError(
         'engine-busy',
@@ -88,8 +79,7 @@ export function createSizingPool(threads: number, limits: PoolLimits = {}): Sizi
     if (options.signal?.aborted) onAbort()
     options.signal?.addEventListener('abort', onAbort, { once: true })
     try {
-      const transfer = transferList(task, options)
-      return (await pool.run(task, { filename, signal: stop.signal, transferList: transfer })) as T
+      return (await pool.run(task, { filename, name, signal: stop.signal })) as T
     } catch (e) {
       if (!stop.signal.aborted) throw e
       throw cancelled(stop.signal.reason, budgetMs)
@@ -102,6 +92,7 @@ export function createSizingPool(threads: number, limits: PoolLimits = {}): Sizi
   return {
     run: (job, options = {}) => submit(job, worker('./sizing.worker.ts'), options),
     identify: (job, options = {}) => submit(job, worker('./record.worker.ts'), options),
+    peakAt: (job, options = {}) => submit(job, worker('./record.worker.ts'), options, 'peak'),
     measure: (job, options = {}) => submit(job, worker('./measurements.worker.ts'), options),
     close: () => pool.destroy(),
   }

@@ -1,15 +1,18 @@
+import { readFileSync } from 'node:fs'
 import type {
   IdentificationResult,
+  IdentifiedPeak,
   RecordKind,
   TimeUnit,
   TimeUnitSource,
 } from '../../shared/measurements'
 import { AppError } from '../http/app-error'
-import { identify, readRecord } from '../modules/measurements/record-file'
+import { identify, peakAt, readRecord } from '../modules/measurements/record-file'
 import type { ReadAs } from './measurements.worker'
 
 export interface RecordJob {
-  bytes: Uint8Array
+  /** the stored file's path: read here, so its bytes never pass through the event loop */
+  file: string
   /** how to read the file: a sample rate for a file without a time column, the time unit */
   readAs: ReadAs
   kind?: RecordKind
@@ -22,6 +25,9 @@ export interface ReadSummary {
   timeUnitSource: TimeUnitSource | null
 }
 
+/** A refusal crosses the thread as data: errors lose their class on the way. */
+type Refusal = { ok: false; code: string; message: string; status: number; details?: unknown }
+
 export type RecordOutcome =
   | {
       ok: true
@@ -30,15 +36,33 @@ export type RecordOutcome =
       record: ReadSummary
       result: IdentificationResult
     }
-  | { ok: false; code: string; message: string; status: number; details?: unknown }
+  | Refusal
+
+/** A peak the engineer points at, near a frequency, in a stored record. */
+export interface PeakJob {
+  file: string
+  readAs: ReadAs
+  frequencyHz: number
+  kind: RecordKind
+  /** the record's peaks already listed */
+  otherPeaksHz: number[]
+}
+
+export type PeakOutcome = { ok: true; peak: IdentifiedPeak } | Refusal
+
+function refusal(e: unknown): Refusal {
+  if (e instanceof AppError)
+    return { ok: false, code: e.code, message: e.message, status: e.status, details: e.details }
+  throw e
+}
 
 /**
  * Reads a record file and identifies its modes in a worker thread, so a large upload never holds
- * up other requests. A refusal comes back as data (errors lose their class crossing threads).
+ * up other requests.
  */
 export default function run(job: RecordJob): RecordOutcome {
   try {
-    const record = readRecord(job.bytes, job.readAs)
+    const record = readRecord(readFileSync(job.file), job.readAs)
     const result = identify(record, job.kind)
     return {
       ok: true,
@@ -52,8 +76,16 @@ export default function run(job: RecordJob): RecordOutcome {
       result,
     }
   } catch (e) {
-    if (e instanceof AppError)
-      return { ok: false, code: e.code, message: e.message, status: e.status, details: e.details }
-    throw e
+    return refusal(e)
+  }
+}
+
+/** Reads a stored record and identifies the peak nearest a frequency (Piscina task `peak`). */
+export function peak(job: PeakJob): PeakOutcome {
+  try {
+    const record = readRecord(readFileSync(job.file), job.readAs)
+    return { ok: true, peak: peakAt(record, job.frequencyHz, job.kind, job.otherPeaksHz) }
+  } catch (e) {
+    return refusal(e)
   }
 }

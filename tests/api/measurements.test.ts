@@ -76,6 +76,20 @@ describe('site measurement records', () => {
     })
   }
 
+  it('keeps no file of an upload refused for its form fields or its site', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const site = await siteOf(agent)
+    const before = storedFiles()
+    const badField = await agent
+      .post(`/api/sites/${site.id}/records`)
+      .field('kind', 'sideways')
+      .attach('record', HEEL_DROP, 'record.csv')
+    expect(badField.status).toBe(400)
+    expect(badField.body.error.details[0].path).toBe('body.kind')
+    expect((await upload(agent, 999_999, HEEL_DROP)).status).toBe(404)
+    expect(storedFiles()).toBe(before)
+  })
+
   it('refuses an upload from a sales user', async () => {
     const { agent: engineer } = await signedIn(t, 'engineer')
     const { agent: sales } = await signedIn(t, 'sales')
@@ -96,7 +110,7 @@ describe('site measurement records', () => {
     expect((await owner.get(`/api/records/${rec.id}`)).status).toBe(404)
   })
 
-  it('drops a false peak and adds it back from the stored file', async () => {
+  it('drops a false peak, adds it back from the stored file, refuses one beyond the band', async () => {
     const { agent } = await signedIn(t, 'engineer')
     const site = await siteOf(agent)
     const rec = (await upload(agent, site.id, HEEL_DROP)).body
@@ -118,6 +132,11 @@ describe('site measurement records', () => {
       (await agent.post(`/api/records/${rec.id}/peaks`).send({ frequencyHz: first.frequencyHz }))
         .status,
     ).toBe(409)
+    // above the Nyquist frequency of a 200 Hz record: refused naming the field, nothing added
+    const beyond = await agent.post(`/api/records/${rec.id}/peaks`).send({ frequencyHz: 150 })
+    expect(beyond.status).toBe(400)
+    expect(beyond.body.error.details[0].path).toBe('body.frequencyHz')
+    expect(beyond.body.error.message).toMatch(/between 0 and 100 Hz/)
   })
 
   it('calibrates a model to a measured frequency as a new revision', async () => {

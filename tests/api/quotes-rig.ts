@@ -21,6 +21,7 @@ import {
 export const noSolving: SizingPool = {
   run: () => Promise.reject(new Error('the quotes tests do not solve sizings')),
   identify: () => Promise.reject(new Error('the quotes tests do not read records')),
+  peakAt: () => Promise.reject(new Error('the quotes tests do not read records')),
   measure: () => Promise.reject(new Error('the quotes tests do not identify records')),
   close: async () => undefined,
 }

@@ -29,7 +29,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     params: IdParamSchema,
     body: RecordUploadSchema,
     upload: 'record',
-    before: [singleUpload('record', MAX_RECORD_BYTES)],
+    before: [singleUpload('record', MAX_RECORD_BYTES, m.placeUpload)],
     status: 201,
     answer: ({ user, params, body, req, res }) =>
       m.upload(user, params.id, body, req.file, closedSignal(res)),

@@ -6,16 +6,18 @@ import type { ModelsService } from '../models/models.service'
 import type { SitesService } from '../sites/sites.service'
 import type { MeasurementsRepository, StoredRecord } from './measurements.repository'
 import type { SizingPool } from '../../workers/pool'
-import { checkRecordFile, peakAt, readAsStored, readRecord } from './record-file'
+import { checkRecordFile, readAsStored } from './record-file'
 
-type UploadedFile = { originalname: string; buffer: Buffer } | undefined
+/** An upload the route streamed into the file store: `filename` is its stored name. */
+type StoredUpload = { originalname: string; filename: string; size: number }
+type UploadedFile = StoredUpload | undefined
 
 export function measurementsService(deps: {
   records: MeasurementsRepository
   sites: SitesService
   models: ModelsService
   files: FileStore
-  pool: Pick<SizingPool, 'identify'>
+  pool: Pick<SizingPool, 'identify' | 'peakAt'>
 }) {
   async function stored(id: number): Promise<StoredRecord> {
     const r = await deps.records.findById(id)
@@ -43,6 +45,55 @@ export function measurementsService(deps: {
     }
   }
 
+  /** Reads and identifies a stored upload off the event loop and keeps its row. */
+  async function keep(
+    user: AuthUser,
+    siteId: number,
+    input: RecordUpload,
+    file: StoredUpload,
+    signal?: AbortSignal,
+  ) {
+    await deps.sites.get(siteId)
+    await assertModelOfSite(input.modelId, siteId)
+    // Reading and identifying an 8 MB record takes seconds: in the worker pool, not here.
+    const read = await deps.pool.identify(
+      {
+        file: deps.files.pathOf(file.filename),
+        readAs: {
+          ...(input.sampleRateHz !== undefined && { sampleRateHz: input.sampleRateHz }),
+          ...(input.timeUnit !== undefined && { timeUnit: input.timeUnit }),
+        },
+        kind: input.kind,
+      },
+      { signal },
+    )
+    if (!read.ok) throw new AppError(read.code, read.message, read.status, read.details)
+    const { result, record } = read
+    const id = await deps.records.create({
+      siteId,
+      modelId: input.modelId ?? null,
+      nodeId: input.nodeId ?? null,
+      ownerId: user.id,
+      filename: file.originalname.slice(0, 200),
+      storedName: file.filename,
+      size: file.size,
+      sampleRateHz: read.sampleRateHz,
+      samples: read.samples,
+      rateFromForm: input.sampleRateHz !== undefined,
+      kind: result.kind,
+      result,
+      channels: record.channels.map((c, i) => ({
+        name: c.name.slice(0, 60),
+        column: c.column,
+        nodeId: i === 0 ? (input.nodeId ?? null) : null,
+        direction: null,
+      })),
+      timeUnit: record.timeUnit,
+      timeUnitSource: record.timeUnitSource,
+    })
+    return get(id)
+  }
+
   return {
     get,
     stored,
@@ -52,9 +103,13 @@ export function measurementsService(deps: {
       return deps.records.listBySite(siteId)
     },
 
+    /** Where an upload's bytes are written as they arrive: a new file in the store. */
+    placeUpload: () => deps.files.place('.csv'),
+
     /**
-     * Keeps the file, then reads and identifies it in the worker pool; a refused or cancelled
-     * upload removes the file again, so it leaves nothing behind.
+     * Takes an upload already stored (streamed to disk by the route), then reads and identifies
+     * it in the worker pool, which reads the file itself; a refused or cancelled upload removes
+     * the file again, so it leaves nothing behind.
      */
     async upload(
       user: AuthUser,
@@ -63,52 +118,10 @@ export function measurementsService(deps: {
       upload: UploadedFile,
       signal?: AbortSignal,
     ) {
-      await deps.sites.get(siteId)
-      await assertModelOfSite(input.modelId, siteId)
-      const file = checkRecordFile(upload)
-      const size = file.buffer.length
-      const storedName = await deps.files.save(file.buffer, '.csv')
       try {
-        // Reading and identifying an 8 MB record takes seconds: in the worker pool, not here.
-        // The bytes are on disk now, so they move to the worker rather than being copied.
-        const read = await deps.pool.identify(
-          {
-            bytes: file.buffer,
-            readAs: {
-              ...(input.sampleRateHz !== undefined && { sampleRateHz: input.sampleRateHz }),
-              ...(input.timeUnit !== undefined && { timeUnit: input.timeUnit }),
-            },
-            kind: input.kind,
-          },
-          { signal, moveBytes: true },
-        )
-        if (!read.ok) throw new AppError(read.code, read.message, read.status, read.details)
-        const { result, record } = read
-        const id = await deps.records.create({
-          siteId,
-          modelId: input.modelId ?? null,
-          nodeId: input.nodeId ?? null,
-          ownerId: user.id,
-          filename: file.originalname.slice(0, 200),
-          storedName,
-          size,
-          sampleRateHz: read.sampleRateHz,
-          samples: read.samples,
-          rateFromForm: input.sampleRateHz !== undefined,
-          kind: result.kind,
-          result,
-          channels: record.channels.map((c, i) => ({
-            name: c.name.slice(0, 60),
-            column: c.column,
-            nodeId: i === 0 ? (input.nodeId ?? null) : null,
-            direction: null,
-          })),
-          timeUnit: record.timeUnit,
-          timeUnitSource: record.timeUnitSource,
-        })
-        return get(id)
+        return await keep(user, siteId, input, checkRecordFile(upload), signal)
       } catch (e) {
-        await deps.files.remove(storedName)
+        if (upload) await deps.files.remove(upload.filename)
         throw e
       }
     },
@@ -134,10 +147,16 @@ export function measurementsService(deps: {
           409,
         )
       }
-      const bytes = await deps.files.read(r.storedName)
-      const record = readRecord(bytes, readAsStored(r))
-      const others = r.result.peaks.map((p) => p.frequencyHz)
-      const peak = peakAt(record, frequencyHz, r.result.kind, others)
+      // An 8 MB record takes a while to read: in the worker pool, which reads the file itself.
+      const found = await deps.pool.peakAt({
+        file: deps.files.pathOf(r.storedName),
+        readAs: readAsStored(r),
+        frequencyHz,
+        kind: r.result.kind,
+        otherPeaksHz: r.result.peaks.map((p) => p.frequencyHz),
+      })
+      if (!found.ok) throw new AppError(found.code, found.message, found.status, found.details)
+      const { peak } = found
       const result = { ...r.result, peaks: [...r.result.peaks, peak] }
       await deps.records.saveResult(id, result)
       return { peak, record: await get(id) }

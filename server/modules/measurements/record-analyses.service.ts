@@ -17,8 +17,7 @@ import { readAsStored } from './record-file'
  * a refusal comes back as a 4xx naming the field.
  */
 export async function measureOnPool(pool: Pick<SizingPool, 'measure'>, job: MeasurementJob) {
-  // bytes read from the file store for this job alone: moved to the worker, not copied
-  const out = await pool.measure(job, { moveBytes: true })
+  const out = await pool.measure(job)
   if (out.ok) return out.value
   if (out.field === 'file') {
     throw new AppError('invalid-record', out.message, 400, [
@@ -41,17 +40,18 @@ export function recordAnalysesService(deps: {
 }) {
   async function source(id: number) {
     const r = await deps.measurements.stored(id)
-    return { r, bytes: await deps.files.read(r.storedName), readAs: readAsStored(r) }
+    // the worker reads the file itself
+    return { r, file: deps.files.pathOf(r.storedName), readAs: readAsStored(r) }
   }
 
   return {
     /** Identifies the modes of every channel by FDD/EFDD or SSI-COV and keeps the result. */
     async run(user: AuthUser, id: number, run: AnalysisRun): Promise<RecordAnalysis> {
-      const { r, bytes, readAs } = await source(id)
+      const { r, file, readAs } = await source(id)
       deps.measurements.assertCanEdit(user, r)
       const found = (await measureOnPool(deps.pool, {
         kind: 'identify',
-        bytes,
+        file,
         readAs,
         run,
       })) as Pick<RecordAnalysis, 'method' | 'modes' | 'result'>
@@ -78,8 +78,8 @@ export function recordAnalysesService(deps: {
 
     /** Every channel over time, thinned to at most `maxPoints` points with its peaks kept. */
     async history(id: number, maxPoints: number): Promise<RecordTimeHistory> {
-      const { bytes, readAs } = await source(id)
-      const job = { kind: 'history' as const, bytes, readAs, maxPoints }
+      const { file, readAs } = await source(id)
+      const job = { kind: 'history' as const, file, readAs, maxPoints }
       return (await measureOnPool(deps.pool, job)) as RecordTimeHistory
     },
   }

@@ -26,7 +26,7 @@ function asAppError(e: unknown): unknown {
 }
 
 /** Checks an upload is a text record before any of it is read as numbers. */
-export function checkRecordFile(file: { originalname: string; buffer: Buffer } | undefined) {
+export function checkRecordFile<F extends { originalname: string }>(file: F | undefined): F {
   if (!file) throw refused('Attach a record file in the field "record".', 400)
   if (!TEXT_NAME.test(file.originalname)) {
     throw refused('A record must be a .csv or .txt text file.', 415)

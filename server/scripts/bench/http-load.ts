@@ -69,8 +69,8 @@ function errorName(e: Error): string {
 
 /**
  * GETs sent on a fixed schedule, one every `everyMs`, until `done()` (at least `min` of them),
- * each timed from when it was due to be sent: a stall of the event loop (which this process
- * shares with the app) delays the sends too, and is still counted in full. p95 in ms.
+ * each timed from when it was due to be sent: a stall of this process's event loop delays the
+ * sends too, and is still counted in full. p95 in ms.
  */
 export async function scheduledP95(
   c: Client,

@@ -1,5 +1,6 @@
 /** The requests the server benchmark makes as a signed-in user would. */
 import { seeded } from '../../../shared/dynamics/eigen/seeded'
+import type { SizingInput } from '../../../shared/schemas/sizing'
 
 /** Signs in; returns the session cookie to send back. */
 export async function signIn(base: string, email: string, password: string): Promise<string> {
@@ -48,4 +49,26 @@ export function upload(
     headers: { cookie },
     body: form,
   })
+}
+
+/** One sizing and one record upload at once; what failed of them, as lines. */
+export async function sizeAndUpload(
+  base: string,
+  cookie: string,
+  sizing: SizingInput,
+  record: Uint8Array<ArrayBuffer>,
+) {
+  const failures: string[] = []
+  const check = async (r: Response) => {
+    if (!r.ok) failures.push(`${r.url}: ${r.status} ${(await r.text()).slice(0, 300)}`)
+  }
+  await Promise.all([
+    fetch(`${base}/api/sizings`, {
+      method: 'POST',
+      headers: { cookie, 'content-type': 'application/json' },
+      body: JSON.stringify({ input: sizing }),
+    }).then(check),
+    upload(base, cookie, sizing.siteId, record).then(check),
+  ])
+  return failures
 }

@@ -1,7 +1,8 @@
 /**
  * Demo data for the server benchmark, through the services: the demo people, sizings and
  * catalogue, a thousand quotes made by sales from the submitted demo sizing, and a 500-node
- * span model for the engineer to size while the health check is timed.
+ * span model for the engineer to size while the health check is timed (and a 20-node one to
+ * warm the server up with).
  */
 import type { Services } from '../../app'
 import { toAuthUser } from '../../modules/auth/auth.service'
@@ -9,6 +10,9 @@ import { seedCatalogue } from '../../../seed/seed-catalogue'
 import { seedPeople } from '../../../seed/seed-people'
 import { seedSizings } from '../../../seed/seed-sizings'
 import { benchNetwork } from './models'
+
+/** nodes of the model sized to warm the server up */
+export const WARM_NODES = 20
 
 async function demoUser(s: Services, email: string) {
   const u = await s.users.findByEmail(email)
@@ -47,5 +51,12 @@ export async function seedBench(s: Services, quotes: number, modelNodes: number)
     definition: benchNetwork(modelNodes),
     reason: 'benchmark',
   })
-  return { siteId: summary.siteId, modelId: model.id }
+  // a small model on the same site, to warm the server up with before it is timed
+  const small = await s.models.create(engineer, {
+    siteId: summary.siteId,
+    name: `Benchmark span, ${WARM_NODES} masses`,
+    definition: benchNetwork(WARM_NODES),
+    reason: 'benchmark warm-up',
+  })
+  return { siteId: summary.siteId, modelId: model.id, warmModelId: small.id }
 }
