@@ -101,17 +101,21 @@ export function route<B = undefined, Q = undefined, P = undefined, R = unknown>(
     ...(spec.before ?? []),
     async (req: Request, res: Response) => {
       const user = req.user as AuthUser
-      let result
+      let parts
       try {
-        const params = parsePart(spec.params, req.params, 'params')
-        const query = parsePart(spec.query, req.query, 'query')
-        const body = parsePart(spec.body, req.body, 'body')
-        result = await handler({ body, query, params, user, req, res })
+        parts = {
+          params: parsePart(spec.params, req.params, 'params'),
+          query: parsePart(spec.query, req.query, 'query'),
+          body: parsePart(spec.body, req.body, 'body'),
+        }
       } catch (e) {
-        // A refused request leaves no upload behind, removed before the answer goes out.
+        // A request refused for its fields leaves no upload behind, removed before the answer
+        // goes out. Past this point the service owns the file: it removes it on a refusal and
+        // keeps it once a stored row names it, even when a later step fails.
         await discardUpload(req.file)
         throw e
       }
+      const result = await handler({ ...parts, user, req, res })
       if (res.headersSent) return
       if (result === undefined) res.status(spec.status ?? 204).end()
       else {

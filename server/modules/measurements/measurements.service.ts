@@ -69,7 +69,7 @@ export function measurementsService(deps: {
     )
     if (!read.ok) throw new AppError(read.code, read.message, read.status, read.details)
     const { result, record } = read
-    const id = await deps.records.create({
+    return deps.records.create({
       siteId,
       modelId: input.modelId ?? null,
       nodeId: input.nodeId ?? null,
@@ -91,7 +91,6 @@ export function measurementsService(deps: {
       timeUnit: record.timeUnit,
       timeUnitSource: record.timeUnitSource,
     })
-    return get(id)
   }
 
   return {
@@ -118,12 +117,15 @@ export function measurementsService(deps: {
       upload: UploadedFile,
       signal?: AbortSignal,
     ) {
+      let id: number
       try {
-        return await keep(user, siteId, input, checkRecordFile(upload), signal)
+        id = await keep(user, siteId, input, checkRecordFile(upload), signal)
       } catch (e) {
         if (upload) await deps.files.remove(upload.filename)
         throw e
       }
+      // stored: the file stays even if reading the row back fails (an outage answers 503)
+      return get(id)
     },
 
     async remove(user: AuthUser, id: number) {
