@@ -25,27 +25,33 @@ export function sizingHandoverRepository(ds: DataSource) {
     async handOver(id: number, h: HandoverWrite): Promise<boolean> {
       try {
         await ds.transaction(async (em) => {
-          let acknowledgementId: number | null = null
-          if (h.acknowledgement) {
-            const a = h.acknowledgement
-            const saved = await em.save(
-              em.create(SizingAcknowledgementEntity, {
-                sizingId: id,
-                revision: h.revision,
-                failedChecks: a.failedChecks,
-                reason: a.reason,
-                acknowledgedById: a.byId,
-                acknowledgedAt: h.at,
-              }),
-            )
-            acknowledgementId = saved.id
-          }
+          // The state changes first: a concurrent handover waits on this row's lock and then
+          // finds it submitted, instead of both first inserting an acknowledgement (which locks
+          // the row shared through its foreign key) and then deadlocking on the update.
           const r = await em.update(
             SizingEntity,
             { id, state: 'draft', currentRevision: h.revision },
-            { state: 'submitted', submittedAt: h.at, handoverNote: h.note, acknowledgementId },
+            {
+              state: 'submitted',
+              submittedAt: h.at,
+              handoverNote: h.note,
+              acknowledgementId: null,
+            },
           )
           if (!r.affected) throw new NotHandedOver()
+          const a = h.acknowledgement
+          if (!a) return
+          const saved = await em.save(
+            em.create(SizingAcknowledgementEntity, {
+              sizingId: id,
+              revision: h.revision,
+              failedChecks: a.failedChecks,
+              reason: a.reason,
+              acknowledgedById: a.byId,
+              acknowledgedAt: h.at,
+            }),
+          )
+          await em.update(SizingEntity, { id }, { acknowledgementId: saved.id })
         })
         return true
       } catch (e) {
