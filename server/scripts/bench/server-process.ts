@@ -33,7 +33,9 @@ export async function startServerProcess(
 ): Promise<ServerProcess> {
   const port = await freePort()
   const base = `http://127.0.0.1:${port}`
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
+  // BENCH_SERVER_NODE_ARGS: extra Node.js options for the server only, e.g. to profile it
+  const extra = (process.env.BENCH_SERVER_NODE_ARGS ?? '').split(' ').filter(Boolean)
+  const child = spawn(process.execPath, [...extra, '--import', 'tsx', 'server/main.ts'], {
     env: { ...process.env, ...env, HOST: '127.0.0.1', PORT: String(port) },
     stdio: ['ignore', 'ignore', 'pipe'],
   })
