@@ -2,17 +2,18 @@ import type { Request, RequestHandler, Response } from 'express'
 import type { AuthUser } from '../middleware/authenticate'
 import type { ZodType } from 'zod'
 import type { Role } from '../../shared/schemas/auth'
+import type { JsonText } from './json-text'
 
 /**
  * What a handler may return for a JSON answer of type T: a Date where T has a string, since
- * the JSON of a Date is its ISO string.
+ * the JSON of a Date is its ISO string; a stored JSON text of a field's type (json-text.ts).
  */
 export type Wire<T> = T extends string
   ? T | Date
   : T extends readonly (infer U)[]
-    ? Wire<U>[]
+    ? Wire<U>[] | JsonText<T>
     : T extends object
-      ? { [K in keyof T]: Wire<T[K]> }
+      ? { [K in keyof T]: Wire<T[K]> } | JsonText<T>
       : T
 
 export type Method = 'get' | 'post' | 'put' | 'patch' | 'delete'

@@ -2,6 +2,7 @@ import type { Request, RequestHandler, Response, Router } from 'express'
 import type { ZodType } from 'zod'
 import { z } from 'zod'
 import { AppError } from './app-error'
+import { answerJson } from './json-text'
 import { discardUpload } from './upload'
 import { OUT_OF_RANGE } from '../../shared/schemas/model'
 import type { AuthUser } from '../middleware/authenticate'
@@ -66,7 +67,7 @@ function checkResponse(spec: RouteSpec<unknown, unknown, unknown>, result: unkno
   if (!spec.response)
     throw new AppError('response-contract', `${where} answers JSON but declares no schema`, 500)
   // What the client receives: dates as strings, undefined fields gone.
-  const parsed = spec.response.safeParse(JSON.parse(JSON.stringify(result)))
+  const parsed = spec.response.safeParse(JSON.parse(answerJson(result)))
   if (parsed.success) return
   const details = issuesOf(parsed.error, 'response')
   const first = details[0]
@@ -80,8 +81,9 @@ function checkResponse(spec: RouteSpec<unknown, unknown, unknown>, result: unkno
 
 /**
  * Declares one route: access check, validation of params, query and body against the shared
- * schemas, and an entry in the API document. The handler returns the JSON answer, or undefined
- * when it wrote the response itself.
+ * schemas, and an entry in the API document. The handler returns the JSON answer (whose
+ * top-level fields may be stored JSON texts, json-text.ts), or undefined when it wrote the
+ * response itself.
  */
 export function route<B = undefined, Q = undefined, P = undefined, R = unknown>(
   router: Router,
@@ -121,7 +123,10 @@ export function route<B = undefined, Q = undefined, P = undefined, R = unknown>(
       else {
         if (registry.checkResponses)
           checkResponse(spec as RouteSpec<unknown, unknown, unknown>, result)
-        res.status(spec.status ?? 200).json(result)
+        res
+          .status(spec.status ?? 200)
+          .type('json')
+          .send(answerJson(result))
       }
     },
   )
