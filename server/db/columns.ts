@@ -32,3 +32,9 @@ export const MomentColumn = (extras: ColumnExtras = {}) =>
 /** A JSON document (LONGTEXT through jsonTransformer). */
 export const JsonColumn = (extras: ColumnExtras = {}) =>
   Column('longtext', { transformer: jsonTransformer, ...extras })
+
+/**
+ * A JSON document kept as its text (LONGTEXT, no transformer): written and read as the text it
+ * is, for a large engine result the server only stores and answers (http/json-text.ts).
+ */
+export const JsonTextColumn = (extras: ColumnExtras = {}) => Column('longtext', extras)

@@ -1,15 +1,12 @@
 import { fileURLToPath } from 'node:url'
 import { Piscina } from 'piscina'
-import type { SizingEvaluation } from '../../shared/sizing/evaluate-sizing'
 import type { Config } from '../config'
 import { AppError } from '../http/app-error'
 import type { PeakJob, PeakOutcome, RecordJob, RecordOutcome } from './record.worker'
-import type { SizingJob } from './sizing.worker'
+import type { SizingJob, SizingOutcome } from './sizing.worker'
 import type { MeasurementJob, MeasurementOutcome } from './measurements.worker'
 
-export type SizingOutcome =
-  | { ok: true; evaluation: SizingEvaluation }
-  | { ok: false; field: string; message: string; unsolvable?: boolean }
+export type { SizingOutcome } from './sizing.worker'
 
 /** How a job may be cut short. */
 export interface JobOptions {

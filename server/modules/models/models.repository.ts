@@ -8,16 +8,23 @@ export function modelsRepository(ds: DataSource) {
   const models = ds.getRepository(HostModelEntity)
   const revisions = ds.getRepository(ModelRevisionEntity)
 
+  async function definitionAt(modelId: number, revision: number) {
+    const r = await revisions.findOneBy({ modelId, revision })
+    return r?.definition ?? null
+  }
+
+  /** A model with its current definition and the list of its revisions (not their content). */
   async function hydrate(m: HostModelEntity): Promise<HostModel> {
     const revs = await revisions
       .createQueryBuilder('r')
+      // Only what the list shows: a model edited often would otherwise parse every definition.
+      .select(['r.id', 'r.revision', 'r.reason', 'r.createdAt'])
       // Only the author's name is read, from the users table the users module owns.
       .leftJoin('users', 'u', 'u.id = r.createdById')
       .addSelect('u.name', 'createdByName')
       .where('r.modelId = :id', { id: m.id })
       .orderBy('r.revision', 'ASC')
       .getRawAndEntities()
-    const current = revs.entities.find((r) => r.revision === m.currentRevision)
     return {
       id: m.id,
       siteId: m.siteId,
@@ -26,7 +33,7 @@ export function modelsRepository(ds: DataSource) {
       ownerId: m.ownerId,
       ownerName: m.owner?.name ?? '',
       currentRevision: m.currentRevision,
-      definition: current?.definition as ModelDefinition,
+      definition: (await definitionAt(m.id, m.currentRevision)) as ModelDefinition,
       revisions: revs.entities.map((r, i) => ({
         revision: r.revision,
         reason: r.reason,
@@ -50,9 +57,10 @@ export function modelsRepository(ds: DataSource) {
       })
       return Promise.all(rows.map(hydrate))
     },
-    async definitionAt(modelId: number, revision: number) {
-      const r = await revisions.findOneBy({ modelId, revision })
-      return r?.definition ?? null
+    definitionAt,
+    async siteIdOf(id: number): Promise<number | null> {
+      const m = await models.findOne({ where: { id }, select: { id: true, siteId: true } })
+      return m?.siteId ?? null
     },
     /** One revision with who made it and why; null when the model has no such revision. */
     async revisionAt(modelId: number, revision: number): Promise<ModelRevision | null> {

@@ -21,6 +21,12 @@ export function modelsService(deps: { models: ModelsRepository; sites: SitesServ
 
   return {
     get,
+    /** The site a model belongs to (404 when there is no such model), without its content. */
+    async siteOf(id: number): Promise<number> {
+      const siteId = await deps.models.siteIdOf(id)
+      if (siteId === null) throw notFound('model')
+      return siteId
+    },
     list: (siteId?: number) => deps.models.list(siteId),
 
     async create(user: AuthUser, input: ModelCreate) {

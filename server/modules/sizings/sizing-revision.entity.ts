@@ -2,9 +2,8 @@ import { Entity, Index, type Relation } from 'typeorm'
 import { ReferenceTo } from '../../db/reference-column'
 import { NumberedCreatedRecord } from '../../db/record-columns'
 import type { SizingInput, SizingSummary } from '../../../shared/schemas/sizing'
-import type { SizingEvaluation } from '../../../shared/sizing/evaluate-sizing'
 import type { SizingEntity } from './sizing.entity'
-import { IntColumn, JsonColumn } from '../../db/columns'
+import { IntColumn, JsonColumn, JsonTextColumn } from '../../db/columns'
 
 /** One saved state of a sizing: the choices and the server's authoritative result. */
 @Entity('sizing_revisions')
@@ -15,7 +14,8 @@ export class SizingRevisionEntity extends NumberedCreatedRecord {
 
   @IntColumn() revision: number
   @JsonColumn() input: SizingInput
-  @JsonColumn() evaluation: SizingEvaluation
+  /** the SizingEvaluation's JSON text, as the worker made it */
+  @JsonTextColumn() evaluation: string
   @JsonColumn() summary: Omit<
     SizingSummary,
     'id' | 'revision' | 'state' | 'submittedAt' | 'handoverNote' | 'ownerName'

@@ -20,18 +20,33 @@ function reductionFactor(p: { without: number | null; with: number | null }) {
   return p.without !== null && p.with ? p.without / p.with : null
 }
 
-/** What sales, quotes and production read of a saved revision. */
-export function summarise(site: Site, input: SizingInput, ev: SizingEvaluation): StoredSummary {
+/** The part of a summary the input and the result alone give: made in the worker thread. */
+export type ResultSummary = Omit<StoredSummary, 'siteId' | 'siteName' | 'companyId' | 'companyName'>
+
+/**
+ * What sales, quotes and production read of a saved revision: the result's figures
+ * (summariseResult, in the worker) with the site's names, in the order stored summaries have.
+ */
+export function withSite(site: Site, summary: ResultSummary): StoredSummary {
+  const { title, ...rest } = summary
+  return {
+    title,
+    siteId: site.id,
+    siteName: site.name,
+    companyId: site.companyId,
+    companyName: site.companyName,
+    ...rest,
+  }
+}
+
+/** The figures of a summary that come from the input and the engine's result. */
+export function summariseResult(input: SizingInput, ev: SizingEvaluation): ResultSummary {
   const { result, checks, response } = ev
   const a = result.absorber
   const target = result.modes[result.targetMode - 1]
   if (!a || !result.design || !target) throw new Error('a sizing result without an absorber')
   return {
     title: input.title,
-    siteId: site.id,
-    siteName: site.name,
-    companyId: site.companyId,
-    companyName: site.companyName,
     targetMode: result.targetMode,
     hostFrequencyHz: target.frequencyHz,
     effectiveMass: result.effectiveMass ?? 0,

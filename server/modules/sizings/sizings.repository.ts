@@ -1,4 +1,4 @@
-import type { DataSource } from 'typeorm'
+import type { DataSource, EntityManager } from 'typeorm'
 import type {
   SizingInput,
   SizingListItem,
@@ -18,6 +18,7 @@ import {
 import { SizingRevisionEntity } from './sizing-revision.entity'
 import { SizingEntity } from './sizing.entity'
 import type { StoredSummary } from './sizing-summary'
+import { JsonText } from '../../http/json-text'
 
 export interface SizingRecord {
   id: number
@@ -36,7 +37,8 @@ export interface SizingRecord {
 
 export interface RevisionData {
   input: SizingInput
-  evaluation: SizingEvaluation
+  /** stored and answered as the text the worker made */
+  evaluation: JsonText<SizingEvaluation>
   summary: StoredSummary
 }
 
@@ -133,6 +135,33 @@ export function sizingsListFrom(ds: DataSource) {
   )
 }
 
+/**
+ * One revision row, in a plain INSERT: save() would also merge the whole entity, the input and
+ * summary objects included, into its change set, several ms of the event loop for a large one.
+ */
+function insertRevision(
+  em: EntityManager,
+  sizingId: number,
+  revision: number,
+  createdById: number,
+  data: RevisionData,
+) {
+  return em
+    .createQueryBuilder()
+    .insert()
+    .into(SizingRevisionEntity)
+    .values({
+      sizingId,
+      revision,
+      input: data.input,
+      evaluation: data.evaluation.text,
+      summary: data.summary,
+      createdById,
+    })
+    .updateEntity(false)
+    .execute()
+}
+
 export function sizingsRepository(ds: DataSource) {
   const sizings = ds.getRepository(SizingEntity)
   const revisions = ds.getRepository(SizingRevisionEntity)
@@ -144,7 +173,8 @@ export function sizingsRepository(ds: DataSource) {
     },
     async revision(sizingId: number, revision: number): Promise<RevisionData | null> {
       const r = await revisions.findOneBy({ sizingId, revision })
-      return r ? { input: r.input, evaluation: r.evaluation, summary: r.summary } : null
+      if (!r) return null
+      return { input: r.input, evaluation: new JsonText(r.evaluation), summary: r.summary }
     },
     /**
      * One page of sizings, last changed first, with a few summary figures read from the current
@@ -175,16 +205,7 @@ export function sizingsRepository(ds: DataSource) {
             handoverNote: '',
           }),
         )
-        await em.save(
-          em.create(SizingRevisionEntity, {
-            sizingId: s.id,
-            revision: 1,
-            input: data.input,
-            evaluation: data.evaluation,
-            summary: data.summary,
-            createdById: data.ownerId,
-          }),
-        )
+        await insertRevision(em, s.id, 1, data.ownerId, data)
         return s.id
       })
     },
@@ -202,16 +223,7 @@ export function sizingsRepository(ds: DataSource) {
           { currentRevision: base + 1, modelId: data.modelId, title: data.title },
         )
         if (!moved.affected) return false
-        await em.save(
-          em.create(SizingRevisionEntity, {
-            sizingId: id,
-            revision: base + 1,
-            input: data.input,
-            evaluation: data.evaluation,
-            summary: data.summary,
-            createdById: userId,
-          }),
-        )
+        await insertRevision(em, id, base + 1, userId, data)
         return true
       })
     },

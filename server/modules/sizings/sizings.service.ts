@@ -8,14 +8,14 @@ import type {
 import { AppError, forbidden, notFound } from '../../http/app-error'
 import type { AuthUser } from '../../middleware/authenticate'
 import type { JobOptions, SizingPool } from '../../workers/pool'
-import { checkModel } from '../models/check-model'
 import type { ModelsService } from '../models/models.service'
 import type { SitesService } from '../sites/sites.service'
 import { designChecks } from '../../../shared/sizing/design-checks'
-import { sizingFieldPath } from './engine-field'
 import { sizingHandover, type HandoverDeps } from './sizing-handover.service'
-import { summarise } from './sizing-summary'
-import type { SizingRecord } from './sizings.repository'
+import { withSite } from './sizing-summary'
+import type { RevisionData, SizingRecord } from './sizings.repository'
+import { JsonText } from '../../http/json-text'
+import type { SizingEvaluation } from '../../../shared/sizing/evaluate-sizing'
 import type { HandedOverRepository } from './handed-over.repository'
 
 export interface SizingsDeps extends HandoverDeps {
@@ -58,28 +58,26 @@ export function sizingsService(deps: SizingsDeps) {
       ])
   }
 
-  /** The authoritative solve, in the worker pool; a model error becomes a 400 naming the field. */
-  async function evaluate(input: SizingInput, job: JobOptions = {}) {
+  /**
+   * The authoritative solve, in the worker pool, which also checks the stored model again (it
+   * may be older than today's checks); a refusal names the field. The evaluation comes back as
+   * its JSON text and is stored and answered as such.
+   */
+  async function evaluate(input: SizingInput, job: JobOptions = {}): Promise<RevisionData> {
     const site = await deps.sites.get(input.siteId)
     await checkRecords(site.id, input.records)
-    const model = await deps.models.get(input.modelId)
-    if (model.siteId !== site.id)
+    if ((await deps.models.siteOf(input.modelId)) !== site.id)
       throw new AppError('model-not-of-site', 'The model belongs to another site.', 400, [
         { path: 'body.input.modelId', message: 'not a model of this site' },
       ])
     const definition = await deps.models.definitionAt(input.modelId, input.modelRevision)
-    // A model stored before today's checks is checked again before it reaches the engine.
-    checkModel(definition, 'model')
     const out = await deps.pool.run({ model: definition, input }, job)
-    if (!out.ok && out.unsolvable)
-      throw new AppError('unsolvable-model', out.message, 422, [
-        { path: 'model', message: out.message },
-      ])
-    if (!out.ok) {
-      const path = sizingFieldPath(out.field)
-      throw new AppError('invalid-model', out.message, 400, [{ path, message: out.message }])
+    if (!out.ok) throw new AppError(out.code, out.message, out.status, out.details)
+    return {
+      input,
+      evaluation: new JsonText<SizingEvaluation>(out.evaluation),
+      summary: withSite(site, out.summary),
     }
-    return { input, evaluation: out.evaluation, summary: summarise(site, input, out.evaluation) }
   }
 
   /** One page of the sizings the user may see (every row without a limit) and the total. */
