@@ -78,8 +78,7 @@ export async function benchStudy(progress: (s: string) => void): Promise<StudyFi
         const t0 = performance.now()
         const r = await pool.run(job(n), STUDY_BUDGET[n]!)
         if (r === null) note = `stopped after the ${STUDY_BUDGET[n]! / 1000} s budget`
-        else if (!r.outcome.ok)
-          throw new Error(`study n=${n}: ${r.outcome.message}`)
+        else if (!r.outcome.ok) throw new Error(`study n=${n}: ${r.outcome.message}`)
         else {
           times.push(performance.now() - t0)
           cpu.push(r.cpuMs)
