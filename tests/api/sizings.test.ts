@@ -76,6 +76,23 @@ describe('model revisions', () => {
     const second = await agent.get(`/api/models/${model.id}/revisions/2`)
     expect(second.body.definition.springs[0].stiffness).toBe(300e6)
     expect(second.body.createdByName).not.toBe('')
+    // The model itself: the current revision's structure, and every revision listed by reason.
+    const now = await agent.get(`/api/models/${model.id}`)
+    expect(now.body.definition).toEqual(second.body.definition)
+    expect(now.body.revisions).toEqual([
+      {
+        revision: 1,
+        reason: 'first version',
+        createdAt: first.body.createdAt,
+        createdByName: first.body.createdByName,
+      },
+      {
+        revision: 2,
+        reason: 'stiffer ground storey',
+        createdAt: second.body.createdAt,
+        createdByName: second.body.createdByName,
+      },
+    ])
   })
 
   it('answers 404 for a revision or a model that does not exist, 401 and 403 to others', async () => {
