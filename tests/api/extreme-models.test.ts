@@ -70,6 +70,27 @@ describe('models at the edge of the engine’s range', () => {
     expect(res.body.error.details[0].path).toMatch(/^body\.definition\.nodes\.[12]\.mass$/)
   })
 
+  it("refuses to size a stored model that fails today's checks, with 422 naming the node", async () => {
+    // A model stored before the conditioning check existed: its revision is rewritten in the
+    // table, as an older version of the server could have stored it.
+    const model = (await createModel(buildingDefinition())).body
+    await t.ds.query('UPDATE model_revisions SET definition = ? WHERE modelId = ?', [
+      JSON.stringify(chain(1e9, 1e-6, 1e3, 1e6)),
+      model.id,
+    ])
+    const input = sizingInput(siteId, model.id, {
+      absorberNode: 'b',
+      excitationNode: 'b',
+      responseNode: 'b',
+    })
+    const res = await engineer.post('/api/sizings').send({ input })
+    expect(res.status).toBe(422)
+    expect(res.body.error.code).toBe('ill-conditioned-model')
+    expect(res.body.error.details[0].path).toMatch(/^model\.nodes\.[12]\.mass$/)
+    const list = await engineer.get('/api/sizings')
+    expect(list.body.filter((s: { siteId: number }) => s.siteId === siteId)).toEqual([])
+  })
+
   it('refuses a sizing band of 1e-300 Hz and an absurd tuning with 422 before any solve', async () => {
     const model = (await createModel(buildingDefinition())).body
     const band = await engineer.post('/api/sizings').send({
