@@ -103,6 +103,25 @@ describe('handing over a design that fails its checks', () => {
     expect(summary.designAcknowledgement).toEqual(ack)
   })
 
+  it('hands over once when several handovers of one sizing arrive at once, each time', async () => {
+    // Two at once deadlocked once in a full run (each locked the sizing through the
+    // acknowledgement's foreign key, then waited to update it): repeated here, four at a time.
+    const body = {
+      revision: 1,
+      note: '',
+      acknowledge: { checks: ['acceptance', 'catalogue'], reason: REASON },
+    }
+    for (let round = 0; round < 4; round++) {
+      const { agent, sizing } = await overLimitSizing()
+      const answers = await Promise.all(
+        Array.from({ length: 4 }, () => agent.post(`/api/sizings/${sizing.id}/submit`).send(body)),
+      )
+      expect(answers.map((a) => a.status)).toEqual([200, 200, 200, 200])
+      expect(answers.map((a) => a.body.state)).toEqual(Array(4).fill('submitted'))
+      expect(await acknowledgementRows(sizing.id)).toBe(1)
+    }
+  })
+
   it('refuses a stale revision with 409, and a repeated reopen answers the draft without the acknowledgement', async () => {
     const { agent, sizing } = await overLimitSizing()
     const stale = await agent.post(`/api/sizings/${sizing.id}/submit`).send({ revision: 2 })
