@@ -48,7 +48,7 @@ export async function benchServer(
     if (!parts.health) return out
     const server = await startServerProcess({ ...env, NODE_ENV: 'production' })
     try {
-      out.health = await benchHealth(server.base, ids, SIZING_NODES, progress)
+      out.health = await benchHealth(server, ids, SIZING_NODES, progress)
     } finally {
       await server.stop()
     }

@@ -13,6 +13,7 @@ import { client, scheduledP95 } from './http-load'
 import { benchSizing } from './models'
 import { recordFile, signIn, sizeAndUpload } from './requests'
 import { WARM_NODES } from './seed-bench'
+import type { ServerProcess } from './server-process'
 
 /** ms between health probes */
 const PROBE_MS = 10
@@ -50,11 +51,12 @@ async function busyClients(base: string, cookie: string, sizing: SizingInput) {
 }
 
 export async function benchHealth(
-  base: string,
+  server: Pick<ServerProcess, 'base' | 'eventLoopCpuMs'>,
   ids: BenchIds,
   sizingNodes: number,
   progress: (s: string) => void,
 ) {
+  const { base } = server
   const engineer = await signIn(base, 'engineer@quellnode.test', 'demo-engineer-1')
   progress('health, idle and busy')
   // A server that has served before: its routes and both worker threads warm, as in use.
@@ -71,10 +73,12 @@ export async function benchHealth(
     const ownLoop = monitorEventLoopDelay({ resolution: 1 })
     ownLoop.enable()
     let running = true
+    const cpuBefore = server.eventLoopCpuMs()
     const busyWork = busyThread.run().finally(() => (running = false))
     const t0 = performance.now()
     const busy = await scheduledP95(health, '/api/health', PROBE_MS, 50, () => !running)
     ownLoop.disable()
+    const cpuAfter = server.eventLoopCpuMs()
     check(await busyWork)
     progress(
       `health p95 idle ${idle.p95.toFixed(1)} ms; busy ${busy.p95.toFixed(1)} ms over ` +
@@ -82,6 +86,11 @@ export async function benchHealth(
         `(longest ${busy.max.toFixed(0)} ms; the prober's own event loop stalled at most ` +
         `${(ownLoop.max / 1e6).toFixed(0)} ms)`,
     )
+    if (cpuBefore !== null && cpuAfter !== null)
+      progress(
+        `health: the server's event loop ran ${(cpuAfter - cpuBefore).toFixed(0)} ms of CPU ` +
+          'over the busy phase (probes, the sizing and the upload; worker threads not counted)',
+      )
     if (idle.errors + busy.errors > 0)
       progress(`health: ${idle.errors + busy.errors} probes lost to failed connections`)
     return { idleP95Ms: idle.p95, busyP95Ms: busy.p95 }

@@ -4,6 +4,7 @@
  */
 import { spawn } from 'node:child_process'
 import { once } from 'node:events'
+import { readFileSync } from 'node:fs'
 import { createServer } from 'node:net'
 
 /** A loopback port free at this moment. */
@@ -21,6 +22,21 @@ export interface ServerProcess {
   base: string
   /** stops the server (SIGTERM, as `npm run stop` does) and waits for it to exit */
   stop(): Promise<void>
+  /**
+   * CPU time its main thread (the event loop) has used so far, in ms, or null where the system
+   * does not say (read from Linux's /proc; worker threads and MariaDB are not counted)
+   */
+  eventLoopCpuMs(): number | null
+}
+
+/** ms of CPU a thread has run, from /proc/<pid>/task/<tid>/schedstat (ns on the CPU first). */
+function threadCpuMs(pid: number | undefined): number | null {
+  if (pid === undefined) return null
+  try {
+    return Number(readFileSync(`/proc/${pid}/task/${pid}/schedstat`, 'utf8').split(' ')[0]) / 1e6
+  } catch {
+    return null
+  }
 }
 
 /**
@@ -54,7 +70,7 @@ export async function startServerProcess(
       (r) => r.ok,
       () => false,
     )
-    if (up) return { base, stop }
+    if (up) return { base, stop, eventLoopCpuMs: () => threadCpuMs(child.pid) }
     await new Promise((r) => setTimeout(r, 100))
   }
   await stop()
