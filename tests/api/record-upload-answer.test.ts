@@ -5,8 +5,9 @@ import { appWithOwnUploads } from '../helpers/app'
 import { signedIn } from '../helpers/factories'
 import { buildingDefinition, makeCompany, siteBody } from '../helpers/records'
 
-// The upload's answer is made from what was stored, without reading the row back: these check
-// it is, byte for byte, the record as GET /api/records/:id shows it afterwards.
+// The upload's answer is made from what was stored, without reading the row back, and the list
+// counts peaks in MariaDB without reading the identifications: these check both against the
+// record as GET /api/records/:id shows it.
 
 const t = appWithOwnUploads('record-answer')
 
@@ -79,5 +80,27 @@ describe('the answer to a record upload', () => {
     expect(res.body.ownerName).not.toBe('')
     const again = await agent.get(`/api/records/${res.body.id}`)
     expect(res.text).toBe(again.text)
+  })
+
+  it('lists the record with the summary GET shows and the count of its peaks after a drop', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const company = await makeCompany(t)
+    const site = (await agent.post('/api/sites').send(siteBody(company.id))).body as { id: number }
+    const upload = (file: string) =>
+      agent
+        .post(`/api/sites/${site.id}/records`)
+        .attach('record', path.resolve('seed/records/heel-drop-office-floor.csv'), file)
+    const first = (await upload('first.csv')).body as { id: number; peakCount: number }
+    const second = (await upload('second.csv')).body as { id: number }
+    expect(first.peakCount).toBeGreaterThan(1)
+    expect((await agent.delete(`/api/records/${first.id}/peaks/0`)).status).toBe(200)
+    const list = (await agent.get(`/api/sites/${site.id}/records`)).body as { id: number }[]
+    expect(list.map((r) => r.id)).toEqual([second.id, first.id])
+    for (const listed of list) {
+      const { result, ...summary } = (await agent.get(`/api/records/${listed.id}`)).body
+      expect(listed).toEqual({ ...summary, peakCount: result.peaks.length })
+      expect(summary.peakCount).toBe(result.peaks.length)
+    }
+    expect(list[1]).toMatchObject({ peakCount: first.peakCount - 1 })
   })
 })

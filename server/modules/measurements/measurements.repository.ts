@@ -1,55 +1,14 @@
-import type { DataSource } from 'typeorm'
+import type { DataSource, SelectQueryBuilder } from 'typeorm'
 import type { IdentificationResult, TimeUnit, TimeUnitSource } from '../../../shared/measurements'
 import type {
   MeasurementRecord,
   MeasurementRecordSummary,
   RecordChannelInfo,
 } from '../../../shared/schemas/measurement'
-import type { JsonText } from '../../http/json-text'
+import { JsonText } from '../../http/json-text'
 import { MeasurementRecordEntity } from './measurement-record.entity'
+import { SUMMARY_COLUMNS, summaryRow, toSummary, type SummaryExtras } from './record-summary'
 import { RecordAnalysisEntity } from './record-analysis.entity'
-
-/** A row's fields the summary shows, with the owner's name and the count of peaks. */
-type SummaryRow = Omit<MeasurementRecordEntity, 'site' | 'owner' | 'result'> & {
-  ownerName: string
-  peakCount: number
-}
-
-/** A record stored before channels were kept had one channel, tied to the record's node. */
-function channelsOf(r: SummaryRow): RecordChannelInfo[] {
-  if (r.channels) return r.channels
-  const column = r.rateFromForm ? 1 : 2
-  return [{ name: 'channel 1', column, nodeId: r.nodeId, direction: null }]
-}
-
-function toSummary(r: SummaryRow, analysisCount: number): MeasurementRecordSummary {
-  return {
-    id: r.id,
-    siteId: r.siteId,
-    modelId: r.modelId,
-    nodeId: r.nodeId,
-    ownerId: r.ownerId,
-    ownerName: r.ownerName,
-    filename: r.filename,
-    size: r.size,
-    sampleRateHz: r.sampleRateHz,
-    samples: r.samples,
-    kind: r.kind,
-    peakCount: r.peakCount,
-    channels: channelsOf(r),
-    timeUnit: r.timeUnit,
-    timeUnitSource: r.timeUnitSource,
-    analysisCount,
-    createdAt: r.createdAt.toISOString(),
-  }
-}
-
-/** A stored row as the summary reads it. */
-const summaryRow = (r: MeasurementRecordEntity): SummaryRow => ({
-  ...r,
-  ownerName: r.owner?.name ?? '',
-  peakCount: r.result.peaks.length,
-})
 
 export interface NewRecord {
   siteId: number
@@ -70,8 +29,8 @@ export interface NewRecord {
   timeUnitSource: TimeUnitSource | null
 }
 
-/** A new record as GET /api/records/:id answers it, its identification as the stored text. */
-export type NewRecordView = MeasurementRecordSummary & { result: JsonText<IdentificationResult> }
+/** A record as GET /api/records/:id answers it, its identification as the stored text. */
+export type RecordView = MeasurementRecordSummary & { result: JsonText<IdentificationResult> }
 
 export function measurementsRepository(ds: DataSource) {
   const repo = ds.getRepository(MeasurementRecordEntity)
@@ -87,6 +46,27 @@ export function measurementsRepository(ds: DataSource) {
       .getRawMany()
     return new Map(rows.map((r) => [Number(r.recordId), Number(r.n)]))
   }
+  /** The summary's columns, the owner's name and the count of peaks, counted by MariaDB. */
+  const summaryQuery = () =>
+    repo
+      .createQueryBuilder('r')
+      .leftJoin('r.owner', 'o')
+      .select(SUMMARY_COLUMNS.map((c) => `r.${c}`))
+      .addSelect('o.name', 'ownerName')
+      .addSelect("JSON_LENGTH(r.result, '$.peaks')", 'peakCount')
+  async function summaries(query: SelectQueryBuilder<MeasurementRecordEntity>) {
+    const { entities, raw } = await query.getRawAndEntities<SummaryExtras>()
+    const extras = new Map(raw.map((x) => [Number(x.r_id), x]))
+    return entities.map((e) => {
+      const x = extras.get(e.id)
+      return {
+        ...e,
+        ownerName: x?.ownerName ?? '',
+        peakCount: Number(x?.peakCount),
+        resultJson: x?.resultJson,
+      }
+    })
+  }
   return {
     async findById(id: number) {
       const r = await repo.findOne({ where: { id }, relations: { owner: true } })
@@ -99,14 +79,30 @@ export function measurementsRepository(ds: DataSource) {
           }
         : null
     },
+    /**
+     * A record as GET /api/records/:id answers it, its identification as the stored text: the
+     * event loop neither parses nor re-serialises its ~80 kB.
+     */
+    async viewById(id: number): Promise<RecordView | null> {
+      const [row] = await summaries(
+        summaryQuery().addSelect('r.result', 'resultJson').where('r.id = :id', { id }),
+      )
+      if (!row) return null
+      const { resultJson, ...summary } = row
+      if (typeof resultJson !== 'string') throw new Error(`record ${id}: no identification read`)
+      const result = new JsonText<IdentificationResult>(resultJson)
+      return { ...toSummary(summary, (await counts([id])).get(id) ?? 0), result }
+    },
+    /** The site's records, newest first, without reading their identifications. */
     async listBySite(siteId: number) {
-      const rows = await repo.find({
-        where: { siteId },
-        relations: { owner: true },
-        order: { createdAt: 'DESC', id: 'DESC' },
-      })
+      const rows = await summaries(
+        summaryQuery()
+          .where('r.siteId = :siteId', { siteId })
+          .orderBy('r.createdAt', 'DESC')
+          .addOrderBy('r.id', 'DESC'),
+      )
       const n = await counts(rows.map((r) => r.id))
-      return rows.map((r) => toSummary(summaryRow(r), n.get(r.id) ?? 0))
+      return rows.map((r) => toSummary(r, n.get(r.id) ?? 0))
     },
     /**
      * Stores a new record in one INSERT, its identification as the text it came in: no entity
@@ -128,7 +124,7 @@ export function measurementsRepository(ds: DataSource) {
      * MariaDB set (its time) or another table holds (the owner's name): the ~80 kB are not read
      * back. Null when the record is gone again; it has no analyses yet.
      */
-    async inserted(id: number, input: NewRecord, peakCount: number): Promise<NewRecordView | null> {
+    async inserted(id: number, input: NewRecord, peakCount: number): Promise<RecordView | null> {
       const set = await repo
         .createQueryBuilder('r')
         .innerJoin('r.owner', 'o')

@@ -38,6 +38,13 @@ export function measurementsService(deps: {
     return record
   }
 
+  /** The record as the API answers it: its identification passed on as the stored text. */
+  async function view(id: number) {
+    const r = await deps.records.viewById(id)
+    if (!r) throw notFound('record')
+    return r
+  }
+
   function assertCanEdit(user: AuthUser, r: StoredRecord) {
     if (user.role !== 'admin' && r.ownerId !== user.id)
       throw forbidden('Only the engineer who uploaded this record may change it.')
@@ -104,6 +111,7 @@ export function measurementsService(deps: {
 
   return {
     get,
+    view,
     stored,
     assertCanEdit,
     async list(siteId: number) {
@@ -172,7 +180,7 @@ export function measurementsService(deps: {
       const { peak } = found
       const result = { ...r.result, peaks: [...r.result.peaks, peak] }
       await deps.records.saveResult(id, result)
-      return { peak, record: await get(id) }
+      return { peak, record: await view(id) }
     },
 
     /** Drops a false peak (noise, a machine harmonic) from the record's list. */
@@ -182,7 +190,7 @@ export function measurementsService(deps: {
       if (index >= r.result.peaks.length) throw notFound('peak')
       const peaks = r.result.peaks.filter((_, i) => i !== index)
       await deps.records.saveResult(id, { ...r.result, peaks })
-      return get(id)
+      return view(id)
     },
   }
 }
