@@ -1,6 +1,5 @@
 import { readFileSync } from 'node:fs'
 import type {
-  IdentificationResult,
   IdentifiedPeak,
   RecordKind,
   TimeUnit,
@@ -28,13 +27,21 @@ export interface ReadSummary {
 /** A refusal crosses the thread as data: errors lose their class on the way. */
 type Refusal = { ok: false; code: string; message: string; status: number; details?: unknown }
 
+/**
+ * A read and identified record. The identification (~80 kB of JSON with its spectrum) comes as
+ * the JSON text the row stores and the answer carries as it is (server/http/json-text.ts): the
+ * event loop neither copies it in as objects nor stringifies it again.
+ */
 export type RecordOutcome =
   | {
       ok: true
       sampleRateHz: number
       samples: number
       record: ReadSummary
-      result: IdentificationResult
+      kind: RecordKind
+      peakCount: number
+      /** JSON.stringify of the IdentificationResult */
+      resultJson: string
     }
   | Refusal
 
@@ -73,7 +80,9 @@ export default function run(job: RecordJob): RecordOutcome {
         timeUnit: record.timeUnit,
         timeUnitSource: record.timeUnitSource,
       },
-      result,
+      kind: result.kind,
+      peakCount: result.peaks.length,
+      resultJson: JSON.stringify(result),
     }
   } catch (e) {
     return refusal(e)

@@ -44,7 +44,7 @@ export function measurementsRouter(api: ApiRegistry, m: Measurements) {
     summary: 'One record with its spectrum and peaks',
     response: MeasurementRecordSchema,
     params: IdParamSchema,
-    answer: ({ params }) => m.get(params.id),
+    answer: ({ params }) => m.view(params.id),
   })
   routes.delete('/api/records/:id', {
     summary: 'Delete a record, its file and its analyses',

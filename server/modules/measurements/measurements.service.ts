@@ -1,5 +1,7 @@
 import type { RecordUpload } from '../../../shared/schemas/measurement'
+import type { IdentificationResult } from '../../../shared/measurements'
 import { AppError, forbidden, notFound, nullIfMissing } from '../../http/app-error'
+import { JsonText } from '../../http/json-text'
 import type { FileStore } from '../../integrations/file-store'
 import type { AuthUser } from '../../middleware/authenticate'
 import type { ModelsService } from '../models/models.service'
@@ -11,6 +13,12 @@ import { checkRecordFile, readAsStored } from './record-file'
 /** An upload the route streamed into the file store: `filename` is its stored name. */
 type StoredUpload = { originalname: string; filename: string; size: number }
 type UploadedFile = StoredUpload | undefined
+
+/**
+ * A text as the driver stores it (UTF-8): the answer is made from what was stored, and a
+ * surrogate pair cut in half by a length limit is stored as U+FFFD.
+ */
+const asStored = (text: string) => Buffer.from(text, 'utf8').toString('utf8')
 
 export function measurementsService(deps: {
   records: MeasurementsRepository
@@ -30,6 +38,13 @@ export function measurementsService(deps: {
     return record
   }
 
+  /** The record as the API answers it: its identification passed on as the stored text. */
+  async function view(id: number) {
+    const r = await deps.records.viewById(id)
+    if (!r) throw notFound('record')
+    return r
+  }
+
   function assertCanEdit(user: AuthUser, r: StoredRecord) {
     if (user.role !== 'admin' && r.ownerId !== user.id)
       throw forbidden('Only the engineer who uploaded this record may change it.')
@@ -45,7 +60,7 @@ export function measurementsService(deps: {
     }
   }
 
-  /** Reads and identifies a stored upload off the event loop and keeps its row. */
+  /** Reads and identifies a stored upload off the event loop and stores its row. */
   async function keep(
     user: AuthUser,
     siteId: number,
@@ -68,20 +83,20 @@ export function measurementsService(deps: {
       { signal },
     )
     if (!read.ok) throw new AppError(read.code, read.message, read.status, read.details)
-    const { result, record } = read
-    return deps.records.create({
+    const { record } = read
+    const row = {
       siteId,
       modelId: input.modelId ?? null,
       nodeId: input.nodeId ?? null,
       ownerId: user.id,
-      filename: file.originalname.slice(0, 200),
+      filename: asStored(file.originalname.slice(0, 200)),
       storedName: file.filename,
       size: file.size,
       sampleRateHz: read.sampleRateHz,
       samples: read.samples,
       rateFromForm: input.sampleRateHz !== undefined,
-      kind: result.kind,
-      result,
+      kind: read.kind,
+      result: new JsonText<IdentificationResult>(read.resultJson),
       channels: record.channels.map((c, i) => ({
         name: c.name.slice(0, 60),
         column: c.column,
@@ -90,11 +105,13 @@ export function measurementsService(deps: {
       })),
       timeUnit: record.timeUnit,
       timeUnitSource: record.timeUnitSource,
-    })
+    }
+    return { id: await deps.records.insert(row), row, peakCount: read.peakCount }
   }
 
   return {
     get,
+    view,
     stored,
     assertCanEdit,
     async list(siteId: number) {
@@ -117,15 +134,17 @@ export function measurementsService(deps: {
       upload: UploadedFile,
       signal?: AbortSignal,
     ) {
-      let id: number
+      let kept: Awaited<ReturnType<typeof keep>>
       try {
-        id = await keep(user, siteId, input, checkRecordFile(upload), signal)
+        kept = await keep(user, siteId, input, checkRecordFile(upload), signal)
       } catch (e) {
         if (upload) await deps.files.remove(upload.filename)
         throw e
       }
-      // stored: the file stays even if reading the row back fails (an outage answers 503)
-      return get(id)
+      // stored: the file stays even if what MariaDB set cannot be read (an outage answers 503)
+      const view = await deps.records.inserted(kept.id, kept.row, kept.peakCount)
+      if (!view) throw notFound('record')
+      return view
     },
 
     async remove(user: AuthUser, id: number) {
@@ -161,7 +180,7 @@ export function measurementsService(deps: {
       const { peak } = found
       const result = { ...r.result, peaks: [...r.result.peaks, peak] }
       await deps.records.saveResult(id, result)
-      return { peak, record: await get(id) }
+      return { peak, record: await view(id) }
     },
 
     /** Drops a false peak (noise, a machine harmonic) from the record's list. */
@@ -171,7 +190,7 @@ export function measurementsService(deps: {
       if (index >= r.result.peaks.length) throw notFound('peak')
       const peaks = r.result.peaks.filter((_, i) => i !== index)
       await deps.records.saveResult(id, { ...r.result, peaks })
-      return get(id)
+      return view(id)
     },
   }
 }

@@ -46,7 +46,7 @@ export function recordChannelsService(deps: {
       direction: input.channels[i]?.direction ?? null,
     }))
     await deps.records.saveChannels(id, input.modelId, channels)
-    return deps.measurements.get(id)
+    return deps.measurements.view(id)
   }
 }
 export type RecordChannelsService = ReturnType<typeof recordChannelsService>
