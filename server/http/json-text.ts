@@ -17,23 +17,26 @@ export class JsonText<T = unknown> {
 }
 
 /**
- * The JSON of an answer whose top-level fields may be JsonText: the other fields are stringified
- * as JSON.stringify would (they are small), and each text is placed as it is. A JsonText deeper
- * down is still correct, through its toJSON, only not as cheap.
+ * The JSON of an answer that may hold JsonText values in its (nested) plain objects: what
+ * holds none is stringified as JSON.stringify would, and each text is placed as it is. A
+ * JsonText inside an array is still correct, through its toJSON, only not as cheap.
  */
 export function answerJson(value: unknown): string {
   if (value instanceof JsonText) return value.text
-  if (!isPlainObject(value) || !Object.values(value).some((v) => v instanceof JsonText))
-    return JSON.stringify(value) ?? 'null'
-  const texts: string[] = []
-  const rest: Record<string, unknown> = {}
+  if (!holdsText(value)) return JSON.stringify(value) ?? 'null'
+  const parts: string[] = []
   for (const [key, v] of Object.entries(value)) {
-    if (v instanceof JsonText) texts.push(`${JSON.stringify(key)}:${v.text}`)
-    else rest[key] = v
+    if (v === undefined || typeof v === 'function' || typeof v === 'symbol') continue
+    parts.push(`${JSON.stringify(key)}:${answerJson(v)}`)
   }
-  const head = JSON.stringify(rest)
-  if (!texts.length) return head
-  return `${head.slice(0, -1)}${head === '{}' ? '' : ','}${texts.join(',')}}`
+  return `{${parts.join(',')}}`
+}
+
+/** Whether a plain object holds a JsonText among its values or its plain objects' values. */
+function holdsText(v: unknown): v is Record<string, unknown> {
+  if (!isPlainObject(v)) return false
+  for (const x of Object.values(v)) if (x instanceof JsonText || holdsText(x)) return true
+  return false
 }
 
 function isPlainObject(v: unknown): v is Record<string, unknown> {

@@ -26,7 +26,9 @@ describe('answers with stored JSON texts', () => {
       expect(answerJson(v)).toBe(JSON.stringify(v))
   })
 
-  it('parses a text found deeper down, so the answer is still right', () => {
+  it('places a text in a nested object as it is, and parses one inside an array', () => {
+    const nested = answerJson({ record: { id: 3, result: new JsonText(text), gone: undefined } })
+    expect(nested).toBe(`{"record":{"id":3,"result":${text}}}`)
     const value = { list: [{ evaluation: new JsonText(text) }] }
     expect(JSON.parse(answerJson(value))).toEqual({ list: [{ evaluation: stored }] })
   })

@@ -52,8 +52,8 @@ export function measurementsService(deps: {
 
   async function assertModelOfSite(modelId: number | undefined, siteId: number) {
     if (modelId === undefined) return
-    const m = await nullIfMissing(deps.models.get(modelId))
-    if (!m || m.siteId !== siteId) {
+    const modelSite = await nullIfMissing(deps.models.siteOf(modelId))
+    if (modelSite !== siteId) {
       throw new AppError('invalid-input', 'The model is not one of this site.', 400, [
         { path: 'body.modelId', message: 'not a model of this site' },
       ])
