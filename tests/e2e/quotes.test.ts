@@ -133,7 +133,14 @@ describe('sales quote the demo sizing in Chromium on a tablet', () => {
     const before = new Set((await quotesOfSizing()).map((q) => q.id))
     const save = await page.waitForSelector('::-p-xpath(//button[normalize-space(.)="Save draft"])')
     await save!.click({ count: 2 })
-    await page.waitForSelector('[data-state="draft"]')
+    // the saved draft opens; a refusal would show as an alert instead: say which
+    await page.waitForSelector('[data-state="draft"], [role="alert"]')
+    const refusal = await page.$eval('body', (b) =>
+      b.querySelector('[data-state="draft"]')
+        ? null
+        : b.querySelector('[role="alert"]')?.textContent,
+    )
+    expect(refusal ?? null).toBeNull()
     const drafts = (await quotesOfSizing()).filter((q) => !before.has(q.id))
     expect(drafts).toHaveLength(1)
     expect((await rig.t.services.quotes.get(salesUser, drafts[0]!.id)).discountBp).toBe(5)
