@@ -82,8 +82,8 @@ function checkResponse(spec: RouteSpec<unknown, unknown, unknown>, result: unkno
 /**
  * Declares one route: access check, validation of params, query and body against the shared
  * schemas, and an entry in the API document. The handler returns the JSON answer (whose
- * top-level fields may be stored JSON texts, json-text.ts), or undefined when it wrote the
- * response itself.
+ * objects may hold stored JSON texts, placed as they are: json-text.ts), or undefined when it
+ * wrote the response itself.
  */
 export function route<B = undefined, Q = undefined, P = undefined, R = unknown>(
   router: Router,
