@@ -48,12 +48,20 @@ failures() {
   sed 's/\x1b\[[0-9;]*m//g' "$LOCAL/log/test-$1.log" |
     sed -n '/Failed Suites\|Failed Tests\|Unhandled Error/,$p' | head -200
 }
+# where each page of a failed browser test stood (tests/helpers/browser-journal.ts)
+page_reports() {
+  grep -a -F '[page report]' "$LOCAL/log/test-$1.log" | sed 's/\x1b\[[0-9;]*m//g' | head -150 || true
+}
 rc=0
 step "API and browser tests" bash -c 'npx vitest run --project api --project e2e 2>&1 | tee "$1"; exit "${PIPESTATUS[0]}"' _ "$LOCAL/log/test-API-and-browser-tests.log" || rc=$?
 joined "unit and client tests" || rc=$?
 if [ "$rc" != 0 ]; then
   log "failed; what failed, once more:"
+  page_reports "API-and-browser-tests"
   failures "API-and-browser-tests"
   failures "unit-and-client-tests"
+elif grep -q -a -F '[page report]' "$LOCAL/log/test-API-and-browser-tests.log"; then
+  log "passed, but a browser test passed only when run again; where its first run's pages stood:"
+  page_reports "API-and-browser-tests"
 fi
 exit "$rc"

@@ -7,6 +7,7 @@ import puppeteer, { type Browser, type Page } from 'puppeteer-core'
 import { CHROMIUM_ARGS } from '../../server/integrations/pdf/renderer'
 import { makeTestApp, type TestApp } from './app'
 import { PASSWORD } from './factories'
+import { journalBrowser } from './browser-journal'
 
 export const SHOTS_DIR = path.resolve('.local/screenshots')
 export const PORTRAIT = { width: 820, height: 1180 }
@@ -14,14 +15,16 @@ export const LANDSCAPE = { width: 1180, height: 820 }
 
 /**
  * The one Chromium launcher of the browser tests: Debian's Chromium, headless, with the same
- * switches as the server's PDF renderer.
+ * switches as the server's PDF renderer. Its pages are journalled for the report of a failed test.
  */
-export function launchBrowser(): Promise<Browser> {
-  return puppeteer.launch({
+export async function launchBrowser(): Promise<Browser> {
+  const browser = await puppeteer.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
     args: CHROMIUM_ARGS,
   })
+  journalBrowser(browser)
+  return browser
 }
 
 export interface BrowserRig {
