@@ -63,12 +63,21 @@ export async function reportOpenPages(testName: string, dir: string) {
       const main = await page
         .$eval('main', (m) => (m.textContent ?? '').replace(/\s+/g, ' ').slice(0, 600))
         .catch(() => '(no main area)')
+      // whether the page still draws frames (waits on a click need two) and is shown
+      const drawing = await page
+        .evaluate(() =>
+          Promise.race([
+            new Promise<string>((r) => requestAnimationFrame(() => r('draws frames'))),
+            new Promise<string>((r) => setTimeout(() => r('NO frame within 2 s'), 2000)),
+          ]).then((f) => `${f}, ${document.visibilityState}, focus ${document.hasFocus()}`),
+        )
+        .catch((e: unknown) => `not answering (${String(e)})`)
       const file = path.join(dir, `failed-${slug}-${i}.png`) as `${string}.png`
       mkdirSync(dir, { recursive: true })
       await page.screenshot({ path: file, fullPage: true }).catch(() => undefined)
       const lines = [
         `page ${i} at ${page.url()} when "${testName}" failed (screenshot ${file})`,
-        `main: ${main}`,
+        `page: ${drawing}; main: ${main}`,
         ...(journals.get(page) ?? []).map((l) => `  ${l}`),
       ]
       // one marker on every line, so that `npm test` can print the report again at its end
