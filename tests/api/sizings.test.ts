@@ -95,6 +95,35 @@ describe('model revisions', () => {
     ])
   })
 
+  it('lists the models of a site, each with its own current structure and revisions', async () => {
+    const { agent } = await signedIn(t, 'engineer')
+    const { site, model: first } = await siteAndModel(agent)
+    const lighter = buildingDefinition()
+    lighter.nodes[1]!.mass = 100_000
+    const made = await agent
+      .post('/api/models')
+      .send({ siteId: site.id, name: 'Lighter', definition: lighter })
+    expect(made.status, JSON.stringify(made.body)).toBe(201)
+    const second = made.body
+    const stiffer = buildingDefinition()
+    stiffer.springs[0]!.stiffness = 300e6
+    await agent
+      .post(`/api/models/${first.id}/revisions`)
+      .send({ baseRevision: 1, definition: stiffer, reason: 'stiffer ground storey' })
+    const body = (await agent.get('/api/models').query({ siteId: site.id })).body
+    const listed = [first.id, second.id].map((id) => body.find((m: { id: number }) => m.id === id))
+    expect(body).toHaveLength(2)
+    expect(listed[0]).toMatchObject({ currentRevision: 2, definition: stiffer })
+    expect(listed[0].revisions.map((r: { reason: string }) => r.reason)).toEqual([
+      'first version',
+      'stiffer ground storey',
+    ])
+    expect(listed[1]).toMatchObject({ currentRevision: 1, definition: lighter, name: 'Lighter' })
+    expect(listed[1].revisions).toHaveLength(1)
+    // the list says of each model what the model's own answer says
+    for (const m of body) expect((await agent.get(`/api/models/${m.id}`)).body).toEqual(m)
+  })
+
   it('answers 404 for a revision or a model that does not exist, 401 and 403 to others', async () => {
     const { agent } = await signedIn(t, 'engineer')
     const { model } = await siteAndModel(agent)

@@ -13,19 +13,41 @@ export function modelsRepository(ds: DataSource) {
     return r?.definition ?? null
   }
 
-  /** A model with its current definition and the list of its revisions (not their content). */
-  async function hydrate(m: HostModelEntity): Promise<HostModel> {
+  /**
+   * Models with their current definitions and the lists of their revisions (not their content),
+   * in two queries whatever the number of models.
+   */
+  async function hydrate(ms: HostModelEntity[]): Promise<HostModel[]> {
+    if (!ms.length) return []
+    const ids = ms.map((m) => m.id)
     const revs = await revisions
       .createQueryBuilder('r')
       // Only what the list shows: a model edited often would otherwise parse every definition.
-      .select(['r.id', 'r.revision', 'r.reason', 'r.createdAt'])
+      .select(['r.id', 'r.modelId', 'r.revision', 'r.reason', 'r.createdAt'])
       // Only the author's name is read, from the users table the users module owns.
       .leftJoin('users', 'u', 'u.id = r.createdById')
       .addSelect('u.name', 'createdByName')
-      .where('r.modelId = :id', { id: m.id })
-      .orderBy('r.revision', 'ASC')
+      .where('r.modelId IN (:...ids)', { ids })
+      .orderBy('r.modelId', 'ASC')
+      .addOrderBy('r.revision', 'ASC')
       .getRawAndEntities()
-    return {
+    const current = await revisions
+      .createQueryBuilder('r')
+      .select(['r.id', 'r.modelId', 'r.definition'])
+      .innerJoin(HostModelEntity, 'm', 'm.id = r.modelId AND m.currentRevision = r.revision')
+      .where('r.modelId IN (:...ids)', { ids })
+      .getMany()
+    const definitionOf = new Map(current.map((r) => [r.modelId, r.definition]))
+    const listed = new Map<number, HostModel['revisions']>(ids.map((id) => [id, []]))
+    revs.entities.forEach((r, i) =>
+      listed.get(r.modelId)?.push({
+        revision: r.revision,
+        reason: r.reason,
+        createdAt: r.createdAt.toISOString(),
+        createdByName: String((revs.raw[i] as { createdByName?: string }).createdByName ?? ''),
+      }),
+    )
+    return ms.map((m) => ({
       id: m.id,
       siteId: m.siteId,
       siteName: m.site?.name ?? '',
@@ -33,29 +55,24 @@ export function modelsRepository(ds: DataSource) {
       ownerId: m.ownerId,
       ownerName: m.owner?.name ?? '',
       currentRevision: m.currentRevision,
-      definition: (await definitionAt(m.id, m.currentRevision)) as ModelDefinition,
-      revisions: revs.entities.map((r, i) => ({
-        revision: r.revision,
-        reason: r.reason,
-        createdAt: r.createdAt.toISOString(),
-        createdByName: String((revs.raw[i] as { createdByName?: string }).createdByName ?? ''),
-      })),
+      definition: definitionOf.get(m.id) as ModelDefinition,
+      revisions: listed.get(m.id) ?? [],
       updatedAt: m.updatedAt.toISOString(),
-    }
+    }))
   }
 
   return {
     async findById(id: number) {
       const m = await models.findOne({ where: { id }, relations: { site: true, owner: true } })
-      return m ? hydrate(m) : null
+      return m ? ((await hydrate([m]))[0] ?? null) : null
     },
     async list(siteId?: number) {
       const rows = await models.find({
         where: siteId ? { siteId } : {},
         relations: { site: true, owner: true },
-        order: { updatedAt: 'DESC' },
+        order: { updatedAt: 'DESC', id: 'DESC' },
       })
-      return Promise.all(rows.map(hydrate))
+      return hydrate(rows)
     },
     definitionAt,
     async siteIdOf(id: number): Promise<number | null> {
