@@ -119,7 +119,7 @@ async function fddAnalysis(agent: Agent, recordId: number) {
 describe('operational modal analysis and model updating', () => {
   it('identifies the chain by FDD/EFDD and by SSI-COV, with shapes at the three channels', async () => {
     const { agent } = await signedIn(t, 'engineer')
-    const { record } = await setUp(agent)
+    const { site, record } = await setUp(agent)
     const truth = chainTruth()
     for (const method of ['fdd', 'ssi'] as const) {
       const res = await agent
@@ -139,6 +139,17 @@ describe('operational modal analysis and model updating', () => {
     expect(list.body.map((a: { method: string }) => a.method)).toEqual(['ssi', 'fdd'])
     expect(list.body[0].result.diagram.length).toBeGreaterThan(10)
     expect((await agent.get(`/api/records/${record.id}`)).body.analysisCount).toBe(2)
+    // the site's list counts each record's own analyses: a second record has none
+    const other = await agent.post(`/api/sites/${site.id}/records`).attach('record', CSV, 'b.csv')
+    const records = (await agent.get(`/api/sites/${site.id}/records`)).body
+    const counts = records.map((r: { id: number; analysisCount: number }) => [
+      r.id,
+      r.analysisCount,
+    ])
+    expect(counts).toEqual([
+      [other.body.id, 0],
+      [record.id, 2],
+    ])
   })
 
   it('refuses bad analysis options with the field named', async () => {

@@ -1,11 +1,18 @@
 import { Entity, type Relation } from 'typeorm'
 import { ReferenceTo } from '../../db/reference-column'
 import { NumberedCreatedRecord } from '../../db/record-columns'
-import type { IdentificationResult, TimeUnit, TimeUnitSource } from '../../../shared/measurements'
+import type { TimeUnit, TimeUnitSource } from '../../../shared/measurements'
 import type { RecordChannelInfo } from '../../../shared/schemas/measurement'
 import type { SiteEntity } from '../sites/site.entity'
 import type { UserEntity } from '../users/user.entity'
-import { BooleanColumn, DoubleColumn, IntColumn, JsonColumn, VarcharColumn } from '../../db/columns'
+import {
+  BooleanColumn,
+  DoubleColumn,
+  IntColumn,
+  JsonColumn,
+  JsonTextColumn,
+  VarcharColumn,
+} from '../../db/columns'
 
 /** An acceleration record measured at a site; the file lives on disk, its identification here. */
 @Entity('measurement_records')
@@ -40,5 +47,11 @@ export class MeasurementRecordEntity extends NumberedCreatedRecord {
   @VarcharColumn(2, { nullable: true }) timeUnit: TimeUnit | null
 
   @VarcharColumn(10, { nullable: true }) timeUnitSource: TimeUnitSource | null
-  @JsonColumn() result: IdentificationResult
+
+  /**
+   * the identification (an IdentificationResult, ~80 kB with its spectrum) as its JSON text:
+   * stored as the worker made it and answered as it is; measurements.repository.ts alone parses
+   * it, for the services that change its peaks
+   */
+  @JsonTextColumn() result: string
 }

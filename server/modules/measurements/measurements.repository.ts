@@ -1,13 +1,12 @@
 import type { DataSource, SelectQueryBuilder } from 'typeorm'
 import type { IdentificationResult, TimeUnit, TimeUnitSource } from '../../../shared/measurements'
 import type {
-  MeasurementRecord,
   MeasurementRecordSummary,
   RecordChannelInfo,
 } from '../../../shared/schemas/measurement'
 import { JsonText } from '../../http/json-text'
 import { MeasurementRecordEntity } from './measurement-record.entity'
-import { SUMMARY_COLUMNS, summaryRow, toSummary, type SummaryExtras } from './record-summary'
+import { SUMMARY_COLUMNS, toSummary, type SummaryExtras } from './record-summary'
 import { RecordAnalysisEntity } from './record-analysis.entity'
 
 export interface NewRecord {
@@ -32,21 +31,12 @@ export interface NewRecord {
 /** A record as GET /api/records/:id answers it, its identification as the stored text. */
 export type RecordView = MeasurementRecordSummary & { result: JsonText<IdentificationResult> }
 
+/** A record as the services use it: its summary and how its stored file is read again. */
+export type StoredRecord = MeasurementRecordSummary & { storedName: string; rateFromForm: boolean }
+
 export function measurementsRepository(ds: DataSource) {
   const repo = ds.getRepository(MeasurementRecordEntity)
-  const analyses = ds.getRepository(RecordAnalysisEntity)
-  async function counts(ids: number[]) {
-    if (!ids.length) return new Map<number, number>()
-    const rows: { recordId: number; n: string }[] = await analyses
-      .createQueryBuilder('a')
-      .select('a.recordId', 'recordId')
-      .addSelect('COUNT(*)', 'n')
-      .where('a.recordId IN (:...ids)', { ids })
-      .groupBy('a.recordId')
-      .getRawMany()
-    return new Map(rows.map((r) => [Number(r.recordId), Number(r.n)]))
-  }
-  /** The summary's columns, the owner's name and the count of peaks, counted by MariaDB. */
+  /** The summary's columns, the owner's name and the counts of peaks and analyses, by MariaDB. */
   const summaryQuery = () =>
     repo
       .createQueryBuilder('r')
@@ -54,6 +44,10 @@ export function measurementsRepository(ds: DataSource) {
       .select(SUMMARY_COLUMNS.map((c) => `r.${c}`))
       .addSelect('o.name', 'ownerName')
       .addSelect("JSON_LENGTH(r.result, '$.peaks')", 'peakCount')
+      .addSelect(
+        (q) => q.select('COUNT(*)').from(RecordAnalysisEntity, 'a').where('a.recordId = r.id'),
+        'analysisCount',
+      )
   async function summaries(query: SelectQueryBuilder<MeasurementRecordEntity>) {
     const { entities, raw } = await query.getRawAndEntities<SummaryExtras>()
     const extras = new Map(raw.map((x) => [Number(x.r_id), x]))
@@ -63,54 +57,49 @@ export function measurementsRepository(ds: DataSource) {
         ...e,
         ownerName: x?.ownerName ?? '',
         peakCount: Number(x?.peakCount),
-        resultJson: x?.resultJson,
+        analysisCount: Number(x?.analysisCount),
       }
     })
   }
-  /** Sets plain columns and JSON columns (as their text, past the transformer) of one row. */
-  async function updateRow(
-    id: number,
-    plain: Partial<Pick<MeasurementRecordEntity, 'modelId' | 'nodeId'>>,
-    json: Partial<Record<'result' | 'channels', string>>,
-  ) {
-    const set = { ...plain } as Record<string, unknown>
-    for (const key of Object.keys(json)) set[key] = () => `:${key}Json`
-    await repo
-      .createQueryBuilder()
-      .update()
-      .set(set)
-      .setParameters(Object.fromEntries(Object.entries(json).map(([k, v]) => [`${k}Json`, v])))
-      .where('id = :id', { id })
-      .updateEntity(false)
-      .execute()
+  /** One record's summary with the columns a service needs, its identification's text if asked. */
+  async function one(id: number, withResult: boolean) {
+    const query = summaryQuery().where('r.id = :id', { id })
+    const [row] = await summaries(withResult ? query.addSelect('r.result') : query)
+    if (!row) return null
+    if (withResult && typeof row.result !== 'string')
+      throw new Error(`record ${id}: no identification read`)
+    const stored: StoredRecord = {
+      ...toSummary(row),
+      storedName: row.storedName,
+      rateFromForm: row.rateFromForm,
+    }
+    return { stored, resultText: row.result }
   }
   return {
-    async findById(id: number) {
-      const r = await repo.findOne({ where: { id }, relations: { owner: true } })
-      return r
-        ? {
-            ...toSummary(summaryRow(r), (await counts([id])).get(id) ?? 0),
-            result: r.result,
-            storedName: r.storedName,
-            rateFromForm: r.rateFromForm,
-          }
-        : null
+    /** A record as the services use it, without reading its identification. */
+    async findById(id: number): Promise<StoredRecord | null> {
+      return (await one(id, false))?.stored ?? null
+    },
+    /**
+     * A record with its identification parsed: the one place that parses the stored text, for
+     * the services that change its peaks.
+     */
+    async findWithResult(id: number) {
+      const row = await one(id, true)
+      if (!row) return null
+      return { ...row.stored, result: JSON.parse(row.resultText) as IdentificationResult }
     },
     /**
      * A record as GET /api/records/:id answers it, its identification as the stored text: the
      * event loop neither parses nor re-serialises its ~80 kB.
      */
     async viewById(id: number): Promise<RecordView | null> {
-      const [row] = await summaries(
-        summaryQuery().addSelect('r.result', 'resultJson').where('r.id = :id', { id }),
-      )
+      const row = await one(id, true)
       if (!row) return null
-      const { resultJson, ...summary } = row
-      if (typeof resultJson !== 'string') throw new Error(`record ${id}: no identification read`)
-      const result = new JsonText<IdentificationResult>(resultJson)
-      return { ...toSummary(summary, (await counts([id])).get(id) ?? 0), result }
+      const { storedName: _s, rateFromForm: _r, ...summary } = row.stored
+      return { ...summary, result: new JsonText<IdentificationResult>(row.resultText) }
     },
-    /** The site's records, newest first, without reading their identifications. */
+    /** The site's records, newest first, without their identifications (MariaDB counts peaks). */
     async listBySite(siteId: number) {
       const rows = await summaries(
         summaryQuery()
@@ -118,8 +107,7 @@ export function measurementsRepository(ds: DataSource) {
           .orderBy('r.createdAt', 'DESC')
           .addOrderBy('r.id', 'DESC'),
       )
-      const n = await counts(rows.map((r) => r.id))
-      return rows.map((r) => toSummary(r, n.get(r.id) ?? 0))
+      return rows.map(toSummary)
     },
     /**
      * Stores a new record in one INSERT, its identification as the text it came in: no entity
@@ -130,14 +118,13 @@ export function measurementsRepository(ds: DataSource) {
       const done = await repo
         .createQueryBuilder()
         .insert()
-        .values({ ...row, result: () => ':resultJson' })
-        .setParameter('resultJson', result.text)
+        .values({ ...row, result: result.text })
         .updateEntity(false)
         .execute()
       return (done.raw as { insertId: number }).insertId
     },
     /**
-     * A record just inserted as findById shows it, made from what was stored and the values
+     * A record just inserted as viewById shows it, made from what was stored and the values
      * MariaDB set (its time) or another table holds (the owner's name): the ~80 kB are not read
      * back. Null when the record is gone again; it has no analyses yet.
      */
@@ -150,19 +137,17 @@ export function measurementsRepository(ds: DataSource) {
         .where('r.id = :id', { id })
         .getRawOne<{ createdAt: Date; ownerName: string }>()
       if (!set) return null
-      return { ...toSummary({ ...input, id, ...set, peakCount }, 0), result: input.result }
+      const summary = toSummary({ ...input, id, ...set, peakCount, analysisCount: 0 })
+      return { ...summary, result: input.result }
     },
-    /**
-     * One UPDATE, the JSON made here as the column's transformer makes it: no read of the row
-     * (~80 kB parsed) and no entity merging before it.
-     */
+    /** One UPDATE of the identification, as its JSON text: no read of the row before it. */
     async saveResult(id: number, result: IdentificationResult) {
-      await updateRow(id, {}, { result: JSON.stringify(result) })
+      await repo.update({ id }, { result: JSON.stringify(result) })
     },
     /** Ties the record to a model and each channel to a node and axis. */
     async saveChannels(id: number, modelId: number | null, channels: RecordChannelInfo[]) {
       const nodeId = channels[0]?.nodeId ?? null
-      await updateRow(id, { modelId, nodeId }, { channels: JSON.stringify(channels) })
+      await repo.update({ id }, { modelId, nodeId, channels })
     },
     /** The record and, by the foreign key, its analyses. */
     async remove(id: number) {
@@ -171,4 +156,3 @@ export function measurementsRepository(ds: DataSource) {
   }
 }
 export type MeasurementsRepository = ReturnType<typeof measurementsRepository>
-export type StoredRecord = MeasurementRecord & { storedName: string; rateFromForm: boolean }

@@ -33,9 +33,18 @@ export function measurementsService(deps: {
     return r
   }
 
+  /** The record's summary, as the calibration and the model update check it. */
   async function get(id: number) {
     const { storedName: _s, rateFromForm: _r, ...record } = await stored(id)
     return record
+  }
+
+  /** The record with its identification, for a change of its peaks by its engineer. */
+  async function editable(user: AuthUser, id: number) {
+    const r = await deps.records.findWithResult(id)
+    if (!r) throw notFound('record')
+    assertCanEdit(user, r)
+    return r
   }
 
   /** The record as the API answers it: its identification passed on as the stored text. */
@@ -156,8 +165,7 @@ export function measurementsService(deps: {
 
     /** A mode the automatic search missed, identified from the stored file around a frequency. */
     async addPeak(user: AuthUser, id: number, frequencyHz: number) {
-      const r = await stored(id)
-      assertCanEdit(user, r)
+      const r = await editable(user, id)
       const near = r.result.peaks.find(
         (p) => Math.abs(p.frequencyHz - frequencyHz) < 2 * r.result.resolutionHz,
       )
@@ -185,8 +193,7 @@ export function measurementsService(deps: {
 
     /** Drops a false peak (noise, a machine harmonic) from the record's list. */
     async dropPeak(user: AuthUser, id: number, index: number) {
-      const r = await stored(id)
-      assertCanEdit(user, r)
+      const r = await editable(user, id)
       if (index >= r.result.peaks.length) throw notFound('peak')
       const peaks = r.result.peaks.filter((_, i) => i !== index)
       await deps.records.saveResult(id, { ...r.result, peaks })

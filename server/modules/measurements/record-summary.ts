@@ -5,10 +5,11 @@ import type {
 } from '../../../shared/schemas/measurement'
 import type { MeasurementRecordEntity } from './measurement-record.entity'
 
-/** A row's fields the summary shows, with the owner's name and the count of peaks. */
+/** The fields a summary shows: the row's, its owner's name, its counts of peaks and analyses. */
 export type SummaryRow = Omit<MeasurementRecordEntity, 'site' | 'owner' | 'result'> & {
   ownerName: string
   peakCount: number
+  analysisCount: number
 }
 
 /** A record stored before channels were kept had one channel, tied to the record's node. */
@@ -18,7 +19,7 @@ function channelsOf(r: SummaryRow): RecordChannelInfo[] {
   return [{ name: 'channel 1', column, nodeId: r.nodeId, direction: null }]
 }
 
-export function toSummary(r: SummaryRow, analysisCount: number): MeasurementRecordSummary {
+export function toSummary(r: SummaryRow): MeasurementRecordSummary {
   return {
     id: r.id,
     siteId: r.siteId,
@@ -35,17 +36,10 @@ export function toSummary(r: SummaryRow, analysisCount: number): MeasurementReco
     channels: channelsOf(r),
     timeUnit: r.timeUnit,
     timeUnitSource: r.timeUnitSource,
-    analysisCount,
+    analysisCount: r.analysisCount,
     createdAt: r.createdAt.toISOString(),
   }
 }
-
-/** A stored row as the summary reads it. */
-export const summaryRow = (r: MeasurementRecordEntity): SummaryRow => ({
-  ...r,
-  ownerName: r.owner?.name ?? '',
-  peakCount: r.result.peaks.length,
-})
 
 /** Every column but the identification (~80 kB of JSON), of which a summary shows a count. */
 export const SUMMARY_COLUMNS = [
@@ -72,5 +66,5 @@ export interface SummaryExtras {
   r_id: number
   ownerName: string | null
   peakCount: string | number
-  resultJson?: string
+  analysisCount: string | number
 }
