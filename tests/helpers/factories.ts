@@ -63,6 +63,16 @@ export async function mailTo(t: TestApp, to: string, subject?: RegExp, timeoutMs
   }
 }
 
+/**
+ * How many mails the app wrote to the address: its outbox rows, whatever their state. A mail is
+ * written once and delivered from the outbox, so this counts what a double tap made even when
+ * another test file's sender delivered it (delivery itself: tests/api/two-instances.test.ts).
+ */
+export function mailsWrittenTo(t: TestApp, to: string) {
+  if (!to) throw new Error('mailsWrittenTo: no address given')
+  return t.ds.getRepository(OutboxMailEntity).countBy({ toAddress: to })
+}
+
 async function takenThroughOutbox(
   t: TestApp,
   to: string,
