@@ -50,12 +50,13 @@ export function journalBrowser(browser: Browser) {
 }
 
 /**
- * Prints, for every page still open, its address, the start of its main area and its journal,
- * and saves a screenshot of it under `dir`, named after the test.
+ * Prints why the test failed, then, for every page still open, its address, the start of its main
+ * area and its journal, and saves a screenshot of it under `dir`, named after the test.
  */
-export async function reportOpenPages(testName: string, dir: string) {
+export async function reportOpenPages(testName: string, dir: string, why = '') {
   const slug = testName.replace(/[^a-z0-9]+/gi, '-').slice(0, 60)
   let i = 0
+  console.error(`${REPORT_MARK} "${testName}" failed: ${why}`)
   for (const browser of browsers) {
     for (const page of await browser.pages().catch(() => [] as Page[])) {
       if (page.isClosed() || page.url() === 'about:blank') continue
