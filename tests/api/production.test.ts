@@ -141,6 +141,30 @@ describe('work orders', () => {
     expect(text).toMatch(/licensed engineer/)
   })
 
+  it('answers the work order PDF with the headers of the quote PDF: a PDF shown inline under its own name, kept out of shared caches', async () => {
+    const { agent, quote, wo } = await paidWorkOrder()
+    // both go through sendPdf (server/http/send-pdf.ts); RFC 6266 for the disposition's form
+    const headersOf = (res: Awaited<ReturnType<typeof fetchPdf>>) => ({
+      status: res.status,
+      type: res.headers['content-type'],
+      disposition: res.headers['content-disposition'],
+      cache: res.headers['cache-control'],
+    })
+    const common = { status: 200, type: 'application/pdf', cache: 'private, no-store' }
+    expect(headersOf(await fetchPdf(agent, `/api/work-orders/${wo.id}/pdf`))).toEqual({
+      ...common,
+      disposition: `inline; filename="${wo.number}.pdf"`,
+    })
+    const { reference } = (await rig.sales.get(`/api/quotes/${quote.id}`)).body as {
+      reference: string
+    }
+    const quoteName = `${reference.replace(/\s+/g, '-')}.pdf`
+    expect(headersOf(await fetchPdf(rig.sales, `/api/quotes/${quote.id}/pdf`))).toEqual({
+      ...common,
+      disposition: `inline; filename="${quoteName}"`,
+    })
+  })
+
   it('states the design load and the stroke against its limit on the work order and its PDF', async () => {
     const load = 'Rotating machine at node-3: running speed 1480 rpm (24.7 Hz), unbalance 0.02 kg·m'
     const { agent, wo } = await paidWorkOrder({ load, stroke: 0.0124, strokeLimit: 0.025 })

@@ -83,7 +83,17 @@ describe("a sizing's linked records", () => {
     )
     const wrapper = mount(SizingRecordLinks, {
       props: { modelValue: [{ recordId: 7, peaks: [] }], siteId: 3, modes: [], disabled: false },
-      global: { plugins: [PrimeVue] },
+      global: {
+        plugins: [
+          createPinia(),
+          createRouter({
+            history: createMemoryHistory(),
+            routes: [{ path: '/:any(.*)*', component: { render: () => null } }],
+          }),
+          PrimeVue,
+          ToastService,
+        ],
+      },
     })
     await flushPromises()
     expect(wrapper.text()).toContain('bay-c-heel-drop.csv')

@@ -1,6 +1,7 @@
 import { computed, ref, watch } from 'vue'
 import type { HostModel } from '@shared/schemas/host-model'
 import type { Site } from '@shared/schemas/site'
+import { IdSchema } from '@shared/schemas/ids'
 import { isApiError } from '@/api/client'
 import { modelsApi } from '@/api/models'
 import { sitesApi } from '@/api/sites'
@@ -12,6 +13,20 @@ import { formOf, newDraft, type SizingDraft } from '@/features/sizing/draft'
 
 const keyOf = (id: number | null, siteId: number | null) =>
   id ? `sizing-${id}` : `new-site-${siteId}`
+
+const FROM_A_SITE = 'A new sizing starts from a site: open the site, then start it there.'
+
+/**
+ * The site a new sizing starts from, as the address's `siteId` gives it (a bookmark or a reload
+ * may have lost it or mangled it): its id, or why there is none, in the engineer's words.
+ */
+export function startingSite(query: unknown): { siteId: number } | { why: string } {
+  if (query === null || query === undefined || query === '') return { why: FROM_A_SITE }
+  const read = IdSchema.safeParse(query)
+  if (read.success) return { siteId: read.data }
+  const given = Array.isArray(query) ? query.join(', ') : String(query)
+  return { why: `This address names no site ("${given}" is not a site number). ${FROM_A_SITE}` }
+}
 
 /**
  * Opening one sizing: the server's copy, the exact model revision it was sized on, and the copy
@@ -80,13 +95,15 @@ export function useSizingWorkspace() {
   }
 
   const opening = useAction(
-    async (id: number | null, siteId: number | null) => {
+    async (id: number | null, siteQuery: unknown) => {
       notice.value = ''
       unopened.value = ''
+      const start = startingSite(siteQuery)
+      const siteId = 'siteId' in start ? start.siteId : null
       try {
         if (id) await loadSaved(id)
-        else if (siteId) await loadNew(siteId)
-        else unopened.value = 'A new sizing starts from a site: open the site, then start it there.'
+        else if ('siteId' in start) await loadNew(start.siteId)
+        else unopened.value = start.why
       } catch (e) {
         if (!isApiError(e) || e.code !== 'offline' || !store.openKept(keyOf(id, siteId))) throw e
         notice.value =
@@ -95,8 +112,12 @@ export function useSizingWorkspace() {
     },
     { failure: 'Could not open the sizing', latest: true },
   )
-  const load = async (id: number | null, siteId: number | null) => {
-    await opening.run(id, siteId)
+  /**
+   * Opens the saved sizing `id`, else a new one on the site the address's `siteId` names (the
+   * raw query value); when neither can open, `unopened` says why. Never waits without end.
+   */
+  const load = async (id: number | null, siteQuery: unknown) => {
+    await opening.run(id, siteQuery)
     if (opening.error.value) unopened.value = opening.error.value
     if (unopened.value) store.currentKey = null // never show the sizing open before under this address
   }
