@@ -1,11 +1,8 @@
+import type { TuningBasis } from '../../schemas/sizing-units'
 import { closedForms, type Tuning } from '../closed-forms'
 import { setObjective, type SetTuning } from './optimize-set'
 import type { SetContext } from './set-context'
 import { massRatioOf } from './set-starts'
-
-/** Why a unit of a set carries its tuning: the joint optimum, or the published tuning of its mode
- * because the optimum is flat in that unit (docs/engineering/tuning.md#flat-units). */
-export type TuningBasis = 'optimum' | 'published-flat'
 
 /**
  * Relative change of the set's largest response within which a unit's tuning counts as not

@@ -1,6 +1,6 @@
 import type { TuningName } from '../../schemas/model'
+import type { TuningBasis } from '../../schemas/sizing-units'
 import type { AbsorberReport, ExcitationReport, ModeReport, ResponseReport } from '../sizing-result'
-import type { TuningBasis } from './flat-units'
 import type { SetRobustnessReport } from './set-robustness'
 import type { SetStartName } from './set-starts'
 
