@@ -1,7 +1,8 @@
 import type { TuningBasis } from '../../schemas/sizing-units'
 import { closedForms, type Tuning } from '../closed-forms'
-import { setObjective, type SetTuning } from './optimize-set'
+import { detunedContexts, setValues, type SetTuning } from './optimize-set'
 import type { SetContext } from './set-context'
+import { setPeak } from './set-peak'
 import { massRatioOf } from './set-starts'
 
 /**
@@ -36,12 +37,13 @@ function candidates(ctx: SetContext, t: SetTuning): number[] {
 
 /**
  * The flat-unit rule: for each unit the search tuned (alone on its target mode, H∞ objective),
- * the objective with that unit moved to Den Hartog's tuning for its own mass ratio (Den Hartog,
- * Mechanical Vibrations, 1956). Where that stays within FLAT_TOLERANCE of the optimum, the unit's
- * tuning is not settled by the search — any point of a flat valley is an optimum — and it takes
- * the published one. Units are moved in order and each move is checked with the earlier ones in
- * place, always against the optimum, so the reported tunings are never worse than the optimum by
- * more than the tolerance; `value` is recomputed for the tunings reported.
+ * the set's peak with that unit moved to Den Hartog's tuning for its own mass ratio (Den Hartog,
+ * Mechanical Vibrations, 1956). Where the peak stays within FLAT_TOLERANCE of the optimum's — at
+ * the nominal host and, with a detuning tolerance, at every detuned host the search weighed — the
+ * unit's tuning is not settled by the search (any point of a flat valley is an optimum) and it
+ * takes the published one. Units are moved in order and each move is checked with the earlier
+ * ones in place, always against the optimum, so the reported tunings are never worse than the
+ * optimum by more than the tolerance; `value` is recomputed for the tunings reported.
  * @param ctx set context
  * @param t the joint optimum (optimizeSet)
  * @param tolerance relative (default FLAT_TOLERANCE)
@@ -56,17 +58,22 @@ export function settleFlatUnits(
   const settled = { ...t, bases, publishedChange, optimumValue: t.value }
   const list = candidates(ctx, t)
   if (list.length === 0 || !(Number.isFinite(t.value) && t.value > 0)) return settled
-  const cost = setObjective(ctx, false)
+  // The peak at every host the search weighed (the nominal one, and the detuned ones with a
+  // tolerance): each must stay within the tolerance of its own peak at the optimum.
+  const hosts = detunedContexts(ctx)
+  const peaks = (x: Tuning[]) => hosts.map((c) => setPeak(c, setValues(ctx, x)).value)
+  const optimum = peaks(t.tunings)
   let tunings: Tuning[] = [...t.tunings]
   let value = t.value
   for (const i of list) {
     const published = closedForms['den-hartog'].tune(massRatioOf(ctx, i), 0)
     const trial = tunings.map((x, j) => (j === i ? published : x))
-    const v = cost(trial)
-    publishedChange[i] = v / t.value - 1
-    if (v <= t.value * (1 + tolerance)) {
+    const p = peaks(trial)
+    const change = Math.max(...p.map((v, h) => v / (optimum[h] ?? 0) - 1))
+    publishedChange[i] = Number.isNaN(change) ? null : change
+    if (change <= tolerance) {
       tunings = trial
-      value = v
+      value = Math.max(...p)
       bases[i] = 'published-flat'
     }
   }

@@ -61,29 +61,6 @@ export function detunedContexts(ctx: SetContext): SetContext[] {
 }
 
 /**
- * The objective of a set's tunings as the joint search minimises it: the largest response over the
- * band (H∞) or its mean square (H₂), at the nominal host or the worst over the detuned hosts.
- * @param ctx set context
- * @param h2 the mean square instead of the largest response
- * @param hosts the hosts to check (detunedContexts(ctx) unless given)
- */
-export function setObjective(
-  ctx: SetContext,
-  h2: boolean,
-  hosts = detunedContexts(ctx),
-): (t: Tuning[]) => number {
-  return (t) => {
-    const v = setValues(ctx, t)
-    let worst = 0
-    for (const c of hosts) {
-      const value = h2 ? setMeanSquare(c, v) : setPeak(c, v).value
-      worst = Number.isNaN(value) ? Infinity : Math.max(worst, value)
-    }
-    return worst
-  }
-}
-
-/**
  * Tunes a set jointly: every unit that asks for an optimiser gets its (f, ζ_a), found together by
  * Nelder–Mead (Nelder & Mead 1965) on the logarithms, minimising the largest response over the
  * union of the target bands (H∞) or its mean square (H₂) with the exact Woodbury response — at the
@@ -109,7 +86,15 @@ export function optimizeSet(ctx: SetContext, maxEvaluations?: number): SetTuning
         : u.tuning,
   )
   const hosts = detunedContexts(ctx)
-  const cost = setObjective(ctx, h2, hosts)
+  const cost = (t: Tuning[]): number => {
+    const v = setValues(ctx, t)
+    let worst = 0
+    for (const c of hosts) {
+      const value = h2 ? setMeanSquare(c, v) : setPeak(c, v).value
+      worst = Number.isNaN(value) ? Infinity : Math.max(worst, value)
+    }
+    return worst
+  }
   const result = (tunings: Tuning[], value: number) => ({ tunings, methods, objective, value })
   if (free.length === 0)
     return { ...result(fixed, cost(fixed)), startedFrom: null, starts: [], evaluations: 1 }
