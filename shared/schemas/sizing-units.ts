@@ -39,6 +39,11 @@ export const SizingUnitsSchema = z
   .min(1, 'add a unit or leave the list out')
   .max(MAX_SET_UNITS - 1, `at most ${MAX_SET_UNITS} absorbers in all`)
 
+/** Why a unit of a set carries its tuning: the joint optimum, or the published tuning of its mode
+ * because the optimum is flat in that unit (docs/engineering/tuning.md#flat-units). */
+export const TUNING_BASES = ['optimum', 'published-flat'] as const
+export type TuningBasis = (typeof TUNING_BASES)[number]
+
 /** One unit of a sizing's set as the server sized it (SI units: kg, N/m, N·s/m, Hz, m). */
 export const SummaryUnitSchema = z.object({
   node: z.string(),
@@ -59,6 +64,10 @@ export const SummaryUnitSchema = z.object({
   strokeLimit: z.number().nullable(),
   /** m, g/ω_a² */
   staticDeflection: z.number(),
+  /** 'published-flat' when the set's peak hardly depends on the unit's tuning and it carries Den
+   * Hartog's tuning for its mode (docs/engineering/tuning.md#flat-units); absent on summaries made
+   * before the rule, which read as 'optimum' */
+  tuningBasis: z.enum(TUNING_BASES).optional(),
 })
 export type SummaryUnit = z.infer<typeof SummaryUnitSchema>
 

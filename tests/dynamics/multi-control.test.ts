@@ -1,26 +1,11 @@
 import { describe, expect, it } from 'vitest'
 import { solveSizing } from '../../shared/dynamics'
 import { solveSet } from '../../shared/dynamics/multi/solve-set'
-import type { SetModelInput } from '../../shared/schemas/absorber-set'
 import { contextOf, denseOver, setCurve, valuesOf } from './set-curves'
-import { twoSpanModel } from './two-span'
+import { twoSpanAtPier } from './two-span'
 
 /** Two forces, one on each span, read at the pier head, where both spans' first modes show. */
-const twoSpan: SetModelInput = {
-  ...twoSpanModel(),
-  excitation: {
-    kind: 'forces',
-    forces: [
-      { node: 'a3', amplitude: 1 },
-      { node: 'b2', amplitude: 1 },
-    ],
-  },
-  response: { node: 'pier' },
-  absorbers: [
-    { node: 'a3', massRatio: 0.02, targetMode: 1 },
-    { node: 'b2', massRatio: 0.02, targetMode: 2 },
-  ],
-}
+const twoSpan = twoSpanAtPier()
 
 describe('two-mode control on a two-span footbridge', () => {
   const r = solveSet(twoSpan)

@@ -1,3 +1,4 @@
+import type { SetModelInput } from '../../shared/schemas/absorber-set'
 import type { ModelInput } from '../../shared/schemas/model'
 
 /**
@@ -17,5 +18,25 @@ export function twoSpanModel(): ModelInput {
     nodes: [...nodes, { id: 'footing', fixed: true }],
     springs: [...springs, { from: 'pier', to: 'footing', stiffness: 2e7 }],
     hostDampingRatio: 0.01,
+  }
+}
+
+/** Two forces, one on each span, read at the pier head, where both spans' first modes show; a
+ * unit on each span for its own mode, 2 % of its effective mass. Demo data, invented. */
+export function twoSpanAtPier(): SetModelInput {
+  return {
+    ...twoSpanModel(),
+    excitation: {
+      kind: 'forces',
+      forces: [
+        { node: 'a3', amplitude: 1 },
+        { node: 'b2', amplitude: 1 },
+      ],
+    },
+    response: { node: 'pier' },
+    absorbers: [
+      { node: 'a3', massRatio: 0.02, targetMode: 1 },
+      { node: 'b2', massRatio: 0.02, targetMode: 2 },
+    ],
   }
 }

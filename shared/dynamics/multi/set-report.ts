@@ -3,7 +3,7 @@ import { targetBand, type Band } from '../grid'
 import type { Peak } from '../peak'
 import type { AbsorberValues } from '../tuning-objective'
 import { hostSetPeak } from './host-set-peak'
-import type { SetTuning } from './optimize-set'
+import { FLAT_TOLERANCE, type SettledTuning } from './flat-units'
 import type { SetContext } from './set-context'
 import { setPeak, type SetEvaluation } from './set-peak'
 import type { SetPeakReport, SetUnitReport, TargetReport } from './set-result'
@@ -28,7 +28,7 @@ export function peakPair(without: Peak, withSet: Peak): SetPeakReport {
 export function unitReports(
   ctx: SetContext,
   values: AbsorberValues[],
-  t: SetTuning,
+  t: SettledTuning,
   ev: SetEvaluation,
 ): SetUnitReport[] {
   const ids = ctx.prep.host.ids
@@ -51,6 +51,8 @@ export function unitReports(
       frequencyRatio: t.tunings[i]?.frequencyRatio ?? 0,
       dampingRatio: t.tunings[i]?.dampingRatio ?? 0,
       tuning: (t.methods[i] ?? 'given') as SetUnitReport['tuning'],
+      tuningBasis: t.bases[i] ?? 'optimum',
+      publishedPeakChange: t.publishedChange[i] ?? null,
       staticDeflection: staticDeflection(wa),
       maxStrokePerLoad: finite(stroke.value),
       maxStrokeFrequencyHz: maxStroke === null ? null : stroke.omega * HZ,
@@ -76,8 +78,20 @@ export function targetReports(ctx: SetContext, values: AbsorberValues[]): Target
   })
 }
 
-export function setNotes(ctx: SetContext, units: SetUnitReport[], t: SetTuning): string[] {
+/** The note of a unit that carries the published tuning because the peak hardly depends on it. */
+export function flatUnitNote(n: number, change: number | null | undefined): string {
+  const within = Math.abs(change ?? FLAT_TOLERANCE) * 100
+  return (
+    `Absorber ${n} barely changes the peak at the response point (within ${within.toPrecision(2)} %): ` +
+    'it is given the published (Den Hartog) tuning for its mode; check its effect at other points.'
+  )
+}
+
+export function setNotes(ctx: SetContext, units: SetUnitReport[], t: SettledTuning): string[] {
   const out: string[] = []
+  units.forEach((u, i) => {
+    if (u.tuningBasis === 'published-flat') out.push(flatUnitNote(i + 1, u.publishedPeakChange))
+  })
   units.forEach((u, i) => {
     if (u.strokeWithinLimit === false)
       out.push(
@@ -89,7 +103,10 @@ export function setNotes(ctx: SetContext, units: SetUnitReport[], t: SetTuning):
     out.push(
       `The joint tuning started from '${t.startedFrom}' (${t.starts
         .map((s) => `${s.name} ${s.value.toPrecision(4)}`)
-        .join(', ')}) and reached ${t.value.toPrecision(4)}.`,
+        .join(', ')}) and reached ${t.optimumValue.toPrecision(4)}` +
+        (t.value === t.optimumValue
+          ? '.'
+          : `; with the published tunings above the set reaches ${t.value.toPrecision(4)}.`),
     )
   if (ctx.residual)
     out.push(

@@ -1,4 +1,5 @@
 import type { TuningName } from '../../schemas/model'
+import type { TuningBasis } from '../../schemas/sizing-units'
 import type { AbsorberReport, ExcitationReport, ModeReport, ResponseReport } from '../sizing-result'
 import type { SetRobustnessReport } from './set-robustness'
 import type { SetStartName } from './set-starts'
@@ -24,6 +25,13 @@ export interface SetUnitReport extends Pick<
   effectiveMass: number
   /** 'joint' when tuned together with other units, else the request's method */
   tuning: TuningName | 'given' | 'joint'
+  /** 'published-flat' when the set's peak hardly depends on this unit's tuning, so it carries
+   * the published (Den Hartog) tuning of its mode instead of an arbitrary point of a flat optimum
+   * (docs/engineering/tuning.md#flat-units); absent on results stored before the rule: 'optimum' */
+  tuningBasis?: TuningBasis
+  /** relative change of the set's peak from the joint optimum with this unit at its published
+   * tuning; null or absent where not checked */
+  publishedPeakChange?: number | null
   /** sag of a vertical unit under its own weight, g/ω_a², m */
   staticDeflection: number
   /** largest stroke per unit load over the band with the whole set (m per load unit) */
@@ -76,7 +84,11 @@ export interface SetSizingResult {
     startedFrom: SetStartName | null
     /** the objective of each start on the same model; the result is never worse than the best */
     starts: { name: SetStartName; value: number }[]
+    /** the objective of the tunings reported */
     value: number
+    /** the joint search's own optimum; `value` exceeds it by at most the flat-unit tolerance
+     * (docs/engineering/tuning.md#flat-units); absent on results stored before the rule */
+    optimum?: number
     scope: string
   }
   /** the peak with the set when the host frequency is off, beside one unit of the same mass */

@@ -3,6 +3,7 @@ import { SIZING_CAUTIONS } from '../design-values'
 import { sizingContext } from '../sizing-context'
 import { excitationReport, loadUnit, modeReports, responseReport } from '../sizing-report'
 import { hostSetPeak } from './host-set-peak'
+import { settleFlatUnits } from './flat-units'
 import { optimizeSet, setValues } from './optimize-set'
 import type { PreparedHost } from '../host'
 import type { AbsorberValues } from '../tuning-objective'
@@ -48,7 +49,7 @@ export interface SetStudy {
  */
 export function solveSetStudy(model: SetModelInput, prepared?: PreparedHost): SetStudy {
   const ctx = setContext(model, prepared)
-  const t = optimizeSet(ctx)
+  const t = settleFlatUnits(ctx, optimizeSet(ctx))
   const values = setValues(ctx, t.tunings)
   const ev = evaluateSet(ctx, values)
   const first = ctx.units[0]!
@@ -92,6 +93,7 @@ export function solveSetStudy(model: SetModelInput, prepared?: PreparedHost): Se
       startedFrom: t.startedFrom,
       starts: t.starts,
       value: t.value,
+      optimum: t.optimumValue,
       scope: SET_SCOPE,
     },
     robustness: setRobustness(ctx, values),
