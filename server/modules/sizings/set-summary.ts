@@ -19,6 +19,8 @@ export function summariseSet(ev: SizingEvaluation): SetSummary {
     frequencyHz: u.frequencyHz,
     frequencyRatio: u.frequencyRatio,
     dampingRatio: u.dampingRatio,
+    // whether the joint search settled this unit's tuning or it took the published one
+    tuningBasis: u.tuningBasis ?? 'optimum',
     stroke: u.maxStroke,
     strokeLimit: u.strokeLimit,
     staticDeflection: u.staticDeflection,
